@@ -1,0 +1,65 @@
+import { ValidationPipe } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
+import { NestExpressApplication } from '@nestjs/platform-express';
+import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
+import cookieParser from 'cookie-parser';
+import type { NextFunction, Request, Response } from 'express';
+import { existsSync } from 'node:fs';
+import { join } from 'node:path';
+import helmet from 'helmet';
+import { AppConfig } from './config/app-config';
+import { AllExceptionsFilter } from './common/filters/all-exceptions.filter';
+
+/** Everything main.ts and the e2e tests share, so tests exercise the app as it is served. */
+export function configureApp(app: NestExpressApplication): void {
+  const config = app.get<ConfigService<AppConfig, true>>(ConfigService);
+  const storage = config.get('storage', { infer: true });
+  const storageOrigin = storage.publicEndpoint ? new URL(storage.publicEndpoint).origin : 'https:';
+
+  app.setGlobalPrefix('api');
+  app.enableShutdownHooks();
+  app.disable('x-powered-by');
+  app.set('trust proxy', 'loopback');
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          // Browsers upload to and play from storage directly with presigned URLs.
+          'connect-src': ["'self'", storageOrigin],
+          'media-src': ["'self'", storageOrigin, 'blob:'],
+          'img-src': ["'self'", 'data:', 'blob:', storageOrigin],
+        },
+      },
+    }),
+  );
+  app.use(cookieParser());
+  app.useGlobalPipes(
+    new ValidationPipe({ whitelist: true, forbidNonWhitelisted: true, transform: true }),
+  );
+  app.useGlobalFilters(new AllExceptionsFilter());
+
+  const document = SwaggerModule.createDocument(
+    app,
+    new DocumentBuilder()
+      .setTitle('Fitwright API')
+      .setDescription('Verified-fit build guides from workshop footage')
+      .setVersion('1')
+      .build(),
+  );
+  SwaggerModule.setup('api/docs', app, document, { jsonDocumentUrl: 'api/docs/openapi.json' });
+
+  const studioDist = config.get('studioDist', { infer: true });
+  if (studioDist && existsSync(join(studioDist, 'index.html'))) serveStudio(app, studioDist);
+}
+
+/** Serves the built single-page studio; any non-API GET that is not a file gets index.html. */
+function serveStudio(app: NestExpressApplication, dist: string): void {
+  app.useStaticAssets(dist, { index: false, maxAge: '1h', immutable: false });
+  const indexHtml = join(dist, 'index.html');
+  app.use((request: Request, response: Response, next: NextFunction) => {
+    const isPageRequest = request.method === 'GET' && !request.path.startsWith('/api');
+    if (!isPageRequest) return next();
+    response.setHeader('Cache-Control', 'no-cache');
+    response.sendFile(indexHtml);
+  });
+}

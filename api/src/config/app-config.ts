@@ -1,0 +1,75 @@
+import { EnvironmentVariables, validateEnvironment } from './environment';
+
+export interface AppConfig {
+  env: EnvironmentVariables['NODE_ENV'];
+  port: number;
+  host: string;
+  appOrigin: string;
+  studioDist?: string;
+  database: { host: string; port: number; user: string; password: string; name: string };
+  redis: { host: string; port: number; password?: string; prefix: string };
+  storage: {
+    endpoint?: string;
+    publicEndpoint?: string;
+    region: string;
+    bucket: string;
+    accessKeyId: string;
+    secretAccessKey: string;
+    forcePathStyle: boolean;
+  };
+  mail: {
+    host: string;
+    port: number;
+    secure: boolean;
+    ignoreTls: boolean;
+    user?: string;
+    password?: string;
+    from: string;
+  };
+}
+
+export function buildAppConfig(env: EnvironmentVariables): AppConfig {
+  return {
+    env: env.NODE_ENV,
+    port: env.PORT,
+    host: env.HOST,
+    appOrigin: env.APP_ORIGIN.replace(/\/$/, ''),
+    studioDist: env.STUDIO_DIST,
+    database: {
+      host: env.DB_HOST,
+      port: env.DB_PORT,
+      user: env.DB_USER,
+      password: env.DB_PASSWORD,
+      name: env.DB_NAME,
+    },
+    redis: {
+      host: env.REDIS_HOST,
+      port: env.REDIS_PORT,
+      password: env.REDIS_PASSWORD,
+      prefix: env.QUEUE_PREFIX,
+    },
+    storage: {
+      endpoint: env.S3_ENDPOINT,
+      publicEndpoint: env.S3_PUBLIC_ENDPOINT ?? env.S3_ENDPOINT,
+      region: env.S3_REGION,
+      bucket: env.S3_BUCKET,
+      accessKeyId: env.S3_ACCESS_KEY_ID,
+      secretAccessKey: env.S3_SECRET_ACCESS_KEY,
+      forcePathStyle: env.S3_FORCE_PATH_STYLE,
+    },
+    mail: {
+      host: env.SMTP_HOST,
+      port: env.SMTP_PORT,
+      secure: env.SMTP_SECURE,
+      ignoreTls: env.SMTP_IGNORE_TLS,
+      user: env.SMTP_USER,
+      password: env.SMTP_PASSWORD,
+      from: env.MAIL_FROM,
+    },
+  };
+}
+
+/** Reads and validates process.env; used by the Nest config module and the CLI scripts alike. */
+export function loadAppConfig(raw: Record<string, unknown> = process.env): AppConfig {
+  return buildAppConfig(validateEnvironment(raw));
+}

@@ -1,0 +1,159 @@
+import { plainToInstance, Transform } from 'class-transformer';
+import {
+  IsBoolean,
+  IsEmail,
+  IsIn,
+  IsInt,
+  IsNotEmpty,
+  IsOptional,
+  IsString,
+  IsUrl,
+  Max,
+  Min,
+  validateSync,
+} from 'class-validator';
+
+const toBoolean = ({ value }: { value: unknown }) =>
+  value === undefined ? undefined : value === true || value === 'true' || value === '1';
+
+/**
+ * Every setting the API reads from its environment. The start and test scripts
+ * (scripts/env.sh) provide local values; production sets them explicitly.
+ */
+export class EnvironmentVariables {
+  @IsIn(['development', 'test', 'production'])
+  NODE_ENV: 'development' | 'test' | 'production' = 'development';
+
+  @Transform(({ value }) => Number(value))
+  @IsInt()
+  @Min(1)
+  @Max(65535)
+  PORT!: number;
+
+  /** Address to listen on: loopback locally, 0.0.0.0 behind a load balancer. */
+  @IsString()
+  @IsNotEmpty()
+  HOST: string = '127.0.0.1';
+
+  @IsUrl({ require_tld: false })
+  APP_ORIGIN!: string;
+
+  @IsString()
+  @IsNotEmpty()
+  DB_HOST!: string;
+
+  @Transform(({ value }) => Number(value))
+  @IsInt()
+  @Min(1)
+  @Max(65535)
+  DB_PORT!: number;
+
+  @IsString()
+  @IsNotEmpty()
+  DB_USER!: string;
+
+  @IsString()
+  DB_PASSWORD!: string;
+
+  @IsString()
+  @IsNotEmpty()
+  DB_NAME!: string;
+
+  @IsString()
+  @IsNotEmpty()
+  REDIS_HOST!: string;
+
+  @Transform(({ value }) => Number(value))
+  @IsInt()
+  @Min(1)
+  @Max(65535)
+  REDIS_PORT!: number;
+
+  @IsOptional()
+  @IsString()
+  REDIS_PASSWORD?: string;
+
+  @IsString()
+  @IsNotEmpty()
+  QUEUE_PREFIX: string = 'fitwright';
+
+  /** Empty means the provider's default endpoint (real AWS S3). */
+  @IsOptional()
+  @IsUrl({ require_tld: false })
+  S3_ENDPOINT?: string;
+
+  /** The storage address browsers use for presigned URLs, if it differs from S3_ENDPOINT. */
+  @IsOptional()
+  @IsUrl({ require_tld: false })
+  S3_PUBLIC_ENDPOINT?: string;
+
+  @IsString()
+  @IsNotEmpty()
+  S3_REGION!: string;
+
+  @IsString()
+  @IsNotEmpty()
+  S3_BUCKET!: string;
+
+  @IsString()
+  @IsNotEmpty()
+  S3_ACCESS_KEY_ID!: string;
+
+  @IsString()
+  @IsNotEmpty()
+  S3_SECRET_ACCESS_KEY!: string;
+
+  @Transform(toBoolean)
+  @IsBoolean()
+  S3_FORCE_PATH_STYLE: boolean = false;
+
+  @IsString()
+  @IsNotEmpty()
+  SMTP_HOST!: string;
+
+  @Transform(({ value }) => Number(value))
+  @IsInt()
+  @Min(1)
+  @Max(65535)
+  SMTP_PORT!: number;
+
+  @Transform(toBoolean)
+  @IsBoolean()
+  SMTP_SECURE: boolean = false;
+
+  /** Only for the local SMTP fake, whose STARTTLS certificate is self-made. */
+  @Transform(toBoolean)
+  @IsBoolean()
+  SMTP_IGNORE_TLS: boolean = false;
+
+  @IsOptional()
+  @IsString()
+  SMTP_USER?: string;
+
+  @IsOptional()
+  @IsString()
+  SMTP_PASSWORD?: string;
+
+  @IsEmail({ allow_display_name: true })
+  MAIL_FROM!: string;
+
+  /** Folder of the built studio; empty means the API serves no front end. */
+  @IsOptional()
+  @IsString()
+  STUDIO_DIST?: string;
+}
+
+/** Validates the environment once at boot and fails with every problem listed. */
+export function validateEnvironment(raw: Record<string, unknown>): EnvironmentVariables {
+  const present = Object.fromEntries(Object.entries(raw).filter(([, value]) => value !== ''));
+  const env = plainToInstance(EnvironmentVariables, present, { exposeDefaultValues: true });
+  const errors = validateSync(env, { skipMissingProperties: false });
+  if (errors.length > 0) {
+    const lines = errors.map((error) => {
+      const reasons = Object.values(error.constraints ?? {}).join('; ');
+      return `  - ${error.property}: ${reasons} (got ${JSON.stringify(raw[error.property] ?? null)})`;
+    });
+    throw new Error(`Invalid configuration, fix these environment variables:\n${lines.join('\n')}`);
+  }
+  return env;
+}

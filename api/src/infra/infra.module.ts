@@ -1,0 +1,34 @@
+import { BullModule } from '@nestjs/bull';
+import { Global, Module } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
+import { AppConfig } from '../config/app-config';
+import { QUEUES } from './jobs/queues';
+import { MailService } from './mail/mail.service';
+import { StorageService } from './storage/storage.service';
+
+/** Infrastructure wrappers: storage, mail and the job queues. Global so domains inject them directly. */
+@Global()
+@Module({
+  imports: [
+    BullModule.forRootAsync({
+      inject: [ConfigService],
+      useFactory: (config: ConfigService<AppConfig, true>) => {
+        const redis = config.get('redis', { infer: true });
+        return {
+          redis: { host: redis.host, port: redis.port, password: redis.password },
+          prefix: redis.prefix,
+          defaultJobOptions: {
+            attempts: 5,
+            backoff: { type: 'exponential', delay: 2000 },
+            removeOnComplete: 1000,
+            removeOnFail: 5000,
+          },
+        };
+      },
+    }),
+    BullModule.registerQueue({ name: QUEUES.mail }, { name: QUEUES.media }),
+  ],
+  providers: [StorageService, MailService],
+  exports: [StorageService, MailService, BullModule],
+})
+export class InfraModule {}

@@ -1,0 +1,7 @@
+/** Queue names, one processor class per queue. */
+export const QUEUES = {
+  mail: 'mail',
+  media: 'media',
+} as const;
+
+export type QueueName = (typeof QUEUES)[keyof typeof QUEUES];

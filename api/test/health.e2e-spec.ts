@@ -1,0 +1,62 @@
+import { NestExpressApplication } from '@nestjs/platform-express';
+import request from 'supertest';
+import { createTestApp } from './create-test-app';
+
+describe('GET /api/health (real MariaDB, Redis, S3 fake, mail fake)', () => {
+  let app: NestExpressApplication;
+  afterEach(async () => app?.close());
+
+  it('reports every service up when all answer', async () => {
+    app = await createTestApp();
+    const response = await request(app.getHttpServer()).get('/api/health').expect(200);
+    expect(response.body).toEqual({
+      status: 'ok',
+      checks: { database: 'up', storage: 'up', mail: 'up', queue: 'up' },
+    });
+  });
+
+  it('answers 503 and names the check that is down when SMTP does not answer', async () => {
+    // Port 9 (discard) has no listener here: the mail probe fails while the others still pass.
+    app = await createTestApp({ SMTP_PORT: '9' });
+    const response = await request(app.getHttpServer()).get('/api/health').expect(503);
+    expect(response.body).toMatchObject({
+      statusCode: 503,
+      message: 'Down: mail',
+      status: 'down',
+      checks: { database: 'up', storage: 'up', mail: 'down', queue: 'up' },
+    });
+  });
+
+  it('reports storage down when the bucket does not exist', async () => {
+    app = await createTestApp({ S3_BUCKET: 'no-such-bucket' });
+    const response = await request(app.getHttpServer()).get('/api/health').expect(503);
+    expect(response.body.checks).toEqual({ database: 'up', storage: 'down', mail: 'up', queue: 'up' });
+  });
+});
+
+describe('app foundations', () => {
+  let app: NestExpressApplication;
+  beforeAll(async () => {
+    app = await createTestApp();
+  });
+  afterAll(async () => app.close());
+
+  it('serves the OpenAPI document with the contract routes', async () => {
+    const response = await request(app.getHttpServer()).get('/api/docs/openapi.json').expect(200);
+    expect(Object.keys(response.body.paths)).toEqual(
+      expect.arrayContaining(['/api/health']),
+    );
+  });
+
+  it('answers an unknown API route with the JSON error shape', async () => {
+    const response = await request(app.getHttpServer()).get('/api/no-such-route').expect(404);
+    expect(response.body).toMatchObject({ statusCode: 404, message: expect.any(String) });
+  });
+
+  it('sets security headers', async () => {
+    const response = await request(app.getHttpServer()).get('/api/health');
+    expect(response.headers['x-content-type-options']).toBe('nosniff');
+    expect(response.headers['content-security-policy']).toContain("default-src 'self'");
+    expect(response.headers['x-powered-by']).toBeUndefined();
+  });
+});

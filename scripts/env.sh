@@ -1,0 +1,56 @@
+# Settings for one local profile: "dev" (npm start, npm run dev) or "test" (npm test).
+# Each profile has its own data folder and ports, so tests never touch the database npm start uses.
+# Any variable already set in the environment wins.
+# shellcheck shell=bash
+
+fw_profile_env() {
+  local profile="$1" offset
+  case "$profile" in
+    dev) offset=0 ;;
+    test) offset=10 ;;
+    *) echo "unknown profile $profile" >&2; return 1 ;;
+  esac
+  export FW_PROFILE="$profile"
+  export FW_DATA="${FW_DATA:-$ROOT/.data/$profile}"
+  export FW_RUN="$FW_DATA/run" FW_LOGS="$FW_DATA/logs"
+
+  export NODE_ENV="${NODE_ENV:-$([ "$profile" = test ] && echo test || echo development)}"
+  export PORT="${PORT:-$((3000 + offset * 10))}"
+  export HOST="${HOST:-127.0.0.1}"
+  export APP_ORIGIN="${APP_ORIGIN:-http://localhost:$PORT}"
+
+  export DB_HOST="${DB_HOST:-127.0.0.1}"
+  export DB_PORT="${DB_PORT:-$((3307 + offset))}"
+  export DB_USER="${DB_USER:-fitwright}"
+  export DB_PASSWORD="${DB_PASSWORD:-fitwright-local}"
+  export DB_NAME="${DB_NAME:-$([ "$profile" = test ] && echo fitwright_test || echo fitwright)}"
+
+  export REDIS_HOST="${REDIS_HOST:-127.0.0.1}"
+  export REDIS_PORT="${REDIS_PORT:-$((6380 + offset))}"
+  export QUEUE_PREFIX="${QUEUE_PREFIX:-fitwright-$profile}"
+
+  export S3_FAKE_PORT="${S3_FAKE_PORT:-$((4569 + offset))}"
+  export S3_FAKE_DIR="$FW_DATA/s3"
+  export S3_ENDPOINT="${S3_ENDPOINT:-http://127.0.0.1:$S3_FAKE_PORT}"
+  export S3_PUBLIC_ENDPOINT="${S3_PUBLIC_ENDPOINT:-http://localhost:$S3_FAKE_PORT}"
+  export S3_REGION="${S3_REGION:-us-east-1}"
+  export S3_BUCKET="${S3_BUCKET:-fitwright-media}"
+  export S3_ACCESS_KEY_ID="${S3_ACCESS_KEY_ID:-S3RVER}"
+  export S3_SECRET_ACCESS_KEY="${S3_SECRET_ACCESS_KEY:-S3RVER}"
+  export S3_FORCE_PATH_STYLE="${S3_FORCE_PATH_STYLE:-true}"
+  # The studio's origins: the app itself and, in dev, Vite's server.
+  export S3_CORS_ORIGINS="${S3_CORS_ORIGINS:-$APP_ORIGIN,http://127.0.0.1:$PORT,http://localhost:5173}"
+
+  export MAIL_FAKE_SMTP_PORT="${MAIL_FAKE_SMTP_PORT:-$((1025 + offset))}"
+  export MAIL_FAKE_WEB_PORT="${MAIL_FAKE_WEB_PORT:-$((1080 + offset))}"
+  export MAIL_FAKE_DIR="$FW_DATA/mail"
+  export MAIL_INBOX_URL="${MAIL_INBOX_URL:-http://127.0.0.1:$MAIL_FAKE_WEB_PORT}"
+  export SMTP_HOST="${SMTP_HOST:-127.0.0.1}"
+  export SMTP_PORT="${SMTP_PORT:-$MAIL_FAKE_SMTP_PORT}"
+  export SMTP_IGNORE_TLS="${SMTP_IGNORE_TLS:-true}"
+  export MAIL_FROM="${MAIL_FROM:-Fitwright <no-reply@fitwright.local>}"
+
+  export STUDIO_DIST="${STUDIO_DIST:-$ROOT/studio/dist}"
+  export AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED=true
+  mkdir -p "$FW_RUN" "$FW_LOGS"
+}

@@ -1,0 +1,48 @@
+#!/usr/bin/env bash
+# npm test: the same set-up as npm start on a separate profile (own data folder, ports and a fresh
+# test database), then lint, type checks, API unit and e2e tests, studio component tests and the
+# browser journeys. Every step runs; the exit code is non-zero if any failed. Stops all it started.
+source "$(dirname "$0")/lib.sh"
+fw_profile_env test
+
+ensure_debian_packages mariadbd=mariadb-server redis-server=redis-server ffmpeg=ffmpeg ffprobe=ffmpeg chromium=chromium
+ensure_npm_dependencies
+trap 'stop_services' EXIT
+trap 'exit 130' INT TERM
+start_services
+reset_database
+redis-cli -h 127.0.0.1 -p "$REDIS_PORT" flushall >/dev/null
+build_all
+run_migrations
+
+failed=()
+step() {
+  local name="$1"; shift
+  say "── $name"
+  local started=$SECONDS
+  if (cd "$ROOT" && "$@"); then
+    say "   $name passed in $((SECONDS - started)) s"
+  else
+    say "   $name FAILED"
+    failed+=("$name")
+  fi
+}
+
+step "lint" npx eslint --max-warnings=0 .
+step "typecheck api" npm run typecheck -w api --silent
+step "typecheck studio" npm run typecheck -w studio --silent
+step "api tests (unit + e2e on real services)" npm test -w api --silent
+step "studio component tests" npm test -w studio --silent
+
+# The browser journeys run against the built app served by its own process, as npm start serves it.
+(cd "$ROOT/api" && exec node dist/main.js) >"$FW_LOGS/api.log" 2>&1 &
+FW_STARTED_PIDS+=($!)
+if wait_for "the app" 120 http_ok "http://127.0.0.1:$PORT/api/health"; then
+  step "browser journeys (Playwright + Chromium)" npm run e2e -w studio --silent
+fi
+
+if [ ${#failed[@]} -gt 0 ]; then
+  say "failed: ${failed[*]}"
+  exit 1
+fi
+say "all test steps passed"

@@ -1,0 +1,49 @@
+// Smoke journey: the built studio is served by the API, renders its shell in Lexend and shows health.
+import assert from 'node:assert/strict';
+import { mkdirSync } from 'node:fs';
+import { after, before, test } from 'node:test';
+import { baseUrl, launchBrowser } from './browser.mjs';
+
+const screenshots = new URL('./screenshots/', import.meta.url);
+mkdirSync(screenshots, { recursive: true });
+
+let browser;
+let page;
+before(async () => {
+  browser = await launchBrowser();
+  page = await browser.newPage({ viewport: { width: 1280, height: 800 } });
+});
+after(async () => browser?.close());
+
+test('the shell renders with the Lexend font shipped by the app', async () => {
+  const fontRequests = [];
+  page.on('request', (request) => {
+    if (request.resourceType() === 'font') fontRequests.push(request.url());
+  });
+  await page.goto(baseUrl);
+  await page.getByRole('heading', { name: 'Prove the fit. Publish the build.' }).waitFor();
+  await page.evaluate(() => document.fonts.ready);
+
+  const family = await page.evaluate(() => getComputedStyle(document.body).fontFamily);
+  assert.match(family, /^Lexend/);
+  assert.equal(await page.evaluate(() => document.fonts.check('16px Lexend')), true);
+  assert.ok(fontRequests.length > 0, 'a Lexend font file was loaded');
+  for (const url of fontRequests) assert.ok(url.startsWith(baseUrl), `font served by the app, not ${url}`);
+  await page.screenshot({ path: new URL('home.png', screenshots).pathname });
+});
+
+test('the status page shows all four checks up', async () => {
+  await page.getByRole('link', { name: 'System status' }).first().click();
+  await page.getByText('Every service is up.').waitFor();
+  for (const name of ['database', 'storage', 'mail', 'queue']) {
+    assert.equal(await page.getByTestId(`check-${name}`).getAttribute('data-state'), 'up');
+  }
+  await page.screenshot({ path: new URL('status.png', screenshots).pathname });
+});
+
+test('an unknown address shows the not-found page inside the shell', async () => {
+  const response = await page.goto(`${baseUrl}/no/such/page`);
+  assert.equal(response.status(), 200);
+  await page.getByRole('heading', { name: 'Page not found' }).waitFor();
+  assert.ok(await page.getByText('Fitwright', { exact: true }).isVisible());
+});
