@@ -4,6 +4,9 @@
 # browser journeys. Every step runs; the exit code is non-zero if any failed. Stops all it started.
 source "$(dirname "$0")/lib.sh"
 fw_profile_env test
+# One test run at a time per checkout: a second run waits rather than resetting the database under the first.
+exec 9>"$FW_DATA/test-run.lock"
+flock 9 || fail "could not take the test lock"
 
 ensure_debian_packages mariadbd=mariadb-server redis-server=redis-server ffmpeg=ffmpeg ffprobe=ffmpeg chromium=chromium
 ensure_npm_dependencies

@@ -1,7 +1,7 @@
 import { Controller, Get, HttpStatus, Inject, Res } from '@nestjs/common';
 import { ApiOkResponse, ApiServiceUnavailableResponse, ApiTags } from '@nestjs/swagger';
 import type { Response } from 'express';
-import { Public } from '../common/decorators/public.decorator';
+import { Public } from '../common/decorators/access.decorator';
 import { HealthReportDto } from './health-report.dto';
 import { HealthService } from './health.service';
 
