@@ -50,6 +50,13 @@ fw_profile_env() {
   export SMTP_IGNORE_TLS="${SMTP_IGNORE_TLS:-true}"
   export MAIL_FROM="${MAIL_FROM:-Fitwright <no-reply@fitwright.local>}"
 
+  # Accounts with these (verified) e-mail addresses become site admins; comma separated, optional.
+  # The test profile names the one the browser journey signs up with.
+  export ADMIN_EMAILS="${ADMIN_EMAILS:-$([ "$profile" = test ] && echo journey-admin@fitwright.test || true)}"
+
+  # Largest footage upload accepted, in bytes (20 GB).
+  export FOOTAGE_MAX_BYTES="${FOOTAGE_MAX_BYTES:-20000000000}"
+
   export STUDIO_DIST="${STUDIO_DIST:-$ROOT/studio/dist}"
   export AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED=true
   mkdir -p "$FW_RUN" "$FW_LOGS"

@@ -11,6 +11,8 @@ trap 'say "stopping"; exit 130' INT TERM
 start_services
 build_all
 run_migrations
+# The invented demo scenario (accounts, the Harrow Lane Garage workshop, its fit data); idempotent.
+(cd "$ROOT/api" && node dist/database/demo/load-demo.js)
 
 say "Fitwright:      http://localhost:$PORT"
 say "API docs:       http://localhost:$PORT/api/docs"

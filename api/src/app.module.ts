@@ -7,6 +7,18 @@ import { RequestLoggerMiddleware } from './common/request-logger.middleware';
 import { typeormOptions } from './database/typeorm-options';
 import { HealthModule } from './health/health.module';
 import { InfraModule } from './infra/infra.module';
+import { AdminModule } from './admin/admin.module';
+import { AuthModule } from './auth/auth.module';
+import { UsersModule } from './users/users.module';
+import { WorkshopsModule } from './workshops/workshops.module';
+import { AssembliesModule } from './assemblies/assemblies.module';
+import { BuildsModule } from './builds/builds.module';
+import { FitChecksModule } from './fit-checks/fit-checks.module';
+import { FootageModule } from './footage/footage.module';
+import { MeasurementsModule } from './measurements/measurements.module';
+import { PartsModule } from './parts/parts.module';
+import { ToolsModule } from './tools/tools.module';
+import { TranscriptsModule } from './transcripts/transcripts.module';
 
 @Module({
   imports: [
@@ -22,6 +34,18 @@ import { InfraModule } from './infra/infra.module';
     EventEmitterModule.forRoot(),
     InfraModule,
     HealthModule,
+    AuthModule,
+    UsersModule,
+    WorkshopsModule,
+    AdminModule,
+    ToolsModule,
+    BuildsModule,
+    PartsModule,
+    MeasurementsModule,
+    FitChecksModule,
+    AssembliesModule,
+    FootageModule,
+    TranscriptsModule,
   ],
 })
 export class AppModule implements NestModule {

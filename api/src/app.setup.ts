@@ -9,6 +9,7 @@ import { join } from 'node:path';
 import helmet from 'helmet';
 import { AppConfig } from './config/app-config';
 import { AllExceptionsFilter } from './common/filters/all-exceptions.filter';
+import { validationException } from './common/pipes/validation-errors';
 
 /** Everything main.ts and the e2e tests share, so tests exercise the app as it is served. */
 export function configureApp(app: NestExpressApplication): void {
@@ -33,8 +34,16 @@ export function configureApp(app: NestExpressApplication): void {
     }),
   );
   app.use(cookieParser());
+  // Pasted transcripts run to 2 MB (JSON-escaped, a little more); Express's default JSON limit is 100 kB.
+  app.useBodyParser('json', { limit: '5mb' });
   app.useGlobalPipes(
-    new ValidationPipe({ whitelist: true, forbidNonWhitelisted: true, transform: true }),
+    new ValidationPipe({
+      whitelist: true,
+      forbidNonWhitelisted: true,
+      transform: true,
+      // Adds `errors: { field: sentence }` beside the usual `message` list, for forms.
+      exceptionFactory: validationException,
+    }),
   );
   app.useGlobalFilters(new AllExceptionsFilter());
 

@@ -6,6 +6,8 @@ export interface AppConfig {
   host: string;
   appOrigin: string;
   studioDist?: string;
+  footage: { maxBytes: number };
+  auth: { adminEmails: string[]; rateLimitPerMinute: number };
   database: { host: string; port: number; user: string; password: string; name: string };
   redis: { host: string; port: number; password?: string; prefix: string };
   storage: {
@@ -35,6 +37,14 @@ export function buildAppConfig(env: EnvironmentVariables): AppConfig {
     host: env.HOST,
     appOrigin: env.APP_ORIGIN.replace(/\/$/, ''),
     studioDist: env.STUDIO_DIST,
+    footage: { maxBytes: env.FOOTAGE_MAX_BYTES },
+    auth: {
+      adminEmails: (env.ADMIN_EMAILS ?? '')
+        .split(',')
+        .map((email) => email.trim().toLowerCase())
+        .filter((email) => email.length > 0),
+      rateLimitPerMinute: env.AUTH_RATE_LIMIT,
+    },
     database: {
       host: env.DB_HOST,
       port: env.DB_PORT,

@@ -137,6 +137,24 @@ export class EnvironmentVariables {
   @IsEmail({ allow_display_name: true })
   MAIL_FROM!: string;
 
+  /** Comma-separated e-mail addresses whose accounts are site admins (optional; e.g. the first admin). */
+  @IsOptional()
+  @IsString()
+  ADMIN_EMAILS?: string;
+
+  /** Attempts per minute and client address on each sign-in, sign-up and password-reset form. */
+  @Transform(({ value }) => (value === undefined ? undefined : Number(value)))
+  @IsInt()
+  @Min(1)
+  AUTH_RATE_LIMIT: number = 10;
+
+  /** Largest footage file accepted for upload, in bytes (default 20 GB). At most 640 GiB: 10,000 parts of 64 MiB. */
+  @Transform(({ value }) => (value === undefined ? undefined : Number(value)))
+  @IsInt()
+  @Min(1_000_000)
+  @Max(10_000 * 64 * 1024 * 1024)
+  FOOTAGE_MAX_BYTES: number = 20_000_000_000;
+
   /** Folder of the built studio; empty means the API serves no front end. */
   @IsOptional()
   @IsString()

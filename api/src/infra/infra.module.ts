@@ -3,7 +3,10 @@ import { Global, Module } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { AppConfig } from '../config/app-config';
 import { QUEUES } from './jobs/queues';
+import { MailQueueService } from './mail/mail-queue.service';
+import { MailProcessor } from './mail/mail.processor';
 import { MailService } from './mail/mail.service';
+import { MediaToolsService } from './media/media-tools.service';
 import { StorageService } from './storage/storage.service';
 
 /** Infrastructure wrappers: storage, mail and the job queues. Global so domains inject them directly. */
@@ -28,7 +31,7 @@ import { StorageService } from './storage/storage.service';
     }),
     BullModule.registerQueue({ name: QUEUES.mail }, { name: QUEUES.media }),
   ],
-  providers: [StorageService, MailService],
-  exports: [StorageService, MailService, BullModule],
+  providers: [StorageService, MailService, MailQueueService, MailProcessor, MediaToolsService],
+  exports: [StorageService, MailService, MailQueueService, BullModule, MediaToolsService],
 })
 export class InfraModule {}

@@ -2,4 +2,49 @@
 export const paths = {
   home: '/',
   status: '/status',
+  // Fit data of a workshop: each route has its pattern (for the router) and a builder (for links).
+  builds: { path: '/workshops/:workshopId/builds', to: (workshopId: string) => `/workshops/${workshopId}/builds` },
+  build: {
+    path: '/workshops/:workshopId/builds/:buildId',
+    to: (workshopId: string, buildId: string) => `/workshops/${workshopId}/builds/${buildId}`,
+  },
+  parts: { path: '/workshops/:workshopId/parts', to: (workshopId: string) => `/workshops/${workshopId}/parts` },
+  part: {
+    path: '/workshops/:workshopId/parts/:partId',
+    to: (workshopId: string, partId: string) => `/workshops/${workshopId}/parts/${partId}`,
+  },
+  assembly: {
+    path: '/workshops/:workshopId/assemblies/:assemblyId',
+    to: (workshopId: string, assemblyId: string) => `/workshops/${workshopId}/assemblies/${assemblyId}`,
+  },
+  // The footage player (a build's page lists and uploads its footage); ?t= seconds to start at.
+  footage: {
+    path: '/workshops/:workshopId/footage/:footageId',
+    to: (workshopId: string, footageId: string, atMs?: number) =>
+      `/workshops/${workshopId}/footage/${footageId}${atMs === undefined ? '' : `?t=${(atMs / 1000).toFixed(1)}`}`,
+  },
+  fitCalculator: '/tools/fit-calculator',
+  // Accounts (the e-mailed links use verifyEmail, resetPassword, confirmEmail and acceptInvitation with ?token=).
+  signIn: '/sign-in',
+  signUp: '/sign-up',
+  verifyEmail: '/verify-email',
+  forgotPassword: '/forgot-password',
+  resetPassword: '/reset-password',
+  confirmEmail: '/confirm-email',
+  account: '/account',
+  // Workshops and their members.
+  workshops: '/workshops',
+  workshop: { path: '/workshops/:workshopId', to: (workshopId: string) => `/workshops/${workshopId}` },
+  workshopSettings: {
+    path: '/workshops/:workshopId/settings',
+    to: (workshopId: string) => `/workshops/${workshopId}/settings`,
+  },
+  workshopMembers: {
+    path: '/workshops/:workshopId/members',
+    to: (workshopId: string) => `/workshops/${workshopId}/members`,
+  },
+  acceptInvitation: '/invitations/accept',
+  // Site administration.
+  adminUsers: '/admin/users',
+  adminWorkshops: '/admin/workshops',
 } as const;

@@ -31,6 +31,7 @@ function readableMessage(status: number, body: unknown): string {
 
 export interface RequestOptions {
   method?: 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
+  /** JSON, or a FormData for a file upload (sent as multipart, with the browser's boundary). */
   body?: unknown;
   query?: Record<string, string | number | boolean | undefined>;
   signal?: AbortSignal;
@@ -38,20 +39,65 @@ export interface RequestOptions {
   acceptStatuses?: number[];
 }
 
+/** The double-submit CSRF token: the API sets the readable `fw_csrf` cookie; we echo it in a header. */
+export const CSRF_COOKIE = 'fw_csrf';
+export const CSRF_HEADER = 'X-CSRF-Token';
+
+function readCookie(name: string): string | undefined {
+  for (const part of document.cookie.split(';')) {
+    const [key, ...rest] = part.trim().split('=');
+    if (key === name) return decodeURIComponent(rest.join('='));
+  }
+  return undefined;
+}
+
+let csrfFetch: Promise<unknown> | undefined;
+
+/** The CSRF token, asking the API for one first (GET /api/auth/me sets it) when the browser has none. */
+async function csrfToken(): Promise<string | undefined> {
+  const existing = readCookie(CSRF_COOKIE);
+  if (existing) return existing;
+  csrfFetch ??= fetch(new URL('/api/auth/me', window.location.origin), { credentials: 'include' })
+    .catch(() => undefined)
+    .finally(() => {
+      csrfFetch = undefined;
+    });
+  await csrfFetch;
+  return readCookie(CSRF_COOKIE);
+}
+
+/**
+ * Told about every 401 from a request that expected a session (not the sign-in form itself), so the
+ * session hook can forget the user and the route guard can send them to sign in.
+ */
+const unauthorizedListeners = new Set<() => void>();
+export function onUnauthorized(listener: () => void): () => void {
+  unauthorizedListeners.add(listener);
+  return () => {
+    unauthorizedListeners.delete(listener);
+  };
+}
+
 export async function apiRequest<T>(path: string, options: RequestOptions = {}): Promise<T> {
   const url = new URL(`/api${path}`, window.location.origin);
   for (const [key, value] of Object.entries(options.query ?? {})) {
     if (value !== undefined) url.searchParams.set(key, String(value));
   }
+  const method = options.method ?? 'GET';
   const headers: Record<string, string> = { Accept: 'application/json' };
-  if (options.body !== undefined) headers['Content-Type'] = 'application/json';
+  const isForm = typeof FormData !== 'undefined' && options.body instanceof FormData;
+  if (options.body !== undefined && !isForm) headers['Content-Type'] = 'application/json';
+  if (method !== 'GET') {
+    const token = await csrfToken();
+    if (token) headers[CSRF_HEADER] = token;
+  }
 
   let response: Response;
   try {
     response = await fetch(url, {
-      method: options.method ?? 'GET',
+      method,
       headers,
-      body: options.body === undefined ? undefined : JSON.stringify(options.body),
+      body: options.body === undefined ? undefined : isForm ? (options.body as FormData) : JSON.stringify(options.body),
       credentials: 'include',
       signal: options.signal,
     });
@@ -61,6 +107,9 @@ export async function apiRequest<T>(path: string, options: RequestOptions = {}):
   }
 
   const body: unknown = response.status === 204 ? null : await response.json().catch(() => null);
+  if (response.status === 401 && !path.startsWith('/auth/login')) {
+    for (const listener of unauthorizedListeners) listener();
+  }
   if (!response.ok && !options.acceptStatuses?.includes(response.status)) {
     throw new ApiError(response.status, readableMessage(response.status, body), body);
   }

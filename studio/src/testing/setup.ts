@@ -23,4 +23,14 @@ class ResizeObserverStub {
 }
 window.ResizeObserver = ResizeObserverStub;
 
+// Mantine's combobox scrolls the highlighted option into view; jsdom does not lay out.
+Element.prototype.scrollIntoView ??= function scrollIntoView() {};
+
+// Mantine's autosizing Textarea listens for web fonts loading; jsdom has no FontFaceSet.
+if (!('fonts' in document)) {
+  Object.defineProperty(document, 'fonts', {
+    value: { addEventListener: () => {}, removeEventListener: () => {}, ready: Promise.resolve() },
+  });
+}
+
 afterEach(() => cleanup());

@@ -1,5 +1,12 @@
 import { MixedList } from 'typeorm';
+import { Accounts1764600000000 } from './1764600000000-accounts';
+import { FitData1764700000000 } from './1764700000000-fit-data';
+import { Footage1764840000000 } from './1764840000000-footage';
 
 /** Every migration, oldest first. Listed explicitly so the same list works from src (tests) and dist. */
 // eslint-disable-next-line @typescript-eslint/no-unsafe-function-type
-export const migrations: MixedList<Function> = [];
+export const migrations: MixedList<Function> = [
+  Accounts1764600000000,
+  FitData1764700000000,
+  Footage1764840000000,
+];

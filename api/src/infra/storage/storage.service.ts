@@ -1,4 +1,17 @@
-import { HeadBucketCommand, S3Client } from '@aws-sdk/client-s3';
+import {
+  AbortMultipartUploadCommand,
+  CompleteMultipartUploadCommand,
+  CreateMultipartUploadCommand,
+  DeleteObjectCommand,
+  GetObjectCommand,
+  HeadBucketCommand,
+  HeadObjectCommand,
+  PutObjectCommand,
+  S3Client,
+  S3ServiceException,
+  UploadPartCommand,
+} from '@aws-sdk/client-s3';
+import { getSignedUrl } from '@aws-sdk/s3-request-presigner';
 import { Inject, Injectable, OnModuleDestroy } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { AppConfig } from '../../config/app-config';
@@ -7,6 +20,8 @@ import { AppConfig } from '../../config/app-config';
 @Injectable()
 export class StorageService implements OnModuleDestroy {
   private readonly client: S3Client;
+  /** Signs URLs for browsers, which may reach storage at another address than the API does. */
+  private readonly publicClient: S3Client;
   readonly bucket: string;
 
   constructor(@Inject(ConfigService) config: ConfigService<AppConfig, true>) {
@@ -21,6 +36,106 @@ export class StorageService implements OnModuleDestroy {
       requestChecksumCalculation: 'WHEN_REQUIRED',
       responseChecksumValidation: 'WHEN_REQUIRED',
     });
+    this.publicClient = new S3Client({
+      endpoint: storage.publicEndpoint,
+      region: storage.region,
+      forcePathStyle: storage.forcePathStyle,
+      credentials: { accessKeyId: storage.accessKeyId, secretAccessKey: storage.secretAccessKey },
+      requestChecksumCalculation: 'WHEN_REQUIRED',
+      responseChecksumValidation: 'WHEN_REQUIRED',
+    });
+  }
+
+  /** Stores a small object held in memory (logos, photos); large media goes browser → storage directly. */
+  async putObject(key: string, body: Buffer, contentType: string): Promise<void> {
+    await this.client.send(
+      new PutObjectCommand({ Bucket: this.bucket, Key: key, Body: body, ContentType: contentType }),
+    );
+  }
+
+  /** Reads a whole object into memory; meant for small objects. */
+  async getObject(key: string): Promise<{ body: Buffer; contentType?: string }> {
+    const result = await this.client.send(new GetObjectCommand({ Bucket: this.bucket, Key: key }));
+    const bytes = result.Body ? await result.Body.transformToByteArray() : new Uint8Array();
+    return { body: Buffer.from(bytes), contentType: result.ContentType };
+  }
+
+  /** Deletes an object; deleting a missing key is not an error (as on S3). */
+  async deleteObject(key: string): Promise<void> {
+    await this.client.send(new DeleteObjectCommand({ Bucket: this.bucket, Key: key }));
+  }
+
+  /** A time-limited GET link a browser can use without credentials. */
+  async presignedGetUrl(key: string, expiresInSeconds = 3600): Promise<string> {
+    return getSignedUrl(this.publicClient, new GetObjectCommand({ Bucket: this.bucket, Key: key }), {
+      expiresIn: expiresInSeconds,
+    });
+  }
+
+  /* ---------------------------------------------------------------- multipart uploads (footage) */
+
+  /** Starts a multipart upload the browser fills part by part with presigned URLs; returns its upload id. */
+  async createMultipartUpload(key: string, contentType: string): Promise<string> {
+    const result = await this.client.send(
+      new CreateMultipartUploadCommand({ Bucket: this.bucket, Key: key, ContentType: contentType }),
+    );
+    if (!result.UploadId) throw new Error('Storage started a multipart upload without an upload id');
+    return result.UploadId;
+  }
+
+  /** A time-limited PUT link for one part; the browser sends the bytes itself and reads the ETag header. */
+  async presignedUploadPartUrl(key: string, uploadId: string, partNumber: number, expiresInSeconds: number): Promise<string> {
+    return getSignedUrl(
+      this.publicClient,
+      new UploadPartCommand({ Bucket: this.bucket, Key: key, UploadId: uploadId, PartNumber: partNumber }),
+      { expiresIn: expiresInSeconds },
+    );
+  }
+
+  /** Assembles the object from its parts; `parts` come from our own records (the S3 fake has no ListParts). */
+  async completeMultipartUpload(key: string, uploadId: string, parts: { partNumber: number; etag: string }[]): Promise<void> {
+    await this.client.send(
+      new CompleteMultipartUploadCommand({
+        Bucket: this.bucket,
+        Key: key,
+        UploadId: uploadId,
+        MultipartUpload: { Parts: parts.map((part) => ({ PartNumber: part.partNumber, ETag: part.etag })) },
+      }),
+    );
+  }
+
+  /**
+   * Cancels a multipart upload so storage drops its parts. Returns false when storage could not
+   * (the upload is already gone, or the store does not implement the call, as the local S3 fake
+   * answers 405); a bucket lifecycle rule cleans such leftovers on real S3.
+   */
+  async abortMultipartUpload(key: string, uploadId: string): Promise<boolean> {
+    try {
+      await this.client.send(new AbortMultipartUploadCommand({ Bucket: this.bucket, Key: key, UploadId: uploadId }));
+      return true;
+    } catch (error) {
+      const status = error instanceof S3ServiceException ? error.$metadata.httpStatusCode : undefined;
+      if (status === 404 || status === 405 || status === 501) return false;
+      throw error;
+    }
+  }
+
+  /** Size and type of a stored object, or null when there is none. */
+  async headObject(key: string): Promise<{ sizeBytes: number; contentType?: string } | null> {
+    try {
+      const result = await this.client.send(new HeadObjectCommand({ Bucket: this.bucket, Key: key }));
+      return { sizeBytes: result.ContentLength ?? 0, contentType: result.ContentType };
+    } catch (error) {
+      if (error instanceof S3ServiceException && error.$metadata.httpStatusCode === 404) return null;
+      throw error;
+    }
+  }
+
+  /** A time-limited GET link for the API's own tools (ffprobe, ffmpeg), at the address the API reaches storage. */
+  async internalGetUrl(key: string, expiresInSeconds: number): Promise<string> {
+    return getSignedUrl(this.client, new GetObjectCommand({ Bucket: this.bucket, Key: key }), {
+      expiresIn: expiresInSeconds,
+    });
   }
 
   async ping(): Promise<void> {
@@ -29,5 +144,6 @@ export class StorageService implements OnModuleDestroy {
 
   onModuleDestroy(): void {
     this.client.destroy();
+    this.publicClient.destroy();
   }
 }

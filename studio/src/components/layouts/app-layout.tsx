@@ -1,6 +1,6 @@
 import { AppShell, Burger, Group, NavLink, Text, UnstyledButton } from '@mantine/core';
 import { useDisclosure } from '@mantine/hooks';
-import { Suspense } from 'react';
+import { Suspense, type ReactNode } from 'react';
 import { Link, Outlet, useLocation } from 'react-router-dom';
 import { paths } from '@/config/paths';
 import { PageLoader } from '../page-loader';
@@ -8,9 +8,17 @@ import { PageLoader } from '../page-loader';
 const NAVIGATION = [
   { label: 'Home', to: paths.home },
   { label: 'System status', to: paths.status },
+  { label: 'Fit calculator', to: paths.fitCalculator },
 ];
 
-export function AppLayout() {
+export interface AppLayoutProps {
+  /** The header's right side (the app composes the workshop switcher and account menu here). */
+  headerActions?: ReactNode;
+  /** More navigation below the fixed items; `close` folds the mobile menu after a click. */
+  navbarExtra?: (close: () => void) => ReactNode;
+}
+
+export function AppLayout({ headerActions, navbarExtra }: AppLayoutProps = {}) {
   const [opened, { toggle, close }] = useDisclosure();
   const location = useLocation();
 
@@ -33,6 +41,7 @@ export function AppLayout() {
               </Group>
             </UnstyledButton>
           </Group>
+          {headerActions}
         </Group>
       </AppShell.Header>
       <AppShell.Navbar p="sm" aria-label="Main navigation">
@@ -46,6 +55,7 @@ export function AppLayout() {
             onClick={close}
           />
         ))}
+        {navbarExtra?.(close)}
       </AppShell.Navbar>
       <AppShell.Main>
         <Suspense fallback={<PageLoader />}>

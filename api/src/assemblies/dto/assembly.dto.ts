@@ -1,0 +1,80 @@
+import { ApiProperty, ApiPropertyOptional, PartialType } from '@nestjs/swagger';
+import { IsIn, IsInt, IsOptional, IsString, IsUUID, Length, Matches, Max, MaxLength, Min, ValidateIf } from 'class-validator';
+import { LENGTH_UNITS, type LengthUnit } from '../../engine/units';
+import { INTERFACE_KINDS, type InterfaceKind } from '../entities/assembly-interface.entity';
+
+const LENGTH = /^\s*(\d+(\.\d*)?|\.\d+)(\s+\d+\/\d+)?\s*$|^\s*\d+\/\d+\s*$/;
+
+export class CreateAssemblyDto {
+  @ApiProperty({ example: '21-tooth coupler with the long driveshaft' })
+  @IsString()
+  @Length(1, 200)
+  name!: string;
+
+  @ApiPropertyOptional()
+  @IsOptional()
+  @IsString()
+  @MaxLength(10000)
+  notes?: string;
+}
+
+export class UpdateAssemblyDto extends PartialType(CreateAssemblyDto) {}
+
+export class PlacePartDto {
+  @ApiProperty({ example: 'input side' })
+  @IsString()
+  @Length(1, 80)
+  position!: string;
+
+  @ApiPropertyOptional({ example: 1 })
+  @IsOptional()
+  @IsInt()
+  @Min(0)
+  @Max(1000)
+  sortOrder?: number;
+}
+
+export class CreateInterfaceDto {
+  @ApiProperty({ enum: INTERFACE_KINDS })
+  @IsIn(INTERFACE_KINDS)
+  kind!: InterfaceKind;
+
+  @ApiProperty({ example: 'coupler to gearbox input' })
+  @IsString()
+  @Length(1, 160)
+  name!: string;
+
+  @ApiProperty({ description: 'spline: one spline; bore_shaft: the hole or the shaft; length_window: the length feature' })
+  @IsUUID()
+  featureAId!: string;
+
+  @ApiPropertyOptional({ description: 'spline: the mating spline; bore_shaft: the other diameter' })
+  @ValidateIf((dto: CreateInterfaceDto) => dto.kind !== 'length_window')
+  @IsUUID()
+  featureBId?: string;
+
+  @ApiPropertyOptional({ enum: LENGTH_UNITS, default: 'mm', description: 'Unit of installedMin, installedMax and margin' })
+  @IsOptional()
+  @IsIn(LENGTH_UNITS)
+  unit?: LengthUnit;
+
+  @ApiPropertyOptional({ example: '530', description: 'length_window: shortest installed length' })
+  @ValidateIf((dto: CreateInterfaceDto) => dto.kind === 'length_window')
+  @Matches(LENGTH, { message: 'installedMin must be a length such as 530' })
+  installedMin?: string;
+
+  @ApiPropertyOptional({ example: '555', description: 'length_window: longest installed length' })
+  @ValidateIf((dto: CreateInterfaceDto) => dto.kind === 'length_window')
+  @Matches(LENGTH, { message: 'installedMax must be a length such as 555' })
+  installedMax?: string;
+
+  @ApiPropertyOptional({
+    example: '5',
+    description: 'length_window: travel that must remain each way; bore_shaft: the least clearance you accept',
+  })
+  @IsOptional()
+  @Matches(LENGTH, { message: 'margin must be a length such as 5' })
+  margin?: string;
+}
+
+export class UpdateInterfaceDto extends PartialType(CreateInterfaceDto) {}

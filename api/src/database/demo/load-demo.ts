@@ -1,0 +1,32 @@
+import 'reflect-metadata';
+import { NestFactory } from '@nestjs/core';
+import { DataSource } from 'typeorm';
+import { AppModule } from '../../app.module';
+import { demoSignInLines, loadDemoAccounts } from './demo-accounts';
+import { loadDemoFitData } from './demo-fit-data';
+import { loadDemoFootage } from './demo-footage';
+
+/**
+ * Loads the invented demo scenario (DESIGN.md) into the database; idempotent. Run by `npm start`
+ * after the migrations, or by hand with `npm run demo:load -w api` after a build.
+ * Each part builds on the ids of the one before: accounts and the workshop first, then the fit data.
+ */
+async function loadDemo(): Promise<void> {
+  const app = await NestFactory.createApplicationContext(AppModule, { logger: ['error', 'warn'] });
+  try {
+    const accounts = await loadDemoAccounts(app.get(DataSource));
+    await loadDemoFitData(app, { workshopId: accounts.workshopId, creatorId: accounts.ownerId });
+    // The build's footage: generated, uploaded and processed like a creator's, then transcribed.
+    console.log(`[demo] ${await loadDemoFootage(app, { workshopId: accounts.workshopId, creatorId: accounts.ownerId })}`);
+    // Printed plainly (the app's logger is quietened to warnings while the demo loads).
+    console.log(`[demo] workshop "Harrow Lane Garage" is ready: ${accounts.workshopId}`);
+    for (const line of demoSignInLines()) console.log(`[demo] ${line}`);
+  } finally {
+    await app.close();
+  }
+}
+
+loadDemo().catch((error: unknown) => {
+  console.error(error instanceof Error ? (error.stack ?? error.message) : error);
+  process.exit(1);
+});

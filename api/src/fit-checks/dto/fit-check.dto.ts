@@ -1,0 +1,53 @@
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import { IsBoolean, IsIn, IsOptional, IsString, IsUUID, Length, Matches, MaxLength } from 'class-validator';
+import { FIT_CHECK_STATES, type FitCheckState } from '../../engine/checklist';
+import { LENGTH_UNITS, type LengthUnit } from '../../engine/units';
+
+export class CreateManualCheckDto {
+  @ApiProperty({ example: 'Test-fitted on the vehicle: coupler engages fully' })
+  @IsString()
+  @Length(1, 200)
+  title!: string;
+
+  @ApiPropertyOptional({ default: true })
+  @IsOptional()
+  @IsBoolean()
+  required?: boolean;
+}
+
+export class TransitionDto {
+  @ApiProperty({ enum: FIT_CHECK_STATES })
+  @IsIn(FIT_CHECK_STATES)
+  to!: FitCheckState;
+
+  @ApiProperty({ example: 'Test-fitted with the motor bolted up; turns by hand with no bind.' })
+  @IsString()
+  @Length(1, 500)
+  reason!: string;
+}
+
+export class AddEvidenceDto {
+  @ApiProperty({ enum: ['measurement'], description: 'Marks and photos come with their own routes' })
+  @IsIn(['measurement'])
+  kind!: 'measurement';
+
+  @ApiProperty()
+  @IsUUID()
+  measurementId!: string;
+
+  @ApiPropertyOptional()
+  @IsOptional()
+  @IsString()
+  @MaxLength(500)
+  note?: string;
+}
+
+export class WhatIfQueryDto {
+  @ApiProperty({ example: '0.0004', description: 'How much larger the replacement shaft is (negative: smaller)' })
+  @Matches(/^\s*-?(\d+(\.\d*)?|\.\d+)\s*$/, { message: 'delta must be a decimal number such as 0.0004' })
+  delta!: string;
+
+  @ApiProperty({ enum: LENGTH_UNITS })
+  @IsIn(LENGTH_UNITS)
+  unit!: LengthUnit;
+}

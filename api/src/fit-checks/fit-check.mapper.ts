@@ -1,0 +1,47 @@
+import { FitCheckEvent } from './entities/fit-check-event.entity';
+import { FitCheckEvidence } from './entities/fit-check-evidence.entity';
+import { FitCheck } from './entities/fit-check.entity';
+
+export function toEvidenceResponse(evidence: FitCheckEvidence) {
+  return {
+    id: evidence.id,
+    kind: evidence.kind,
+    measurementId: evidence.measurementId,
+    markId: evidence.markId,
+    photoKey: evidence.photoKey,
+    note: evidence.note,
+    addedBy: evidence.addedBy,
+    createdAt: evidence.createdAt.toISOString(),
+  };
+}
+
+export function toFitCheckResponse(check: FitCheck, evidence: FitCheckEvidence[] = []) {
+  return {
+    id: check.id,
+    assemblyId: check.assemblyId,
+    interfaceId: check.interfaceId,
+    kind: check.kind,
+    derived: check.interfaceId !== null,
+    title: check.title,
+    required: check.required,
+    state: check.state,
+    outcome: check.outcome,
+    detail: check.detail,
+    reason: check.reason,
+    confirmedBy: check.confirmedBy,
+    confirmedAt: check.confirmedAt?.toISOString() ?? null,
+    evidence: evidence.map(toEvidenceResponse),
+    updatedAt: check.updatedAt.toISOString(),
+  };
+}
+
+export function toFitCheckEventResponse(event: FitCheckEvent) {
+  return {
+    id: event.id,
+    from: event.fromState,
+    to: event.toState,
+    reason: event.reason,
+    actorId: event.actorId,
+    at: event.createdAt.toISOString(),
+  };
+}

@@ -1,0 +1,327 @@
+import { BadRequestException, ConflictException, Inject, Injectable, Logger, NotFoundException } from '@nestjs/common';
+import { EventEmitter2, OnEvent } from '@nestjs/event-emitter';
+import { InjectRepository } from '@nestjs/typeorm';
+import { In, Repository } from 'typeorm';
+import { AssemblyInterface } from '../assemblies/entities/assembly-interface.entity';
+import { Assembly } from '../assemblies/entities/assembly.entity';
+import { canTransition, rollUpChecklist, stateAfterOutcome, stateForOutcome, type FitCheckState } from '../engine/checklist';
+import { EngineError } from '../engine/engine-error';
+import { evaluateInterface, type InterfaceInput, type InterfaceVerdict, type Reading } from '../engine/interface-evaluation';
+import { whatIf } from '../engine/measured-fit';
+import { toNanometres, type LengthUnit } from '../engine/units';
+import { Measurement } from '../measurements/entities/measurement.entity';
+import { MEASUREMENT_CHANGED, type MeasurementChangedEvent } from '../measurements/measurements.events';
+import type { DiameterSpec, LengthSpec, SplineSpec } from '../parts/entities/part-feature.entity';
+import { PartFeature } from '../parts/entities/part-feature.entity';
+import { PART_FEATURE_CHANGED, type PartFeatureChangedEvent } from '../parts/parts.events';
+import { AddEvidenceDto, CreateManualCheckDto, TransitionDto } from './dto/fit-check.dto';
+import { FitCheckEvent } from './entities/fit-check-event.entity';
+import { FitCheckEvidence } from './entities/fit-check-evidence.entity';
+import { FitCheck, type CheckKind } from './entities/fit-check.entity';
+import { FIT_CHECK_CHANGED, type FitCheckChangedEvent } from './fit-checks.events';
+
+const CHECK_KIND_FOR_INTERFACE: Record<AssemblyInterface['kind'], CheckKind> = {
+  spline: 'spline_match',
+  bore_shaft: 'fit',
+  length_window: 'length_window',
+};
+
+const CHECK_TITLE_PREFIX: Record<AssemblyInterface['kind'], string> = {
+  spline: 'Spline match',
+  bore_shaft: 'Fit',
+  length_window: 'Length window',
+};
+
+/**
+ * Derives checks from an assembly's interfaces, keeps them in step with parts and readings,
+ * takes people's confirmations with evidence, and keeps every change in the history.
+ */
+@Injectable()
+export class FitChecksService {
+  private readonly logger = new Logger(FitChecksService.name);
+
+  constructor(
+    @InjectRepository(FitCheck) private readonly checks: Repository<FitCheck>,
+    @InjectRepository(FitCheckEvent) private readonly events: Repository<FitCheckEvent>,
+    @InjectRepository(FitCheckEvidence) private readonly evidence: Repository<FitCheckEvidence>,
+    @InjectRepository(Assembly) private readonly assemblies: Repository<Assembly>,
+    @InjectRepository(AssemblyInterface) private readonly interfaces: Repository<AssemblyInterface>,
+    @InjectRepository(PartFeature) private readonly features: Repository<PartFeature>,
+    @InjectRepository(Measurement) private readonly measurements: Repository<Measurement>,
+    @Inject(EventEmitter2) private readonly emitter: EventEmitter2,
+  ) {}
+
+  // ---- re-evaluation ----
+
+  @OnEvent(PART_FEATURE_CHANGED, { async: true, promisify: true })
+  async handleFeatureChanged(event: PartFeatureChangedEvent): Promise<void> {
+    const touched = await this.interfaces.find({
+      where: [{ featureAId: event.featureId }, { featureBId: event.featureId }],
+    });
+    await this.evaluateInterfaces(event.workshopId, touched, event.reason, event.actorId);
+  }
+
+  @OnEvent(MEASUREMENT_CHANGED, { async: true, promisify: true })
+  async handleMeasurementChanged(event: MeasurementChangedEvent): Promise<void> {
+    const touched = event.interfaceId
+      ? await this.interfaces.find({ where: { id: event.interfaceId } })
+      : await this.interfaces.find({ where: [{ featureAId: event.featureId! }, { featureBId: event.featureId! }] });
+    await this.evaluateInterfaces(event.workshopId, touched, event.reason, event.actorId);
+  }
+
+  /** Re-evaluates every interface of an assembly (after the assembly itself changed). */
+  async evaluateAssembly(workshopId: string, assemblyId: string, reason: string, actorId: string | null): Promise<void> {
+    const interfaces = await this.interfaces.find({ where: { assemblyId } });
+    await this.evaluateInterfaces(workshopId, interfaces, reason, actorId);
+  }
+
+  private async evaluateInterfaces(
+    workshopId: string,
+    interfaces: AssemblyInterface[],
+    reason: string,
+    actorId: string | null,
+  ): Promise<void> {
+    for (const assemblyInterface of interfaces) {
+      const verdict = await this.verdictFor(assemblyInterface);
+      await this.applyVerdict(workshopId, assemblyInterface, verdict, reason, actorId);
+    }
+  }
+
+  async verdictFor(assemblyInterface: AssemblyInterface): Promise<InterfaceVerdict> {
+    try {
+      return evaluateInterface(await this.interfaceInput(assemblyInterface));
+    } catch (error) {
+      // Input the engine cannot compute (say, a size beyond the ISO tables) leaves the check open, with the reason.
+      if (error instanceof EngineError) return { outcome: 'unknown', summary: 'cannot compute', reasons: [error.message], detail: {} };
+      throw error;
+    }
+  }
+
+  private async interfaceInput(assemblyInterface: AssemblyInterface): Promise<InterfaceInput> {
+    const ids = [assemblyInterface.featureAId, assemblyInterface.featureBId].filter((id): id is string => Boolean(id));
+    const features = await this.features.find({ where: { id: In(ids) }, relations: { part: true } });
+    const readings = await this.measurements.find({ where: { featureId: In(ids) } });
+    const readingsOf = (featureId: string): Reading[] =>
+      readings
+        .filter((reading) => reading.featureId === featureId)
+        .map((reading) => ({ valueNm: reading.valueNm, resolutionNm: reading.instrumentResolutionNm }));
+    const featureA = features.find((feature) => feature.id === assemblyInterface.featureAId)!;
+    const featureB = features.find((feature) => feature.id === assemblyInterface.featureBId);
+    const label = (feature: PartFeature) => `${feature.name} (${feature.part?.partNumber ?? 'part'})`;
+    const unit: LengthUnit = featureA.displayUnit;
+
+    switch (assemblyInterface.kind) {
+      case 'spline':
+        return {
+          kind: 'spline',
+          first: { name: label(featureA), ...(featureA.spec as SplineSpec) },
+          second: { name: label(featureB!), ...(featureB!.spec as SplineSpec) },
+        };
+      case 'bore_shaft': {
+        const [hole, shaft] = (featureA.spec as DiameterSpec).role === 'hole' ? [featureA, featureB!] : [featureB!, featureA];
+        const clearanceReadings = await this.measurements.find({
+          where: { interfaceId: assemblyInterface.id, quantity: 'clearance' },
+        });
+        return {
+          kind: 'bore_shaft',
+          hole: { name: label(hole), ...(hole.spec as DiameterSpec), readings: readingsOf(hole.id) },
+          shaft: { name: label(shaft), ...(shaft.spec as DiameterSpec), readings: readingsOf(shaft.id) },
+          clearanceReadings: clearanceReadings.map((reading) => ({ valueNm: reading.valueNm, resolutionNm: reading.instrumentResolutionNm })),
+          minClearanceNm: assemblyInterface.marginNm ?? 0,
+          unit,
+        };
+      }
+      case 'length_window':
+        return {
+          kind: 'length_window',
+          length: { name: label(featureA), ...(featureA.spec as LengthSpec), readings: readingsOf(featureA.id) },
+          installedMinNm: assemblyInterface.installedMinNm!,
+          installedMaxNm: assemblyInterface.installedMaxNm!,
+          marginNm: assemblyInterface.marginNm ?? 0,
+          unit,
+        };
+    }
+  }
+
+  private async applyVerdict(
+    workshopId: string,
+    assemblyInterface: AssemblyInterface,
+    verdict: InterfaceVerdict,
+    reason: string,
+    actorId: string | null,
+  ): Promise<void> {
+    const existing = await this.checks.findOneBy({ interfaceId: assemblyInterface.id });
+    const title = `${CHECK_TITLE_PREFIX[assemblyInterface.kind]}: ${assemblyInterface.name}`;
+    const detail = { summary: verdict.summary, reasons: verdict.reasons, ...verdict.detail };
+    if (!existing) {
+      const check = await this.checks.save(
+        this.checks.create({
+          workshopId,
+          assemblyId: assemblyInterface.assemblyId,
+          interfaceId: assemblyInterface.id,
+          kind: CHECK_KIND_FOR_INTERFACE[assemblyInterface.kind],
+          title,
+          required: true,
+          state: stateForOutcome(verdict.outcome),
+          outcome: verdict.outcome,
+          detail,
+          reason: verdict.summary,
+        }),
+      );
+      await this.record(check, null, check.state, `derived from the interface: ${verdict.summary}`, actorId);
+      return;
+    }
+    const nextState = stateAfterOutcome(existing.state, existing.outcome, verdict.outcome);
+    existing.outcome = verdict.outcome;
+    existing.detail = detail;
+    existing.title = title;
+    if (nextState) {
+      const from = existing.state;
+      const why = from === 'confirmed' ? `re-opened: ${reason} (now ${verdict.summary})` : `${reason}: ${verdict.summary}`;
+      existing.state = nextState;
+      existing.reason = why.slice(0, 500);
+      if (nextState !== 'confirmed') {
+        existing.confirmedBy = null;
+        existing.confirmedAt = null;
+      }
+      await this.checks.save(existing);
+      await this.record(existing, from, nextState, why, actorId);
+    } else {
+      await this.checks.save(existing);
+    }
+  }
+
+  // ---- the checklist ----
+
+  async checklist(workshopId: string, assemblyId: string) {
+    await this.assemblyOf(workshopId, assemblyId);
+    const checks = await this.checks.find({ where: { assemblyId }, order: { createdAt: 'ASC' } });
+    const evidence = checks.length
+      ? await this.evidence.find({ where: { fitCheckId: In(checks.map((check) => check.id)) }, order: { createdAt: 'ASC' } })
+      : [];
+    const withEvidence = checks.map((check) => ({
+      check,
+      evidence: evidence.filter((item) => item.fitCheckId === check.id),
+    }));
+    const verdict = rollUpChecklist(
+      withEvidence.map(({ check, evidence: items }) => ({ state: check.state, required: check.required, evidenceCount: items.length })),
+    );
+    return { verdict, items: withEvidence };
+  }
+
+  async createManual(workshopId: string, assemblyId: string, actorId: string, input: CreateManualCheckDto): Promise<FitCheck> {
+    await this.assemblyOf(workshopId, assemblyId);
+    const check = await this.checks.save(
+      this.checks.create({
+        workshopId,
+        assemblyId,
+        interfaceId: null,
+        kind: 'manual',
+        title: input.title,
+        required: input.required ?? true,
+        state: 'open',
+        outcome: null,
+        detail: null,
+        reason: '',
+      }),
+    );
+    await this.record(check, null, 'open', 'added by hand', actorId);
+    return check;
+  }
+
+  async transition(workshopId: string, checkId: string, actorId: string, input: TransitionDto): Promise<FitCheck> {
+    const check = await this.checkOf(workshopId, checkId);
+    const evidenceCount = await this.evidence.countBy({ fitCheckId: check.id });
+    const verdict = canTransition(
+      { state: check.state, required: check.required, evidenceCount, derived: check.interfaceId !== null, outcome: check.outcome },
+      input.to,
+    );
+    if (!verdict.allowed) throw new ConflictException(verdict.message);
+
+    const from = check.state;
+    // Re-opening a derived check hands it back to the engine's verdict.
+    const target: FitCheckState =
+      input.to === 'open' && check.interfaceId !== null && check.outcome ? stateForOutcome(check.outcome) : input.to;
+    check.state = target;
+    check.reason = input.reason;
+    check.confirmedBy = target === 'confirmed' ? actorId : null;
+    check.confirmedAt = target === 'confirmed' ? new Date() : null;
+    await this.checks.save(check);
+    await this.record(check, from, target, input.reason, actorId);
+    return check;
+  }
+
+  async addEvidence(workshopId: string, checkId: string, actorId: string, input: AddEvidenceDto): Promise<FitCheckEvidence> {
+    const check = await this.checkOf(workshopId, checkId);
+    const measurement = await this.measurements.findOneBy({ id: input.measurementId, workshopId });
+    if (!measurement) throw new NotFoundException('Measurement not found');
+    return this.evidence.save(
+      this.evidence.create({
+        fitCheckId: check.id,
+        kind: 'measurement',
+        measurementId: measurement.id,
+        markId: null,
+        photoKey: null,
+        note: input.note ?? '',
+        addedBy: actorId,
+      }),
+    );
+  }
+
+  async history(workshopId: string, checkId: string): Promise<FitCheckEvent[]> {
+    const check = await this.checkOf(workshopId, checkId);
+    return this.events.find({ where: { fitCheckId: check.id }, order: { createdAt: 'ASC' } });
+  }
+
+  /** What a shaft `delta` larger (or smaller, if negative) does to the measured clearance of a bore/shaft interface. */
+  async whatIf(workshopId: string, interfaceId: string, delta: string, unit: LengthUnit) {
+    const assemblyInterface = await this.interfaces.findOneBy({ id: interfaceId });
+    if (!assemblyInterface) throw new NotFoundException('Interface not found');
+    await this.assemblyOf(workshopId, assemblyInterface.assemblyId);
+    if (assemblyInterface.kind !== 'bore_shaft') throw new BadRequestException('What-if applies to a bore and shaft interface');
+    const verdict = await this.verdictFor(assemblyInterface);
+    const clearanceNm = verdict.detail.clearanceMeasuredNm;
+    if (typeof clearanceNm !== 'number') {
+      throw new ConflictException('Measure the bore and the shaft (or the clearance) first: a what-if works from a measured clearance');
+    }
+    let deltaNm: number;
+    try {
+      deltaNm = toNanometres(delta.trim(), unit);
+    } catch (error) {
+      if (error instanceof EngineError) throw new BadRequestException(`delta: ${error.message}`);
+      throw error;
+    }
+    return whatIf({ clearanceNm, deltaNm });
+  }
+
+  // ---- helpers ----
+
+  private async record(check: FitCheck, from: FitCheckState | null, to: FitCheckState, reason: string, actorId: string | null) {
+    await this.events.save(this.events.create({ fitCheckId: check.id, fromState: from, toState: to, reason: reason.slice(0, 500), actorId }));
+    if (from === to) return;
+    const event: FitCheckChangedEvent = {
+      workshopId: check.workshopId,
+      assemblyId: check.assemblyId,
+      fitCheckId: check.id,
+      title: check.title,
+      from,
+      to,
+      reason,
+      actorId,
+    };
+    this.logger.log(`check ${check.id} ${from ?? 'new'} → ${to}`);
+    await this.emitter.emitAsync(FIT_CHECK_CHANGED, event);
+  }
+
+  private async assemblyOf(workshopId: string, assemblyId: string): Promise<Assembly> {
+    const assembly = await this.assemblies.findOneBy({ id: assemblyId, workshopId });
+    if (!assembly) throw new NotFoundException('Assembly not found');
+    return assembly;
+  }
+
+  private async checkOf(workshopId: string, checkId: string): Promise<FitCheck> {
+    const check = await this.checks.findOneBy({ id: checkId, workshopId });
+    if (!check) throw new NotFoundException('Fit check not found');
+    return check;
+  }
+}

@@ -1,0 +1,30 @@
+import { Column, CreateDateColumn, Entity, PrimaryColumn, UpdateDateColumn } from 'typeorm';
+
+/** The multipart upload behind footage in state `uploading`; gone once the upload completes or is aborted. */
+@Entity('footage_uploads')
+export class FootageUpload {
+  @PrimaryColumn({ name: 'footage_id', type: 'char', length: 36 })
+  footageId!: string;
+
+  /** The storage's multipart upload id. */
+  @Column({ name: 'upload_id', type: 'varchar', length: 1024 })
+  uploadId!: string;
+
+  @Column({ name: 'part_size_bytes', type: 'int', unsigned: true })
+  partSizeBytes!: number;
+
+  @Column({ name: 'part_count', type: 'smallint', unsigned: true })
+  partCount!: number;
+
+  @CreateDateColumn({ name: 'created_at', type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
+  createdAt!: Date;
+
+  @UpdateDateColumn({
+    name: 'updated_at',
+    type: 'datetime',
+    precision: 3,
+    default: () => 'CURRENT_TIMESTAMP(3)',
+    onUpdate: 'CURRENT_TIMESTAMP(3)',
+  })
+  updatedAt!: Date;
+}

@@ -1,0 +1,90 @@
+import { Column, CreateDateColumn, Entity, Index, PrimaryColumn, UpdateDateColumn, ValueTransformer } from 'typeorm';
+import { newId } from '../../common/database/columns';
+
+export const FOOTAGE_STATES = ['uploading', 'processing', 'ready', 'failed'] as const;
+export type FootageState = (typeof FOOTAGE_STATES)[number];
+
+/** BIGINT and DECIMAL columns come back from mysql2 as strings; sizes stay far below 2^53. */
+const numberTransformer: ValueTransformer = {
+  to: (value: number | null | undefined) => value,
+  from: (value: string | number | null) => (value === null ? null : Number(value)),
+};
+
+/** A video of a build, stored in S3; the browser uploads it straight to storage. */
+@Entity('footage')
+@Index('idx_footage_build', ['workshopId', 'buildId', 'createdAt'])
+@Index('uq_footage_object', ['objectKey'], { unique: true })
+export class Footage {
+  @PrimaryColumn({ type: 'char', length: 36 })
+  id: string = newId();
+
+  @Column({ name: 'workshop_id', type: 'char', length: 36 })
+  workshopId!: string;
+
+  @Column({ name: 'build_id', type: 'char', length: 36 })
+  buildId!: string;
+
+  @Column({ type: 'varchar', length: 200 })
+  title!: string;
+
+  /** The uploaded file's name, sanitised; shown only, never used as a storage key. */
+  @Column({ name: 'original_name', type: 'varchar', length: 255 })
+  originalName!: string;
+
+  @Column({ name: 'content_type', type: 'varchar', length: 100 })
+  contentType!: string;
+
+  @Column({ name: 'size_bytes', type: 'bigint', unsigned: true, transformer: numberTransformer })
+  sizeBytes!: number;
+
+  @Column({ name: 'object_key', type: 'varchar', length: 300 })
+  objectKey!: string;
+
+  @Column({ type: 'enum', enum: FOOTAGE_STATES, default: 'uploading' })
+  state!: FootageState;
+
+  @Column({ name: 'failure_reason', type: 'varchar', length: 500, nullable: true })
+  failureReason!: string | null;
+
+  @Column({ name: 'duration_ms', type: 'int', unsigned: true, nullable: true })
+  durationMs!: number | null;
+
+  @Column({ type: 'int', unsigned: true, nullable: true })
+  width!: number | null;
+
+  @Column({ type: 'int', unsigned: true, nullable: true })
+  height!: number | null;
+
+  @Column({ name: 'frame_rate', type: 'decimal', precision: 9, scale: 3, nullable: true, transformer: numberTransformer })
+  frameRate!: number | null;
+
+  @Column({ type: 'varchar', length: 40, nullable: true })
+  container!: string | null;
+
+  @Column({ name: 'video_codec', type: 'varchar', length: 40, nullable: true })
+  videoCodec!: string | null;
+
+  @Column({ name: 'audio_codec', type: 'varchar', length: 40, nullable: true })
+  audioCodec!: string | null;
+
+  @Column({ name: 'poster_key', type: 'varchar', length: 300, nullable: true })
+  posterKey!: string | null;
+
+  @Column({ name: 'created_by', type: 'char', length: 36, nullable: true })
+  createdBy!: string | null;
+
+  @Column({ name: 'processed_at', type: 'datetime', precision: 3, nullable: true })
+  processedAt!: Date | null;
+
+  @CreateDateColumn({ name: 'created_at', type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
+  createdAt!: Date;
+
+  @UpdateDateColumn({
+    name: 'updated_at',
+    type: 'datetime',
+    precision: 3,
+    default: () => 'CURRENT_TIMESTAMP(3)',
+    onUpdate: 'CURRENT_TIMESTAMP(3)',
+  })
+  updatedAt!: Date;
+}

@@ -1,0 +1,45 @@
+import { Body, Controller, Delete, Get, HttpCode, Inject, Param, ParseUUIDPipe, Post, Query } from '@nestjs/common';
+import { ApiTags } from '@nestjs/swagger';
+import { WorkshopEditor } from '../common/decorators/access.decorator';
+import { CurrentUser } from '../common/decorators/current-user.decorator';
+import type { SessionUser } from '../common/types/access-context';
+import { CreateMeasurementDto, ListMeasurementsQueryDto } from './dto/measurement.dto';
+import { summariseMeasurements, toMeasurementResponse } from './measurement.mapper';
+import { MeasurementsService } from './measurements.service';
+
+@ApiTags('measurements')
+@WorkshopEditor()
+@Controller('workshops/:workshopId/measurements')
+export class MeasurementsController {
+  constructor(@Inject(MeasurementsService) private readonly measurements: MeasurementsService) {}
+
+  /** Readings of a subject, oldest first, with their summary (mean and spread). */
+  @Get()
+  async list(@Param('workshopId', ParseUUIDPipe) workshopId: string, @Query() query: ListMeasurementsQueryDto) {
+    const measurements = await this.measurements.list(workshopId, query);
+    const oneSubject = Boolean(query.featureId || query.interfaceId);
+    return {
+      measurements: measurements.map(toMeasurementResponse),
+      summary: oneSubject ? summariseMeasurements(measurements) : null,
+    };
+  }
+
+  @Post()
+  async create(
+    @Param('workshopId', ParseUUIDPipe) workshopId: string,
+    @CurrentUser() user: SessionUser,
+    @Body() body: CreateMeasurementDto,
+  ) {
+    return toMeasurementResponse(await this.measurements.create(workshopId, user.id, body));
+  }
+
+  @Delete(':measurementId')
+  @HttpCode(204)
+  async remove(
+    @Param('workshopId', ParseUUIDPipe) workshopId: string,
+    @Param('measurementId', ParseUUIDPipe) measurementId: string,
+    @CurrentUser() user: SessionUser,
+  ) {
+    await this.measurements.remove(workshopId, user.id, measurementId);
+  }
+}

@@ -1,0 +1,64 @@
+import { Column, CreateDateColumn, Entity, Index, OneToMany, PrimaryColumn, UpdateDateColumn } from 'typeorm';
+import { newId } from '../../common/database/columns';
+import { PartFeature } from './part-feature.entity';
+
+export const PART_CATEGORIES = ['coupler', 'shaft', 'joint', 'bearing', 'bore', 'plate', 'boot', 'seal', 'fastener', 'other'] as const;
+export type PartCategory = (typeof PART_CATEGORIES)[number];
+export const PART_SOURCES = ['new', 'remanufactured', 'used', 'original_equipment'] as const;
+export type PartSource = (typeof PART_SOURCES)[number];
+
+@Entity('parts')
+@Index(['workshopId', 'partNumberKey'], { unique: true })
+export class Part {
+  @PrimaryColumn({ type: 'char', length: 36 })
+  id: string = newId();
+
+  @Column({ name: 'workshop_id', type: 'char', length: 36 })
+  workshopId!: string;
+
+  /** As the maker prints it, e.g. "HL-2107". */
+  @Column({ name: 'part_number', type: 'varchar', length: 80 })
+  partNumber!: string;
+
+  /** Upper-case letters and digits only, so "hl 2107" finds "HL-2107" and duplicates are caught. */
+  @Column({ name: 'part_number_key', type: 'varchar', length: 80 })
+  partNumberKey!: string;
+
+  @Column({ type: 'varchar', length: 120, default: '' })
+  maker!: string;
+
+  @Column({ type: 'varchar', length: 200 })
+  title!: string;
+
+  @Column({ type: 'enum', enum: PART_CATEGORIES })
+  category!: PartCategory;
+
+  @Column({ type: 'enum', enum: PART_SOURCES, default: 'new' })
+  source!: PartSource;
+
+  @Column({ type: 'text' })
+  notes!: string;
+
+  /** Object keys of photos in storage. */
+  @Column({ name: 'photo_keys', type: 'json' })
+  photoKeys!: string[];
+
+  @OneToMany(() => PartFeature, (feature) => feature.part, { cascade: false })
+  features?: PartFeature[];
+
+  @CreateDateColumn({ name: 'created_at', type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
+  createdAt!: Date;
+
+  @UpdateDateColumn({
+    name: 'updated_at',
+    type: 'datetime',
+    precision: 3,
+    default: () => 'CURRENT_TIMESTAMP(3)',
+    onUpdate: 'CURRENT_TIMESTAMP(3)',
+  })
+  updatedAt!: Date;
+}
+
+export function partNumberKey(partNumber: string): string {
+  return partNumber.toUpperCase().replace(/[^A-Z0-9]/g, '');
+}

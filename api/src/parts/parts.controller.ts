@@ -1,0 +1,75 @@
+import { Body, Controller, Delete, Get, HttpCode, Inject, Param, ParseUUIDPipe, Patch, Post, Query } from '@nestjs/common';
+import { ApiTags } from '@nestjs/swagger';
+import { WorkshopEditor } from '../common/decorators/access.decorator';
+import { CurrentUser } from '../common/decorators/current-user.decorator';
+import type { SessionUser } from '../common/types/access-context';
+import { CreatePartDto, FeatureInputDto, ListPartsQueryDto, UpdateFeatureDto, UpdatePartDto } from './dto/part.dto';
+import { toFeatureResponse, toPartResponse } from './part.mapper';
+import { PartsService } from './parts.service';
+
+@ApiTags('parts')
+@WorkshopEditor()
+@Controller('workshops/:workshopId/parts')
+export class PartsController {
+  constructor(@Inject(PartsService) private readonly parts: PartsService) {}
+
+  @Get()
+  async list(@Param('workshopId', ParseUUIDPipe) workshopId: string, @Query() query: ListPartsQueryDto) {
+    return (await this.parts.list(workshopId, query)).map(toPartResponse);
+  }
+
+  @Post()
+  async create(@Param('workshopId', ParseUUIDPipe) workshopId: string, @Body() body: CreatePartDto) {
+    return toPartResponse(await this.parts.create(workshopId, body));
+  }
+
+  @Get(':partId')
+  async get(@Param('workshopId', ParseUUIDPipe) workshopId: string, @Param('partId', ParseUUIDPipe) partId: string) {
+    return toPartResponse(await this.parts.get(workshopId, partId));
+  }
+
+  @Patch(':partId')
+  async update(
+    @Param('workshopId', ParseUUIDPipe) workshopId: string,
+    @Param('partId', ParseUUIDPipe) partId: string,
+    @Body() body: UpdatePartDto,
+  ) {
+    return toPartResponse(await this.parts.update(workshopId, partId, body));
+  }
+
+  @Delete(':partId')
+  @HttpCode(204)
+  async remove(@Param('workshopId', ParseUUIDPipe) workshopId: string, @Param('partId', ParseUUIDPipe) partId: string) {
+    await this.parts.remove(workshopId, partId);
+  }
+
+  @Post(':partId/features')
+  async addFeature(
+    @Param('workshopId', ParseUUIDPipe) workshopId: string,
+    @Param('partId', ParseUUIDPipe) partId: string,
+    @Body() body: FeatureInputDto,
+  ) {
+    return toFeatureResponse(await this.parts.addFeature(workshopId, partId, body));
+  }
+
+  @Patch(':partId/features/:featureId')
+  async updateFeature(
+    @Param('workshopId', ParseUUIDPipe) workshopId: string,
+    @Param('partId', ParseUUIDPipe) partId: string,
+    @Param('featureId', ParseUUIDPipe) featureId: string,
+    @CurrentUser() user: SessionUser,
+    @Body() body: UpdateFeatureDto,
+  ) {
+    return toFeatureResponse(await this.parts.updateFeature(workshopId, partId, featureId, user.id, body));
+  }
+
+  @Delete(':partId/features/:featureId')
+  @HttpCode(204)
+  async removeFeature(
+    @Param('workshopId', ParseUUIDPipe) workshopId: string,
+    @Param('partId', ParseUUIDPipe) partId: string,
+    @Param('featureId', ParseUUIDPipe) featureId: string,
+  ) {
+    await this.parts.removeFeature(workshopId, partId, featureId);
+  }
+}

@@ -1,0 +1,23 @@
+import { ApiProperty } from '@nestjs/swagger';
+import { Type } from 'class-transformer';
+import { IsIn, IsNumber, IsPositive, Matches } from 'class-validator';
+
+export class FitQueryDto {
+  @ApiProperty({ example: 25, description: 'Nominal size, in `unit`' })
+  @Type(() => Number)
+  @IsNumber({ allowNaN: false, allowInfinity: false }, { message: 'size must be a number' })
+  @IsPositive({ message: 'size must be greater than zero' })
+  size!: number;
+
+  @ApiProperty({ enum: ['mm', 'in'], default: 'mm' })
+  @IsIn(['mm', 'in'], { message: 'unit must be mm or in' })
+  unit: 'mm' | 'in' = 'mm';
+
+  @ApiProperty({ example: 'H7', description: 'Hole tolerance class: upper-case letter(s) and IT grade' })
+  @Matches(/^[A-Z]{1,2}\d{1,2}$/, { message: 'hole must be a hole tolerance class such as H7' })
+  hole!: string;
+
+  @ApiProperty({ example: 'g6', description: 'Shaft tolerance class: lower-case letter(s) and IT grade' })
+  @Matches(/^[a-z]{1,2}\d{1,2}$/, { message: 'shaft must be a shaft tolerance class such as g6' })
+  shaft!: string;
+}

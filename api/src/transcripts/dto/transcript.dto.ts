@@ -1,0 +1,112 @@
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import { Transform, Type } from 'class-transformer';
+import { IsBoolean, IsIn, IsInt, IsOptional, IsString, Length, Max, MaxLength, Min } from 'class-validator';
+import { TRANSCRIPT_FORMATS, type StoredTranscriptFormat } from '../entities/transcript.entity';
+import { TRANSCRIPT_MAX_BYTES } from '../transcript-limits';
+
+const FORMAT_CHOICES = ['auto', ...TRANSCRIPT_FORMATS] as const;
+export type TranscriptFormatChoice = (typeof FORMAT_CHOICES)[number];
+
+export class AttachTranscriptDto {
+  @ApiProperty({
+    example: 'WEBVTT\n\n00:00:01.000 --> 00:00:04.000\nThe spline counts twenty-one teeth.',
+    description: 'WebVTT, SubRip or timestamped lines ("[1:02] text"); at most 2 MB',
+  })
+  @IsString()
+  @MaxLength(TRANSCRIPT_MAX_BYTES, { message: 'text must be at most 2 MB' })
+  text!: string;
+
+  @ApiPropertyOptional({ enum: FORMAT_CHOICES, default: 'auto' })
+  @IsOptional()
+  @IsIn(FORMAT_CHOICES)
+  format: TranscriptFormatChoice = 'auto';
+}
+
+/** The other fields of a multipart transcript upload (the file itself is the `file` field). */
+export class AttachTranscriptFileDto {
+  @ApiPropertyOptional({ enum: FORMAT_CHOICES, default: 'auto' })
+  @IsOptional()
+  @IsIn(FORMAT_CHOICES)
+  format: TranscriptFormatChoice = 'auto';
+}
+
+export class TranscriptQueryDto {
+  @ApiPropertyOptional({ description: 'A revision number; the active revision when absent' })
+  @IsOptional()
+  @Type(() => Number)
+  @IsInt()
+  @Min(1)
+  revision?: number;
+}
+
+export class ExportQueryDto extends TranscriptQueryDto {
+  @ApiPropertyOptional({ description: 'Ask the browser to save the file instead of showing it' })
+  @IsOptional()
+  @Transform(({ value }) => value === true || value === 'true' || value === '1')
+  @IsBoolean()
+  download?: boolean;
+}
+
+export class SearchQueryDto {
+  @ApiProperty({ example: 'pilot bearing', description: 'Words to find; each must appear (words of three letters or more)' })
+  @IsString()
+  @Length(1, 200)
+  q!: string;
+
+  @ApiPropertyOptional({ default: 50, minimum: 1, maximum: 200 })
+  @IsOptional()
+  @Type(() => Number)
+  @IsInt()
+  @Min(1)
+  @Max(200)
+  limit: number = 50;
+}
+
+export class CueDto {
+  @ApiProperty({ description: 'Position in the transcript, from 0' }) index!: number;
+  @ApiProperty() startMs!: number;
+  @ApiProperty() endMs!: number;
+  @ApiProperty() text!: string;
+}
+
+export class TranscriptRevisionDto {
+  @ApiProperty() id!: string;
+  @ApiProperty() footageId!: string;
+  @ApiProperty() revision!: number;
+  @ApiProperty({ enum: TRANSCRIPT_FORMATS }) format!: StoredTranscriptFormat;
+  @ApiProperty({ type: String, nullable: true, description: 'The attached file name; null when pasted' })
+  sourceName!: string | null;
+  @ApiProperty() cueCount!: number;
+  @ApiProperty() isActive!: boolean;
+  @ApiProperty() createdAt!: string;
+}
+
+export class TranscriptDto extends TranscriptRevisionDto {
+  @ApiProperty({ type: [CueDto] }) cues!: CueDto[];
+}
+
+export class CueMatchDto {
+  @ApiProperty() cueIndex!: number;
+  @ApiProperty() startMs!: number;
+  @ApiProperty() endMs!: number;
+  @ApiProperty() text!: string;
+}
+
+export class FootageSearchResponseDto {
+  @ApiProperty({ description: 'The words searched for' }) terms!: string[];
+  @ApiProperty({ type: [CueMatchDto], description: 'Matching cues of the active transcript, in time order' })
+  results!: CueMatchDto[];
+}
+
+export class WorkshopCueMatchDto extends CueMatchDto {
+  @ApiProperty() footageId!: string;
+  @ApiProperty() footageTitle!: string;
+  @ApiProperty() buildId!: string;
+  @ApiProperty() buildTitle!: string;
+}
+
+export class WorkshopSearchResponseDto {
+  @ApiProperty() terms!: string[];
+  @ApiProperty({ type: [WorkshopCueMatchDto], description: "Matching cues of the workshop's active transcripts, best first" })
+  results!: WorkshopCueMatchDto[];
+}

@@ -1,0 +1,21 @@
+import { Module } from '@nestjs/common';
+import { TypeOrmModule } from '@nestjs/typeorm';
+import { UsersModule } from '../users/users.module';
+import { Invitation } from './entities/invitation.entity';
+import { WorkshopMember } from './entities/workshop-member.entity';
+import { Workshop } from './entities/workshop.entity';
+import { InvitationsController, WorkshopInvitationsController } from './invitations.controller';
+import { InvitationsService } from './invitations.service';
+import { MembersController } from './members.controller';
+import { MembersService } from './members.service';
+import { MembershipService } from './membership.service';
+import { WorkshopsController } from './workshops.controller';
+import { WorkshopsService } from './workshops.service';
+
+@Module({
+  imports: [TypeOrmModule.forFeature([Workshop, WorkshopMember, Invitation]), UsersModule],
+  controllers: [WorkshopsController, MembersController, WorkshopInvitationsController, InvitationsController],
+  providers: [WorkshopsService, MembersService, InvitationsService, MembershipService],
+  exports: [MembershipService, WorkshopsService, TypeOrmModule],
+})
+export class WorkshopsModule {}

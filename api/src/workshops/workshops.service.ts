@@ -1,0 +1,157 @@
+import {
+  BadRequestException,
+  ConflictException,
+  ForbiddenException,
+  Inject,
+  Injectable,
+  Logger,
+  NotFoundException,
+} from '@nestjs/common';
+import { InjectRepository } from '@nestjs/typeorm';
+import { randomUUID } from 'node:crypto';
+import { DataSource, In, Repository } from 'typeorm';
+import type { SessionUser, WorkshopMembership } from '../common/types/access-context';
+import { StorageService } from '../infra/storage/storage.service';
+import type { CreateWorkshopDto, UpdateWorkshopDto } from './dto/workshop.dto';
+import type { WorkshopView } from './dto/workshop-views.dto';
+import { WorkshopMember } from './entities/workshop-member.entity';
+import { Workshop } from './entities/workshop.entity';
+import { detectLogoImage, LOGO_MAX_BYTES } from './logo-image';
+import { toWorkshopView } from './workshops.mapper';
+
+const SLUG_TAKEN = 'That web address is taken; choose another';
+
+function isDuplicateKey(error: unknown): boolean {
+  return typeof error === 'object' && error !== null && (error as { code?: unknown }).code === 'ER_DUP_ENTRY';
+}
+
+export interface UploadedImage {
+  buffer: Buffer;
+  size: number;
+}
+
+@Injectable()
+export class WorkshopsService {
+  private readonly logger = new Logger(WorkshopsService.name);
+
+  constructor(
+    @InjectRepository(Workshop) private readonly workshops: Repository<Workshop>,
+    @InjectRepository(WorkshopMember) private readonly members: Repository<WorkshopMember>,
+    @Inject(DataSource) private readonly dataSource: DataSource,
+    @Inject(StorageService) private readonly storage: StorageService,
+  ) {}
+
+  /** The creator becomes the owner, in the same transaction. */
+  async create(user: SessionUser, dto: CreateWorkshopDto): Promise<WorkshopView> {
+    if (!user.emailVerified) {
+      throw new ForbiddenException({
+        message: 'Confirm your e-mail address before you create a workshop.',
+        code: 'email_unverified',
+      });
+    }
+    const workshop = this.workshops.create({
+      name: dto.name,
+      slug: dto.slug,
+      description: dto.description ?? '',
+      logoKey: null,
+      disabledAt: null,
+    });
+    try {
+      await this.dataSource.transaction(async (manager) => {
+        await manager.insert(Workshop, workshop);
+        const owner = manager.create(WorkshopMember, { workshopId: workshop.id, userId: user.id, role: 'owner' });
+        await manager.insert(WorkshopMember, owner);
+      });
+    } catch (error) {
+      if (isDuplicateKey(error)) throw new ConflictException({ message: SLUG_TAKEN, errors: { slug: SLUG_TAKEN } });
+      throw error;
+    }
+    return this.get(workshop.id, 'owner');
+  }
+
+  /** The caller's workshops, oldest membership first. */
+  async listFor(userId: string): Promise<WorkshopView[]> {
+    const memberships = await this.members.find({ where: { userId }, order: { createdAt: 'ASC' } });
+    if (memberships.length === 0) return [];
+    const workshops = await this.workshops.findBy({ id: In(memberships.map((membership) => membership.workshopId)) });
+    const byId = new Map(workshops.map((workshop) => [workshop.id, workshop]));
+    const views: WorkshopView[] = [];
+    for (const membership of memberships) {
+      const workshop = byId.get(membership.workshopId);
+      if (workshop) views.push(toWorkshopView(workshop, membership.role, await this.logoUrl(workshop)));
+    }
+    return views;
+  }
+
+  async get(workshopId: string, role: WorkshopMembership['role'] | null): Promise<WorkshopView> {
+    const workshop = await this.getEntity(workshopId);
+    return toWorkshopView(workshop, role, await this.logoUrl(workshop));
+  }
+
+  async update(membership: WorkshopMembership, dto: UpdateWorkshopDto): Promise<WorkshopView> {
+    const workshop = await this.getEntity(membership.workshopId);
+    if (dto.name !== undefined) workshop.name = dto.name;
+    if (dto.slug !== undefined) workshop.slug = dto.slug;
+    if (dto.description !== undefined) workshop.description = dto.description;
+    try {
+      await this.workshops.save(workshop);
+    } catch (error) {
+      if (isDuplicateKey(error)) throw new ConflictException({ message: SLUG_TAKEN, errors: { slug: SLUG_TAKEN } });
+      throw error;
+    }
+    return this.get(workshop.id, membership.role);
+  }
+
+  /** Stores a new logo (PNG, JPEG or WebP, checked by content, at most 2 MB) and deletes the old one. */
+  async setLogo(membership: WorkshopMembership, file: UploadedImage | undefined): Promise<WorkshopView> {
+    if (!file || file.size === 0) {
+      throw new BadRequestException({ message: 'Choose an image file for the logo', errors: { logo: 'Choose an image file' } });
+    }
+    if (file.size > LOGO_MAX_BYTES) {
+      throw new BadRequestException({ message: 'The logo must be 2 MB or smaller', errors: { logo: 'At most 2 MB' } });
+    }
+    const kind = detectLogoImage(file.buffer);
+    if (!kind) {
+      throw new BadRequestException({
+        message: 'The logo must be a PNG, JPEG or WebP image',
+        errors: { logo: 'PNG, JPEG or WebP only' },
+      });
+    }
+    const workshop = await this.getEntity(membership.workshopId);
+    const previous = workshop.logoKey;
+    const key = `workshops/${workshop.id}/logo-${randomUUID()}.${kind.extension}`;
+    await this.storage.putObject(key, file.buffer, kind.contentType);
+    workshop.logoKey = key;
+    await this.workshops.save(workshop);
+    if (previous) await this.deleteQuietly(previous);
+    return this.get(workshop.id, membership.role);
+  }
+
+  async removeLogo(membership: WorkshopMembership): Promise<void> {
+    const workshop = await this.getEntity(membership.workshopId);
+    if (!workshop.logoKey) return;
+    const previous = workshop.logoKey;
+    workshop.logoKey = null;
+    await this.workshops.save(workshop);
+    await this.deleteQuietly(previous);
+  }
+
+  private async getEntity(workshopId: string): Promise<Workshop> {
+    const workshop = await this.workshops.findOneBy({ id: workshopId });
+    if (!workshop) throw new NotFoundException({ message: 'Workshop not found', code: 'workshop_not_found' });
+    return workshop;
+  }
+
+  private async logoUrl(workshop: Workshop): Promise<string | null> {
+    return workshop.logoKey ? this.storage.presignedGetUrl(workshop.logoKey) : null;
+  }
+
+  /** An orphaned object costs little; a failed request because of it would cost more. */
+  private async deleteQuietly(key: string): Promise<void> {
+    try {
+      await this.storage.deleteObject(key);
+    } catch (error) {
+      this.logger.warn(`could not delete ${key}: ${error instanceof Error ? error.message : String(error)}`);
+    }
+  }
+}

@@ -1,0 +1,86 @@
+import { NestExpressApplication } from '@nestjs/platform-express';
+import request from 'supertest';
+import { createTestApp } from './create-test-app';
+
+describe('public calculators (contract in DESIGN.md)', () => {
+  let app: NestExpressApplication;
+  beforeAll(async () => {
+    app = await createTestApp();
+  });
+  afterAll(async () => app.close());
+
+  describe('GET /api/tools/fits', () => {
+    it('answers the documented example exactly', async () => {
+      // ISO 286-2, 18–30 mm: H7 = +21/0 µm, g6 = −7/−20 µm.
+      const response = await request(app.getHttpServer()).get('/api/tools/fits?size=25&unit=mm&hole=H7&shaft=g6').expect(200);
+      expect(response.body).toEqual({
+        hole: { upper: 21, lower: 0 },
+        shaft: { upper: -7, lower: -20 },
+        clearance: { max: 41, min: 7 },
+        kind: 'clearance',
+      });
+    });
+
+    it('takes a size in inches (1 in = 25.4 mm, in the 18–30 mm range)', async () => {
+      const response = await request(app.getHttpServer()).get('/api/tools/fits?size=1&unit=in&hole=H7&shaft=g6').expect(200);
+      expect(response.body.clearance).toEqual({ max: 41, min: 7 });
+    });
+
+    it('refuses an unknown class with a clear 400', async () => {
+      const response = await request(app.getHttpServer()).get('/api/tools/fits?size=25&unit=mm&hole=Q7&shaft=g6').expect(400);
+      expect(response.body).toMatchObject({ statusCode: 400, message: expect.stringMatching(/Q7/) });
+    });
+
+    it('refuses a size outside the tables', async () => {
+      const response = await request(app.getHttpServer()).get('/api/tools/fits?size=600&unit=mm&hole=H7&shaft=g6').expect(400);
+      expect(response.body.message).toMatch(/500/);
+    });
+
+    it('names each malformed field', async () => {
+      const response = await request(app.getHttpServer()).get('/api/tools/fits?size=abc&hole=h7&shaft=G6').expect(400);
+      expect(response.body.message).toEqual(
+        expect.arrayContaining([
+          'size must be a number',
+          'hole must be a hole tolerance class such as H7',
+          'shaft must be a shaft tolerance class such as g6',
+        ]),
+      );
+    });
+  });
+
+  describe('POST /api/tools/measurements/extract', () => {
+    it('finds spoken measurements with offsets into the text', async () => {
+      const text = 'The bore came in at fifteen thousandths of an inch over, and the pilot is twenty-two millimetres.';
+      const response = await request(app.getHttpServer()).post('/api/tools/measurements/extract').send({ text }).expect(200);
+      const found = response.body.measurements as { phrase: string; start: number; end: number; unit: string; value: number; millimetres: number }[];
+      expect(found).toHaveLength(2);
+      for (const hit of found) expect(text.slice(hit.start, hit.end)).toBe(hit.phrase);
+      expect(found[0]).toMatchObject({ unit: 'in', value: 0.015, millimetres: 0.381 });
+      expect(found[1]).toMatchObject({ unit: 'mm', value: 22, millimetres: 22 });
+    });
+
+    it('refuses a body without text', async () => {
+      await request(app.getHttpServer()).post('/api/tools/measurements/extract').send({ words: 'x' }).expect(400);
+    });
+  });
+
+  describe('POST /api/tools/transcripts/parse', () => {
+    it('detects WebVTT and returns cues in milliseconds', async () => {
+      const text = 'WEBVTT\n\n00:00:01.000 --> 00:00:04.500\nLift the gearbox onto the jack.\n\n00:05.000 --> 00:09.000\nCheck the spline.\n';
+      const response = await request(app.getHttpServer()).post('/api/tools/transcripts/parse').send({ text, format: 'auto' }).expect(200);
+      expect(response.body).toEqual({
+        format: 'webvtt',
+        cues: [
+          { startMs: 1000, endMs: 4500, text: 'Lift the gearbox onto the jack.' },
+          { startMs: 5000, endMs: 9000, text: 'Check the spline.' },
+        ],
+      });
+    });
+
+    it('answers 422 naming the first bad line', async () => {
+      const text = 'WEBVTT\n\n00:00:01.000 --> 00:00:04.000\nfine\n\n00:00:05 -> 9\nbroken\n';
+      const response = await request(app.getHttpServer()).post('/api/tools/transcripts/parse').send({ text, format: 'webvtt' }).expect(422);
+      expect(response.body).toMatchObject({ statusCode: 422, line: 6, message: expect.stringMatching(/^Line 6: /) });
+    });
+  });
+});

@@ -1,0 +1,132 @@
+// Shared by the benchmarks: an API process of our own (to watch its memory), a signed-in editor with a
+// workshop and a build, and small statistics. Reads the settings scripts/env.sh exported (see bench/run.sh).
+import { spawn } from 'node:child_process';
+import { readFileSync } from 'node:fs';
+import { createServer } from 'node:net';
+import { fileURLToPath } from 'node:url';
+
+export const root = fileURLToPath(new URL('../../', import.meta.url));
+
+function freePort() {
+  return new Promise((resolve, reject) => {
+    const server = createServer();
+    server.listen(0, '127.0.0.1', () => {
+      const { port } = server.address();
+      server.close(() => resolve(port));
+    });
+    server.on('error', reject);
+  });
+}
+
+/** Starts `node api/dist/main.js` on a spare port; resolves when /api/health answers. */
+export async function startApi() {
+  const port = await freePort();
+  const child = spawn(process.execPath, ['dist/main.js'], {
+    cwd: `${root}api`,
+    env: { ...process.env, PORT: String(port), APP_ORIGIN: `http://localhost:${port}`, STUDIO_DIST: '' },
+    stdio: ['ignore', 'ignore', 'inherit'],
+  });
+  const baseUrl = `http://127.0.0.1:${port}`;
+  const deadline = Date.now() + 60_000;
+  for (;;) {
+    if (child.exitCode !== null) throw new Error(`the API exited with code ${child.exitCode}`);
+    try {
+      const response = await fetch(`${baseUrl}/api/health`);
+      if (response.ok) break;
+    } catch {
+      // not listening yet
+    }
+    if (Date.now() > deadline) throw new Error('the API did not become healthy within 60 s');
+    await new Promise((resolve) => setTimeout(resolve, 200));
+  }
+  return {
+    baseUrl,
+    pid: child.pid,
+    stop: () =>
+      new Promise((resolve) => {
+        child.once('exit', resolve);
+        child.kill('SIGTERM');
+      }),
+  };
+}
+
+/** Resident set size of a process in bytes (Linux /proc). */
+export function rssBytes(pid) {
+  const match = /VmRSS:\s+(\d+) kB/u.exec(readFileSync(`/proc/${pid}/status`, 'utf8'));
+  return match ? Number(match[1]) * 1024 : 0;
+}
+
+/** Samples a process's RSS every `everyMs` until stopped; returns the peak. */
+export function watchRss(pid, everyMs = 50) {
+  let peak = rssBytes(pid);
+  const timer = setInterval(() => {
+    peak = Math.max(peak, rssBytes(pid));
+  }, everyMs);
+  return () => {
+    clearInterval(timer);
+    return Math.max(peak, rssBytes(pid));
+  };
+}
+
+/** A cookie jar and CSRF header for fetch, as the studio's browser would have. */
+export function session(baseUrl) {
+  const cookies = new Map();
+  // Its own client address (the app trusts loopback proxies), so the sign-in rate limit of other local runs never trips it.
+  const clientIp = `10.${Math.floor(Math.random() * 256)}.${Math.floor(Math.random() * 256)}.${Math.floor(Math.random() * 256)}`;
+  const remember = (response) => {
+    for (const line of response.headers.getSetCookie()) {
+      const [pair] = line.split(';');
+      const [key, ...value] = pair.split('=');
+      cookies.set(key.trim(), value.join('='));
+    }
+  };
+  const request = async (method, path, body) => {
+    const headers = { 'X-Forwarded-For': clientIp, Accept: 'application/json', Cookie: [...cookies].map(([key, value]) => `${key}=${value}`).join('; ') };
+    if (cookies.has('fw_csrf')) headers['X-CSRF-Token'] = decodeURIComponent(cookies.get('fw_csrf'));
+    if (body !== undefined) headers['Content-Type'] = 'application/json';
+    const response = await fetch(`${baseUrl}/api${path}`, { method, headers, body: body === undefined ? undefined : JSON.stringify(body) });
+    remember(response);
+    const text = await response.text();
+    if (!response.ok) throw new Error(`${method} ${path}: ${response.status} ${text}`);
+    return text ? JSON.parse(text) : null;
+  };
+  return { request, get: (path) => request('GET', path), post: (path, body) => request('POST', path, body), put: (path, body) => request('PUT', path, body), delete: (path) => request('DELETE', path) };
+}
+
+async function waitForMail(to, subject) {
+  const inbox = process.env.MAIL_INBOX_URL;
+  const deadline = Date.now() + 30_000;
+  while (Date.now() < deadline) {
+    const messages = await (await fetch(`${inbox}/email`)).json();
+    const found = messages.filter((message) => message.to.some((r) => r.address.toLowerCase() === to) && subject.test(message.subject));
+    if (found.length) return found[found.length - 1];
+    await new Promise((resolve) => setTimeout(resolve, 200));
+  }
+  throw new Error(`no mail to ${to} arrived`);
+}
+
+/** Signs up a throwaway editor (confirmed through the mail fake), with a workshop and a build. */
+export async function editorWithBuild(baseUrl, label) {
+  const api = session(baseUrl);
+  const run = `${Date.now().toString(36)}${Math.floor(Math.random() * 1e4)}`;
+  const email = `bench-${label}-${run}@fitwright.bench`;
+  const password = 'benchmark password 2026';
+  await api.get('/auth/me');
+  await api.post('/auth/register', { email, password, displayName: `Bench ${label}` });
+  const mail = await waitForMail(email, /Confirm your e-mail/);
+  const token = new URL(mail.text.match(/https?:\/\/\S+verify-email\S*/u)[0]).searchParams.get('token');
+  await api.post('/auth/verify-email', { token });
+  await api.post('/auth/login', { email, password });
+  const workshop = await api.post('/workshops', { name: `Bench ${label} ${run}`, slug: `bench-${label}-${run}` });
+  const build = await api.post(`/workshops/${workshop.id}/builds`, { title: `Bench ${label}` });
+  return { api, workshopId: workshop.id, buildId: build.id };
+}
+
+export function median(values) {
+  const sorted = [...values].sort((a, b) => a - b);
+  const middle = Math.floor(sorted.length / 2);
+  return sorted.length % 2 ? sorted[middle] : (sorted[middle - 1] + sorted[middle]) / 2;
+}
+
+export const MB = 1_000_000;
+export const MiB = 1024 * 1024;

@@ -1,0 +1,15 @@
+#!/usr/bin/env bash
+# Runs one command against the test profile's services (MariaDB, Redis, S3 and mail fakes), e.g.
+#   bash scripts/with-test-services.sh npm test -w api -- test/fit-checks
+# It takes the same lock as npm test, starts what is not running, migrates, runs the command from
+# the current folder, and stops what it started.
+source "$(dirname "$0")/lib.sh"
+fw_profile_env test
+exec 9>"$FW_DATA/test-run.lock"
+flock 9 || fail "could not take the test lock"
+trap 'stop_services' EXIT
+trap 'exit 130' INT TERM
+start_services >/dev/null
+build_if_changed api "$ROOT/api/src" "$ROOT/api/tsconfig.json" "$ROOT/api/tsconfig.build.json" "$ROOT/package-lock.json" >/dev/null
+run_migrations >/dev/null
+"$@"

@@ -1,0 +1,21 @@
+import { Stack } from '@mantine/core';
+import { useParams } from 'react-router-dom';
+import { AssembliesList } from '@/features/assemblies/components/assemblies-list';
+import { BuildHeader } from '@/features/builds/components/build-header';
+import { BuildFootage } from '@/features/footage/components/build-footage';
+import { WorkshopGate } from '@/features/workshops/components/workshop-gate';
+
+export function BuildRoute() {
+  const { workshopId = '', buildId = '' } = useParams();
+  return (
+    <WorkshopGate workshopId={workshopId}>
+      {() => (
+        <Stack gap="xl">
+          <BuildHeader workshopId={workshopId} buildId={buildId} />
+          <AssembliesList workshopId={workshopId} buildId={buildId} />
+          <BuildFootage workshopId={workshopId} buildId={buildId} />
+        </Stack>
+      )}
+    </WorkshopGate>
+  );
+}

@@ -1,0 +1,30 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { apiRequest } from '@/lib/api-client';
+import { buildQueries, type Build, type BuildStatus } from './queries';
+
+export interface BuildInput {
+  title: string;
+  vehicle?: string;
+  goal?: string;
+  status?: BuildStatus;
+}
+
+export function useCreateBuild(workshopId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (input: BuildInput) => apiRequest<Build>(`/workshops/${workshopId}/builds`, { method: 'POST', body: input }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: buildQueries.lists() }),
+  });
+}
+
+export function useUpdateBuild(workshopId: string, buildId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (input: Partial<BuildInput>) =>
+      apiRequest<Build>(`/workshops/${workshopId}/builds/${buildId}`, { method: 'PATCH', body: input }),
+    onSuccess: (build) => {
+      queryClient.setQueryData(buildQueries.detail(workshopId, buildId).queryKey, build);
+      return queryClient.invalidateQueries({ queryKey: buildQueries.lists() });
+    },
+  });
+}

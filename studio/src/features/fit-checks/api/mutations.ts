@@ -1,0 +1,38 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { apiRequest } from '@/lib/api-client';
+import { fitCheckQueries, type Evidence, type FitCheck, type FitCheckState } from './queries';
+
+function useRefreshChecks() {
+  const queryClient = useQueryClient();
+  return () => queryClient.invalidateQueries({ queryKey: fitCheckQueries.all() });
+}
+
+export function useTransitionCheck(workshopId: string) {
+  const refresh = useRefreshChecks();
+  return useMutation({
+    mutationFn: ({ checkId, to, reason }: { checkId: string; to: FitCheckState; reason: string }) =>
+      apiRequest<FitCheck>(`/workshops/${workshopId}/checks/${checkId}/transitions`, { method: 'POST', body: { to, reason } }),
+    onSuccess: refresh,
+  });
+}
+
+export function useAddEvidence(workshopId: string) {
+  const refresh = useRefreshChecks();
+  return useMutation({
+    mutationFn: ({ checkId, measurementId, note }: { checkId: string; measurementId: string; note?: string }) =>
+      apiRequest<Evidence>(`/workshops/${workshopId}/checks/${checkId}/evidence`, {
+        method: 'POST',
+        body: { kind: 'measurement', measurementId, note },
+      }),
+    onSuccess: refresh,
+  });
+}
+
+export function useCreateManualCheck(workshopId: string, assemblyId: string) {
+  const refresh = useRefreshChecks();
+  return useMutation({
+    mutationFn: (input: { title: string; required: boolean }) =>
+      apiRequest<FitCheck>(`/workshops/${workshopId}/assemblies/${assemblyId}/checks`, { method: 'POST', body: input }),
+    onSuccess: refresh,
+  });
+}

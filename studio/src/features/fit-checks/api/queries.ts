@@ -1,0 +1,147 @@
+import { queryOptions } from '@tanstack/react-query';
+import { apiRequest } from '@/lib/api-client';
+import type { LengthUnit } from '@/lib/units';
+
+export const FIT_CHECK_STATES = ['open', 'bench_pass', 'confirmed', 'no_fit', 'retired'] as const;
+export type FitCheckState = (typeof FIT_CHECK_STATES)[number];
+export type ChecklistVerdict = Exclude<FitCheckState, 'retired'>;
+export type CheckKind = 'spline_match' | 'fit' | 'length_window' | 'manual';
+
+export interface Evidence {
+  id: string;
+  kind: 'measurement' | 'mark' | 'photo';
+  measurementId: string | null;
+  markId: string | null;
+  photoKey: string | null;
+  note: string;
+  addedBy: string | null;
+  createdAt: string;
+}
+
+export interface FitCheck {
+  id: string;
+  assemblyId: string;
+  interfaceId: string | null;
+  kind: CheckKind;
+  derived: boolean;
+  title: string;
+  required: boolean;
+  state: FitCheckState;
+  outcome: 'pass' | 'fail' | 'unknown' | null;
+  /** The engine's numbers for a derived check (nanometres unless a key says otherwise); read with check-detail.ts. */
+  detail: Record<string, unknown> | null;
+  reason: string;
+  confirmedBy: string | null;
+  confirmedAt: string | null;
+  evidence: Evidence[];
+  updatedAt: string;
+}
+
+export interface Checklist {
+  verdict: ChecklistVerdict;
+  checks: FitCheck[];
+}
+
+export interface FitCheckEvent {
+  id: string;
+  from: FitCheckState | null;
+  to: FitCheckState;
+  reason: string;
+  actorId: string | null;
+  at: string;
+}
+
+export interface WhatIfResult {
+  clearanceNm: number;
+  deltaNm: number;
+  deltaUm: number;
+  deltaThou: number;
+  sharePercent: number | null;
+  remainingClearanceNm: number;
+  remainingKind: 'clearance' | 'interference';
+}
+
+/** The assembly as the checklist needs it: which features each interface joins, with their specs. */
+export interface ChecklistFeature {
+  id: string;
+  partId: string;
+  name: string;
+  kind: 'spline' | 'diameter' | 'length' | 'free';
+  unit: LengthUnit;
+  spec: { role?: 'hole' | 'shaft'; nominalNm?: number; toleranceClass?: string; maxNm?: number; minNm?: number };
+}
+export interface ChecklistAssembly {
+  id: string;
+  name: string;
+  parts: { position: string; part: { id: string; partNumber: string; features: ChecklistFeature[] } }[];
+  interfaces: { id: string; kind: 'spline' | 'bore_shaft' | 'length_window'; name: string; featureAId: string; featureBId: string | null; unit: LengthUnit }[];
+}
+
+export interface Reading {
+  id: string;
+  featureId: string | null;
+  interfaceId: string | null;
+  quantity: string;
+  unit: LengthUnit;
+  valueNm: number;
+  shown: string;
+  instrument: { kind: string; resolutionNm: number };
+  takenAt: string;
+}
+
+/** ISO 286 limit deviations of one class, µm. */
+export interface ZoneUm {
+  upper: number;
+  lower: number;
+}
+
+export const fitCheckQueries = {
+  all: () => ['fit-checks'] as const,
+  checklist: (workshopId: string, assemblyId: string) =>
+    queryOptions({
+      queryKey: [...fitCheckQueries.all(), 'checklist', workshopId, assemblyId] as const,
+      queryFn: ({ signal }) => apiRequest<Checklist>(`/workshops/${workshopId}/assemblies/${assemblyId}/checklist`, { signal }),
+    }),
+  history: (workshopId: string, checkId: string) =>
+    queryOptions({
+      queryKey: [...fitCheckQueries.all(), 'history', workshopId, checkId] as const,
+      queryFn: ({ signal }) => apiRequest<FitCheckEvent[]>(`/workshops/${workshopId}/checks/${checkId}/history`, { signal }),
+    }),
+  // The assemblies part of the studio keeps its own copy of this; the checklist reads only the specs it draws.
+  assembly: (workshopId: string, assemblyId: string) =>
+    queryOptions({
+      queryKey: [...fitCheckQueries.all(), 'assembly', workshopId, assemblyId] as const,
+      queryFn: ({ signal }) => apiRequest<ChecklistAssembly>(`/workshops/${workshopId}/assemblies/${assemblyId}`, { signal }),
+    }),
+  /** Every reading of the workshop: the evidence picker and the diagrams' markers filter it to the assembly. */
+  readings: (workshopId: string) =>
+    queryOptions({
+      queryKey: [...fitCheckQueries.all(), 'readings', workshopId] as const,
+      queryFn: async ({ signal }) =>
+        (await apiRequest<{ measurements: Reading[] }>(`/workshops/${workshopId}/measurements`, { signal })).measurements,
+    }),
+  whatIf: (workshopId: string, interfaceId: string, delta: string, unit: LengthUnit) =>
+    queryOptions({
+      queryKey: [...fitCheckQueries.all(), 'what-if', workshopId, interfaceId, delta, unit] as const,
+      queryFn: ({ signal }) =>
+        apiRequest<WhatIfResult>(`/workshops/${workshopId}/interfaces/${interfaceId}/what-if`, { signal, query: { delta, unit } }),
+    }),
+  /**
+   * The limits of one tolerance class at a size. The public calculator takes a hole and a shaft, so
+   * the class is paired with the basic partner of the same grade (H or h), whose half is ignored.
+   */
+  zone: (sizeMm: number, toleranceClass: string) =>
+    queryOptions({
+      queryKey: [...fitCheckQueries.all(), 'zone', sizeMm, toleranceClass] as const,
+      queryFn: async ({ signal }) => {
+        const isHole = /^[A-Z]/.test(toleranceClass);
+        const grade = toleranceClass.replace(/^[A-Za-z]+/, '');
+        const limits = await apiRequest<{ hole: ZoneUm; shaft: ZoneUm }>('/tools/fits', {
+          signal,
+          query: { size: sizeMm, unit: 'mm', hole: isHole ? toleranceClass : `H${grade}`, shaft: isHole ? `h${grade}` : toleranceClass },
+        });
+        return isHole ? limits.hole : limits.shaft;
+      },
+      staleTime: Infinity,
+    }),
+};

@@ -1,0 +1,34 @@
+import { Alert, Drawer, Skeleton, Stack, Text, Timeline } from '@mantine/core';
+import { useQuery } from '@tanstack/react-query';
+import { fitCheckQueries, type FitCheck } from '../api/queries';
+import { StateIcon, STATE_LOOK } from './check-state';
+
+/** Every state a check has been in, who or what moved it, and why. */
+export function HistoryDrawer({ workshopId, check, onClose }: { workshopId: string; check: FitCheck | null; onClose: () => void }) {
+  return (
+    <Drawer opened={check !== null} onClose={onClose} position="right" size="md" title={check ? `History: ${check.title}` : ''}>
+      {check && <HistoryList workshopId={workshopId} checkId={check.id} />}
+    </Drawer>
+  );
+}
+
+function HistoryList({ workshopId, checkId }: { workshopId: string; checkId: string }) {
+  const history = useQuery(fitCheckQueries.history(workshopId, checkId));
+  if (history.isPending) return <Skeleton height={120} />;
+  if (history.isError) return <Alert color="red">{history.error.message}</Alert>;
+  return (
+    <Timeline bulletSize={22} lineWidth={2} active={history.data.length - 1} aria-label="Check history">
+      {history.data.map((event) => (
+        <Timeline.Item key={event.id} bullet={<StateIcon state={event.to} size={14} />} title={STATE_LOOK[event.to].label}>
+          <Stack gap={2}>
+            <Text size="sm">{event.reason}</Text>
+            <Text size="xs" c="dimmed">
+              {new Date(event.at).toLocaleString()} · {event.actorId ? 'by a member' : 'by the fit engine'}
+              {event.from && event.from !== event.to ? ` · was ${STATE_LOOK[event.from].label}` : ''}
+            </Text>
+          </Stack>
+        </Timeline.Item>
+      ))}
+    </Timeline>
+  );
+}

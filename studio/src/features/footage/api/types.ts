@@ -1,0 +1,91 @@
+/** Shapes of the footage and transcript routes (api/src/footage, api/src/transcripts; OpenAPI at /api/docs). */
+
+export type FootageState = 'uploading' | 'processing' | 'ready' | 'failed';
+
+export interface Footage {
+  id: string;
+  workshopId: string;
+  buildId: string;
+  title: string;
+  originalName: string;
+  contentType: string;
+  sizeBytes: number;
+  state: FootageState;
+  failureReason: string | null;
+  durationMs: number | null;
+  width: number | null;
+  height: number | null;
+  frameRate: number | null;
+  container: string | null;
+  videoCodec: string | null;
+  audioCodec: string | null;
+  posterUrl: string | null;
+  upload: { partCount: number; completedPartCount: number; uploadedBytes: number } | null;
+  transcript: { revision: number; cueCount: number } | null;
+  createdAt: string;
+  updatedAt: string;
+}
+
+export interface UploadState {
+  partSizeBytes: number;
+  partCount: number;
+  sizeBytes: number;
+  fileName: string;
+  completedParts: { partNumber: number; etag: string }[];
+}
+
+export interface FootageLimits {
+  maxBytes: number;
+  types: { extension: string; mimeTypes: string[] }[];
+  transcriptMaxBytes: number;
+  transcriptMaxCues: number;
+}
+
+export interface Playback {
+  url: string;
+  expiresAt: string;
+  contentType: string;
+}
+
+export type TranscriptFormat = 'webvtt' | 'srt' | 'timestamped';
+
+export interface Cue {
+  index: number;
+  startMs: number;
+  endMs: number;
+  text: string;
+}
+
+export interface TranscriptRevision {
+  id: string;
+  footageId: string;
+  revision: number;
+  format: TranscriptFormat;
+  sourceName: string | null;
+  cueCount: number;
+  isActive: boolean;
+  createdAt: string;
+}
+
+export interface Transcript extends TranscriptRevision {
+  cues: Cue[];
+}
+
+export interface CueMatch {
+  cueIndex: number;
+  startMs: number;
+  endMs: number;
+  text: string;
+}
+
+export interface WorkshopCueMatch extends CueMatch {
+  footageId: string;
+  footageTitle: string;
+  buildId: string;
+  buildTitle: string;
+}
+
+export interface SearchResults<T> {
+  terms: string[];
+  results: T[];
+}

@@ -1,0 +1,129 @@
+import { Anchor, AspectRatio, Badge, Box, Button, Card, FileButton, Group, Image, Progress, Stack, Text } from '@mantine/core';
+import { Link } from 'react-router-dom';
+import { ConfirmButton } from '@/components/confirm-button';
+import { paths } from '@/config/paths';
+import { notifyError } from '@/lib/notify';
+import { useDeleteFootage } from '../api/mutations';
+import type { Footage } from '../api/types';
+import { FootageStateBadge } from './footage-state-badge';
+import { formatBytes, formatClock } from './format';
+
+export interface FootageCardProps {
+  footage: Footage;
+  /** This tab is sending the file right now (its progress shows above the list). */
+  uploadingHere: boolean;
+  onResume: (footage: Footage, file: File) => void;
+}
+
+function PosterArea({ footage, uploadingHere }: { footage: Footage; uploadingHere: boolean }) {
+  return (
+    <AspectRatio ratio={16 / 9}>
+      {footage.posterUrl ? (
+        <Image src={footage.posterUrl} alt={`Poster frame of ${footage.title}`} fit="cover" />
+      ) : (
+        <Box bg="gray.1" style={{ display: 'flex', alignItems: 'center', justifyContent: 'center' }}>
+          <Text size="sm" c="dimmed">
+            {footage.state === 'failed'
+              ? 'No picture'
+              : footage.state === 'processing'
+                ? 'Checking the video and making a poster frame…'
+                : uploadingHere
+                  ? 'Uploading: progress above'
+                  : 'Upload not finished'}
+          </Text>
+        </Box>
+      )}
+    </AspectRatio>
+  );
+}
+
+/** One footage of a build: poster, length, size and its state as it changes. */
+export function FootageCard({ footage, uploadingHere, onResume }: FootageCardProps) {
+  const deleteFootage = useDeleteFootage(footage.workshopId);
+  const playerPath = paths.footage.to(footage.workshopId, footage.id);
+  const interrupted = footage.state === 'uploading' && !uploadingHere && footage.upload;
+
+  const handleDelete = () =>
+    deleteFootage.mutate(footage.id, { onError: (error) => notifyError('The footage could not be deleted', error) });
+
+  return (
+    <Card withBorder padding="sm" data-testid="footage-card" data-footage-id={footage.id}>
+      <Card.Section pos="relative">
+        {footage.state === 'ready' ? (
+          <Link to={playerPath} aria-label={`Play ${footage.title}`}>
+            <PosterArea footage={footage} uploadingHere={uploadingHere} />
+          </Link>
+        ) : (
+          <PosterArea footage={footage} uploadingHere={uploadingHere} />
+        )}
+        {footage.durationMs !== null && (
+          <Badge pos="absolute" bottom={8} right={8} color="dark" variant="filled" radius="sm">
+            {formatClock(footage.durationMs)}
+          </Badge>
+        )}
+      </Card.Section>
+      <Stack gap={6} mt="sm">
+        <Group justify="space-between" wrap="nowrap" gap="xs">
+          {footage.state === 'ready' ? (
+            <Anchor component={Link} to={playerPath} fw={500} lineClamp={1}>
+              {footage.title}
+            </Anchor>
+          ) : (
+            <Text fw={500} lineClamp={1}>
+              {footage.title}
+            </Text>
+          )}
+          <FootageStateBadge state={footage.state} />
+        </Group>
+        <Text size="xs" c="dimmed">
+          {formatBytes(footage.sizeBytes)}
+          {footage.width && footage.height ? ` · ${footage.width}×${footage.height}` : ''}
+          {footage.frameRate ? ` · ${footage.frameRate} fps` : ''}
+          {footage.transcript ? ` · transcript, ${footage.transcript.cueCount} cues` : ''}
+        </Text>
+        {footage.state === 'failed' && footage.failureReason && (
+          <Text size="sm" c="red">
+            {footage.failureReason}
+          </Text>
+        )}
+        {interrupted && footage.upload && (
+          <Stack gap={4}>
+            <Progress value={(footage.upload.uploadedBytes / footage.sizeBytes) * 100} color="gray" size="sm" />
+            <Text size="sm">
+              Upload interrupted at {Math.floor((footage.upload.uploadedBytes / footage.sizeBytes) * 100)} % (
+              {footage.upload.completedPartCount} of {footage.upload.partCount} parts). Choose “{footage.originalName}” again to
+              continue: browsers cannot reopen a file by themselves.
+            </Text>
+            <FileButton onChange={(file) => file && onResume(footage, file)}>
+              {(props) => (
+                <Button size="xs" {...props}>
+                  Choose the file to resume
+                </Button>
+              )}
+            </FileButton>
+          </Stack>
+        )}
+        {!uploadingHere && (
+          <Group gap="xs" justify="flex-end">
+            <ConfirmButton
+              size="xs"
+              variant="subtle"
+              color="red"
+              question={footage.state === 'uploading' ? `Cancel the upload of “${footage.title}”?` : `Delete “${footage.title}”?`}
+              detail={
+                footage.state === 'uploading'
+                  ? 'The parts sent so far are discarded and the footage is removed.'
+                  : 'The video, its poster frame and its transcripts are deleted for good.'
+              }
+              confirmLabel={footage.state === 'uploading' ? 'Cancel upload' : 'Delete footage'}
+              onConfirm={handleDelete}
+              loading={deleteFootage.isPending}
+            >
+              {footage.state === 'uploading' ? 'Cancel upload' : 'Delete'}
+            </ConfirmButton>
+          </Group>
+        )}
+      </Stack>
+    </Card>
+  );
+}

@@ -1,0 +1,171 @@
+import { Alert, Anchor, Badge, Breadcrumbs, Grid, Group, Skeleton, Stack, Text, Title } from '@mantine/core';
+import { useQuery } from '@tanstack/react-query';
+import { useRef, useState, type SyntheticEvent } from 'react';
+import { Link } from 'react-router-dom';
+import { paths } from '@/config/paths';
+import { captionsUrl, footageQueries, transcriptQueries } from '../api/queries';
+import type { Footage } from '../api/types';
+import { FootageStateBadge } from './footage-state-badge';
+import { formatBytes, formatClock } from './format';
+import { TranscriptPane } from './transcript-pane';
+
+export interface FootagePlayerPageProps {
+  workshopId: string;
+  footageId: string;
+  /** Where to start, e.g. from a transcript search result (`?t=`). */
+  startAtMs?: number;
+}
+
+function describe(footage: Footage): string {
+  const parts = [
+    footage.durationMs !== null ? formatClock(footage.durationMs) : null,
+    footage.width && footage.height ? `${footage.width}×${footage.height}` : null,
+    footage.frameRate ? `${footage.frameRate} fps` : null,
+    [footage.videoCodec, footage.audioCodec].filter(Boolean).join(' + ') || null,
+    formatBytes(footage.sizeBytes),
+    footage.originalName,
+  ];
+  return parts.filter(Boolean).join(' · ');
+}
+
+/** The player: the video with its transcript as captions, and the transcript beside it to follow, search and jump. */
+export function FootagePlayerPage({ workshopId, footageId, startAtMs }: FootagePlayerPageProps) {
+  const footage = useQuery(footageQueries.detail(workshopId, footageId));
+  const ready = footage.data?.state === 'ready';
+  const playback = useQuery({ ...footageQueries.playback(workshopId, footageId), enabled: ready });
+  const transcript = useQuery({ ...transcriptQueries.active(workshopId, footageId), enabled: ready });
+  const limits = useQuery(footageQueries.limits(workshopId));
+  const video = useRef<HTMLVideoElement>(null);
+  const [currentMs, setCurrentMs] = useState(0);
+  const [videoError, setVideoError] = useState<string | null>(null);
+  const resumeAt = useRef<number | undefined>(startAtMs);
+
+  const seek = (ms: number) => {
+    const element = video.current;
+    if (!element) return;
+    element.currentTime = ms / 1000;
+    setCurrentMs(ms);
+    element.play().catch(() => {
+      // Autoplay may be refused until the viewer interacts; the position is set either way.
+    });
+  };
+
+  const handleLoadedMetadata = (event: SyntheticEvent<HTMLVideoElement>) => {
+    if (resumeAt.current === undefined) return;
+    event.currentTarget.currentTime = resumeAt.current / 1000;
+    setCurrentMs(resumeAt.current);
+    resumeAt.current = undefined;
+  };
+
+  // A playback link lasts an hour; when it has run out, fetch a new one and carry on from the same place.
+  // Any other error (a codec the browser lacks) is shown rather than retried.
+  const handleVideoError = (event: SyntheticEvent<HTMLVideoElement>) => {
+    const expired = playback.data !== undefined && Date.parse(playback.data.expiresAt) - Date.now() < 60_000;
+    if (!expired) {
+      setVideoError('This browser cannot play the video. Download it, or convert it to H.264 MP4 or VP9 WebM.');
+      return;
+    }
+    resumeAt.current = event.currentTarget.currentTime * 1000;
+    void playback.refetch();
+  };
+
+  if (footage.isPending) return <Skeleton height={420} />;
+  if (footage.isError) return <Alert color="red" title="Footage not found">{footage.error.message}</Alert>;
+  const item = footage.data;
+
+  return (
+    <Stack gap="md">
+      <Breadcrumbs>
+        <Anchor component={Link} to={paths.build.to(workshopId, item.buildId)}>
+          Build
+        </Anchor>
+        <Text>{item.title}</Text>
+      </Breadcrumbs>
+      <Group justify="space-between" align="flex-start">
+        <div>
+          <Title order={2}>{item.title}</Title>
+          <Text size="sm" c="dimmed">
+            {describe(item)}
+          </Text>
+        </div>
+        <FootageStateBadge state={item.state} />
+      </Group>
+      {!ready && (
+        <Alert color={item.state === 'failed' ? 'red' : 'blue'} title={item.state === 'failed' ? 'This footage failed' : 'Not ready yet'}>
+          {item.state === 'failed'
+            ? item.failureReason
+            : item.state === 'processing'
+              ? 'The video is being checked and a poster frame made; this page updates by itself.'
+              : 'The upload has not finished. Go back to the build to resume it.'}
+        </Alert>
+      )}
+      {ready && (
+        <Grid gap="md">
+          <Grid.Col span={{ base: 12, md: 8 }}>
+            {playback.isError && <Alert color="red" title="The video cannot be played">{playback.error.message}</Alert>}
+            {videoError && (
+              <Alert color="red" title="The video cannot be played" mb="xs">
+                {videoError}
+              </Alert>
+            )}
+            {playback.data ? (
+              <video
+                ref={video}
+                key={playback.data.url}
+                src={playback.data.url}
+                poster={item.posterUrl ?? undefined}
+                controls
+                preload="metadata"
+                playsInline
+                onTimeUpdate={(event) => setCurrentMs(event.currentTarget.currentTime * 1000)}
+                onSeeked={(event) => setCurrentMs(event.currentTarget.currentTime * 1000)}
+                onLoadedMetadata={handleLoadedMetadata}
+                onError={handleVideoError}
+                data-testid="footage-video"
+                style={{ width: '100%', aspectRatio: item.width && item.height ? `${item.width} / ${item.height}` : '16 / 9', background: '#000', borderRadius: 8 }}
+              >
+                {transcript.data && (
+                  <track
+                    kind="captions"
+                    srcLang="en"
+                    label={`Transcript (revision ${transcript.data.revision})`}
+                    src={captionsUrl(workshopId, footageId, transcript.data.revision)}
+                    default
+                  />
+                )}
+              </video>
+            ) : (
+              <Skeleton height={360} />
+            )}
+            <Group gap="xs" mt="xs">
+              <Badge variant="default" data-testid="player-position">
+                {formatClock(currentMs)}
+              </Badge>
+              {item.durationMs !== null && (
+                <Text size="xs" c="dimmed">
+                  of {formatClock(item.durationMs)}
+                </Text>
+              )}
+            </Group>
+          </Grid.Col>
+          <Grid.Col span={{ base: 12, md: 4 }}>
+            {transcript.isPending ? (
+              <Skeleton height={360} />
+            ) : transcript.isError ? (
+              <Alert color="red" title="The transcript could not be loaded">{transcript.error.message}</Alert>
+            ) : (
+              <TranscriptPane
+                workshopId={workshopId}
+                footageId={footageId}
+                transcript={transcript.data}
+                currentMs={currentMs}
+                transcriptMaxBytes={limits.data?.transcriptMaxBytes ?? 2_000_000}
+                onSeek={seek}
+              />
+            )}
+          </Grid.Col>
+        </Grid>
+      )}
+    </Stack>
+  );
+}

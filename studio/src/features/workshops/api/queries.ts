@@ -1,0 +1,72 @@
+import { queryOptions } from '@tanstack/react-query';
+import { apiRequest } from '@/lib/api-client';
+
+export type MemberRole = 'owner' | 'editor';
+
+export interface Workshop {
+  id: string;
+  slug: string;
+  name: string;
+  description: string;
+  logoUrl: string | null;
+  disabled: boolean;
+  /** The caller's role; `admin` is a site admin reading without being a member. */
+  role: MemberRole | 'admin' | null;
+  createdAt: string;
+}
+
+export interface Member {
+  userId: string;
+  displayName: string;
+  email: string;
+  role: MemberRole;
+  joinedAt: string;
+}
+
+export interface Invitation {
+  id: string;
+  email: string;
+  role: MemberRole;
+  expiresAt: string;
+  expired: boolean;
+  invitedBy: string | null;
+  createdAt: string;
+}
+
+export interface InvitationPreview {
+  workshop: { id: string; name: string; slug: string };
+  email: string;
+  role: MemberRole;
+  invitedBy: string | null;
+  expiresAt: string;
+  status: 'pending' | 'accepted' | 'expired';
+}
+
+export const workshopQueries = {
+  all: () => ['workshops'] as const,
+  mine: () =>
+    queryOptions({
+      queryKey: [...workshopQueries.all(), 'mine'] as const,
+      queryFn: ({ signal }) => apiRequest<Workshop[]>('/workshops', { signal }),
+    }),
+  detail: (workshopId: string) =>
+    queryOptions({
+      queryKey: [...workshopQueries.all(), 'detail', workshopId] as const,
+      queryFn: ({ signal }) => apiRequest<Workshop>(`/workshops/${workshopId}`, { signal }),
+    }),
+  members: (workshopId: string) =>
+    queryOptions({
+      queryKey: [...workshopQueries.all(), 'detail', workshopId, 'members'] as const,
+      queryFn: ({ signal }) => apiRequest<Member[]>(`/workshops/${workshopId}/members`, { signal }),
+    }),
+  invitations: (workshopId: string) =>
+    queryOptions({
+      queryKey: [...workshopQueries.all(), 'detail', workshopId, 'invitations'] as const,
+      queryFn: ({ signal }) => apiRequest<Invitation[]>(`/workshops/${workshopId}/invitations`, { signal }),
+    }),
+  invitationPreview: (token: string) =>
+    queryOptions({
+      queryKey: ['invitations', 'preview', token] as const,
+      queryFn: ({ signal }) => apiRequest<InvitationPreview>('/invitations/lookup', { query: { token }, signal }),
+    }),
+};

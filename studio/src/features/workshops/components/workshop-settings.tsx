@@ -1,0 +1,144 @@
+import { Alert, Avatar, Button, FileButton, Group, Paper, Stack, Text, Textarea, TextInput, Title } from '@mantine/core';
+import { useForm } from '@mantine/form';
+import { useState } from 'react';
+import { splitApiErrors } from '@/lib/form-errors';
+import { notifyDone, notifyError } from '@/lib/notify';
+import { useRemoveLogo, useUpdateWorkshop, useUploadLogo } from '../api/mutations';
+import type { Workshop } from '../api/queries';
+import { WorkshopGate } from './workshop-gate';
+import { WorkshopHeader } from './workshop-header';
+
+const LABELS = { name: 'Workshop name', slug: 'Web address', description: 'Short description' };
+const LOGO_TYPES = ['image/png', 'image/jpeg', 'image/webp'];
+const LOGO_MAX_BYTES = 2 * 1024 * 1024;
+
+function DetailsForm({ workshop, readOnly }: { workshop: Workshop; readOnly: boolean }) {
+  const update = useUpdateWorkshop(workshop.id);
+  const [problem, setProblem] = useState<string | null>(null);
+  const form = useForm({
+    initialValues: { name: workshop.name, slug: workshop.slug, description: workshop.description },
+  });
+  return (
+    <form
+      noValidate
+      aria-label="Workshop details"
+      onSubmit={form.onSubmit((values) => {
+        setProblem(null);
+        update.mutate(values, {
+          onSuccess: () => notifyDone('Workshop saved'),
+          onError: (error) => {
+            const { fields, general } = splitApiErrors(error, LABELS);
+            form.setErrors(fields);
+            setProblem(general.join(' ') || null);
+          },
+        });
+      })}
+    >
+      <Stack gap="sm">
+        {problem && (
+          <Alert color="red" role="alert">
+            {problem}
+          </Alert>
+        )}
+        <TextInput label={LABELS.name} readOnly={readOnly} {...form.getInputProps('name')} />
+        <TextInput
+          label={LABELS.slug}
+          description="Changing it changes the addresses of your published guides"
+          readOnly={readOnly}
+          {...form.getInputProps('slug')}
+        />
+        <Textarea label={LABELS.description} autosize minRows={2} maxLength={500} readOnly={readOnly} {...form.getInputProps('description')} />
+        {!readOnly && (
+          <Group>
+            <Button type="submit" loading={update.isPending}>
+              Save
+            </Button>
+          </Group>
+        )}
+      </Stack>
+    </form>
+  );
+}
+
+function LogoPanel({ workshop, readOnly }: { workshop: Workshop; readOnly: boolean }) {
+  const upload = useUploadLogo(workshop.id);
+  const remove = useRemoveLogo(workshop.id);
+  const [problem, setProblem] = useState<string | null>(null);
+
+  const handleFile = (file: File | null) => {
+    setProblem(null);
+    if (!file) return;
+    if (!LOGO_TYPES.includes(file.type)) return setProblem('Choose a PNG, JPEG or WebP image.');
+    if (file.size > LOGO_MAX_BYTES) return setProblem('The logo must be 2 MB or smaller.');
+    upload.mutate(file, {
+      onSuccess: () => notifyDone('Logo updated'),
+      onError: (error) => setProblem(error.message),
+    });
+  };
+
+  return (
+    <Stack gap="sm">
+      <Group>
+        <Avatar src={workshop.logoUrl} alt={`${workshop.name} logo`} size={72} radius="md" color="patina">
+          {workshop.name.slice(0, 2).toUpperCase()}
+        </Avatar>
+        <Text size="sm" c="dimmed" maw={320}>
+          A square PNG, JPEG or WebP image, at most 2 MB. It appears beside your workshop's name.
+        </Text>
+      </Group>
+      {problem && (
+        <Alert color="red" role="alert">
+          {problem}
+        </Alert>
+      )}
+      {!readOnly && (
+        <Group>
+          <FileButton onChange={handleFile} accept={LOGO_TYPES.join(',')}>
+            {(props) => (
+              <Button {...props} variant="light" loading={upload.isPending}>
+                {workshop.logoUrl ? 'Replace logo' : 'Upload logo'}
+              </Button>
+            )}
+          </FileButton>
+          {workshop.logoUrl && (
+            <Button
+              variant="subtle"
+              color="red"
+              loading={remove.isPending}
+              onClick={() => remove.mutate(undefined, { onError: (error) => notifyError('Could not remove the logo', error) })}
+            >
+              Remove logo
+            </Button>
+          )}
+        </Group>
+      )}
+    </Stack>
+  );
+}
+
+function Settings({ workshop }: { workshop: Workshop }) {
+  const readOnly = workshop.role === 'admin' || workshop.disabled;
+  return (
+    <Stack>
+      <WorkshopHeader workshop={workshop} />
+      <Stack maw={640} gap="lg">
+        <Paper withBorder p="lg" radius="md">
+          <Title order={3} size="h4" mb="sm">
+            Details
+          </Title>
+          <DetailsForm key={workshop.id} workshop={workshop} readOnly={readOnly} />
+        </Paper>
+        <Paper withBorder p="lg" radius="md">
+          <Title order={3} size="h4" mb="sm">
+            Logo
+          </Title>
+          <LogoPanel workshop={workshop} readOnly={readOnly} />
+        </Paper>
+      </Stack>
+    </Stack>
+  );
+}
+
+export function WorkshopSettingsPage({ workshopId }: { workshopId: string }) {
+  return <WorkshopGate workshopId={workshopId}>{(workshop) => <Settings workshop={workshop} />}</WorkshopGate>;
+}
