@@ -15,6 +15,7 @@ import { AssembliesModule } from './assemblies/assemblies.module';
 import { BuildsModule } from './builds/builds.module';
 import { FitChecksModule } from './fit-checks/fit-checks.module';
 import { FootageModule } from './footage/footage.module';
+import { MarksModule } from './marks/marks.module';
 import { MeasurementsModule } from './measurements/measurements.module';
 import { PartsModule } from './parts/parts.module';
 import { ToolsModule } from './tools/tools.module';
@@ -46,6 +47,7 @@ import { TranscriptsModule } from './transcripts/transcripts.module';
     AssembliesModule,
     FootageModule,
     TranscriptsModule,
+    MarksModule,
   ],
 })
 export class AppModule implements NestModule {

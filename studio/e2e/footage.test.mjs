@@ -192,9 +192,15 @@ test('the player shows the video with its transcript, and the transcript jumps t
   await result.click();
   await page.waitForFunction(() => {
     const element = document.querySelector('[data-testid="footage-video"]');
-    return element.currentTime >= 9 && element.currentTime < 11.5;
+    return element.currentTime >= 9 && element.currentTime < 11.5 && !element.seeking && element.readyState >= 2;
   });
   await video.evaluate((element) => element.pause());
+  // Let the frame and the caption of the new position paint before the picture is taken.
+  await page.waitForFunction(() => {
+    const track = document.querySelector('[data-testid="footage-video"]').textTracks[0];
+    return [...(track.activeCues ?? [])].some((cue) => cue.text.startsWith('Driveshaft'));
+  });
+  await page.waitForTimeout(300);
   await page.getByLabel('Search this transcript').fill('');
   await page.locator('[data-active]').filter({ hasText: 'Driveshaft length' }).waitFor();
   await shot(page, '05-player');

@@ -2,13 +2,16 @@ import { FitCheckEvent } from './entities/fit-check-event.entity';
 import { FitCheckEvidence } from './entities/fit-check-evidence.entity';
 import { FitCheck } from './entities/fit-check.entity';
 
-export function toEvidenceResponse(evidence: FitCheckEvidence) {
+export function toEvidenceResponse(evidence: FitCheckEvidence, workshopId: string) {
   return {
     id: evidence.id,
     kind: evidence.kind,
     measurementId: evidence.measurementId,
     markId: evidence.markId,
-    photoKey: evidence.photoKey,
+    /** For a photo: its address on this API, which redirects to a short-lived storage link. */
+    photoUrl: evidence.photoKey
+      ? `/api/workshops/${workshopId}/checks/${evidence.fitCheckId}/evidence/${evidence.id}/photo`
+      : null,
     note: evidence.note,
     addedBy: evidence.addedBy,
     createdAt: evidence.createdAt.toISOString(),
@@ -30,7 +33,7 @@ export function toFitCheckResponse(check: FitCheck, evidence: FitCheckEvidence[]
     reason: check.reason,
     confirmedBy: check.confirmedBy,
     confirmedAt: check.confirmedAt?.toISOString() ?? null,
-    evidence: evidence.map(toEvidenceResponse),
+    evidence: evidence.map((item) => toEvidenceResponse(item, check.workshopId)),
     updatedAt: check.updatedAt.toISOString(),
   };
 }

@@ -1,11 +1,13 @@
-import { Body, Controller, Get, Inject, Param, ParseUUIDPipe, Post, Query } from '@nestjs/common';
+import { Body, Controller, Get, Inject, Param, ParseUUIDPipe, Post, Query, Redirect, UploadedFile } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { WorkshopEditor } from '../common/decorators/access.decorator';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import type { SessionUser } from '../common/types/access-context';
-import { AddEvidenceDto, CreateManualCheckDto, TransitionDto, WhatIfQueryDto } from './dto/fit-check.dto';
+import { AddEvidenceDto, CreateManualCheckDto, PhotoEvidenceDto, TransitionDto, WhatIfQueryDto } from './dto/fit-check.dto';
 import { toEvidenceResponse, toFitCheckEventResponse, toFitCheckResponse } from './fit-check.mapper';
-import { FitChecksService } from './fit-checks.service';
+import { EVIDENCE_PHOTO_MAX_BYTES, FitChecksService } from './fit-checks.service';
+import { SingleFileUpload } from '../common/uploads/single-file-upload.decorator';
+import type { UploadedFileLike } from '../common/uploads/image-file';
 
 @ApiTags('fit checks')
 @WorkshopEditor()
@@ -50,7 +52,30 @@ export class FitChecksController {
     @CurrentUser() user: SessionUser,
     @Body() body: AddEvidenceDto,
   ) {
-    return toEvidenceResponse(await this.fitChecks.addEvidence(workshopId, checkId, user.id, body));
+    return toEvidenceResponse(await this.fitChecks.addEvidence(workshopId, checkId, user.id, body), workshopId);
+  }
+
+  @Post('checks/:checkId/photos')
+  @SingleFileUpload('photo', { maxBytes: EVIDENCE_PHOTO_MAX_BYTES, what: 'The photo', expected: 'one image' })
+  async addPhotoEvidence(
+    @Param('workshopId', ParseUUIDPipe) workshopId: string,
+    @Param('checkId', ParseUUIDPipe) checkId: string,
+    @CurrentUser() user: SessionUser,
+    @UploadedFile() file: UploadedFileLike | undefined,
+    @Body() body: PhotoEvidenceDto,
+  ) {
+    return toEvidenceResponse(await this.fitChecks.addPhotoEvidence(workshopId, checkId, user.id, file, body.note ?? ''), workshopId);
+  }
+
+  /** Redirects to a short-lived storage link, so an <img> can point here. */
+  @Get('checks/:checkId/evidence/:evidenceId/photo')
+  @Redirect()
+  async evidencePhoto(
+    @Param('workshopId', ParseUUIDPipe) workshopId: string,
+    @Param('checkId', ParseUUIDPipe) checkId: string,
+    @Param('evidenceId', ParseUUIDPipe) evidenceId: string,
+  ) {
+    return { url: await this.fitChecks.evidencePhotoUrl(workshopId, checkId, evidenceId), statusCode: 302 };
   }
 
   @Get('checks/:checkId/history')

@@ -3,6 +3,9 @@ import { EventEmitter2, OnEvent } from '@nestjs/event-emitter';
 import { InjectRepository } from '@nestjs/typeorm';
 import { In, Repository } from 'typeorm';
 import { AssemblyInterface } from '../assemblies/entities/assembly-interface.entity';
+import { newId } from '../common/database/columns';
+import { requireImage, type UploadedFileLike } from '../common/uploads/image-file';
+import { StorageService } from '../infra/storage/storage.service';
 import { Assembly } from '../assemblies/entities/assembly.entity';
 import { canTransition, rollUpChecklist, stateAfterOutcome, stateForOutcome, type FitCheckState } from '../engine/checklist';
 import { EngineError } from '../engine/engine-error';
@@ -19,6 +22,9 @@ import { FitCheckEvent } from './entities/fit-check-event.entity';
 import { FitCheckEvidence } from './entities/fit-check-evidence.entity';
 import { FitCheck, type CheckKind } from './entities/fit-check.entity';
 import { FIT_CHECK_CHANGED, type FitCheckChangedEvent } from './fit-checks.events';
+
+/** A phone photo of the test fit. */
+export const EVIDENCE_PHOTO_MAX_BYTES = 15 * 1024 * 1024;
 
 const CHECK_KIND_FOR_INTERFACE: Record<AssemblyInterface['kind'], CheckKind> = {
   spline: 'spline_match',
@@ -49,6 +55,7 @@ export class FitChecksService {
     @InjectRepository(PartFeature) private readonly features: Repository<PartFeature>,
     @InjectRepository(Measurement) private readonly measurements: Repository<Measurement>,
     @Inject(EventEmitter2) private readonly emitter: EventEmitter2,
+    @Inject(StorageService) private readonly storage: StorageService,
   ) {}
 
   // ---- re-evaluation ----
@@ -266,6 +273,31 @@ export class FitChecksService {
         addedBy: actorId,
       }),
     );
+  }
+
+  /** A photo of the test fit, stored in storage and attached as evidence. */
+  async addPhotoEvidence(
+    workshopId: string,
+    checkId: string,
+    actorId: string,
+    file: UploadedFileLike | undefined,
+    note: string,
+  ): Promise<FitCheckEvidence> {
+    const check = await this.checkOf(workshopId, checkId);
+    const image = requireImage(file, { field: 'photo', what: 'The photo', maxBytes: EVIDENCE_PHOTO_MAX_BYTES });
+    const key = `workshops/${workshopId}/checks/${check.id}/${newId()}.${image.extension}`;
+    await this.storage.putObject(key, image.bytes, image.contentType);
+    return this.evidence.save(
+      this.evidence.create({ fitCheckId: check.id, kind: 'photo', measurementId: null, markId: null, photoKey: key, note, addedBy: actorId }),
+    );
+  }
+
+  /** A short-lived link to a photo attached as evidence. */
+  async evidencePhotoUrl(workshopId: string, checkId: string, evidenceId: string): Promise<string> {
+    const check = await this.checkOf(workshopId, checkId);
+    const item = await this.evidence.findOneBy({ id: evidenceId, fitCheckId: check.id, kind: 'photo' });
+    if (!item?.photoKey) throw new NotFoundException('Photo not found');
+    return this.storage.presignedGetUrl(item.photoKey, 300);
   }
 
   async history(workshopId: string, checkId: string): Promise<FitCheckEvent[]> {

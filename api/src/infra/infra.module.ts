@@ -29,7 +29,7 @@ import { StorageService } from './storage/storage.service';
         };
       },
     }),
-    BullModule.registerQueue({ name: QUEUES.mail }, { name: QUEUES.media }),
+    BullModule.registerQueue({ name: QUEUES.mail }, { name: QUEUES.media }, { name: QUEUES.marks }),
   ],
   providers: [StorageService, MailService, MailQueueService, MailProcessor, MediaToolsService],
   exports: [StorageService, MailService, MailQueueService, BullModule, MediaToolsService],

@@ -1,6 +1,7 @@
 import { describeFeatureSpec } from './feature-spec';
 import { PartFeature } from './entities/part-feature.entity';
 import { Part } from './entities/part.entity';
+import { photoIdOf } from './part-photos';
 
 export function toFeatureResponse(feature: PartFeature) {
   return {
@@ -24,7 +25,11 @@ export function toPartResponse(part: Part) {
     category: part.category,
     source: part.source,
     notes: part.notes,
-    photoKeys: part.photoKeys,
+    /** Each photo's address on this API, which redirects to a short-lived storage link. */
+    photos: part.photoKeys.map((key) => {
+      const id = photoIdOf(key);
+      return { id, url: `/api/workshops/${part.workshopId}/parts/${part.id}/photos/${id}` };
+    }),
     features: (part.features ?? []).sort((a, b) => a.name.localeCompare(b.name)).map(toFeatureResponse),
     createdAt: part.createdAt.toISOString(),
     updatedAt: part.updatedAt.toISOString(),

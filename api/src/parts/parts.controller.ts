@@ -1,11 +1,13 @@
-import { Body, Controller, Delete, Get, HttpCode, Inject, Param, ParseUUIDPipe, Patch, Post, Query } from '@nestjs/common';
+import { Body, Controller, Delete, Get, HttpCode, Inject, Param, ParseUUIDPipe, Patch, Post, Query, Redirect, UploadedFile } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { WorkshopEditor } from '../common/decorators/access.decorator';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import type { SessionUser } from '../common/types/access-context';
 import { CreatePartDto, FeatureInputDto, ListPartsQueryDto, UpdateFeatureDto, UpdatePartDto } from './dto/part.dto';
 import { toFeatureResponse, toPartResponse } from './part.mapper';
-import { PartsService } from './parts.service';
+import { PART_PHOTO_MAX_BYTES, PartsService } from './parts.service';
+import { SingleFileUpload } from '../common/uploads/single-file-upload.decorator';
+import type { UploadedFileLike } from '../common/uploads/image-file';
 
 @ApiTags('parts')
 @WorkshopEditor()
@@ -41,6 +43,37 @@ export class PartsController {
   @HttpCode(204)
   async remove(@Param('workshopId', ParseUUIDPipe) workshopId: string, @Param('partId', ParseUUIDPipe) partId: string) {
     await this.parts.remove(workshopId, partId);
+  }
+
+  @Post(':partId/photos')
+  @SingleFileUpload('photo', { maxBytes: PART_PHOTO_MAX_BYTES, what: 'The photo', expected: 'one image' })
+  async addPhoto(
+    @Param('workshopId', ParseUUIDPipe) workshopId: string,
+    @Param('partId', ParseUUIDPipe) partId: string,
+    @UploadedFile() file: UploadedFileLike | undefined,
+  ) {
+    return toPartResponse(await this.parts.addPhoto(workshopId, partId, file));
+  }
+
+  /** Redirects to a short-lived storage link, so an <img> can point here. */
+  @Get(':partId/photos/:photoId')
+  @Redirect()
+  async photo(
+    @Param('workshopId', ParseUUIDPipe) workshopId: string,
+    @Param('partId', ParseUUIDPipe) partId: string,
+    @Param('photoId', ParseUUIDPipe) photoId: string,
+  ) {
+    return { url: await this.parts.photoUrl(workshopId, partId, photoId), statusCode: 302 };
+  }
+
+  @Delete(':partId/photos/:photoId')
+  @HttpCode(204)
+  async removePhoto(
+    @Param('workshopId', ParseUUIDPipe) workshopId: string,
+    @Param('partId', ParseUUIDPipe) partId: string,
+    @Param('photoId', ParseUUIDPipe) photoId: string,
+  ) {
+    await this.parts.removePhoto(workshopId, partId, photoId);
   }
 
   @Post(':partId/features')

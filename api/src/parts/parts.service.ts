@@ -1,15 +1,22 @@
-import { ConflictException, Inject, Injectable, NotFoundException } from '@nestjs/common';
+import { BadRequestException, ConflictException, Inject, Injectable, NotFoundException } from '@nestjs/common';
 import { EventEmitter2 } from '@nestjs/event-emitter';
 import { InjectRepository } from '@nestjs/typeorm';
 import { Brackets, DataSource, In, Repository } from 'typeorm';
 import { CreatePartDto, FeatureInputDto, ListPartsQueryDto, UpdateFeatureDto, UpdatePartDto } from './dto/part.dto';
 import { PartFeature } from './entities/part-feature.entity';
 import { Part, partNumberKey } from './entities/part.entity';
+import { newId } from '../common/database/columns';
+import { requireImage, type UploadedFileLike } from '../common/uploads/image-file';
 import { formatLengthValue } from '../engine/units';
+import { StorageService } from '../infra/storage/storage.service';
 import { toFeatureSpec } from './feature-spec';
+import { photoIdOf } from './part-photos';
 import { PART_FEATURE_CHANGED, PartFeatureChangedEvent } from './parts.events';
 
 const DUPLICATE_ENTRY = 'ER_DUP_ENTRY';
+/** Shop photos straight from a phone run to a few megabytes. */
+export const PART_PHOTO_MAX_BYTES = 15 * 1024 * 1024;
+const MAX_PHOTOS_PER_PART = 20;
 
 @Injectable()
 export class PartsService {
@@ -18,6 +25,7 @@ export class PartsService {
     @InjectRepository(PartFeature) private readonly features: Repository<PartFeature>,
     @Inject(DataSource) private readonly dataSource: DataSource,
     @Inject(EventEmitter2) private readonly events: EventEmitter2,
+    @Inject(StorageService) private readonly storage: StorageService,
   ) {}
 
   async list(workshopId: string, query: ListPartsQueryDto): Promise<Part[]> {
@@ -104,6 +112,39 @@ export class PartsService {
       }
       throw error;
     }
+  }
+
+  /** Stores a photo (PNG, JPEG or WebP, checked by content) in storage and lists it on the part. */
+  async addPhoto(workshopId: string, partId: string, file: UploadedFileLike | undefined): Promise<Part> {
+    const part = await this.get(workshopId, partId);
+    if (part.photoKeys.length >= MAX_PHOTOS_PER_PART) {
+      throw new BadRequestException(`A part keeps at most ${MAX_PHOTOS_PER_PART} photos; remove one first`);
+    }
+    const image = requireImage(file, { field: 'photo', what: 'The photo', maxBytes: PART_PHOTO_MAX_BYTES });
+    const key = `workshops/${workshopId}/parts/${part.id}/${newId()}.${image.extension}`;
+    await this.storage.putObject(key, image.bytes, image.contentType);
+    part.photoKeys = [...part.photoKeys, key];
+    await this.parts.update({ id: part.id }, { photoKeys: part.photoKeys });
+    return part;
+  }
+
+  /** A short-lived link to one of the part's photos. */
+  async photoUrl(workshopId: string, partId: string, photoId: string): Promise<string> {
+    const part = await this.get(workshopId, partId);
+    return this.storage.presignedGetUrl(this.photoKey(part, photoId), 300);
+  }
+
+  async removePhoto(workshopId: string, partId: string, photoId: string): Promise<void> {
+    const part = await this.get(workshopId, partId);
+    const key = this.photoKey(part, photoId);
+    await this.parts.update({ id: part.id }, { photoKeys: part.photoKeys.filter((candidate) => candidate !== key) });
+    await this.storage.deleteObject(key);
+  }
+
+  private photoKey(part: Part, photoId: string): string {
+    const key = part.photoKeys.find((candidate) => photoIdOf(candidate) === photoId);
+    if (!key) throw new NotFoundException('Photo not found');
+    return key;
   }
 
   async addFeature(workshopId: string, partId: string, input: FeatureInputDto): Promise<PartFeature> {

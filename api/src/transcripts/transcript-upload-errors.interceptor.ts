@@ -17,7 +17,7 @@ export class TranscriptUploadErrorsInterceptor implements NestInterceptor {
         if (error instanceof PayloadTooLargeException) {
           return throwError(() => new PayloadTooLargeException('The transcript file must be 2 MB or smaller'));
         }
-        if (error instanceof BadRequestException && /Unexpected field|Too many files/u.test(error.message)) {
+        if (error instanceof BadRequestException && /Unexpected (file )?field|Too many files/u.test(error.message)) {
           return throwError(() => new BadRequestException('Send one transcript file in the "file" field'));
         }
         return throwError(() => error);

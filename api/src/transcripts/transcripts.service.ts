@@ -7,6 +7,7 @@ import {
   PayloadTooLargeException,
   UnprocessableEntityException,
 } from '@nestjs/common';
+import { EventEmitter2 } from '@nestjs/event-emitter';
 import { InjectRepository } from '@nestjs/typeorm';
 import { EntityManager, Repository } from 'typeorm';
 import { formatTimestamp, formatWebVtt, parseTranscript, TranscriptParseError } from '../engine/transcript-formats';
@@ -26,6 +27,7 @@ import { Transcript } from './entities/transcript.entity';
 import { searchTerms } from './transcript-search';
 import { TRANSCRIPT_MAX_BYTES, TRANSCRIPT_MAX_CUES } from './transcript-limits';
 import { toCue, toTranscript, toTranscriptRevision } from './transcript.mapper';
+import { TRANSCRIPT_ATTACHED, TranscriptAttachedEvent } from './transcripts.events';
 
 /** Longest cue text stored; a transcript line is a sentence or two. */
 const MAX_CUE_CHARACTERS = 5_000;
@@ -46,6 +48,7 @@ export class TranscriptsService {
     @InjectRepository(Transcript) private readonly transcripts: Repository<Transcript>,
     @InjectRepository(TranscriptCue) private readonly cues: Repository<TranscriptCue>,
     @Inject(FootageService) private readonly footage: FootageService,
+    @Inject(EventEmitter2) private readonly events: EventEmitter2,
   ) {}
 
   /**
@@ -98,6 +101,9 @@ export class TranscriptsService {
       );
       return created;
     });
+    // Announced after the commit, so listeners (marks mining) read the stored revision.
+    const attached: TranscriptAttachedEvent = { workshopId, footageId: footage.id, transcriptId: transcript.id };
+    await this.events.emitAsync(TRANSCRIPT_ATTACHED, attached);
     // Answer from what was just stored rather than reading 3,000 rows back.
     return {
       ...toTranscriptRevision({ ...transcript, createdAt: transcript.createdAt ?? new Date() }),

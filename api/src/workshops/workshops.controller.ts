@@ -10,12 +10,8 @@ import {
   Post,
   Put,
   UploadedFile,
-  UseInterceptors,
 } from '@nestjs/common';
-import { FileInterceptor } from '@nestjs/platform-express';
 import {
-  ApiBody,
-  ApiConsumes,
   ApiCreatedResponse,
   ApiNoContentResponse,
   ApiOkResponse,
@@ -27,9 +23,9 @@ import { CurrentUser } from '../common/decorators/current-user.decorator';
 import type { SessionUser, WorkshopMembership } from '../common/types/access-context';
 import { CreateWorkshopDto, UpdateWorkshopDto } from './dto/workshop.dto';
 import { WorkshopView } from './dto/workshop-views.dto';
-import { LOGO_MAX_BYTES } from './logo-image';
-import { LogoUploadErrorsInterceptor } from './logo-upload-errors.interceptor';
-import { WorkshopsService, type UploadedImage } from './workshops.service';
+import { SingleFileUpload } from '../common/uploads/single-file-upload.decorator';
+import type { UploadedFileLike } from '../common/uploads/image-file';
+import { LOGO_MAX_BYTES, WorkshopsService } from './workshops.service';
 
 @ApiTags('workshops')
 @Controller('workshops')
@@ -66,13 +62,11 @@ export class WorkshopsController {
 
   @WorkshopEditor()
   @Put(':workshopId/logo')
-  @UseInterceptors(LogoUploadErrorsInterceptor, FileInterceptor('logo', { limits: { fileSize: LOGO_MAX_BYTES, files: 1 } }))
-  @ApiConsumes('multipart/form-data')
-  @ApiBody({ schema: { type: 'object', properties: { logo: { type: 'string', format: 'binary' } }, required: ['logo'] } })
+  @SingleFileUpload('logo', { maxBytes: LOGO_MAX_BYTES, what: 'The logo', expected: 'one image' })
   @ApiOkResponse({ type: WorkshopView, description: 'PNG, JPEG or WebP, at most 2 MB' })
   setLogo(
     @CurrentMembership() membership: WorkshopMembership,
-    @UploadedFile() file: UploadedImage | undefined,
+    @UploadedFile() file: UploadedFileLike | undefined,
   ): Promise<WorkshopView> {
     return this.workshops.setLogo(membership, file);
   }

@@ -1,5 +1,4 @@
 import {
-  BadRequestException,
   ConflictException,
   ForbiddenException,
   Inject,
@@ -16,18 +15,16 @@ import type { CreateWorkshopDto, UpdateWorkshopDto } from './dto/workshop.dto';
 import type { WorkshopView } from './dto/workshop-views.dto';
 import { WorkshopMember } from './entities/workshop-member.entity';
 import { Workshop } from './entities/workshop.entity';
-import { detectLogoImage, LOGO_MAX_BYTES } from './logo-image';
+import { requireImage, type UploadedFileLike } from '../common/uploads/image-file';
+
+/** Logos are small: a header image, not a photo. */
+export const LOGO_MAX_BYTES = 2 * 1024 * 1024;
 import { toWorkshopView } from './workshops.mapper';
 
 const SLUG_TAKEN = 'That web address is taken; choose another';
 
 function isDuplicateKey(error: unknown): boolean {
   return typeof error === 'object' && error !== null && (error as { code?: unknown }).code === 'ER_DUP_ENTRY';
-}
-
-export interface UploadedImage {
-  buffer: Buffer;
-  size: number;
 }
 
 @Injectable()
@@ -103,24 +100,12 @@ export class WorkshopsService {
   }
 
   /** Stores a new logo (PNG, JPEG or WebP, checked by content, at most 2 MB) and deletes the old one. */
-  async setLogo(membership: WorkshopMembership, file: UploadedImage | undefined): Promise<WorkshopView> {
-    if (!file || file.size === 0) {
-      throw new BadRequestException({ message: 'Choose an image file for the logo', errors: { logo: 'Choose an image file' } });
-    }
-    if (file.size > LOGO_MAX_BYTES) {
-      throw new BadRequestException({ message: 'The logo must be 2 MB or smaller', errors: { logo: 'At most 2 MB' } });
-    }
-    const kind = detectLogoImage(file.buffer);
-    if (!kind) {
-      throw new BadRequestException({
-        message: 'The logo must be a PNG, JPEG or WebP image',
-        errors: { logo: 'PNG, JPEG or WebP only' },
-      });
-    }
+  async setLogo(membership: WorkshopMembership, file: UploadedFileLike | undefined): Promise<WorkshopView> {
+    const image = requireImage(file, { field: 'logo', what: 'The logo', maxBytes: LOGO_MAX_BYTES });
     const workshop = await this.getEntity(membership.workshopId);
     const previous = workshop.logoKey;
-    const key = `workshops/${workshop.id}/logo-${randomUUID()}.${kind.extension}`;
-    await this.storage.putObject(key, file.buffer, kind.contentType);
+    const key = `workshops/${workshop.id}/logo-${randomUUID()}.${image.extension}`;
+    await this.storage.putObject(key, image.bytes, image.contentType);
     workshop.logoKey = key;
     await this.workshops.save(workshop);
     if (previous) await this.deleteQuietly(previous);

@@ -27,12 +27,12 @@ export interface UploadedFileLike {
 
 /**
  * Checks an upload is a non-empty PNG, JPEG or WebP within `maxBytes`, with messages naming
- * the form field, and tells which kind it is.
+ * the form field, and gives its kind and bytes.
  */
 export function requireImage(
   file: UploadedFileLike | undefined,
   { field, what, maxBytes }: { field: string; what: string; maxBytes: number },
-): ImageKind {
+): ImageKind & { bytes: Buffer } {
   const limit = `${Math.round((maxBytes / (1024 * 1024)) * 10) / 10} MB`;
   if (!file || file.size === 0) {
     throw new BadRequestException({ message: `Choose an image file for ${what.toLowerCase()}`, errors: { [field]: 'Choose an image file' } });
@@ -44,5 +44,5 @@ export function requireImage(
   if (!kind) {
     throw new BadRequestException({ message: `${what} must be a PNG, JPEG or WebP image`, errors: { [field]: 'PNG, JPEG or WebP only' } });
   }
-  return kind;
+  return { ...kind, bytes: file.buffer };
 }

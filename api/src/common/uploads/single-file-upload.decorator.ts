@@ -40,7 +40,7 @@ function friendlyUploadErrors(field: string, options: SingleFileUploadOptions): 
               () => new PayloadTooLargeException({ message: `${options.what} must be ${limit} or smaller`, errors: { [field]: `At most ${limit}` } }),
             );
           }
-          if (error instanceof BadRequestException && /Unexpected field|Too many files/u.test(error.message)) {
+          if (error instanceof BadRequestException && /Unexpected (file )?field|Too many files/u.test(error.message)) {
             return throwError(
               () => new BadRequestException({ message: `Send ${options.expected} in the "${field}" field`, errors: { [field]: options.expected } }),
             );

@@ -2,6 +2,7 @@ import { MixedList } from 'typeorm';
 import { Accounts1764600000000 } from './1764600000000-accounts';
 import { FitData1764700000000 } from './1764700000000-fit-data';
 import { Footage1764840000000 } from './1764840000000-footage';
+import { Marks1764900000000 } from './1764900000000-marks';
 
 /** Every migration, oldest first. Listed explicitly so the same list works from src (tests) and dist. */
 // eslint-disable-next-line @typescript-eslint/no-unsafe-function-type
@@ -9,4 +10,5 @@ export const migrations: MixedList<Function> = [
   Accounts1764600000000,
   FitData1764700000000,
   Footage1764840000000,
+  Marks1764900000000,
 ];

@@ -27,7 +27,7 @@ export class TransitionDto {
 }
 
 export class AddEvidenceDto {
-  @ApiProperty({ enum: ['measurement'], description: 'Marks and photos come with their own routes' })
+  @ApiProperty({ enum: ['measurement'], description: 'Photos come through the photos route' })
   @IsIn(['measurement'])
   kind!: 'measurement';
 
@@ -50,4 +50,13 @@ export class WhatIfQueryDto {
   @ApiProperty({ enum: LENGTH_UNITS })
   @IsIn(LENGTH_UNITS)
   unit!: LengthUnit;
+}
+
+/** The text fields sent beside a photo (multipart form). */
+export class PhotoEvidenceDto {
+  @ApiPropertyOptional({ example: 'Coupler fully engaged, motor bolted up.' })
+  @IsOptional()
+  @IsString()
+  @MaxLength(500)
+  note?: string;
 }

@@ -2,6 +2,7 @@
 export const QUEUES = {
   mail: 'mail',
   media: 'media',
+  marks: 'marks',
 } as const;
 
 export type QueueName = (typeof QUEUES)[keyof typeof QUEUES];

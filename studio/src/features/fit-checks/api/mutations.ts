@@ -36,3 +36,15 @@ export function useCreateManualCheck(workshopId: string, assemblyId: string) {
     onSuccess: refresh,
   });
 }
+
+export function useAddPhotoEvidence(workshopId: string) {
+  const refresh = useRefreshChecks();
+  return useMutation({
+    mutationFn: ({ checkId, file }: { checkId: string; file: File }) => {
+      const form = new FormData();
+      form.append('photo', file);
+      return apiRequest<Evidence>(`/workshops/${workshopId}/checks/${checkId}/photos`, { method: 'POST', body: form });
+    },
+    onSuccess: refresh,
+  });
+}

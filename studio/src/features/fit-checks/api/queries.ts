@@ -12,7 +12,7 @@ export interface Evidence {
   kind: 'measurement' | 'mark' | 'photo';
   measurementId: string | null;
   markId: string | null;
-  photoKey: string | null;
+  photoUrl: string | null;
   note: string;
   addedBy: string | null;
   createdAt: string;

@@ -1,4 +1,4 @@
-import { Badge, Button, Card, Group, List, Stack, Text } from '@mantine/core';
+import { Anchor, Badge, Button, Card, FileButton, Group, List, Stack, Text } from '@mantine/core';
 import { useDisclosure } from '@mantine/hooks';
 import type { DeviationUnit } from '@/components/diagrams/tolerance-zone-geometry';
 import type { ChecklistAssembly, FitCheck, FitCheckState, Reading } from '../api/queries';
@@ -8,6 +8,8 @@ import { CheckStateBadge, STATE_LOOK } from './check-state';
 import { EvidenceForm, type ReadingChoice } from './evidence-form';
 import { ACTION_LABELS } from './transition-modal';
 import { WhatIfPanel } from './what-if-panel';
+import { useAddPhotoEvidence } from '../api/mutations';
+import { notifyError } from '@/lib/notify';
 
 const KIND_LABELS: Record<FitCheck['kind'], string> = {
   spline_match: 'Computed: spline match',
@@ -49,6 +51,7 @@ export function CheckCard(props: CheckCardProps) {
   const { workshopId, check, assembly, readings, deviationUnit } = props;
   const [attaching, attachForm] = useDisclosure(false);
   const [askingWhatIf, whatIf] = useDisclosure(false);
+  const addPhoto = useAddPhotoEvidence(workshopId);
   const { summary, reasons } = checkSummary(check);
   const look = STATE_LOOK[check.state];
   const assemblyInterface = assembly.interfaces.find((candidate) => candidate.id === check.interfaceId);
@@ -120,7 +123,11 @@ export function CheckCard(props: CheckCardProps) {
                     ? props.describeReading(item.measurementId)
                     : item.kind === 'mark'
                       ? 'A mark in the footage'
-                      : 'A photo'}
+                      : (
+                        <Anchor href={item.photoUrl ?? undefined} target="_blank" rel="noreferrer">
+                          A photo
+                        </Anchor>
+                      )}
                   {item.note && ` — ${item.note}`}
                   <Text span size="xs" c="dimmed">
                     {' '}
@@ -143,6 +150,21 @@ export function CheckCard(props: CheckCardProps) {
             <Button size="xs" variant="light" onClick={attachForm.open}>
               Attach a reading as evidence
             </Button>
+          )}
+          {check.state !== 'retired' && (
+            <FileButton
+              accept="image/png,image/jpeg,image/webp"
+              onChange={(file) =>
+                file &&
+                addPhoto.mutate({ checkId: check.id, file }, { onError: (failure) => notifyError('The photo was not attached', failure) })
+              }
+            >
+              {(buttonProps) => (
+                <Button {...buttonProps} size="xs" variant="light" loading={addPhoto.isPending}>
+                  Attach a photo
+                </Button>
+              )}
+            </FileButton>
           )}
           {actionsFor(check).map((to) => (
             <Button

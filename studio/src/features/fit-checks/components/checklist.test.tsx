@@ -80,7 +80,7 @@ const CHECKLIST = {
         clearanceMeasuredNm: 16_000,
         minClearanceNm: 0,
       },
-      evidence: [{ id: 'e1', kind: 'measurement', measurementId: 'm1', markId: null, photoKey: null, note: '', addedBy: 'u1', createdAt: '2026-03-02T10:00:00.000Z' }],
+      evidence: [{ id: 'e1', kind: 'measurement', measurementId: 'm1', markId: null, photoUrl: null, note: '', addedBy: 'u1', createdAt: '2026-03-02T10:00:00.000Z' }],
     }),
     check({
       id: 'c-len',

@@ -108,3 +108,24 @@ export function useRemoveFeature(workshopId: string, partId: string) {
     onSuccess: () => refreshAfterFeatureChange(queryClient, workshopId, partId),
   });
 }
+
+export function useAddPartPhoto(workshopId: string, partId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (file: File) => {
+      const form = new FormData();
+      form.append('photo', file);
+      return apiRequest<Part>(`/workshops/${workshopId}/parts/${partId}/photos`, { method: 'POST', body: form });
+    },
+    onSuccess: (part) => queryClient.setQueryData(partQueries.detail(workshopId, partId).queryKey, part),
+  });
+}
+
+export function useRemovePartPhoto(workshopId: string, partId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (photoId: string) =>
+      apiRequest<null>(`/workshops/${workshopId}/parts/${partId}/photos/${photoId}`, { method: 'DELETE' }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: partQueries.detail(workshopId, partId).queryKey }),
+  });
+}

@@ -57,7 +57,7 @@ export interface Part {
   category: PartCategory;
   source: PartSource;
   notes: string;
-  photoKeys: string[];
+  photos: { id: string; url: string }[];
   features: PartFeature[];
   createdAt: string;
   updatedAt: string;

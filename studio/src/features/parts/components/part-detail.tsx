@@ -1,4 +1,5 @@
 import { Alert, Anchor, Badge, Breadcrumbs, Button, Card, Group, Modal, Skeleton, Stack, Text, Title } from '@mantine/core';
+import { PartPhotos } from './part-photos';
 import { useDisclosure } from '@mantine/hooks';
 import { useQuery } from '@tanstack/react-query';
 import { useState, type ReactNode } from 'react';
@@ -85,6 +86,8 @@ export function PartDetail({ workshopId, partId, renderReadings }: PartDetailPro
           {data.notes}
         </Text>
       )}
+
+      <PartPhotos workshopId={workshopId} part={data} />
 
       <Group justify="space-between" mt="md">
         <Title order={3}>Features</Title>

@@ -13,7 +13,7 @@ const PART = {
   category: 'coupler',
   source: 'new',
   notes: '',
-  photoKeys: [],
+  photos: [],
   features: [
     {
       id: 'f1',

@@ -1,0 +1,73 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { apiRequest } from '@/lib/api-client';
+import { markQueries, type Mark, type MarkKind, type MarkSuggestion } from './queries';
+
+export interface MarkInput {
+  startMs: number;
+  endMs?: number | null;
+  kind: MarkKind;
+  label: string;
+  partId?: string | null;
+  measurementId?: string | null;
+}
+
+export interface AcceptInput {
+  featureId?: string;
+  quantity?: string;
+  instrumentKind?: string;
+  resolution?: string;
+}
+
+const base = (workshopId: string, footageId: string) => `/workshops/${workshopId}/footage/${footageId}`;
+
+/** Marks change the footage's marks and suggestions; an accepted reading also changes measurements and fit checks. */
+function useRefresh(alsoReadings = false) {
+  const queryClient = useQueryClient();
+  return () =>
+    Promise.all([
+      queryClient.invalidateQueries({ queryKey: markQueries.all() }),
+      ...(alsoReadings
+        ? [queryClient.invalidateQueries({ queryKey: ['measurements'] }), queryClient.invalidateQueries({ queryKey: ['fit-checks'] })]
+        : []),
+    ]);
+}
+
+export function useSaveMark(workshopId: string, footageId: string) {
+  const refresh = useRefresh();
+  return useMutation({
+    mutationFn: ({ id, ...input }: MarkInput & { id?: string }) =>
+      id
+        ? apiRequest<Mark>(`${base(workshopId, footageId)}/marks/${id}`, { method: 'PATCH', body: input })
+        : apiRequest<Mark>(`${base(workshopId, footageId)}/marks`, { method: 'POST', body: input }),
+    onSuccess: refresh,
+  });
+}
+
+export function useRemoveMark(workshopId: string, footageId: string) {
+  const refresh = useRefresh();
+  return useMutation({
+    mutationFn: (markId: string) => apiRequest<null>(`${base(workshopId, footageId)}/marks/${markId}`, { method: 'DELETE' }),
+    onSuccess: refresh,
+  });
+}
+
+export function useAcceptSuggestion(workshopId: string, footageId: string) {
+  const refresh = useRefresh(true);
+  return useMutation({
+    mutationFn: ({ id, ...input }: AcceptInput & { id: string }) =>
+      apiRequest<{ mark: Mark; measurement: { id: string; shown: string; footageTimeMs: number } | null }>(
+        `${base(workshopId, footageId)}/mark-suggestions/${id}/accept`,
+        { method: 'POST', body: input },
+      ),
+    onSuccess: refresh,
+  });
+}
+
+export function useDismissSuggestion(workshopId: string, footageId: string) {
+  const refresh = useRefresh();
+  return useMutation({
+    mutationFn: (id: string) =>
+      apiRequest<MarkSuggestion>(`${base(workshopId, footageId)}/mark-suggestions/${id}/dismiss`, { method: 'POST' }),
+    onSuccess: refresh,
+  });
+}
