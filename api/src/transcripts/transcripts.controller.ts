@@ -12,12 +12,8 @@ import {
   Query,
   Res,
   UploadedFile,
-  UseInterceptors,
 } from '@nestjs/common';
-import { FileInterceptor } from '@nestjs/platform-express';
 import {
-  ApiBody,
-  ApiConsumes,
   ApiOkResponse,
   ApiProduces,
   ApiTags,
@@ -40,7 +36,7 @@ import {
 } from './dto/transcript.dto';
 import { decodeTranscriptFile } from './transcript-text';
 import { TRANSCRIPT_MAX_BYTES } from './transcript-limits';
-import { TranscriptUploadErrorsInterceptor } from './transcript-upload-errors.interceptor';
+import { SingleFileUpload } from '../common/uploads/single-file-upload.decorator';
 import { TranscriptsService } from './transcripts.service';
 
 interface UploadedTranscriptFile {
@@ -82,17 +78,11 @@ export class TranscriptsController {
   }
 
   @Post('footage/:footageId/transcript/file')
-  @UseInterceptors(
-    TranscriptUploadErrorsInterceptor,
-    FileInterceptor('file', { limits: { fileSize: TRANSCRIPT_MAX_BYTES, files: 1, fields: 4 } }),
-  )
-  @ApiConsumes('multipart/form-data')
-  @ApiBody({
-    schema: {
-      type: 'object',
-      properties: { file: { type: 'string', format: 'binary' }, format: { type: 'string', enum: ['auto', 'webvtt', 'srt', 'timestamped'] } },
-      required: ['file'],
-    },
+  @SingleFileUpload('file', {
+    maxBytes: TRANSCRIPT_MAX_BYTES,
+    what: 'The transcript file',
+    expected: 'one transcript file',
+    textFields: { format: { type: 'string', enum: ['auto', 'webvtt', 'srt', 'timestamped'] } },
   })
   @ApiOkResponse({ type: TranscriptDto, description: 'A .vtt, .srt or .txt file of at most 2 MB (UTF-8 or UTF-16 with BOM)' })
   @ApiUnprocessableEntityResponse({ description: '`{ statusCode, message, line }` naming the first bad line' })

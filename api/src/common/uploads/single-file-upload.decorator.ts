@@ -21,6 +21,8 @@ export interface SingleFileUploadOptions {
   what: string;
   /** What to send, for the wrong-field message: "one image". */
   expected: string;
+  /** Text fields sent beside the file, for the OpenAPI description (validate them with a DTO). */
+  textFields?: Record<string, { type: 'string'; enum?: string[] }>;
 }
 
 function megabytes(bytes: number): string {
@@ -56,8 +58,17 @@ function friendlyUploadErrors(field: string, options: SingleFileUploadOptions): 
 /** One file in a multipart form field, held in memory up to `maxBytes`, with readable errors and its OpenAPI shape. */
 export function SingleFileUpload(field: string, options: SingleFileUploadOptions) {
   return applyDecorators(
-    UseInterceptors(friendlyUploadErrors(field, options), FileInterceptor(field, { limits: { fileSize: options.maxBytes, files: 1 } })),
+    UseInterceptors(
+      friendlyUploadErrors(field, options),
+      FileInterceptor(field, { limits: { fileSize: options.maxBytes, files: 1, fields: 10 } }),
+    ),
     ApiConsumes('multipart/form-data'),
-    ApiBody({ schema: { type: 'object', properties: { [field]: { type: 'string', format: 'binary' } }, required: [field] } }),
+    ApiBody({
+      schema: {
+        type: 'object',
+        properties: { [field]: { type: 'string', format: 'binary' }, ...options.textFields },
+        required: [field],
+      },
+    }),
   );
 }

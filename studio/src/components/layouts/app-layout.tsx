@@ -29,13 +29,14 @@ export function AppLayout({ headerActions, navbarExtra }: AppLayoutProps = {}) {
       padding="lg"
     >
       <AppShell.Header>
-        <Group h="100%" px="md" justify="space-between">
-          <Group gap="sm">
+        <Group h="100%" px="md" justify="space-between" wrap="nowrap">
+          <Group gap="sm" wrap="nowrap">
             <Burger opened={opened} onClick={toggle} hiddenFrom="sm" size="sm" aria-label="Toggle navigation" />
             <UnstyledButton component={Link} to={paths.home} aria-label="Fitwright home">
               <Group gap={8}>
                 <img src="/favicon.svg" alt="" width={28} height={28} />
-                <Text fw={600} size="lg">
+                {/* On a phone the mark alone leaves room for the workshop switcher and account menu. */}
+                <Text fw={600} size="lg" visibleFrom="xs">
                   Fitwright
                 </Text>
               </Group>
