@@ -1,5 +1,5 @@
-import { Column, CreateDateColumn, Entity, Index, PrimaryColumn, UpdateDateColumn } from 'typeorm';
-import { nanometresTransformer, newId } from '../../common/database/columns';
+import { Column, Entity, Index, PrimaryColumn } from 'typeorm';
+import { CreatedAtColumn, nanometresTransformer, newId, UpdatedAtColumn } from '../../common/database/columns';
 
 export const INTERFACE_KINDS = ['spline', 'bore_shaft', 'length_window'] as const;
 export type InterfaceKind = (typeof INTERFACE_KINDS)[number];
@@ -40,15 +40,9 @@ export class AssemblyInterface {
   @Column({ name: 'margin_nm', type: 'bigint', nullable: true, transformer: nanometresTransformer })
   marginNm!: number | null;
 
-  @CreateDateColumn({ name: 'created_at', type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
+  @CreatedAtColumn()
   createdAt!: Date;
 
-  @UpdateDateColumn({
-    name: 'updated_at',
-    type: 'datetime',
-    precision: 3,
-    default: () => 'CURRENT_TIMESTAMP(3)',
-    onUpdate: 'CURRENT_TIMESTAMP(3)',
-  })
+  @UpdatedAtColumn()
   updatedAt!: Date;
 }

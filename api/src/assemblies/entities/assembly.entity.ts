@@ -1,5 +1,5 @@
-import { Column, CreateDateColumn, Entity, Index, PrimaryColumn, UpdateDateColumn } from 'typeorm';
-import { newId } from '../../common/database/columns';
+import { Column, Entity, Index, PrimaryColumn } from 'typeorm';
+import { CreatedAtColumn, newId, UpdatedAtColumn } from '../../common/database/columns';
 
 /** A named combination of parts for a build, e.g. "27-tooth coupler with long shaft". */
 @Entity('assemblies')
@@ -20,15 +20,9 @@ export class Assembly {
   @Column({ type: 'text' })
   notes!: string;
 
-  @CreateDateColumn({ name: 'created_at', type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
+  @CreatedAtColumn()
   createdAt!: Date;
 
-  @UpdateDateColumn({
-    name: 'updated_at',
-    type: 'datetime',
-    precision: 3,
-    default: () => 'CURRENT_TIMESTAMP(3)',
-    onUpdate: 'CURRENT_TIMESTAMP(3)',
-  })
+  @UpdatedAtColumn()
   updatedAt!: Date;
 }

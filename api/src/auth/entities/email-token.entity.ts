@@ -1,5 +1,5 @@
-import { Column, CreateDateColumn, Entity, PrimaryColumn } from 'typeorm';
-import { newId } from '../../common/database/columns';
+import { Column, Entity, PrimaryColumn } from 'typeorm';
+import { CreatedAtColumn, newId } from '../../common/database/columns';
 
 export const EMAIL_TOKEN_PURPOSES = ['verify-email', 'reset-password', 'change-email'] as const;
 export type EmailTokenPurpose = (typeof EMAIL_TOKEN_PURPOSES)[number];
@@ -29,6 +29,6 @@ export class EmailToken {
   @Column({ name: 'used_at', type: 'datetime', precision: 3, nullable: true })
   usedAt!: Date | null;
 
-  @CreateDateColumn({ name: 'created_at', type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
+  @CreatedAtColumn()
   createdAt!: Date;
 }

@@ -1,5 +1,5 @@
-import { Column, CreateDateColumn, Entity, Index, PrimaryColumn } from 'typeorm';
-import { newId } from '../../common/database/columns';
+import { Column, Entity, Index, PrimaryColumn } from 'typeorm';
+import { CreatedAtColumn, newId } from '../../common/database/columns';
 
 /** A signed-in browser. Only the SHA-256 of the cookie's token is kept, so a database leak signs nobody in. */
 @Entity('sessions')
@@ -23,6 +23,6 @@ export class Session {
   @Column({ name: 'user_agent', type: 'varchar', length: 255, nullable: true })
   userAgent!: string | null;
 
-  @CreateDateColumn({ name: 'created_at', type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
+  @CreatedAtColumn()
   createdAt!: Date;
 }

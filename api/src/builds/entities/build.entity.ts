@@ -1,5 +1,5 @@
-import { Column, CreateDateColumn, Entity, Index, PrimaryColumn, UpdateDateColumn } from 'typeorm';
-import { newId } from '../../common/database/columns';
+import { Column, Entity, Index, PrimaryColumn } from 'typeorm';
+import { CreatedAtColumn, newId, UpdatedAtColumn } from '../../common/database/columns';
 
 export const BUILD_STATUSES = ['planning', 'in_progress', 'verified', 'archived'] as const;
 export type BuildStatus = (typeof BUILD_STATUSES)[number];
@@ -30,15 +30,9 @@ export class Build {
   @Column({ name: 'created_by', type: 'char', length: 36, nullable: true })
   createdBy!: string | null;
 
-  @CreateDateColumn({ name: 'created_at', type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
+  @CreatedAtColumn()
   createdAt!: Date;
 
-  @UpdateDateColumn({
-    name: 'updated_at',
-    type: 'datetime',
-    precision: 3,
-    default: () => 'CURRENT_TIMESTAMP(3)',
-    onUpdate: 'CURRENT_TIMESTAMP(3)',
-  })
+  @UpdatedAtColumn()
   updatedAt!: Date;
 }

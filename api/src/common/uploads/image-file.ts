@@ -1,4 +1,5 @@
 import { BadRequestException } from '@nestjs/common';
+import { megabytes } from './single-file-upload.decorator';
 
 /** Images we accept, recognised by their first bytes (the file name and the browser's type are not trusted). */
 export interface ImageKind {
@@ -33,7 +34,7 @@ export function requireImage(
   file: UploadedFileLike | undefined,
   { field, what, maxBytes }: { field: string; what: string; maxBytes: number },
 ): ImageKind & { bytes: Buffer } {
-  const limit = `${Math.round((maxBytes / (1024 * 1024)) * 10) / 10} MB`;
+  const limit = megabytes(maxBytes);
   if (!file || file.size === 0) {
     throw new BadRequestException({ message: `Choose an image file for ${what.toLowerCase()}`, errors: { [field]: 'Choose an image file' } });
   }

@@ -25,8 +25,12 @@ export interface SingleFileUploadOptions {
   textFields?: Record<string, { type: 'string'; enum?: string[] }>;
 }
 
-function megabytes(bytes: number): string {
-  return `${Math.round((bytes / (1024 * 1024)) * 10) / 10} MB`;
+/** A size limit in words: limits are set as round binary (2 × 1024²) or decimal (2 000 000) megabytes. */
+export function megabytes(bytes: number): string {
+  const binary = bytes / (1024 * 1024);
+  const decimal = bytes / 1_000_000;
+  const round = Number.isInteger(binary) ? binary : Number.isInteger(decimal) ? decimal : Math.round(binary * 10) / 10;
+  return `${round} MB`;
 }
 
 /** Puts multer's terse upload errors ("File too large", "Unexpected field") into words a person can act on. */

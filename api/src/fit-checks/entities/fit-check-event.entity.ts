@@ -1,5 +1,5 @@
-import { Column, CreateDateColumn, Entity, Index, PrimaryColumn } from 'typeorm';
-import { newId } from '../../common/database/columns';
+import { Column, Entity, Index, PrimaryColumn } from 'typeorm';
+import { CreatedAtColumn, newId } from '../../common/database/columns';
 import type { FitCheckState } from '../../engine/checklist';
 
 /** The history of a check: every state change with who (or which re-evaluation) and why. */
@@ -25,6 +25,6 @@ export class FitCheckEvent {
   @Column({ name: 'actor_id', type: 'char', length: 36, nullable: true })
   actorId!: string | null;
 
-  @CreateDateColumn({ name: 'created_at', type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
+  @CreatedAtColumn()
   createdAt!: Date;
 }

@@ -1,5 +1,5 @@
-import { Column, CreateDateColumn, Entity, Index, PrimaryColumn } from 'typeorm';
-import { newId } from '../../common/database/columns';
+import { Column, Entity, Index, PrimaryColumn } from 'typeorm';
+import { CreatedAtColumn, newId } from '../../common/database/columns';
 
 export const EVIDENCE_KINDS = ['measurement', 'mark', 'photo'] as const;
 export type EvidenceKind = (typeof EVIDENCE_KINDS)[number];
@@ -32,6 +32,6 @@ export class FitCheckEvidence {
   @Column({ name: 'added_by', type: 'char', length: 36, nullable: true })
   addedBy!: string | null;
 
-  @CreateDateColumn({ name: 'created_at', type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
+  @CreatedAtColumn()
   createdAt!: Date;
 }

@@ -1,5 +1,5 @@
-import { Column, CreateDateColumn, Entity, Index, PrimaryColumn, UpdateDateColumn } from 'typeorm';
-import { newId } from '../../common/database/columns';
+import { Column, Entity, Index, PrimaryColumn } from 'typeorm';
+import { CreatedAtColumn, newId, UpdatedAtColumn } from '../../common/database/columns';
 import type { CheckOutcome, FitCheckState } from '../../engine/checklist';
 
 export const CHECK_KINDS = ['spline_match', 'fit', 'length_window', 'manual'] as const;
@@ -50,15 +50,9 @@ export class FitCheck {
   @Column({ name: 'confirmed_at', type: 'datetime', precision: 3, nullable: true })
   confirmedAt!: Date | null;
 
-  @CreateDateColumn({ name: 'created_at', type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
+  @CreatedAtColumn()
   createdAt!: Date;
 
-  @UpdateDateColumn({
-    name: 'updated_at',
-    type: 'datetime',
-    precision: 3,
-    default: () => 'CURRENT_TIMESTAMP(3)',
-    onUpdate: 'CURRENT_TIMESTAMP(3)',
-  })
+  @UpdatedAtColumn()
   updatedAt!: Date;
 }

@@ -1,4 +1,5 @@
-import { Column, CreateDateColumn, Entity, PrimaryColumn } from 'typeorm';
+import { Column, Entity, PrimaryColumn } from 'typeorm';
+import { CreatedAtColumn } from '../../common/database/columns';
 
 /** A part the browser finished uploading: its number and the ETag storage answered with. */
 @Entity('footage_upload_parts')
@@ -12,6 +13,6 @@ export class FootageUploadPart {
   @Column({ type: 'varchar', length: 200 })
   etag!: string;
 
-  @CreateDateColumn({ name: 'created_at', type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
+  @CreatedAtColumn()
   createdAt!: Date;
 }

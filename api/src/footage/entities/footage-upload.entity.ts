@@ -1,4 +1,5 @@
-import { Column, CreateDateColumn, Entity, PrimaryColumn, UpdateDateColumn } from 'typeorm';
+import { Column, Entity, PrimaryColumn } from 'typeorm';
+import { CreatedAtColumn, UpdatedAtColumn } from '../../common/database/columns';
 
 /** The multipart upload behind footage in state `uploading`; gone once the upload completes or is aborted. */
 @Entity('footage_uploads')
@@ -16,15 +17,9 @@ export class FootageUpload {
   @Column({ name: 'part_count', type: 'smallint', unsigned: true })
   partCount!: number;
 
-  @CreateDateColumn({ name: 'created_at', type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
+  @CreatedAtColumn()
   createdAt!: Date;
 
-  @UpdateDateColumn({
-    name: 'updated_at',
-    type: 'datetime',
-    precision: 3,
-    default: () => 'CURRENT_TIMESTAMP(3)',
-    onUpdate: 'CURRENT_TIMESTAMP(3)',
-  })
+  @UpdatedAtColumn()
   updatedAt!: Date;
 }

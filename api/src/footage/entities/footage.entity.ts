@@ -1,5 +1,5 @@
-import { Column, CreateDateColumn, Entity, Index, PrimaryColumn, UpdateDateColumn, ValueTransformer } from 'typeorm';
-import { newId } from '../../common/database/columns';
+import { Column, Entity, Index, PrimaryColumn, ValueTransformer } from 'typeorm';
+import { CreatedAtColumn, newId, UpdatedAtColumn } from '../../common/database/columns';
 
 export const FOOTAGE_STATES = ['uploading', 'processing', 'ready', 'failed'] as const;
 export type FootageState = (typeof FOOTAGE_STATES)[number];
@@ -76,15 +76,9 @@ export class Footage {
   @Column({ name: 'processed_at', type: 'datetime', precision: 3, nullable: true })
   processedAt!: Date | null;
 
-  @CreateDateColumn({ name: 'created_at', type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
+  @CreatedAtColumn()
   createdAt!: Date;
 
-  @UpdateDateColumn({
-    name: 'updated_at',
-    type: 'datetime',
-    precision: 3,
-    default: () => 'CURRENT_TIMESTAMP(3)',
-    onUpdate: 'CURRENT_TIMESTAMP(3)',
-  })
+  @UpdatedAtColumn()
   updatedAt!: Date;
 }

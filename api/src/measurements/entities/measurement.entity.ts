@@ -1,5 +1,5 @@
-import { Column, CreateDateColumn, Entity, Index, PrimaryColumn } from 'typeorm';
-import { decimalTransformer, nanometresTransformer, newId } from '../../common/database/columns';
+import { Column, Entity, Index, PrimaryColumn } from 'typeorm';
+import { CreatedAtColumn, decimalTransformer, nanometresTransformer, newId } from '../../common/database/columns';
 import type { LengthUnit } from '../../engine/units';
 
 export const QUANTITIES = ['diameter', 'length', 'clearance', 'runout', 'other'] as const;
@@ -80,6 +80,6 @@ export class Measurement {
   @Column({ type: 'varchar', length: 500, default: '' })
   note!: string;
 
-  @CreateDateColumn({ name: 'created_at', type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
+  @CreatedAtColumn()
   createdAt!: Date;
 }

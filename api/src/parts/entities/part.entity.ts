@@ -1,5 +1,5 @@
-import { Column, CreateDateColumn, Entity, Index, OneToMany, PrimaryColumn, UpdateDateColumn } from 'typeorm';
-import { newId } from '../../common/database/columns';
+import { Column, Entity, Index, OneToMany, PrimaryColumn } from 'typeorm';
+import { CreatedAtColumn, newId, UpdatedAtColumn } from '../../common/database/columns';
 import { PartFeature } from './part-feature.entity';
 
 export const PART_CATEGORIES = ['coupler', 'shaft', 'joint', 'bearing', 'bore', 'plate', 'boot', 'seal', 'fastener', 'other'] as const;
@@ -46,16 +46,10 @@ export class Part {
   @OneToMany(() => PartFeature, (feature) => feature.part, { cascade: false })
   features?: PartFeature[];
 
-  @CreateDateColumn({ name: 'created_at', type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
+  @CreatedAtColumn()
   createdAt!: Date;
 
-  @UpdateDateColumn({
-    name: 'updated_at',
-    type: 'datetime',
-    precision: 3,
-    default: () => 'CURRENT_TIMESTAMP(3)',
-    onUpdate: 'CURRENT_TIMESTAMP(3)',
-  })
+  @UpdatedAtColumn()
   updatedAt!: Date;
 }
 

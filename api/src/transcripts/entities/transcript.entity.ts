@@ -1,5 +1,5 @@
-import { Column, CreateDateColumn, Entity, PrimaryColumn, ValueTransformer } from 'typeorm';
-import { newId } from '../../common/database/columns';
+import { Column, Entity, PrimaryColumn, ValueTransformer } from 'typeorm';
+import { CreatedAtColumn, newId } from '../../common/database/columns';
 
 export const TRANSCRIPT_FORMATS = ['webvtt', 'srt', 'timestamped'] as const;
 export type StoredTranscriptFormat = (typeof TRANSCRIPT_FORMATS)[number];
@@ -48,6 +48,6 @@ export class Transcript {
   @Column({ name: 'created_by', type: 'char', length: 36, nullable: true })
   createdBy!: string | null;
 
-  @CreateDateColumn({ name: 'created_at', type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
+  @CreatedAtColumn()
   createdAt!: Date;
 }

@@ -1,5 +1,5 @@
-import { Column, CreateDateColumn, Entity, Index, PrimaryColumn } from 'typeorm';
-import { newId } from '../../common/database/columns';
+import { Column, Entity, Index, PrimaryColumn } from 'typeorm';
+import { CreatedAtColumn, newId } from '../../common/database/columns';
 import { MEMBER_ROLES, type MemberRole } from '../../common/types/access-context';
 
 /** An e-mailed offer to join a workshop; the link's token is stored only as its SHA-256. */
@@ -33,6 +33,6 @@ export class Invitation {
   @Column({ name: 'invited_by', type: 'char', length: 36, nullable: true })
   invitedBy!: string | null;
 
-  @CreateDateColumn({ name: 'created_at', type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
+  @CreatedAtColumn()
   createdAt!: Date;
 }
