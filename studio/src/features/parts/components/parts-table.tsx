@@ -87,14 +87,16 @@ export function PartsTable({ workshopId }: { workshopId: string }) {
               {parts.data.map((part) => (
                 <Table.Tr key={part.id}>
                   <Table.Td>
-                    <Anchor component={Link} to={paths.part.to(workshopId, part.id)} fw={600} ff="monospace">
+                    <Anchor component={Link} to={paths.part.to(workshopId, part.id)} fw={600} ff="monospace" style={{ whiteSpace: 'nowrap' }}>
                       {part.partNumber}
                     </Anchor>
                   </Table.Td>
                   <Table.Td>{part.title}</Table.Td>
                   <Table.Td>{part.maker || '—'}</Table.Td>
                   <Table.Td>
-                    <Badge variant="light">{CATEGORY_LABELS[part.category]}</Badge>
+                    <Badge variant="light" style={{ minWidth: 'max-content' }}>
+                      {CATEGORY_LABELS[part.category]}
+                    </Badge>
                   </Table.Td>
                   <Table.Td>{SOURCE_LABELS[part.source]}</Table.Td>
                   <Table.Td>
