@@ -41,6 +41,7 @@ describe('marks and suggestions mined from the transcript (real MariaDB and Redi
   let part: { id: string; features: { id: string; name: string }[] };
   let otherPartId: string;
   let base: string;
+  let buildId: string;
 
   const suggestions = async (status = 'pending'): Promise<SuggestionBody[]> =>
     (await owner.agent.get(`${base}/mark-suggestions`).query({ status }).expect(200)).body;
@@ -60,7 +61,7 @@ describe('marks and suggestions mined from the transcript (real MariaDB and Redi
     app = await createTestApp();
     owner = await signUpAndSignIn(app);
     workshopId = (await owner.agent.post('/api/workshops').send({ name: 'Marks Test Shop', slug: uniqueSlug('marks') }).expect(201)).body.id;
-    const buildId = (await owner.agent.post(`/api/workshops/${workshopId}/builds`).send({ title: 'Bench coupler swap' }).expect(201)).body.id;
+    buildId = (await owner.agent.post(`/api/workshops/${workshopId}/builds`).send({ title: 'Bench coupler swap' }).expect(201)).body.id;
     part = (
       await owner.agent
         .post(`/api/workshops/${workshopId}/parts`)
@@ -187,6 +188,22 @@ describe('marks and suggestions mined from the transcript (real MariaDB and Redi
     ).body.id;
     await owner.agent.post(`${base}/marks`).send({ startMs: 100, kind: 'part', partId: foreignPart }).expect(404);
     await owner.agent.get(`/api/workshops/${otherWorkshop}/footage/${footageId}/marks`).expect(404);
+  });
+
+  it('links a mark as a fit check\'s evidence, and a mark of this workshop only', async () => {
+    const shop = `/api/workshops/${workshopId}`;
+    const assemblyId = (await owner.agent.post(`${shop}/builds/${buildId}/assemblies`).send({ name: 'bench trial' }).expect(201)).body.id;
+    const check = (await owner.agent.post(`${shop}/assemblies/${assemblyId}/checks`).send({ title: 'Coupler seats fully on the shaft' }).expect(201)).body;
+    const seated = (await owner.agent.post(`${base}/marks`).send({ startMs: 9000, kind: 'check_evidence', fitCheckId: check.id, label: 'Seated' }).expect(201)).body;
+    const evidence = await owner.agent.post(`${shop}/checks/${check.id}/evidence`).send({ kind: 'mark', markId: seated.id }).expect(201);
+    expect(evidence.body).toMatchObject({ kind: 'mark', markId: seated.id, measurementId: null });
+    await owner.agent.post(`${shop}/checks/${check.id}/evidence`).send({ kind: 'mark' }).expect(400);
+    await owner.agent.post(`${shop}/checks/${check.id}/evidence`).send({ kind: 'mark', markId: check.id }).expect(404);
+    // Removing the mark removes the evidence it was.
+    await owner.agent.delete(`${base}/marks/${seated.id}`).expect(204);
+    const checklist = await owner.agent.get(`${shop}/assemblies/${assemblyId}/checklist`).expect(200);
+    const listed = checklist.body.checks.find((item: { id: string }) => item.id === check.id);
+    expect(listed.evidence).toEqual([]);
   });
 
   it('answers 404 to non-members and 401 to anonymous callers', async () => {

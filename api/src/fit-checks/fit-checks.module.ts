@@ -2,6 +2,7 @@ import { Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { AssemblyInterface } from '../assemblies/entities/assembly-interface.entity';
 import { Assembly } from '../assemblies/entities/assembly.entity';
+import { Mark } from '../marks/entities/mark.entity';
 import { Measurement } from '../measurements/entities/measurement.entity';
 import { PartFeature } from '../parts/entities/part-feature.entity';
 import { FitCheckEvent } from './entities/fit-check-event.entity';
@@ -12,7 +13,7 @@ import { FitChecksService } from './fit-checks.service';
 
 @Module({
   imports: [
-    TypeOrmModule.forFeature([FitCheck, FitCheckEvent, FitCheckEvidence, Assembly, AssemblyInterface, PartFeature, Measurement]),
+    TypeOrmModule.forFeature([FitCheck, FitCheckEvent, FitCheckEvidence, Assembly, AssemblyInterface, PartFeature, Measurement, Mark]),
   ],
   controllers: [FitChecksController],
   providers: [FitChecksService],

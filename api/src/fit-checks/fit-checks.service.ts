@@ -12,6 +12,7 @@ import { EngineError } from '../engine/engine-error';
 import { evaluateInterface, type InterfaceInput, type InterfaceVerdict, type Reading } from '../engine/interface-evaluation';
 import { whatIf } from '../engine/measured-fit';
 import { toNanometres, type LengthUnit } from '../engine/units';
+import { Mark } from '../marks/entities/mark.entity';
 import { Measurement } from '../measurements/entities/measurement.entity';
 import { MEASUREMENT_CHANGED, type MeasurementChangedEvent } from '../measurements/measurements.events';
 import type { DiameterSpec, LengthSpec, SplineSpec } from '../parts/entities/part-feature.entity';
@@ -54,6 +55,7 @@ export class FitChecksService {
     @InjectRepository(AssemblyInterface) private readonly interfaces: Repository<AssemblyInterface>,
     @InjectRepository(PartFeature) private readonly features: Repository<PartFeature>,
     @InjectRepository(Measurement) private readonly measurements: Repository<Measurement>,
+    @InjectRepository(Mark) private readonly marks: Repository<Mark>,
     @Inject(EventEmitter2) private readonly emitter: EventEmitter2,
     @Inject(StorageService) private readonly storage: StorageService,
   ) {}
@@ -260,14 +262,19 @@ export class FitChecksService {
 
   async addEvidence(workshopId: string, checkId: string, actorId: string, input: AddEvidenceDto): Promise<FitCheckEvidence> {
     const check = await this.checkOf(workshopId, checkId);
-    const measurement = await this.measurements.findOneBy({ id: input.measurementId, workshopId });
-    if (!measurement) throw new NotFoundException('Measurement not found');
+    // Exactly one of the two ids is given (the DTO requires the one its kind names); the other is stored as null.
+    const given = input.kind === 'mark' ? input.markId : input.measurementId;
+    const found =
+      input.kind === 'mark'
+        ? await this.marks.existsBy({ id: given, workshopId })
+        : await this.measurements.existsBy({ id: given, workshopId });
+    if (!found) throw new NotFoundException(input.kind === 'mark' ? 'Mark not found' : 'Measurement not found');
     return this.evidence.save(
       this.evidence.create({
         fitCheckId: check.id,
-        kind: 'measurement',
-        measurementId: measurement.id,
-        markId: null,
+        kind: input.kind,
+        measurementId: input.kind === 'measurement' ? (given ?? null) : null,
+        markId: input.kind === 'mark' ? (given ?? null) : null,
         photoKey: null,
         note: input.note ?? '',
         addedBy: actorId,

@@ -3,6 +3,7 @@ import { Accounts1764600000000 } from './1764600000000-accounts';
 import { FitData1764700000000 } from './1764700000000-fit-data';
 import { Footage1764840000000 } from './1764840000000-footage';
 import { Marks1764900000000 } from './1764900000000-marks';
+import { MarkEvidence1764900000001 } from './1764900000001-mark-evidence';
 
 /** Every migration, oldest first. Listed explicitly so the same list works from src (tests) and dist. */
 // eslint-disable-next-line @typescript-eslint/no-unsafe-function-type
@@ -11,4 +12,5 @@ export const migrations: MixedList<Function> = [
   FitData1764700000000,
   Footage1764840000000,
   Marks1764900000000,
+  MarkEvidence1764900000001,
 ];

@@ -1,5 +1,5 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
-import { IsBoolean, IsIn, IsOptional, IsString, IsUUID, Length, Matches, MaxLength } from 'class-validator';
+import { IsBoolean, IsIn, IsOptional, IsString, IsUUID, Length, Matches, MaxLength, ValidateIf } from 'class-validator';
 import { FIT_CHECK_STATES, type FitCheckState } from '../../engine/checklist';
 import { LENGTH_UNITS, type LengthUnit } from '../../engine/units';
 
@@ -27,13 +27,19 @@ export class TransitionDto {
 }
 
 export class AddEvidenceDto {
-  @ApiProperty({ enum: ['measurement'], description: 'Photos come through the photos route' })
-  @IsIn(['measurement'])
-  kind!: 'measurement';
+  @ApiProperty({ enum: ['measurement', 'mark'], description: 'Photos come through the photos route' })
+  @IsIn(['measurement', 'mark'])
+  kind!: 'measurement' | 'mark';
 
-  @ApiProperty()
+  @ApiPropertyOptional({ description: 'For kind `measurement`' })
+  @ValidateIf((body: AddEvidenceDto) => body.kind === 'measurement')
   @IsUUID()
-  measurementId!: string;
+  measurementId?: string;
+
+  @ApiPropertyOptional({ description: 'For kind `mark`: a moment in this workshop\'s footage that shows the fit' })
+  @ValidateIf((body: AddEvidenceDto) => body.kind === 'mark')
+  @IsUUID()
+  markId?: string;
 
   @ApiPropertyOptional()
   @IsOptional()

@@ -1,5 +1,5 @@
-import { Column, CreateDateColumn, Entity, PrimaryColumn } from 'typeorm';
-import { decimalTransformer, newId } from '../../common/database/columns';
+import { Column, Entity, PrimaryColumn } from 'typeorm';
+import { CreatedAtColumn, decimalTransformer, newId } from '../../common/database/columns';
 
 export const SUGGESTION_KINDS = ['measurement', 'part'] as const;
 export type SuggestionKind = (typeof SUGGESTION_KINDS)[number];
@@ -65,6 +65,6 @@ export class MarkSuggestion {
   @Column({ name: 'decided_at', type: 'datetime', precision: 3, nullable: true })
   decidedAt!: Date | null;
 
-  @CreateDateColumn({ name: 'created_at', type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
+  @CreatedAtColumn()
   createdAt!: Date;
 }

@@ -1,5 +1,5 @@
-import { Column, CreateDateColumn, Entity, Index, PrimaryColumn, UpdateDateColumn } from 'typeorm';
-import { newId } from '../../common/database/columns';
+import { Column, Entity, Index, PrimaryColumn } from 'typeorm';
+import { CreatedAtColumn, newId, UpdatedAtColumn } from '../../common/database/columns';
 
 export const MARK_KINDS = ['part', 'measurement', 'check_evidence', 'step', 'caution', 'note'] as const;
 export type MarkKind = (typeof MARK_KINDS)[number];
@@ -48,9 +48,9 @@ export class Mark {
   @Column({ name: 'created_by', type: 'char', length: 36, nullable: true })
   createdBy!: string | null;
 
-  @CreateDateColumn({ name: 'created_at', type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
+  @CreatedAtColumn()
   createdAt!: Date;
 
-  @UpdateDateColumn({ name: 'updated_at', type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
+  @UpdatedAtColumn()
   updatedAt!: Date;
 }

@@ -1,6 +1,6 @@
 import { Alert, Anchor, Badge, Breadcrumbs, Grid, Group, Skeleton, Stack, Text, Title } from '@mantine/core';
 import { useQuery } from '@tanstack/react-query';
-import { useRef, useState, type SyntheticEvent } from 'react';
+import { useRef, useState, type ComponentType, type SyntheticEvent } from 'react';
 import { Link } from 'react-router-dom';
 import { paths } from '@/config/paths';
 import { captionsUrl, footageQueries, transcriptQueries } from '../api/queries';
@@ -14,6 +14,17 @@ export interface FootagePlayerPageProps {
   footageId: string;
   /** Where to start, e.g. from a transcript search result (`?t=`). */
   startAtMs?: number;
+  /** More tools under the video (the marking workspace, composed by the route), given the player to drive. */
+  workspace?: ComponentType<{ workshopId: string; footageId: string; player: FootagePlayerHandle }>;
+}
+
+/** The player as other tools see it: where it is, how long the footage is, and how to move it. */
+export interface FootagePlayerHandle {
+  currentMs: number;
+  durationMs: number | null;
+  readPositionMs: () => number;
+  seek: (ms: number) => void;
+  pause: () => void;
 }
 
 function describe(footage: Footage): string {
@@ -29,7 +40,7 @@ function describe(footage: Footage): string {
 }
 
 /** The player: the video with its transcript as captions, and the transcript beside it to follow, search and jump. */
-export function FootagePlayerPage({ workshopId, footageId, startAtMs }: FootagePlayerPageProps) {
+export function FootagePlayerPage({ workshopId, footageId, startAtMs, workspace: Workspace }: FootagePlayerPageProps) {
   const footage = useQuery(footageQueries.detail(workshopId, footageId));
   const ready = footage.data?.state === 'ready';
   const playback = useQuery({ ...footageQueries.playback(workshopId, footageId), enabled: ready });
@@ -49,6 +60,9 @@ export function FootagePlayerPage({ workshopId, footageId, startAtMs }: FootageP
       // Autoplay may be refused until the viewer interacts; the position is set either way.
     });
   };
+
+  const readPositionMs = () => (video.current ? video.current.currentTime * 1000 : currentMs);
+  const pause = () => video.current?.pause();
 
   const handleLoadedMetadata = (event: SyntheticEvent<HTMLVideoElement>) => {
     if (resumeAt.current === undefined) return;
@@ -147,6 +161,13 @@ export function FootagePlayerPage({ workshopId, footageId, startAtMs }: FootageP
                 </Text>
               )}
             </Group>
+            {Workspace && (
+              <Workspace
+                workshopId={workshopId}
+                footageId={footageId}
+                player={{ currentMs, durationMs: item.durationMs, readPositionMs, seek, pause }}
+              />
+            )}
           </Grid.Col>
           <Grid.Col span={{ base: 12, md: 4 }}>
             {transcript.isPending ? (

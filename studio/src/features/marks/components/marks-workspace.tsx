@@ -1,0 +1,81 @@
+import { Button, Group, Kbd, Modal, Stack, Table, Text } from '@mantine/core';
+import { useDisclosure } from '@mantine/hooks';
+import { useQuery } from '@tanstack/react-query';
+import { useState } from 'react';
+import { markQueries } from '../api/queries';
+import { MARKING_SHORTCUTS, useMarkingShortcuts } from '../hooks/marking-shortcuts';
+import { formatMarkTime } from './format-time';
+import { draftOf, MarkForm, type MarkDraft } from './mark-form';
+import { MarksList } from './marks-list';
+import { MarksTimeline } from './marks-timeline';
+import { SuggestionsPanel } from './suggestions-panel';
+
+/** What the workspace needs from the player it sits under (the footage feature's page, composed in app/routes). */
+export interface MarkingPlayer {
+  currentMs: number;
+  durationMs: number | null;
+  /** Reads the video's position at this instant (more exact than the last time update). */
+  readPositionMs: () => number;
+  seek: (ms: number) => void;
+  pause: () => void;
+}
+
+export interface MarksWorkspaceProps {
+  workshopId: string;
+  footageId: string;
+  player: MarkingPlayer;
+}
+
+/** Marking one footage: pin a moment (key or button), the timeline strip, the marks and the suggestions. */
+export function MarksWorkspace({ workshopId, footageId, player }: MarksWorkspaceProps) {
+  const marks = useQuery(markQueries.list(workshopId, footageId));
+  const [draft, setDraft] = useState<MarkDraft | null>(null);
+  const [helpOpen, help] = useDisclosure(false);
+
+  const handlers = {
+    pin: () => {
+      // Pausing keeps the moment on screen while the form is filled in.
+      const startMs = Math.round(player.readPositionMs());
+      player.pause();
+      setDraft({ startMs, kind: 'note', label: '', partId: null, measurementId: null });
+    },
+    help: help.open,
+  };
+  useMarkingShortcuts(draft === null && !helpOpen, handlers);
+
+  return (
+    <Stack gap="md" mt="sm">
+      {player.durationMs !== null && (
+        <MarksTimeline marks={marks.data ?? []} durationMs={player.durationMs} currentMs={player.currentMs} onSeek={player.seek} />
+      )}
+      <Group gap="xs">
+        <Button onClick={handlers.pin} data-testid="pin-mark">
+          Pin a mark at {formatMarkTime(player.currentMs)}
+        </Button>
+        <Button variant="subtle" onClick={help.open}>
+          Keys <Kbd ml={6}>?</Kbd>
+        </Button>
+      </Group>
+      <MarksList workshopId={workshopId} footageId={footageId} marks={marks.data ?? []} onSeek={player.seek} onEdit={(mark) => setDraft(draftOf(mark))} />
+      <SuggestionsPanel workshopId={workshopId} footageId={footageId} onSeek={player.seek} />
+      <MarkForm workshopId={workshopId} footageId={footageId} draft={draft} onClose={() => setDraft(null)} />
+      <Modal opened={helpOpen} onClose={help.close} title="Marking keys">
+        <Table>
+          <Table.Tbody>
+            {MARKING_SHORTCUTS.map((shortcut) => (
+              <Table.Tr key={shortcut.key}>
+                <Table.Td>
+                  <Kbd>{shortcut.key}</Kbd>
+                </Table.Td>
+                <Table.Td>{shortcut.description}</Table.Td>
+              </Table.Tr>
+            ))}
+          </Table.Tbody>
+        </Table>
+        <Text size="xs" c="dimmed" mt="sm">
+          Keys do nothing while you type in a field. Space and the arrow keys work the video as usual when it has focus.
+        </Text>
+      </Modal>
+    </Stack>
+  );
+}

@@ -1,0 +1,177 @@
+import { Badge, Button, Group, Modal, Paper, Select, Stack, Text, TextInput, Title } from '@mantine/core';
+import { useQuery } from '@tanstack/react-query';
+import { useState } from 'react';
+import { notifyDone, notifyError } from '@/lib/notify';
+import { useAcceptSuggestion, useDismissSuggestion } from '../api/mutations';
+import { markQueries, type MarkSuggestion } from '../api/queries';
+import { formatMarkTime } from './format-time';
+import { KindShape } from './kind-shape';
+
+const INSTRUMENTS = [
+  ['other', 'Not said'],
+  ['outside_micrometer', 'Outside micrometer'],
+  ['inside_micrometer', 'Inside micrometer'],
+  ['bore_gauge', 'Bore gauge'],
+  ['caliper', 'Caliper'],
+  ['dial_indicator', 'Dial indicator'],
+  ['feeler_gauge', 'Feeler gauge'],
+  ['tape', 'Tape'],
+].map(([value, label]) => ({ value, label }));
+
+export interface SuggestionsPanelProps {
+  workshopId: string;
+  footageId: string;
+  onSeek: (ms: number) => void;
+}
+
+/** What the transcript miner found: accept to make the mark (and the reading), dismiss for good. */
+export function SuggestionsPanel({ workshopId, footageId, onSeek }: SuggestionsPanelProps) {
+  const suggestions = useQuery(markQueries.suggestions(workshopId, footageId));
+  const accept = useAcceptSuggestion(workshopId, footageId);
+  const dismiss = useDismissSuggestion(workshopId, footageId);
+  const [reading, setReading] = useState<MarkSuggestion | null>(null);
+
+  const handleAccept = (suggestion: MarkSuggestion) => {
+    if (suggestion.kind === 'measurement') {
+      setReading(suggestion);
+      return;
+    }
+    accept.mutate({ id: suggestion.id }, { onError: (error) => notifyError('The suggestion was not accepted', error) });
+  };
+
+  return (
+    <Paper withBorder p="md">
+      <Stack gap="sm">
+        <Group justify="space-between">
+          <Title order={4}>Suggested from the transcript</Title>
+          {suggestions.data && <Badge variant="default">{suggestions.data.length}</Badge>}
+        </Group>
+        {suggestions.isError && (
+          <Text size="sm" c="red">
+            {suggestions.error.message}
+          </Text>
+        )}
+        {suggestions.data?.length === 0 && (
+          <Text size="sm" c="dimmed">
+            Nothing waiting. Spoken measurements and your parts’ numbers show up here a moment after a transcript is attached.
+          </Text>
+        )}
+        <Stack gap={6} data-testid="suggestions">
+          {suggestions.data?.map((suggestion) => (
+            <Group key={suggestion.id} justify="space-between" wrap="nowrap" data-testid="suggestion-row">
+              <Group gap="xs" wrap="nowrap">
+                <Button size="compact-xs" variant="subtle" ff="monospace" onClick={() => onSeek(suggestion.startMs)}>
+                  {formatMarkTime(suggestion.startMs)}
+                </Button>
+                <KindShape kind={suggestion.kind} />
+                <Text size="sm">
+                  “{suggestion.phrase}”
+                  {suggestion.kind === 'measurement' && (
+                    <Text span c="dimmed" size="sm">
+                      {' '}
+                      = {suggestion.value} {suggestion.unit}
+                    </Text>
+                  )}
+                </Text>
+              </Group>
+              <Group gap={4} wrap="nowrap">
+                <Button size="compact-xs" onClick={() => handleAccept(suggestion)} loading={accept.isPending && accept.variables?.id === suggestion.id}>
+                  Accept
+                </Button>
+                <Button
+                  size="compact-xs"
+                  variant="default"
+                  onClick={() => dismiss.mutate(suggestion.id, { onError: (error) => notifyError('The suggestion was not dismissed', error) })}
+                >
+                  Dismiss
+                </Button>
+              </Group>
+            </Group>
+          ))}
+        </Stack>
+      </Stack>
+      <Modal opened={reading !== null} onClose={() => setReading(null)} title="Record the spoken reading">
+        {reading && (
+          <ReadingFields
+            workshopId={workshopId}
+            suggestion={reading}
+            pending={accept.isPending}
+            onCancel={() => setReading(null)}
+            onAccept={(input) =>
+              accept.mutate(
+                { id: reading.id, ...input },
+                {
+                  onSuccess: (result) => {
+                    setReading(null);
+                    notifyDone(`Reading ${result.measurement?.shown ?? ''} recorded at ${formatMarkTime(reading.startMs)}`);
+                  },
+                  onError: (error) => notifyError('The reading was not recorded', error),
+                },
+              )
+            }
+          />
+        )}
+      </Modal>
+    </Paper>
+  );
+}
+
+interface ReadingFieldsProps {
+  workshopId: string;
+  suggestion: MarkSuggestion;
+  pending: boolean;
+  onCancel: () => void;
+  onAccept: (input: { featureId: string; instrumentKind: string; resolution?: string }) => void;
+}
+
+/** The value and unit come from the transcript; the person says which feature it was and, if known, the instrument. */
+function ReadingFields({ workshopId, suggestion, pending, onCancel, onAccept }: ReadingFieldsProps) {
+  const parts = useQuery(markQueries.parts(workshopId));
+  const [featureId, setFeatureId] = useState<string | null>(null);
+  const [instrumentKind, setInstrumentKind] = useState('other');
+  const [resolution, setResolution] = useState('');
+  const features = (parts.data ?? []).flatMap((part) =>
+    part.features.map((feature) => ({ value: feature.id, label: `${part.partNumber} — ${feature.name}` })),
+  );
+  return (
+    <Stack>
+      <Group grow>
+        <TextInput label="Value" value={suggestion.value ?? ''} readOnly />
+        <TextInput label="Unit" value={suggestion.unit ?? ''} readOnly />
+      </Group>
+      <Text size="xs" c="dimmed">
+        Heard at {formatMarkTime(suggestion.startMs)}: “{suggestion.phrase}”. The reading is linked to this moment.
+      </Text>
+      <Select
+        label="Feature measured"
+        placeholder={parts.isPending ? 'Loading parts…' : 'Choose a part feature'}
+        searchable
+        data={features}
+        value={featureId}
+        onChange={setFeatureId}
+        nothingFoundMessage="No part features yet: add them on the part's page"
+      />
+      <Group grow>
+        <Select label="Instrument" data={INSTRUMENTS} value={instrumentKind} onChange={(kind) => setInstrumentKind(kind ?? 'other')} allowDeselect={false} />
+        <TextInput
+          label="Resolution"
+          placeholder="from the spoken digits"
+          value={resolution}
+          onChange={(event) => setResolution(event.currentTarget.value)}
+        />
+      </Group>
+      <Group justify="flex-end">
+        <Button variant="default" onClick={onCancel}>
+          Cancel
+        </Button>
+        <Button
+          disabled={!featureId}
+          loading={pending}
+          onClick={() => featureId && onAccept({ featureId, instrumentKind, ...(resolution.trim() ? { resolution: resolution.trim() } : {}) })}
+        >
+          Record reading
+        </Button>
+      </Group>
+    </Stack>
+  );
+}
