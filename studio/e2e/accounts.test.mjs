@@ -4,41 +4,18 @@ import assert from 'node:assert/strict';
 import { mkdirSync } from 'node:fs';
 import { after, before, test } from 'node:test';
 import { baseUrl, launchBrowser } from './browser.mjs';
+import { mailIds, waitForMail } from './support.mjs';
 
 const screenshots = new URL('./screenshots/', import.meta.url);
 mkdirSync(screenshots, { recursive: true });
 const shot = (page, name) => page.screenshot({ path: new URL(`accounts-${name}.png`, screenshots).pathname, fullPage: true });
 
-const inboxUrl = process.env.MAIL_INBOX_URL ?? 'http://127.0.0.1:1090';
 const run = `${Date.now().toString(36)}${Math.floor(Math.random() * 1e4)}`;
 const password = 'journey password 2026';
 const creator = { name: 'Rowan Avery', email: `rowan-${run}@harrow-lane.example` };
 const invitee = { name: 'Sam Okafor', email: `sam-${run}@harrow-lane.example` };
 const stranger = { name: 'Ezra Quinn', email: `ezra-${run}@elsewhere.example` };
 const workshopName = `Harrow Lane Garage ${run}`;
-
-/** The ids of the messages `to` already has (to wait for a newer one). */
-async function mailIds(to) {
-  const messages = await (await fetch(`${inboxUrl}/email`)).json();
-  return new Set(messages.filter((message) => message.to.some((recipient) => recipient.address.toLowerCase() === to)).map((message) => message.id));
-}
-
-/** The newest message to `to` whose subject matches, read through the mail fake's REST API. */
-async function waitForMail(to, subject, timeoutMs = 20_000, excluding = new Set()) {
-  const deadline = Date.now() + timeoutMs;
-  while (Date.now() < deadline) {
-    const messages = await (await fetch(`${inboxUrl}/email`)).json();
-    const found = messages.filter(
-      (message) =>
-        !excluding.has(message.id) &&
-        message.to.some((recipient) => recipient.address.toLowerCase() === to) &&
-        subject.test(message.subject),
-    );
-    if (found.length) return found[found.length - 1];
-    await new Promise((resolve) => setTimeout(resolve, 200));
-  }
-  throw new Error(`no mail to ${to} matching ${subject}`);
-}
 
 /** The link to `path` in the message, pointed at the app under test. */
 function linkIn(message, path) {

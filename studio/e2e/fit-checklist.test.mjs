@@ -5,6 +5,7 @@ import assert from 'node:assert/strict';
 import { mkdirSync } from 'node:fs';
 import { after, before, test } from 'node:test';
 import { baseUrl, launchBrowser } from './browser.mjs';
+import { choose, field, signUpThroughApi } from './support.mjs';
 
 const screenshots = new URL('./screenshots/', import.meta.url);
 mkdirSync(screenshots, { recursive: true });
@@ -12,48 +13,17 @@ mkdirSync(screenshots, { recursive: true });
 const shot = (page, name, { fullPage = true } = {}) =>
   page.screenshot({ path: new URL(`fit-${name}.png`, screenshots).pathname, fullPage });
 
-const inboxUrl = process.env.MAIL_INBOX_URL ?? 'http://127.0.0.1:1090';
 const run = `${Date.now().toString(36)}${Math.floor(Math.random() * 1e4)}`;
 const person = { displayName: 'Rowan Avery', email: `rowan-fit-${run}@harrow-lane.example`, password: 'journey password 2026' };
 
-async function waitForMail(to, subject, timeoutMs = 20_000) {
-  const deadline = Date.now() + timeoutMs;
-  while (Date.now() < deadline) {
-    const messages = await (await fetch(`${inboxUrl}/email`)).json();
-    const found = messages.filter((message) => message.to.some((r) => r.address.toLowerCase() === to) && subject.test(message.subject));
-    if (found.length) return found[found.length - 1];
-    await new Promise((resolve) => setTimeout(resolve, 200));
-  }
-  throw new Error(`no mail to ${to} matching ${subject}`);
-}
-
 /** Account and workshop through the API (the accounts journey covers those screens); the rest is done on screen. */
 async function signUpAndCreateWorkshop(context) {
-  const api = context.request;
-  await api.get(`${baseUrl}/api/auth/me`);
-  const csrf = () => context.cookies(baseUrl).then((cookies) => cookies.find((cookie) => cookie.name === 'fw_csrf')?.value);
-  const post = async (path, data) => {
-    const response = await api.post(`${baseUrl}/api${path}`, { data, headers: { 'X-CSRF-Token': await csrf() } });
-    assert.ok(response.ok(), `${path}: ${response.status()} ${await response.text()}`);
-    return response.json();
-  };
-  await post('/auth/register', person);
-  const mail = await waitForMail(person.email, /Confirm your e-mail/);
-  const token = new URL(mail.text.match(/https?:\/\/\S+verify-email\S*/)[0]).searchParams.get('token');
-  await post('/auth/verify-email', { token });
-  await post('/auth/login', { email: person.email, password: person.password });
-  const workshop = await post('/workshops', { name: `Harrow Lane Garage ${run}`, slug: `harrow-fit-${run}` });
+  const api = await signUpThroughApi(context, person);
+  const workshop = await api.post('/workshops', { name: `Harrow Lane Garage ${run}`, slug: `harrow-fit-${run}` });
   return workshop.id;
 }
 
-// Mantine's Select and SegmentedControl, driven as a person would: open and pick; click the segment's label.
-async function choose(scope, label, option) {
-  await field(scope, label).click();
-  await scope.page().getByRole('option', { name: option, exact: true }).click();
-}
-function field(scope, label) {
-  return scope.getByRole('textbox', { name: label, exact: true }).or(scope.getByRole('combobox', { name: label, exact: true })).first();
-}
+// Mantine's SegmentedControl, driven as a person would: click the segment's label.
 async function segment(scope, text) {
   const exactly = new RegExp(`^${text.replace(/[()]/g, '\\$&')}$`);
   await scope.locator('label').filter({ hasText: exactly }).first().click();
@@ -334,6 +304,14 @@ test('the assembly page survives a reload with its checklist', async () => {
   // On a phone the cards fit the screen; a diagram keeps a readable size and scrolls sideways inside its card.
   await page.setViewportSize({ width: 390, height: 844 });
   await page.getByTestId('tolerance-zone-diagram').waitFor();
+  // The layout settles a moment after the resize (fonts, wrapping): wait up to five seconds for it, then judge.
+  await page
+    .waitForFunction(
+      () => [...document.querySelectorAll('[data-testid="check-card"]')].every((card) => card.scrollWidth <= card.clientWidth + 1),
+      null,
+      { timeout: 5000 },
+    )
+    .catch(() => {});
   const cardsOverflow = await page
     .getByTestId('check-card')
     .evaluateAll((cards) => cards.filter((card) => card.scrollWidth > card.clientWidth + 1).length);

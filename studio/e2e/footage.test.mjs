@@ -8,12 +8,12 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { after, before, test } from 'node:test';
 import { baseUrl, launchBrowser } from './browser.mjs';
+import { signUpThroughApi } from './support.mjs';
 
 const screenshots = new URL('./screenshots/', import.meta.url);
 mkdirSync(screenshots, { recursive: true });
 const shot = (page, name) => page.screenshot({ path: new URL(`footage-${name}.png`, screenshots).pathname, fullPage: true });
 
-const inboxUrl = process.env.MAIL_INBOX_URL ?? 'http://127.0.0.1:1090';
 const run = `${Date.now().toString(36)}${Math.floor(Math.random() * 1e4)}`;
 const person = { displayName: 'Rowan Avery', email: `rowan-footage-${run}@harrow-lane.example`, password: 'journey password 2026' };
 
@@ -46,34 +46,11 @@ function makeClip() {
   return file;
 }
 
-async function waitForMail(to, subject, timeoutMs = 20_000) {
-  const deadline = Date.now() + timeoutMs;
-  while (Date.now() < deadline) {
-    const messages = await (await fetch(`${inboxUrl}/email`)).json();
-    const found = messages.filter((message) => message.to.some((r) => r.address.toLowerCase() === to) && subject.test(message.subject));
-    if (found.length) return found[found.length - 1];
-    await new Promise((resolve) => setTimeout(resolve, 200));
-  }
-  throw new Error(`no mail to ${to} matching ${subject}`);
-}
-
 /** Sets up through the API, as the accounts journey already covers the screens: account, workshop, build. */
 async function setUp(context) {
-  const api = context.request;
-  await api.get(`${baseUrl}/api/auth/me`);
-  const csrf = () => context.cookies(baseUrl).then((cookies) => cookies.find((cookie) => cookie.name === 'fw_csrf')?.value);
-  const post = async (path, data) => {
-    const response = await api.post(`${baseUrl}/api${path}`, { data, headers: { 'X-CSRF-Token': await csrf() } });
-    assert.ok(response.ok(), `${path}: ${response.status()} ${await response.text()}`);
-    return response.json();
-  };
-  await post('/auth/register', person);
-  const mail = await waitForMail(person.email, /Confirm your e-mail/);
-  const token = new URL(mail.text.match(/https?:\/\/\S+verify-email\S*/)[0]).searchParams.get('token');
-  await post('/auth/verify-email', { token });
-  await post('/auth/login', { email: person.email, password: person.password });
-  const workshop = await post('/workshops', { name: `Harrow Lane Garage ${run}`, slug: `harrow-footage-${run}` });
-  const build = await post(`/workshops/${workshop.id}/builds`, { title: 'Motor-to-gearbox coupler', vehicle: '1980s compact pickup, electric conversion' });
+  const api = await signUpThroughApi(context, person);
+  const workshop = await api.post('/workshops', { name: `Harrow Lane Garage ${run}`, slug: `harrow-footage-${run}` });
+  const build = await api.post(`/workshops/${workshop.id}/builds`, { title: 'Motor-to-gearbox coupler', vehicle: '1980s compact pickup, electric conversion' });
   return { workshopId: workshop.id, buildId: build.id };
 }
 

@@ -8,12 +8,12 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { after, before, test } from 'node:test';
 import { baseUrl, launchBrowser } from './browser.mjs';
+import { choose, signUpThroughApi } from './support.mjs';
 
 const screenshots = new URL('./screenshots/', import.meta.url);
 mkdirSync(screenshots, { recursive: true });
 const shot = (page, name) => page.screenshot({ path: new URL(`marks-${name}.png`, screenshots).pathname, fullPage: true });
 
-const inboxUrl = process.env.MAIL_INBOX_URL ?? 'http://127.0.0.1:1090';
 const run = `${Date.now().toString(36)}${Math.floor(Math.random() * 1e4)}`;
 const person = { displayName: 'Morgan Tell', email: `morgan-marks-${run}@harrow-lane.example`, password: 'journey password 2026' };
 
@@ -41,23 +41,6 @@ function makeClip() {
   return file;
 }
 
-async function waitForMail(to, subject, timeoutMs = 20_000) {
-  const deadline = Date.now() + timeoutMs;
-  while (Date.now() < deadline) {
-    const messages = await (await fetch(`${inboxUrl}/email`)).json();
-    const found = messages.filter((message) => message.to.some((r) => r.address.toLowerCase() === to) && subject.test(message.subject));
-    if (found.length) return found[found.length - 1];
-    await new Promise((resolve) => setTimeout(resolve, 200));
-  }
-  throw new Error(`no mail to ${to} matching ${subject}`);
-}
-
-// Mantine's Select, driven as a person would: open it and pick the option.
-async function choose(scope, label, option) {
-  await scope.getByRole('textbox', { name: label, exact: true }).or(scope.getByRole('combobox', { name: label, exact: true })).first().click();
-  await scope.page().getByRole('option', { name: option, exact: true }).click();
-}
-
 let browser;
 let context;
 let page;
@@ -65,28 +48,12 @@ let clip;
 let api;
 const ids = {};
 
-/** The API through the browser context's cookies (the CSRF header echoed), for set-up and checks. */
-function apiClient() {
-  const csrf = () => context.cookies(baseUrl).then((cookies) => cookies.find((cookie) => cookie.name === 'fw_csrf')?.value);
-  const send = (method) => async (path, data) => {
-    const response = await context.request.fetch(`${baseUrl}/api${path}`, { method, data, headers: { 'X-CSRF-Token': (await csrf()) ?? '' } });
-    assert.ok(response.ok(), `${method} ${path}: ${response.status()} ${await response.text()}`);
-    return response.status() === 204 ? null : response.json();
-  };
-  return { get: send('GET'), post: send('POST'), put: send('PUT') };
-}
-
 before(async () => {
   clip = makeClip();
   browser = await launchBrowser();
   context = await browser.newContext({ viewport: { width: 1280, height: 1000 } });
   page = await context.newPage();
-  api = apiClient();
-  await context.request.get(`${baseUrl}/api/auth/me`);
-  await api.post('/auth/register', person);
-  const mail = await waitForMail(person.email, /Confirm your e-mail/);
-  await api.post('/auth/verify-email', { token: new URL(mail.text.match(/https?:\/\/\S+verify-email\S*/)[0]).searchParams.get('token') });
-  await api.post('/auth/login', { email: person.email, password: person.password });
+  api = await signUpThroughApi(context, person);
   ids.workshopId = (await api.post('/workshops', { name: `Harrow Lane Garage ${run}`, slug: `harrow-marks-${run}` })).id;
   ids.buildId = (await api.post(`/workshops/${ids.workshopId}/builds`, { title: 'Adapter plate fit' })).id;
   const plate = await api.post(`/workshops/${ids.workshopId}/parts`, {

@@ -1,0 +1,59 @@
+// What the browser journeys share: the mail fake's inbox, the API through a browser context, and
+// an account (with its workshop) made through the API where a journey is not about those screens.
+import assert from 'node:assert/strict';
+import { baseUrl } from './browser.mjs';
+
+export const inboxUrl = process.env.MAIL_INBOX_URL ?? 'http://127.0.0.1:1090';
+
+const addressedTo = (message, to) => message.to.some((recipient) => recipient.address.toLowerCase() === to);
+
+/** The ids of the messages `to` already has (to wait for a newer one). */
+export async function mailIds(to) {
+  const messages = await (await fetch(`${inboxUrl}/email`)).json();
+  return new Set(messages.filter((message) => addressedTo(message, to)).map((message) => message.id));
+}
+
+/** The newest message to `to` whose subject matches, read through the mail fake's REST API. */
+export async function waitForMail(to, subject, timeoutMs = 20_000, excluding = new Set()) {
+  const deadline = Date.now() + timeoutMs;
+  while (Date.now() < deadline) {
+    const messages = await (await fetch(`${inboxUrl}/email`)).json();
+    const found = messages.filter((message) => !excluding.has(message.id) && addressedTo(message, to) && subject.test(message.subject));
+    if (found.length) return found[found.length - 1];
+    await new Promise((resolve) => setTimeout(resolve, 200));
+  }
+  throw new Error(`no mail to ${to} matching ${subject}`);
+}
+
+/** The API through a browser context: its cookies, with the CSRF token echoed as the studio does. */
+export function apiClient(context) {
+  const csrf = () => context.cookies(baseUrl).then((cookies) => cookies.find((cookie) => cookie.name === 'fw_csrf')?.value);
+  const send = (method) => async (path, data) => {
+    const response = await context.request.fetch(`${baseUrl}/api${path}`, { method, data, headers: { 'X-CSRF-Token': (await csrf()) ?? '' } });
+    assert.ok(response.ok(), `${method} ${path}: ${response.status()} ${await response.text()}`);
+    return response.status() === 204 ? null : response.json();
+  };
+  return { get: send('GET'), post: send('POST'), put: send('PUT'), patch: send('PATCH'), delete: send('DELETE') };
+}
+
+/** Registers `person`, follows the e-mailed confirmation link and signs in, all through the API. */
+export async function signUpThroughApi(context, person) {
+  const api = apiClient(context);
+  await context.request.get(`${baseUrl}/api/auth/me`);
+  await api.post('/auth/register', person);
+  const mail = await waitForMail(person.email, /Confirm your e-mail/);
+  const token = new URL(mail.text.match(/https?:\/\/\S+verify-email\S*/)[0]).searchParams.get('token');
+  await api.post('/auth/verify-email', { token });
+  await api.post('/auth/login', { email: person.email, password: person.password });
+  return api;
+}
+
+/** Mantine's Select (a textbox or combobox by its label), driven as a person would: open it and pick. */
+export function field(scope, label) {
+  return scope.getByRole('textbox', { name: label, exact: true }).or(scope.getByRole('combobox', { name: label, exact: true })).first();
+}
+
+export async function choose(scope, label, option) {
+  await field(scope, label).click();
+  await scope.page().getByRole('option', { name: option, exact: true }).click();
+}
