@@ -14,7 +14,7 @@ export class ToolsController {
 
   @Get('fits')
   fits(@Query() query: FitQueryDto) {
-    return this.tools.fit(query);
+    return this.tools.calculateFit(query);
   }
 
   @Post('measurements/extract')

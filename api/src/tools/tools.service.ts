@@ -5,7 +5,7 @@ import { ParseTranscriptDto } from './dto/text-input.dto';
 
 @Injectable()
 export class ToolsService {
-  fit(query: FitQueryDto) {
+  calculateFit(query: FitQueryDto) {
     const sizeMm = toNanometres(query.size, query.unit) / 1_000_000;
     return fitLimits({ sizeMm, hole: query.hole, shaft: query.shaft });
   }

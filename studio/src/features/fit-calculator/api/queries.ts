@@ -18,7 +18,7 @@ export interface FitAnswer {
 
 export const fitCalculatorQueries = {
   all: () => ['fit-calculator'] as const,
-  fit: (query: FitQuery) =>
+  limits: (query: FitQuery) =>
     queryOptions({
       queryKey: [...fitCalculatorQueries.all(), query] as const,
       queryFn: ({ signal }) => apiRequest<FitAnswer>('/tools/fits', { signal, query: { ...query } }),

@@ -47,7 +47,7 @@ export function FitCalculator() {
   const [values, setValues] = useState<FitQuery>(asked ?? { size: '25', unit: 'mm', hole: 'H7', shaft: 'g6' });
   const [localErrors, setLocalErrors] = useState<Partial<Record<keyof FitQuery, string>>>({});
   const [deviationUnit, setDeviationUnit] = useState<DeviationUnit>('um');
-  const answer = useQuery({ ...fitCalculatorQueries.fit(asked ?? values), enabled: asked !== null });
+  const answer = useQuery({ ...fitCalculatorQueries.limits(asked ?? values), enabled: asked !== null });
   const apiErrors = answer.isError ? splitApiErrors(answer.error, LABELS) : { fields: {}, general: [] };
   const errorOf = (field: keyof FitQuery) => localErrors[field] ?? (apiErrors.fields as Partial<Record<string, string>>)[field];
 
