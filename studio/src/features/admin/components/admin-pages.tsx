@@ -1,6 +1,6 @@
 import { Alert, Badge, Button, Group, Pagination, Skeleton, Stack, Table, Tabs, Text, TextInput, Title } from '@mantine/core';
 import { useDebouncedValue } from '@mantine/hooks';
-import { useQuery } from '@tanstack/react-query';
+import { useQuery, type UseQueryResult } from '@tanstack/react-query';
 import { useState, type ReactNode } from 'react';
 import { useLocation, useNavigate } from 'react-router-dom';
 import { paths } from '@/config/paths';
@@ -56,6 +56,70 @@ function Paging({ total, pageSize, page, onChange }: { total: number; pageSize: 
   );
 }
 
+function StatusBadge({ disabled }: { disabled: boolean }) {
+  return disabled ? (
+    <Badge size="sm" color="red">
+      disabled
+    </Badge>
+  ) : (
+    <Badge size="sm" color="gray" variant="light">
+      active
+    </Badge>
+  );
+}
+
+function ToggleDisabledButton({ disabled, onClick }: { disabled: boolean; onClick: () => void }) {
+  return (
+    <Button size="compact-xs" variant="subtle" color={disabled ? 'patina' : 'red'} onClick={onClick}>
+      {disabled ? 'Enable' : 'Disable'}
+    </Button>
+  );
+}
+
+interface AdminListProps<T> {
+  label: string;
+  placeholder: string;
+  search: ReturnType<typeof useSearch>;
+  result: UseQueryResult<{ items: T[]; total: number; pageSize: number }>;
+  headers: string[];
+  renderRow: (item: T) => ReactNode;
+}
+
+/** A searchable, paged table of users or workshops. */
+function AdminList<T>({ label, placeholder, search, result, headers, renderRow }: AdminListProps<T>) {
+  return (
+    <AdminFrame>
+      <TextInput
+        label={`Search ${label.toLowerCase()}`}
+        placeholder={placeholder}
+        value={search.search}
+        onChange={(event) => search.setSearch(event.currentTarget.value)}
+        maw={360}
+      />
+      {result.isPending && <Skeleton height={160} />}
+      {result.isError && <Alert color="red">{result.error.message}</Alert>}
+      {result.data && (
+        <>
+          <Table.ScrollContainer minWidth={640}>
+            <Table verticalSpacing="xs" aria-label={label} striped>
+              <Table.Thead>
+                <Table.Tr>
+                  {headers.map((header) => (
+                    <Table.Th key={header}>{header}</Table.Th>
+                  ))}
+                  <Table.Th />
+                </Table.Tr>
+              </Table.Thead>
+              <Table.Tbody>{result.data.items.map(renderRow)}</Table.Tbody>
+            </Table>
+          </Table.ScrollContainer>
+          <Paging total={result.data.total} pageSize={result.data.pageSize} page={search.page} onChange={search.setPage} />
+        </>
+      )}
+    </AdminFrame>
+  );
+}
+
 export function AdminUsersPage() {
   const { user: me } = useSession();
   const search = useSearch();
@@ -68,84 +132,46 @@ export function AdminUsersPage() {
   };
 
   return (
-    <AdminFrame>
-      <TextInput
-        label="Search users"
-        placeholder="Name or e-mail address"
-        value={search.search}
-        onChange={(event) => search.setSearch(event.currentTarget.value)}
-        maw={360}
-      />
-      {users.isPending && <Skeleton height={160} />}
-      {users.isError && <Alert color="red">{users.error.message}</Alert>}
-      {users.data && (
-        <>
-          <Table.ScrollContainer minWidth={640}>
-            <Table verticalSpacing="xs" aria-label="Users" striped>
-              <Table.Thead>
-                <Table.Tr>
-                  <Table.Th>User</Table.Th>
-                  <Table.Th>Status</Table.Th>
-                  <Table.Th>Joined</Table.Th>
-                  <Table.Th />
-                </Table.Tr>
-              </Table.Thead>
-              <Table.Tbody>
-                {users.data.items.map((user) => (
-                  <Table.Tr key={user.id}>
-                    <Table.Td>
-                      <Text size="sm" fw={500}>
-                        {user.displayName}
-                      </Text>
-                      <Text size="xs" c="dimmed">
-                        {user.email}
-                      </Text>
-                    </Table.Td>
-                    <Table.Td>
-                      <Group gap={4}>
-                        {user.isAdmin && <Badge size="sm">admin</Badge>}
-                        {!user.emailVerified && (
-                          <Badge size="sm" color="yellow" variant="light">
-                            unconfirmed
-                          </Badge>
-                        )}
-                        {user.disabled ? (
-                          <Badge size="sm" color="red">
-                            disabled
-                          </Badge>
-                        ) : (
-                          <Badge size="sm" color="gray" variant="light">
-                            active
-                          </Badge>
-                        )}
-                      </Group>
-                    </Table.Td>
-                    <Table.Td>
-                      <Text size="sm">{dateFormat.format(new Date(user.createdAt))}</Text>
-                    </Table.Td>
-                    <Table.Td>
-                      <Group justify="flex-end">
-                        {user.id !== me?.id && (
-                          <Button
-                            size="compact-xs"
-                            variant="subtle"
-                            color={user.disabled ? 'patina' : 'red'}
-                            onClick={() => handleToggle(user.id, user.displayName, !user.disabled)}
-                          >
-                            {user.disabled ? 'Enable' : 'Disable'}
-                          </Button>
-                        )}
-                      </Group>
-                    </Table.Td>
-                  </Table.Tr>
-                ))}
-              </Table.Tbody>
-            </Table>
-          </Table.ScrollContainer>
-          <Paging total={users.data.total} pageSize={users.data.pageSize} page={search.page} onChange={search.setPage} />
-        </>
+    <AdminList
+      label="Users"
+      placeholder="Name or e-mail address"
+      search={search}
+      result={users}
+      headers={['User', 'Status', 'Joined']}
+      renderRow={(user) => (
+        <Table.Tr key={user.id}>
+          <Table.Td>
+            <Text size="sm" fw={500}>
+              {user.displayName}
+            </Text>
+            <Text size="xs" c="dimmed">
+              {user.email}
+            </Text>
+          </Table.Td>
+          <Table.Td>
+            <Group gap={4}>
+              {user.isAdmin && <Badge size="sm">admin</Badge>}
+              {!user.emailVerified && (
+                <Badge size="sm" color="yellow" variant="light">
+                  unconfirmed
+                </Badge>
+              )}
+              <StatusBadge disabled={user.disabled} />
+            </Group>
+          </Table.Td>
+          <Table.Td>
+            <Text size="sm">{dateFormat.format(new Date(user.createdAt))}</Text>
+          </Table.Td>
+          <Table.Td>
+            <Group justify="flex-end">
+              {user.id !== me?.id && (
+                <ToggleDisabledButton disabled={user.disabled} onClick={() => handleToggle(user.id, user.displayName, !user.disabled)} />
+              )}
+            </Group>
+          </Table.Td>
+        </Table.Tr>
       )}
-    </AdminFrame>
+    />
   );
 }
 
@@ -160,75 +186,39 @@ export function AdminWorkshopsPage() {
   };
 
   return (
-    <AdminFrame>
-      <TextInput
-        label="Search workshops"
-        placeholder="Name or web address"
-        value={search.search}
-        onChange={(event) => search.setSearch(event.currentTarget.value)}
-        maw={360}
-      />
-      {workshops.isPending && <Skeleton height={160} />}
-      {workshops.isError && <Alert color="red">{workshops.error.message}</Alert>}
-      {workshops.data && (
-        <>
-          <Table.ScrollContainer minWidth={640}>
-            <Table verticalSpacing="xs" aria-label="Workshops" striped>
-              <Table.Thead>
-                <Table.Tr>
-                  <Table.Th>Workshop</Table.Th>
-                  <Table.Th>Owners</Table.Th>
-                  <Table.Th>Members</Table.Th>
-                  <Table.Th>Status</Table.Th>
-                  <Table.Th />
-                </Table.Tr>
-              </Table.Thead>
-              <Table.Tbody>
-                {workshops.data.items.map((workshop) => (
-                  <Table.Tr key={workshop.id}>
-                    <Table.Td>
-                      <Text size="sm" fw={500}>
-                        {workshop.name}
-                      </Text>
-                      <Text size="xs" c="dimmed">
-                        /{workshop.slug}
-                      </Text>
-                    </Table.Td>
-                    <Table.Td>
-                      <Text size="xs">{workshop.owners.join(', ')}</Text>
-                    </Table.Td>
-                    <Table.Td>{workshop.memberCount}</Table.Td>
-                    <Table.Td>
-                      {workshop.disabled ? (
-                        <Badge size="sm" color="red">
-                          disabled
-                        </Badge>
-                      ) : (
-                        <Badge size="sm" color="gray" variant="light">
-                          active
-                        </Badge>
-                      )}
-                    </Table.Td>
-                    <Table.Td>
-                      <Group justify="flex-end">
-                        <Button
-                          size="compact-xs"
-                          variant="subtle"
-                          color={workshop.disabled ? 'patina' : 'red'}
-                          onClick={() => handleToggle(workshop.id, workshop.name, !workshop.disabled)}
-                        >
-                          {workshop.disabled ? 'Enable' : 'Disable'}
-                        </Button>
-                      </Group>
-                    </Table.Td>
-                  </Table.Tr>
-                ))}
-              </Table.Tbody>
-            </Table>
-          </Table.ScrollContainer>
-          <Paging total={workshops.data.total} pageSize={workshops.data.pageSize} page={search.page} onChange={search.setPage} />
-        </>
+    <AdminList
+      label="Workshops"
+      placeholder="Name or web address"
+      search={search}
+      result={workshops}
+      headers={['Workshop', 'Owners', 'Members', 'Status']}
+      renderRow={(workshop) => (
+        <Table.Tr key={workshop.id}>
+          <Table.Td>
+            <Text size="sm" fw={500}>
+              {workshop.name}
+            </Text>
+            <Text size="xs" c="dimmed">
+              /{workshop.slug}
+            </Text>
+          </Table.Td>
+          <Table.Td>
+            <Text size="xs">{workshop.owners.join(', ')}</Text>
+          </Table.Td>
+          <Table.Td>{workshop.memberCount}</Table.Td>
+          <Table.Td>
+            <StatusBadge disabled={workshop.disabled} />
+          </Table.Td>
+          <Table.Td>
+            <Group justify="flex-end">
+              <ToggleDisabledButton
+                disabled={workshop.disabled}
+                onClick={() => handleToggle(workshop.id, workshop.name, !workshop.disabled)}
+              />
+            </Group>
+          </Table.Td>
+        </Table.Tr>
       )}
-    </AdminFrame>
+    />
   );
 }
