@@ -1,5 +1,8 @@
+import { getQueueToken } from '@nestjs/bull';
 import { NestExpressApplication } from '@nestjs/platform-express';
+import type { Queue } from 'bull';
 import request from 'supertest';
+import { QUEUES } from '../src/infra/jobs/queues';
 import { createTestApp } from './create-test-app';
 
 describe('GET /api/health (real MariaDB, Redis, S3 fake, mail fake)', () => {
@@ -27,6 +30,18 @@ describe('GET /api/health (real MariaDB, Redis, S3 fake, mail fake)', () => {
       status: 'down',
       checks: { database: 'up', storage: 'up', mail: 'down', queue: 'up' },
     });
+  });
+
+  it('closes cleanly straight after start-up: every queue worker is running once init() returns', async () => {
+    // A worker still connecting when its queue closes rejects a promise nobody awaits; Jest fails on that.
+    for (let round = 0; round < 3; round++) {
+      app = await createTestApp();
+      for (const name of Object.values(QUEUES)) {
+        const queue = app.get<Queue>(getQueueToken(name), { strict: false });
+        expect({ name, worker: queue.bclient.status }).toEqual({ name, worker: 'ready' });
+      }
+      await app.close();
+    }
   });
 
   it('reports storage down when the bucket does not exist', async () => {

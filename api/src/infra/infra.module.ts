@@ -2,6 +2,7 @@ import { BullModule } from '@nestjs/bull';
 import { Global, Module } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { AppConfig } from '../config/app-config';
+import { QueueWorkersLifecycle } from './jobs/queue-workers.lifecycle';
 import { QUEUES } from './jobs/queues';
 import { MailQueueService } from './mail/mail-queue.service';
 import { MailProcessor } from './mail/mail.processor';
@@ -31,7 +32,7 @@ import { StorageService } from './storage/storage.service';
     }),
     BullModule.registerQueue({ name: QUEUES.mail }, { name: QUEUES.media }, { name: QUEUES.marks }),
   ],
-  providers: [StorageService, MailService, MailQueueService, MailProcessor, MediaToolsService],
+  providers: [StorageService, MailService, MailQueueService, MailProcessor, MediaToolsService, QueueWorkersLifecycle],
   exports: [StorageService, MailService, MailQueueService, BullModule, MediaToolsService],
 })
 export class InfraModule {}
