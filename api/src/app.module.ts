@@ -15,6 +15,7 @@ import { AssembliesModule } from './assemblies/assemblies.module';
 import { BuildsModule } from './builds/builds.module';
 import { FitChecksModule } from './fit-checks/fit-checks.module';
 import { FootageModule } from './footage/footage.module';
+import { GuidesModule } from './guides/guides.module';
 import { MarksModule } from './marks/marks.module';
 import { MeasurementsModule } from './measurements/measurements.module';
 import { PartsModule } from './parts/parts.module';
@@ -48,6 +49,7 @@ import { TranscriptsModule } from './transcripts/transcripts.module';
     FootageModule,
     TranscriptsModule,
     MarksModule,
+    GuidesModule,
   ],
 })
 export class AppModule implements NestModule {

@@ -37,7 +37,8 @@ describe('GET /api/health (real MariaDB, Redis, S3 fake, mail fake)', () => {
     for (let round = 0; round < 3; round++) {
       app = await createTestApp();
       for (const name of Object.values(QUEUES)) {
-        const queue = app.get<Queue>(getQueueToken(name), { strict: false });
+        // bclient is the worker's blocking connection (not in Bull's typings).
+        const queue = app.get<Queue>(getQueueToken(name), { strict: false }) as Queue & { bclient: { status: string } };
         expect({ name, worker: queue.bclient.status }).toEqual({ name, worker: 'ready' });
       }
       await app.close();

@@ -14,5 +14,6 @@ import { Assembly } from './entities/assembly.entity';
   imports: [TypeOrmModule.forFeature([Assembly, AssemblyPart, AssemblyInterface, PartFeature]), BuildsModule, PartsModule, FitChecksModule],
   controllers: [AssembliesController],
   providers: [AssembliesService],
+  exports: [AssembliesService],
 })
 export class AssembliesModule {}

@@ -35,14 +35,11 @@ import type {
 } from './dto/auth.dto';
 import { hashPassword, spendPasswordCheck, verifyPassword } from './password-hasher';
 import { SessionService } from './session.service';
+import { isDuplicateKey } from '../common/database/errors';
 
 /** One sentence for every failed sign-in, so the answer never tells whether an account exists. */
 export const LOGIN_FAILED = 'The e-mail address or password is incorrect.';
 const LINK_INVALID = 'This link is invalid, already used or expired. Ask for a new one.';
-
-function isDuplicateKey(error: unknown): boolean {
-  return typeof error === 'object' && error !== null && (error as { code?: unknown }).code === 'ER_DUP_ENTRY';
-}
 
 @Injectable()
 export class AuthService {

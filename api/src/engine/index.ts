@@ -20,3 +20,6 @@ export * from './transcript-formats';
 export * from './spoken-measurements';
 export * from './number-words';
 export * from './mark-suggestions';
+
+// ---- guides ----
+export * from './safety-topics';

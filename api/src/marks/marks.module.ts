@@ -2,6 +2,8 @@ import { Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { FitCheck } from '../fit-checks/entities/fit-check.entity';
 import { FootageModule } from '../footage/footage.module';
+import { GuideStep } from '../guides/entities/guide-step.entity';
+import { Guide } from '../guides/entities/guide.entity';
 import { Measurement } from '../measurements/entities/measurement.entity';
 import { MeasurementsModule } from '../measurements/measurements.module';
 import { Part } from '../parts/entities/part.entity';
@@ -15,7 +17,7 @@ import { MarksService } from './marks.service';
 import { TranscriptAttachedListener } from './transcript-attached.listener';
 
 @Module({
-  imports: [TypeOrmModule.forFeature([Mark, MarkSuggestion, Part, Measurement, FitCheck]), FootageModule, PartsModule, MeasurementsModule],
+  imports: [TypeOrmModule.forFeature([Mark, MarkSuggestion, Part, Measurement, FitCheck, Guide, GuideStep]), FootageModule, PartsModule, MeasurementsModule],
   controllers: [MarksController],
   providers: [MarksService, MarkSuggestionsMiner, MarksProcessor, TranscriptAttachedListener],
   exports: [MarksService],

@@ -10,6 +10,8 @@ import { CreateMarkDto, MarkLinksDto, UpdateMarkDto, AcceptSuggestionDto } from 
 import { Mark, MarkKind } from './entities/mark.entity';
 import { MarkSuggestion, SuggestionStatus } from './entities/mark-suggestion.entity';
 import { resolutionOfDigits } from './spoken-reading';
+import { GuideStep } from '../guides/entities/guide-step.entity';
+import { Guide } from '../guides/entities/guide.entity';
 
 type LinkField = keyof Required<MarkLinksDto>;
 
@@ -31,6 +33,8 @@ export class MarksService {
     @InjectRepository(Part) private readonly parts: Repository<Part>,
     @InjectRepository(Measurement) private readonly measurementRows: Repository<Measurement>,
     @InjectRepository(FitCheck) private readonly fitChecks: Repository<FitCheck>,
+    @InjectRepository(GuideStep) private readonly guideSteps: Repository<GuideStep>,
+    @InjectRepository(Guide) private readonly guides: Repository<Guide>,
     @Inject(FootageService) private readonly footage: FootageService,
     @Inject(MeasurementsService) private readonly measurements: MeasurementsService,
   ) {}
@@ -201,6 +205,10 @@ export class MarksService {
     }
     if (mark.fitCheckId && !(await this.fitChecks.existsBy({ id: mark.fitCheckId, workshopId }))) {
       throw new NotFoundException('Fit check not found');
+    }
+    if (mark.guideStepId) {
+      const step = await this.guideSteps.findOneBy({ id: mark.guideStepId });
+      if (!step || !(await this.guides.existsBy({ id: step.guideId, workshopId }))) throw new NotFoundException('Guide step not found');
     }
   }
 }

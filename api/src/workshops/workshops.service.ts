@@ -20,12 +20,9 @@ import { requireImage, type UploadedFileLike } from '../common/uploads/image-fil
 /** Logos are small: a header image, not a photo. */
 export const LOGO_MAX_BYTES = 2 * 1024 * 1024;
 import { toWorkshopView } from './workshops.mapper';
+import { isDuplicateKey } from '../common/database/errors';
 
 const SLUG_TAKEN = 'That web address is taken; choose another';
-
-function isDuplicateKey(error: unknown): boolean {
-  return typeof error === 'object' && error !== null && (error as { code?: unknown }).code === 'ER_DUP_ENTRY';
-}
 
 @Injectable()
 export class WorkshopsService {

@@ -4,6 +4,7 @@ import { FitData1764700000000 } from './1764700000000-fit-data';
 import { Footage1764840000000 } from './1764840000000-footage';
 import { Marks1764900000000 } from './1764900000000-marks';
 import { MarkEvidence1764900000001 } from './1764900000001-mark-evidence';
+import { Guides1765000000000 } from './1765000000000-guides';
 
 /** Every migration, oldest first. Listed explicitly so the same list works from src (tests) and dist. */
 // eslint-disable-next-line @typescript-eslint/no-unsafe-function-type
@@ -13,4 +14,5 @@ export const migrations: MixedList<Function> = [
   Footage1764840000000,
   Marks1764900000000,
   MarkEvidence1764900000001,
+  Guides1765000000000,
 ];

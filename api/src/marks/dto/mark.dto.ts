@@ -25,7 +25,7 @@ export class MarkLinksDto {
   @IsUUID()
   fitCheckId?: string | null;
 
-  @ApiPropertyOptional({ nullable: true, description: 'For kind `step` (guides come later; stored as given)' })
+  @ApiPropertyOptional({ nullable: true, description: 'For kind `step`: a step of one of the workshop’s guides' })
   @IsOptional()
   @ValidateIf((_, value) => value !== null)
   @IsUUID()

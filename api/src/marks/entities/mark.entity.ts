@@ -38,7 +38,6 @@ export class Mark {
   @Column({ name: 'fit_check_id', type: 'char', length: 36, nullable: true })
   fitCheckId!: string | null;
 
-  /** Guides come later; kept without a foreign key until their table exists. */
   @Column({ name: 'guide_step_id', type: 'char', length: 36, nullable: true })
   guideStepId!: string | null;
 

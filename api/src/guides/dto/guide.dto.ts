@@ -1,0 +1,175 @@
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import { Type } from 'class-transformer';
+import {
+  ArrayMaxSize,
+  ArrayUnique,
+  IsArray,
+  IsIn,
+  IsInt,
+  IsOptional,
+  IsString,
+  IsUUID,
+  Length,
+  MaxLength,
+  Min,
+  ValidateIf,
+  ValidateNested,
+} from 'class-validator';
+import { CAUTION_LEVELS, SAFETY_TOPICS, type CautionLevel, type SafetyTopic } from '../../engine/safety-topics';
+
+/** Rich text arrives as Tiptap HTML; the server keeps only the allowed tags (see rich-text.ts). */
+const RICH_TEXT_MAX = 100_000;
+const LIST_ITEM_MAX = 120;
+const LIST_MAX = 50;
+
+export class GuideFieldsDto {
+  @ApiPropertyOptional({ example: '<p>How the 21-tooth coupler stack goes together.</p>', description: 'HTML (sanitised)' })
+  @IsOptional()
+  @IsString()
+  @MaxLength(RICH_TEXT_MAX)
+  summary?: string;
+
+  @ApiPropertyOptional({ nullable: true, description: 'The footage viewers follow (a footage of the same build)' })
+  @IsOptional()
+  @ValidateIf((_, value) => value !== null)
+  @IsUUID()
+  footageId?: string | null;
+
+  @ApiPropertyOptional({ nullable: true, description: 'Its checklist and parts go in the guide (an assembly of the same build)' })
+  @IsOptional()
+  @ValidateIf((_, value) => value !== null)
+  @IsUUID()
+  assemblyId?: string | null;
+
+  @ApiPropertyOptional({ enum: SAFETY_TOPICS, isArray: true })
+  @IsOptional()
+  @IsArray()
+  @ArrayUnique()
+  @IsIn(SAFETY_TOPICS, { each: true })
+  safetyTopics?: SafetyTopic[];
+
+  @ApiPropertyOptional({ type: [String], example: ['Torque wrench, 20–100 N·m', 'Outside micrometer 25–50 mm'] })
+  @IsOptional()
+  @IsArray()
+  @ArrayMaxSize(LIST_MAX)
+  @IsString({ each: true })
+  @Length(1, LIST_ITEM_MAX, { each: true })
+  tools?: string[];
+
+  @ApiPropertyOptional({ type: [String], example: ['Anti-seize compound', 'Medium-strength thread locker'] })
+  @IsOptional()
+  @IsArray()
+  @ArrayMaxSize(LIST_MAX)
+  @IsString({ each: true })
+  @Length(1, LIST_ITEM_MAX, { each: true })
+  consumables?: string[];
+}
+
+export class CreateGuideDto extends GuideFieldsDto {
+  @ApiProperty({ example: 'Fitting the 21-tooth coupler stack' })
+  @IsString()
+  @Length(1, 200)
+  title!: string;
+}
+
+export class UpdateGuideDto extends GuideFieldsDto {
+  @ApiPropertyOptional()
+  @IsOptional()
+  @IsString()
+  @Length(1, 200)
+  title?: string;
+}
+
+export class StepCautionDto {
+  @ApiProperty({ enum: CAUTION_LEVELS, description: 'ANSI Z535 signal word' })
+  @IsIn(CAUTION_LEVELS)
+  level!: CautionLevel;
+
+  @ApiProperty({ example: 'Support the truck on stands before going underneath.' })
+  @IsString()
+  @Length(1, 1000)
+  text!: string;
+}
+
+export class StepFieldsDto {
+  @ApiPropertyOptional({ description: 'HTML (sanitised)' })
+  @IsOptional()
+  @IsString()
+  @MaxLength(RICH_TEXT_MAX)
+  body?: string;
+
+  @ApiPropertyOptional({ nullable: true, description: 'A footage of the guide’s build; defaults to the guide’s footage when a time is given' })
+  @IsOptional()
+  @ValidateIf((_, value) => value !== null)
+  @IsUUID()
+  footageId?: string | null;
+
+  @ApiPropertyOptional({ nullable: true, example: 42_000, description: 'The step’s moment in the footage, ms' })
+  @IsOptional()
+  @ValidateIf((_, value) => value !== null)
+  @Type(() => Number)
+  @IsInt()
+  @Min(0)
+  startMs?: number | null;
+
+  @ApiPropertyOptional({ nullable: true, description: 'End of the step’s span, ms (after startMs)' })
+  @IsOptional()
+  @ValidateIf((_, value) => value !== null)
+  @Type(() => Number)
+  @IsInt()
+  @Min(0)
+  endMs?: number | null;
+
+  @ApiPropertyOptional({ type: StepCautionDto, nullable: true })
+  @IsOptional()
+  @ValidateIf((_, value) => value !== null)
+  @ValidateNested()
+  @Type(() => StepCautionDto)
+  caution?: StepCautionDto | null;
+}
+
+export class CreateStepDto extends StepFieldsDto {
+  @ApiProperty({ example: 'Seat the coupler on the motor shaft' })
+  @IsString()
+  @Length(1, 200)
+  title!: string;
+}
+
+export class UpdateStepDto extends StepFieldsDto {
+  @ApiPropertyOptional()
+  @IsOptional()
+  @IsString()
+  @Length(1, 200)
+  title?: string;
+}
+
+export class ReorderStepsDto {
+  @ApiProperty({ type: [String], description: 'Every step of the guide exactly once, in the new order' })
+  @IsArray()
+  @ArrayUnique()
+  @IsUUID('all', { each: true })
+  stepIds!: string[];
+}
+
+export class PublishRevisionDto {
+  @ApiPropertyOptional({ example: 'Added the runout reading to step 3.' })
+  @IsOptional()
+  @IsString()
+  @MaxLength(500)
+  note?: string;
+}
+
+export class GuideStepsQueryDto {
+  @ApiPropertyOptional({ description: 'Only steps anchored in this footage' })
+  @IsOptional()
+  @IsUUID()
+  footageId?: string;
+}
+
+export class PublicGuidesQueryDto {
+  @ApiPropertyOptional({ description: 'Words of the title, build or workshop' })
+  @IsOptional()
+  @IsString()
+  @MaxLength(100)
+  q?: string;
+}
