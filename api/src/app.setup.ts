@@ -29,6 +29,9 @@ export function configureApp(app: NestExpressApplication): void {
           'connect-src': ["'self'", storageOrigin],
           'media-src': ["'self'", storageOrigin, 'blob:'],
           'img-src': ["'self'", 'data:', 'blob:', storageOrigin],
+          // Helmet's default upgrades http links to https; a plain-http storage (the local S3 fake) must stay http,
+          // or the redirects of the public guide media to it are blocked.
+          'upgrade-insecure-requests': storageOrigin.startsWith('http:') ? null : [],
         },
       },
     }),

@@ -135,7 +135,20 @@ describe('guides: writing, publishing and the public follow-along view (real Mar
       .post(`${base}/footage/${footageId}/marks`)
       .send({ kind: 'step', startMs: 6500, label: 'Coupler slides home', guideStepId: stepIds[0] })
       .expect(201);
-    await owner.agent.post(`${base}/footage/${footageId}/marks`).send({ kind: 'check_evidence', startMs: 8000, label: 'Fits on the truck', fitCheckId: checkId }).expect(201);
+    const evidenceMark = await owner.agent
+      .post(`${base}/footage/${footageId}/marks`)
+      .send({ kind: 'check_evidence', startMs: 8000, label: 'Fits on the truck', fitCheckId: checkId })
+      .expect(201);
+    // A check-evidence mark is the check's evidence at once; made into a note, it is not any more.
+    const evidenceOf = async () =>
+      (await owner.agent.get(`${base}/assemblies/${assemblyId}/checklist`).expect(200)).body.checks[0].evidence.map(
+        (item: { kind: string; markId: string }) => [item.kind, item.markId],
+      );
+    expect(await evidenceOf()).toEqual([['mark', evidenceMark.body.id]]);
+    await owner.agent.patch(`${base}/footage/${footageId}/marks/${evidenceMark.body.id}`).send({ kind: 'note' }).expect(200);
+    expect(await evidenceOf()).toEqual([]);
+    await owner.agent.patch(`${base}/footage/${footageId}/marks/${evidenceMark.body.id}`).send({ kind: 'check_evidence', fitCheckId: checkId }).expect(200);
+    expect(await evidenceOf()).toEqual([['mark', evidenceMark.body.id]]);
     const stranger = await owner.agent
       .post(`${base}/footage/${footageId}/marks`)
       .send({ kind: 'step', startMs: 100, guideStepId: '00000000-0000-4000-8000-000000000000' })
@@ -163,7 +176,11 @@ describe('guides: writing, publishing and the public follow-along view (real Mar
       guide: { title: 'Fitting the test coupler', buildTitle: 'Coupler install', vehicle: 'Test pickup', tools: ['Torque wrench'], safetyTopics: ['lifting'] },
       revision: { number: 1, note: 'First cut' },
       parts: [{ partNumber: 'GT-21', maker: 'Test Maker', position: 'input side' }],
-      checklist: { assemblyName: 'Test stack', verdict: 'open', checks: [{ title: 'Test-fitted on the vehicle', state: 'open', evidence: [] }] },
+      checklist: {
+        assemblyName: 'Test stack',
+        verdict: 'open',
+        checks: [{ title: 'Test-fitted on the vehicle', state: 'open', evidence: [{ kind: 'mark', label: 'Fits on the truck', startMs: 8000 }] }],
+      },
     });
     expect(view.body.cautions.map((caution: { topic: string; level: string }) => [caution.topic, caution.level])).toEqual([['lifting', 'WARNING']]);
     expect(view.body.disclaimer).toMatch(/manufacturer’s service information/);
@@ -195,6 +212,7 @@ describe('guides: writing, publishing and the public follow-along view (real Mar
   });
 
   it('shows the live checklist: a confirmation after publishing appears without a new revision', async () => {
+    // The check-evidence mark made earlier is already the check's evidence; attaching it again adds nothing.
     const markId = (await owner.agent.get(`${base}/footage/${footageId}/marks`).expect(200)).body.find(
       (mark: { kind: string }) => mark.kind === 'check_evidence',
     ).id;

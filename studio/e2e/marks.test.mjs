@@ -1,6 +1,7 @@
 // Marks journey: on a footage's player a creator pins a mark with the keyboard at a known moment and
 // links it to a part, then accepts a spoken measurement the transcript miner suggested and sees the
-// reading recorded at the cue's time.
+// reading recorded at the cue's time; pins a mark that evidences a fit check and follows its link;
+// and, pinned where another measurement is spoken, records that reading from the mark form itself.
 import assert from 'node:assert/strict';
 import { execFileSync } from 'node:child_process';
 import { mkdirSync, mkdtempSync, rmSync } from 'node:fs';
@@ -28,6 +29,9 @@ This is plate number HL-5520 from the kit.
 
 00:00:06.000 --> 00:00:09.000
 The spigot bore measures fifteen thousandths over.
+
+00:00:09.500 --> 00:00:11.500
+The register spigot mikes at one point five seven four inch.
 `;
 
 /** A 12 s small test pattern made on the spot; never real footage. */
@@ -39,6 +43,24 @@ function makeClip() {
     '-c:v', 'libx264', '-preset', 'ultrafast', '-pix_fmt', 'yuv420p', '-movflags', '+faststart', file,
   ]);
   return file;
+}
+
+/** Puts the player at `seconds` and pins a mark there with the M key; returns the mark form. */
+async function pinWithKeyAt(seconds, formTitle) {
+  const video = page.getByTestId('footage-video');
+  await video.evaluate((element, at) => {
+    element.muted = true;
+    element.currentTime = at;
+  }, seconds);
+  await page.waitForFunction((at) => {
+    const element = document.querySelector('[data-testid="footage-video"]');
+    return Math.abs(element.currentTime - at) < 0.01 && !element.seeking;
+  }, seconds);
+  await page.locator('body').click({ position: { x: 5, y: 5 } });
+  await page.keyboard.press('m');
+  const form = page.getByRole('dialog', { name: formTitle });
+  await form.waitFor();
+  return form;
 }
 
 let browser;
@@ -60,10 +82,17 @@ before(async () => {
     partNumber: 'HL-5520',
     title: 'Adapter plate',
     category: 'plate',
-    features: [{ name: 'spigot bore', kind: 'diameter', role: 'hole', nominal: '40', unit: 'mm' }],
+    features: [
+      { name: 'spigot bore', kind: 'diameter', role: 'hole', nominal: '40', unit: 'mm' },
+      { name: 'spigot register', kind: 'diameter', role: 'shaft', nominal: '40', unit: 'mm' },
+    ],
   });
   ids.partId = plate.id;
-  ids.featureId = plate.features[0].id;
+  ids.featureId = plate.features.find((feature) => feature.name === 'spigot bore').id;
+  ids.registerId = plate.features.find((feature) => feature.name === 'spigot register').id;
+  // An assembly whose checklist has a check to evidence from the footage.
+  ids.assemblyId = (await api.post(`/workshops/${ids.workshopId}/builds/${ids.buildId}/assemblies`, { name: 'Plate on bell housing' })).id;
+  ids.checkId = (await api.post(`/workshops/${ids.workshopId}/assemblies/${ids.assemblyId}/checks`, { title: 'Spigot seats in the bell housing' })).id;
 });
 after(async () => {
   await browser?.close();
@@ -159,4 +188,77 @@ test('accepting a spoken measurement records the reading at the cue time', async
   assert.equal(measurements[0].footageTimeMs, 6000);
   await page.getByTestId('marks-timeline').scrollIntoViewIfNeeded();
   await shot(page, '04-marked');
+});
+
+test('a mark evidences a fit check, named in the list and linked to its checklist', async () => {
+  const form = await pinWithKeyAt(2, 'New mark at 0:02.0');
+  await choose(form, 'Kind', 'Check evidence');
+  await choose(form, 'Fit check it evidences', 'Spigot seats in the bell housing · open');
+  await form.getByLabel('Label').fill('Plate seated on the bell housing');
+  await shot(page, '05-check-evidence-form');
+  await form.getByRole('button', { name: 'Save mark' }).click();
+  await form.waitFor({ state: 'hidden' });
+
+  const row = page.getByTestId('mark-row').filter({ hasText: 'Plate seated on the bell housing' });
+  await row.waitFor();
+  assert.match(await row.textContent(), /0:02\.0.*Check evidence.*Spigot seats in the bell housing/);
+  const marks = await api.get(`/workshops/${ids.workshopId}/footage/${ids.footageId}/marks`);
+  assert.deepEqual(
+    marks.filter((mark) => mark.kind === 'check_evidence').map(({ startMs, fitCheckId, partId, measurementId }) => ({ startMs, fitCheckId, partId, measurementId })),
+    [{ startMs: 2000, fitCheckId: ids.checkId, partId: null, measurementId: null }],
+  );
+  // The part mark of the first test names its part number too.
+  await page.getByTestId('mark-row').filter({ hasText: 'Plate number on the box' }).getByRole('link', { name: '→ HL-5520' }).waitFor();
+
+  await row.getByRole('link', { name: '→ Spigot seats in the bell housing' }).click();
+  await page.waitForURL(new RegExp(`/workshops/${ids.workshopId}/assemblies/${ids.assemblyId}$`));
+  await page.getByTestId('check-card').filter({ hasText: 'Spigot seats in the bell housing' }).waitFor();
+  await shot(page, '06-followed-to-checklist');
+  await page.goBack();
+  await page.getByTestId('footage-video').waitFor();
+  await page.waitForFunction(() => document.querySelector('[data-testid="footage-video"]')?.readyState >= 1);
+});
+
+test('pinned where a measurement is spoken, the reading is recorded from the mark form at the mark’s time', async () => {
+  const form = await pinWithKeyAt(10.2, 'New mark at 0:10.2');
+  // The transcript says "one point five seven four inch" here: a new reading is offered, filled in.
+  assert.equal(await form.getByLabel('Kind', { exact: true }).inputValue(), 'Measurement');
+  const reading = form.getByTestId('new-reading');
+  await reading.getByText('Heard here: “one point five seven four inch”', { exact: false }).waitFor();
+  // Required fields' labels end in an asterisk, hence the patterns.
+  assert.equal(await reading.getByLabel(/^Reading/).inputValue(), '1.574');
+  assert.equal(await reading.getByLabel(/^Unit/).inputValue(), 'in');
+  await reading.getByLabel(/^Measured/).click();
+  await page.getByRole('option', { name: 'HL-5520 — spigot register', exact: true }).click();
+  await choose(reading, 'Instrument', 'Outside micrometer');
+  assert.equal(await reading.getByLabel(/^Quantity/).inputValue(), 'Diameter');
+  await form.getByLabel('Label').fill('Register spigot miked');
+  await shot(page, '07-inline-reading-form');
+  await form.getByRole('button', { name: 'Record reading and save mark' }).click();
+  await form.waitFor({ state: 'hidden' });
+
+  const row = page.getByTestId('mark-row').filter({ hasText: 'Register spigot miked' });
+  await row.getByRole('link', { name: '→ 1.574 in' }).waitFor();
+  assert.match(await row.textContent(), /0:10\.2.*Measurement/);
+  // The suggestion heard there is settled: it cannot be accepted into a second reading.
+  await page.getByTestId('suggestion-row').filter({ hasText: 'one point five seven four' }).waitFor({ state: 'detached' });
+
+  const { measurements } = await api.get(`/workshops/${ids.workshopId}/measurements?featureId=${ids.registerId}`);
+  assert.deepEqual(
+    measurements.map(({ value, unit, quantity, footageId, footageTimeMs, instrument }) => ({
+      value,
+      unit,
+      quantity,
+      footageId,
+      footageTimeMs,
+      instrument: instrument.kind,
+      resolution: instrument.resolution,
+    })),
+    [{ value: '1.574', unit: 'in', quantity: 'diameter', footageId: ids.footageId, footageTimeMs: 10200, instrument: 'outside_micrometer', resolution: '0.001' }],
+  );
+  const marks = await api.get(`/workshops/${ids.workshopId}/footage/${ids.footageId}/marks`);
+  const mark = marks.find((item) => item.label === 'Register spigot miked');
+  assert.deepEqual({ kind: mark.kind, startMs: mark.startMs, measurementId: mark.measurementId }, { kind: 'measurement', startMs: 10200, measurementId: measurements[0].id });
+  await page.getByTestId('marks-list').scrollIntoViewIfNeeded();
+  await shot(page, '08-marks-with-links');
 });

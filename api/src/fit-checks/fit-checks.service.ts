@@ -269,6 +269,9 @@ export class FitChecksService {
         ? await this.marks.existsBy({ id: given, workshopId })
         : await this.measurements.existsBy({ id: given, workshopId });
     if (!found) throw new NotFoundException(input.kind === 'mark' ? 'Mark not found' : 'Measurement not found');
+    // The same mark or reading counts once per check (a check-evidence mark is attached when it is made).
+    const already = await this.evidence.findOneBy(input.kind === 'mark' ? { fitCheckId: check.id, markId: given } : { fitCheckId: check.id, measurementId: given });
+    if (already) return already;
     return this.evidence.save(
       this.evidence.create({
         fitCheckId: check.id,

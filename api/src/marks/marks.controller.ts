@@ -38,9 +38,10 @@ export class MarksController {
     @Param('workshopId', ParseUUIDPipe) workshopId: string,
     @Param('footageId', ParseUUIDPipe) footageId: string,
     @Param('markId', ParseUUIDPipe) markId: string,
+    @CurrentUser() user: SessionUser,
     @Body() body: UpdateMarkDto,
   ) {
-    return toMarkResponse(await this.marks.update(workshopId, footageId, markId, body));
+    return toMarkResponse(await this.marks.update(workshopId, footageId, markId, user.id, body));
   }
 
   @Delete('marks/:markId')

@@ -1,6 +1,7 @@
 import { Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { FitCheck } from '../fit-checks/entities/fit-check.entity';
+import { FitCheckEvidence } from '../fit-checks/entities/fit-check-evidence.entity';
 import { FootageModule } from '../footage/footage.module';
 import { GuideStep } from '../guides/entities/guide-step.entity';
 import { Guide } from '../guides/entities/guide.entity';
@@ -17,7 +18,7 @@ import { MarksService } from './marks.service';
 import { TranscriptAttachedListener } from './transcript-attached.listener';
 
 @Module({
-  imports: [TypeOrmModule.forFeature([Mark, MarkSuggestion, Part, Measurement, FitCheck, Guide, GuideStep]), FootageModule, PartsModule, MeasurementsModule],
+  imports: [TypeOrmModule.forFeature([Mark, MarkSuggestion, Part, Measurement, FitCheck, FitCheckEvidence, Guide, GuideStep]), FootageModule, PartsModule, MeasurementsModule],
   controllers: [MarksController],
   providers: [MarksService, MarkSuggestionsMiner, MarksProcessor, TranscriptAttachedListener],
   exports: [MarksService],

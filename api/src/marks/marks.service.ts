@@ -2,6 +2,7 @@ import { BadRequestException, ConflictException, Inject, Injectable, NotFoundExc
 import { InjectRepository } from '@nestjs/typeorm';
 import { Repository } from 'typeorm';
 import { FitCheck } from '../fit-checks/entities/fit-check.entity';
+import { FitCheckEvidence } from '../fit-checks/entities/fit-check-evidence.entity';
 import { FootageService } from '../footage/footage.service';
 import { Measurement } from '../measurements/entities/measurement.entity';
 import { MeasurementsService } from '../measurements/measurements.service';
@@ -33,6 +34,7 @@ export class MarksService {
     @InjectRepository(Part) private readonly parts: Repository<Part>,
     @InjectRepository(Measurement) private readonly measurementRows: Repository<Measurement>,
     @InjectRepository(FitCheck) private readonly fitChecks: Repository<FitCheck>,
+    @InjectRepository(FitCheckEvidence) private readonly checkEvidence: Repository<FitCheckEvidence>,
     @InjectRepository(GuideStep) private readonly guideSteps: Repository<GuideStep>,
     @InjectRepository(Guide) private readonly guides: Repository<Guide>,
     @Inject(FootageService) private readonly footage: FootageService,
@@ -63,10 +65,12 @@ export class MarksService {
       createdBy: actorId,
     });
     await this.validate(workshopId, mark, footage.durationMs);
-    return this.marks.save(mark);
+    const saved = await this.marks.save(mark);
+    await this.syncCheckEvidence(saved, actorId);
+    return saved;
   }
 
-  async update(workshopId: string, footageId: string, markId: string, input: UpdateMarkDto): Promise<Mark> {
+  async update(workshopId: string, footageId: string, markId: string, actorId: string, input: UpdateMarkDto): Promise<Mark> {
     const footage = await this.footage.get(workshopId, footageId);
     const mark = await this.get(workshopId, footageId, markId);
     if (input.startMs !== undefined) mark.startMs = input.startMs;
@@ -82,7 +86,25 @@ export class MarksService {
       for (const field of LINK_FIELDS) if (field !== LINK_OF_KIND[mark.kind] && input[field] === undefined) mark[field] = null;
     }
     await this.validate(workshopId, mark, footage.durationMs);
-    return this.marks.save(mark);
+    const saved = await this.marks.save(mark);
+    await this.syncCheckEvidence(saved, actorId);
+    return saved;
+  }
+
+  /**
+   * A check-evidence mark is evidence of its fit check: it is listed with the check's evidence (once),
+   * and leaves it when the mark moves to another check or becomes another kind.
+   */
+  private async syncCheckEvidence(mark: Mark, actorId: string): Promise<void> {
+    const target = mark.kind === 'check_evidence' ? mark.fitCheckId : null;
+    const rows = await this.checkEvidence.findBy({ markId: mark.id });
+    const stale = rows.filter((row) => row.fitCheckId !== target);
+    if (stale.length) await this.checkEvidence.remove(stale);
+    if (target && !rows.some((row) => row.fitCheckId === target)) {
+      await this.checkEvidence.save(
+        this.checkEvidence.create({ fitCheckId: target, kind: 'mark', markId: mark.id, measurementId: null, photoKey: null, note: '', addedBy: actorId }),
+      );
+    }
   }
 
   async remove(workshopId: string, footageId: string, markId: string): Promise<void> {

@@ -15,6 +15,9 @@ const router = createBrowserRouter([
       { path: paths.status, lazy: async () => ({ Component: (await import('./routes/status')).StatusRoute }) },
       // Public calculator: viewers use it too, signed in or not.
       { path: paths.fitCalculator, lazy: async () => ({ Component: (await import('./routes/fit-calculator')).FitCalculatorRoute }) },
+      // Published guides: anyone may read them, signed in or not.
+      { path: paths.guideIndex, lazy: async () => ({ Component: (await import('./routes/guides')).GuideIndexRoute }) },
+      { path: paths.publicGuide.path, lazy: async () => ({ Component: (await import('./routes/guides')).PublicGuideRoute }) },
       // Accounts: open to everyone (the e-mailed links land on these).
       { path: paths.signIn, lazy: async () => ({ Component: (await import('./routes/accounts')).SignInRoute }) },
       { path: paths.signUp, lazy: async () => ({ Component: (await import('./routes/accounts')).SignUpRoute }) },
@@ -45,6 +48,7 @@ const router = createBrowserRouter([
           { path: paths.part.path, lazy: async () => ({ Component: (await import('./routes/part')).PartRoute }) },
           { path: paths.assembly.path, lazy: async () => ({ Component: (await import('./routes/assembly')).AssemblyRoute }) },
           { path: paths.footage.path, lazy: async () => ({ Component: (await import('./routes/footage')).FootagePlayerRoute }) },
+          { path: paths.guide.path, lazy: async () => ({ Component: (await import('./routes/guide')).GuideRoute }) },
         ],
       },
       {

@@ -23,7 +23,18 @@ export const paths = {
     to: (workshopId: string, footageId: string, atMs?: number) =>
       `/workshops/${workshopId}/footage/${footageId}${atMs === undefined ? '' : `?t=${(atMs / 1000).toFixed(1)}`}`,
   },
+  // The creator's guide editor (a build's page lists its guides); the public page is publicGuide.
+  guide: {
+    path: '/workshops/:workshopId/guides/:guideId',
+    to: (workshopId: string, guideId: string) => `/workshops/${workshopId}/guides/${guideId}`,
+  },
   fitCalculator: '/tools/fit-calculator',
+  // Published guides, open to everyone: the index and the follow-along view.
+  guideIndex: '/guides',
+  publicGuide: {
+    path: '/guides/:workshopSlug/:guideSlug',
+    to: (workshopSlug: string, guideSlug: string) => `/guides/${encodeURIComponent(workshopSlug)}/${encodeURIComponent(guideSlug)}`,
+  },
   // Accounts (the e-mailed links use verifyEmail, resetPassword, confirmEmail and acceptInvitation with ?token=).
   signIn: '/sign-in',
   signUp: '/sign-up',

@@ -5,6 +5,8 @@ import { AppModule } from '../../app.module';
 import { demoSignInLines, loadDemoAccounts } from './demo-accounts';
 import { loadDemoFitData } from './demo-fit-data';
 import { loadDemoFootage } from './demo-footage';
+import { loadDemoGuide } from './demo-guide';
+import { loadDemoMarks } from './demo-marks';
 
 /**
  * Loads the invented demo scenario (DESIGN.md) into the database; idempotent. Run by `npm start`
@@ -18,6 +20,10 @@ async function loadDemo(): Promise<void> {
     await loadDemoFitData(app, { workshopId: accounts.workshopId, creatorId: accounts.ownerId });
     // The build's footage: generated, uploaded and processed like a creator's, then transcribed.
     console.log(`[demo] ${await loadDemoFootage(app, { workshopId: accounts.workshopId, creatorId: accounts.ownerId })}`);
+    // Its marks, at the moments the narration names things, and the transcript's suggested marks.
+    console.log(`[demo] ${await loadDemoMarks(app, { workshopId: accounts.workshopId, creatorId: accounts.ownerId })}`);
+    // The build's published guide, with step marks; after the marks, so it can point at them.
+    console.log(`[demo] ${await loadDemoGuide(app, { workshopId: accounts.workshopId, creatorId: accounts.ownerId })}`);
     // Printed plainly (the app's logger is quietened to warnings while the demo loads).
     console.log(`[demo] workshop "Harrow Lane Garage" is ready: ${accounts.workshopId}`);
     for (const line of demoSignInLines()) console.log(`[demo] ${line}`);

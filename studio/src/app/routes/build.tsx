@@ -3,6 +3,7 @@ import { useParams } from 'react-router-dom';
 import { AssembliesList } from '@/features/assemblies/components/assemblies-list';
 import { BuildHeader } from '@/features/builds/components/build-header';
 import { BuildFootage } from '@/features/footage/components/build-footage';
+import { BuildGuides } from '@/features/guides/components/build-guides';
 import { WorkshopGate } from '@/features/workshops/components/workshop-gate';
 
 export function BuildRoute() {
@@ -14,6 +15,7 @@ export function BuildRoute() {
           <BuildHeader workshopId={workshopId} buildId={buildId} />
           <AssembliesList workshopId={workshopId} buildId={buildId} />
           <BuildFootage workshopId={workshopId} buildId={buildId} />
+          <BuildGuides workshopId={workshopId} buildId={buildId} />
         </Stack>
       )}
     </WorkshopGate>

@@ -7,6 +7,7 @@ import { PageLoader } from '../page-loader';
 
 const NAVIGATION = [
   { label: 'Home', to: paths.home },
+  { label: 'Guides', to: paths.guideIndex },
   { label: 'System status', to: paths.status },
   { label: 'Fit calculator', to: paths.fitCalculator },
 ];
@@ -52,7 +53,7 @@ export function AppLayout({ headerActions, navbarExtra }: AppLayoutProps = {}) {
             component={Link}
             to={item.to}
             label={item.label}
-            active={location.pathname === item.to}
+            active={location.pathname === item.to || location.pathname.startsWith(`${item.to}/`)}
             onClick={close}
           />
         ))}

@@ -9,6 +9,21 @@ export interface MarkInput {
   label: string;
   partId?: string | null;
   measurementId?: string | null;
+  fitCheckId?: string | null;
+  guideStepId?: string | null;
+}
+
+/** A reading recorded from the mark form: what was measured, as taken, and the moment of the footage that shows it. */
+export interface ReadingInput {
+  featureId?: string;
+  interfaceId?: string;
+  quantity: string;
+  value: string;
+  unit: string;
+  instrumentKind: string;
+  resolution: string;
+  footageId: string;
+  footageTimeMs: number;
 }
 
 export interface AcceptInput {
@@ -39,6 +54,19 @@ export function useSaveMark(workshopId: string, footageId: string) {
       id
         ? apiRequest<Mark>(`${base(workshopId, footageId)}/marks/${id}`, { method: 'PATCH', body: input })
         : apiRequest<Mark>(`${base(workshopId, footageId)}/marks`, { method: 'POST', body: input }),
+    onSuccess: refresh,
+  });
+}
+
+/** The measurements route, called from here so the reading and its mark are made in one form (features stay apart). */
+export function useRecordReading(workshopId: string) {
+  const refresh = useRefresh(true);
+  return useMutation({
+    mutationFn: (input: ReadingInput) =>
+      apiRequest<{ id: string; shown: string; footageTimeMs: number | null }>(`/workshops/${workshopId}/measurements`, {
+        method: 'POST',
+        body: input,
+      }),
     onSuccess: refresh,
   });
 }

@@ -1,5 +1,5 @@
 import { queryOptions } from '@tanstack/react-query';
-import { apiRequest } from '@/lib/api-client';
+import { ApiError, apiRequest } from '@/lib/api-client';
 
 /** Shapes of the marks routes (api/src/marks; OpenAPI at /api/docs). */
 export const MARK_KINDS = ['part', 'measurement', 'check_evidence', 'step', 'caution', 'note'] as const;
@@ -37,18 +37,81 @@ export interface MarkSuggestion {
   markId: string | null;
 }
 
-/** Only what the link pickers need from the parts and measurements routes. */
+/** Only what the link pickers need from the parts, measurements, assemblies, fit-check and guide routes. */
 export interface PartChoice {
   id: string;
   partNumber: string;
   title: string;
-  features: { id: string; name: string }[];
+  features: { id: string; name: string; kind: 'spline' | 'diameter' | 'length' | 'free' }[];
 }
 export interface MeasurementChoice {
   id: string;
+  featureId: string | null;
+  interfaceId: string | null;
+  /** The reading in its unit with the instrument's decimals, e.g. "0.5902 in". */
   shown: string;
   quantity: string;
+  footageId: string | null;
   footageTimeMs: number | null;
+}
+export type FitCheckState = 'open' | 'bench_pass' | 'confirmed' | 'no_fit' | 'retired';
+/** An assembly of the workshop with what a mark can point at in it: its interfaces and its fit checks. */
+export interface LinkAssembly {
+  id: string;
+  name: string;
+  buildId: string;
+  buildTitle: string;
+  interfaces: { id: string; name: string }[];
+  checks: { id: string; title: string; state: FitCheckState }[];
+}
+/** GET /workshops/:id/guide-steps (the guides contract). */
+export interface GuideStepChoice {
+  id: string;
+  guideId: string;
+  guideTitle: string;
+  position: number;
+  title: string;
+  startMs: number | null;
+}
+
+/** Reads every assembly of every build, with its interfaces and checklist: the workshop's link targets. */
+async function fetchLinkAssemblies(workshopId: string, signal: AbortSignal): Promise<LinkAssembly[]> {
+  const builds = await apiRequest<{ id: string; title: string }[]>(`/workshops/${workshopId}/builds`, { signal });
+  const perBuild = await Promise.all(
+    builds.map(async (build) => {
+      const assemblies = await apiRequest<{ id: string; name: string }[]>(`/workshops/${workshopId}/builds/${build.id}/assemblies`, { signal });
+      return Promise.all(
+        assemblies.map(async (assembly): Promise<LinkAssembly> => {
+          const [detail, checklist] = await Promise.all([
+            apiRequest<{ interfaces: { id: string; name: string }[] }>(`/workshops/${workshopId}/assemblies/${assembly.id}`, { signal }),
+            apiRequest<{ checks: { id: string; title: string; state: FitCheckState }[] }>(
+              `/workshops/${workshopId}/assemblies/${assembly.id}/checklist`,
+              { signal },
+            ),
+          ]);
+          return {
+            id: assembly.id,
+            name: assembly.name,
+            buildId: build.id,
+            buildTitle: build.title,
+            interfaces: detail.interfaces.map(({ id, name }) => ({ id, name })),
+            checks: checklist.checks.map(({ id, title, state }) => ({ id, title, state })),
+          };
+        }),
+      );
+    }),
+  );
+  return perBuild.flat();
+}
+
+/** A missing guides route (404) means there are no guide steps to link yet, not a failure. */
+async function fetchGuideSteps(workshopId: string, query: { footageId?: string }, signal: AbortSignal): Promise<GuideStepChoice[]> {
+  try {
+    return await apiRequest<GuideStepChoice[]>(`/workshops/${workshopId}/guide-steps`, { signal, query });
+  } catch (error) {
+    if (error instanceof ApiError && error.status === 404) return [];
+    throw error;
+  }
 }
 
 export const markQueries = {
@@ -63,6 +126,12 @@ export const markQueries = {
       queryKey: [...markQueries.all(), 'suggestions', workshopId, footageId] as const,
       queryFn: ({ signal }) => apiRequest<MarkSuggestion[]>(`/workshops/${workshopId}/footage/${footageId}/mark-suggestions`, { signal }),
     }),
+  /** The footage's build, so links into that build are offered first. */
+  footage: (workshopId: string, footageId: string) =>
+    queryOptions({
+      queryKey: [...markQueries.all(), 'footage', workshopId, footageId] as const,
+      queryFn: ({ signal }) => apiRequest<{ id: string; buildId: string }>(`/workshops/${workshopId}/footage/${footageId}`, { signal }),
+    }),
   parts: (workshopId: string) =>
     queryOptions({
       queryKey: [...markQueries.all(), 'link-parts', workshopId] as const,
@@ -73,5 +142,23 @@ export const markQueries = {
       queryKey: [...markQueries.all(), 'link-measurements', workshopId] as const,
       queryFn: async ({ signal }) =>
         (await apiRequest<{ measurements: MeasurementChoice[] }>(`/workshops/${workshopId}/measurements`, { signal })).measurements,
+    }),
+  assemblies: (workshopId: string) =>
+    queryOptions({
+      queryKey: [...markQueries.all(), 'link-assemblies', workshopId] as const,
+      queryFn: ({ signal }) => fetchLinkAssemblies(workshopId, signal),
+    }),
+  /** Steps anchored in this footage first, then the workshop's other steps. */
+  guideSteps: (workshopId: string, footageId: string) =>
+    queryOptions({
+      queryKey: [...markQueries.all(), 'link-guide-steps', workshopId, footageId] as const,
+      queryFn: async ({ signal }) => {
+        const [inFootage, every] = await Promise.all([
+          fetchGuideSteps(workshopId, { footageId }, signal),
+          fetchGuideSteps(workshopId, {}, signal),
+        ]);
+        const anchored = new Set(inFootage.map((step) => step.id));
+        return { inFootage, others: every.filter((step) => !anchored.has(step.id)) };
+      },
     }),
 };

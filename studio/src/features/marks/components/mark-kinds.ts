@@ -1,4 +1,4 @@
-import type { MarkKind } from '../api/queries';
+import type { FitCheckState, MarkKind } from '../api/queries';
 
 /**
  * How each kind reads on screen. Every kind has its own shape (an SVG path in a 12×12 box) and name,
@@ -13,8 +13,23 @@ export const KIND_LOOK: Record<MarkKind, { name: string; shape: string; color: s
   note: { name: 'Note', shape: 'M4.5 0h3v12h-3z', color: 'var(--mantine-color-gray-7)' },
 };
 
-/** The link each kind may carry (mirrors the API's rule, which has the last word). */
-export const LINK_OF_KIND: Partial<Record<MarkKind, 'partId' | 'measurementId'>> = {
+export type MarkLinkField = 'partId' | 'measurementId' | 'fitCheckId' | 'guideStepId';
+
+/** The link each kind may carry (mirrors the API's rule, which has the last word); cautions and notes link nothing. */
+export const LINK_OF_KIND: Partial<Record<MarkKind, MarkLinkField>> = {
   part: 'partId',
   measurement: 'measurementId',
+  check_evidence: 'fitCheckId',
+  step: 'guideStepId',
+};
+
+export const LINK_FIELDS: MarkLinkField[] = ['partId', 'measurementId', 'fitCheckId', 'guideStepId'];
+
+/** Fit-check states in words, beside a check's title in the picker. */
+export const CHECK_STATE_WORDS: Record<FitCheckState, string> = {
+  open: 'open',
+  bench_pass: 'passes on the bench',
+  confirmed: 'confirmed',
+  no_fit: 'no fit',
+  retired: 'retired',
 };

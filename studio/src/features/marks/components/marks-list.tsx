@@ -6,6 +6,7 @@ import { useRemoveMark } from '../api/mutations';
 import { MARK_KINDS, type Mark, type MarkKind } from '../api/queries';
 import { formatMarkTime } from './format-time';
 import { KindShape } from './kind-shape';
+import { MarkLink } from './mark-link';
 import { KIND_LOOK } from './mark-kinds';
 
 export interface MarksListProps {
@@ -41,19 +42,27 @@ export function MarksList({ workshopId, footageId, marks, onSeek, onEdit }: Mark
         <Stack gap={4} data-testid="marks-list">
           {shown.map((mark) => (
             <Group key={mark.id} justify="space-between" wrap="nowrap" data-testid="mark-row">
-              <Group gap="xs" wrap="nowrap">
+              <Group gap="xs" wrap="nowrap" align="flex-start" style={{ minWidth: 0 }}>
                 <UnstyledButton onClick={() => onSeek(mark.startMs)} aria-label={`Jump to ${formatMarkTime(mark.startMs)}`}>
                   <Text size="sm" ff="monospace">
                     {formatMarkTime(mark.startMs)}
                   </Text>
                 </UnstyledButton>
-                <KindShape kind={mark.kind} />
-                <Text size="sm" fw={500}>
-                  {KIND_LOOK[mark.kind].name}
-                </Text>
-                <Text size="sm" lineClamp={1}>
-                  {mark.label}
-                </Text>
+                <Group gap="xs" wrap="nowrap" h={22} style={{ flex: 'none' }}>
+                  <KindShape kind={mark.kind} />
+                  <Text size="sm" fw={500} style={{ whiteSpace: 'nowrap' }}>
+                    {KIND_LOOK[mark.kind].name}
+                  </Text>
+                </Group>
+                {/* The label as written, and under it what the mark links to. */}
+                <Stack gap={0} style={{ minWidth: 0 }}>
+                  {mark.label && (
+                    <Text size="sm" lineClamp={1}>
+                      {mark.label}
+                    </Text>
+                  )}
+                  <MarkLink workshopId={workshopId} footageId={footageId} mark={mark} />
+                </Stack>
               </Group>
               <Group gap={4} wrap="nowrap">
                 <Button size="compact-xs" variant="default" onClick={() => onEdit(mark)}>
@@ -64,7 +73,7 @@ export function MarksList({ workshopId, footageId, marks, onSeek, onEdit }: Mark
                   variant="subtle"
                   color="red"
                   question="Remove this mark?"
-                  detail="What it links to (a part, a reading) stays."
+                  detail="What it links to (a part, a reading, a fit check, a step) stays."
                   confirmLabel="Remove mark"
                   onConfirm={() => remove.mutate(mark.id, { onError: (error) => notifyError('The mark was not removed', error) })}
                 >

@@ -2,10 +2,10 @@ import { Button, Group, Kbd, Modal, Stack, Table, Text } from '@mantine/core';
 import { useDisclosure } from '@mantine/hooks';
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
-import { markQueries } from '../api/queries';
+import { markQueries, type MarkSuggestion } from '../api/queries';
 import { MARKING_SHORTCUTS, useMarkingShortcuts } from '../hooks/marking-shortcuts';
 import { formatMarkTime } from './format-time';
-import { draftOf, MarkForm, type MarkDraft } from './mark-form';
+import { draftOf, emptyLinks, MarkForm, type MarkDraft, type SpokenReading } from './mark-form';
 import { MarksList } from './marks-list';
 import { MarksTimeline } from './marks-timeline';
 import { SuggestionsPanel } from './suggestions-panel';
@@ -26,9 +26,21 @@ export interface MarksWorkspaceProps {
   player: MarkingPlayer;
 }
 
+/** The measurement spoken in the cue playing at `atMs`, if the miner found one still waiting there. */
+export function spokenAt(suggestions: MarkSuggestion[], atMs: number): SpokenReading | null {
+  for (const suggestion of suggestions) {
+    const { kind, status, value, unit, startMs, endMs } = suggestion;
+    if (kind === 'measurement' && status === 'pending' && value !== null && unit !== null && startMs <= atMs && atMs <= endMs) {
+      return { suggestionId: suggestion.id, phrase: suggestion.phrase, value, unit };
+    }
+  }
+  return null;
+}
+
 /** Marking one footage: pin a moment (key or button), the timeline strip, the marks and the suggestions. */
 export function MarksWorkspace({ workshopId, footageId, player }: MarksWorkspaceProps) {
   const marks = useQuery(markQueries.list(workshopId, footageId));
+  const suggestions = useQuery(markQueries.suggestions(workshopId, footageId));
   const [draft, setDraft] = useState<MarkDraft | null>(null);
   const [helpOpen, help] = useDisclosure(false);
 
@@ -37,7 +49,8 @@ export function MarksWorkspace({ workshopId, footageId, player }: MarksWorkspace
       // Pausing keeps the moment on screen while the form is filled in.
       const startMs = Math.round(player.readPositionMs());
       player.pause();
-      setDraft({ startMs, kind: 'note', label: '', partId: null, measurementId: null });
+      const spoken = spokenAt(suggestions.data ?? [], startMs);
+      setDraft({ startMs, kind: spoken ? 'measurement' : 'note', label: '', ...emptyLinks, spoken });
     },
     help: help.open,
   };

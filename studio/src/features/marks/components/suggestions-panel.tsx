@@ -6,17 +6,8 @@ import { useAcceptSuggestion, useDismissSuggestion } from '../api/mutations';
 import { markQueries, type MarkSuggestion } from '../api/queries';
 import { formatMarkTime } from './format-time';
 import { KindShape } from './kind-shape';
+import { INSTRUMENT_CHOICES } from './reading-choices';
 
-const INSTRUMENTS = [
-  ['other', 'Not said'],
-  ['outside_micrometer', 'Outside micrometer'],
-  ['inside_micrometer', 'Inside micrometer'],
-  ['bore_gauge', 'Bore gauge'],
-  ['caliper', 'Caliper'],
-  ['dial_indicator', 'Dial indicator'],
-  ['feeler_gauge', 'Feeler gauge'],
-  ['tape', 'Tape'],
-].map(([value, label]) => ({ value, label }));
 
 export interface SuggestionsPanelProps {
   workshopId: string;
@@ -152,7 +143,7 @@ function ReadingFields({ workshopId, suggestion, pending, onCancel, onAccept }: 
         nothingFoundMessage="No part features yet: add them on the part's page"
       />
       <Group grow>
-        <Select label="Instrument" data={INSTRUMENTS} value={instrumentKind} onChange={(kind) => setInstrumentKind(kind ?? 'other')} allowDeselect={false} />
+        <Select label="Instrument" data={INSTRUMENT_CHOICES} value={instrumentKind} onChange={(kind) => setInstrumentKind(kind ?? 'other')} allowDeselect={false} />
         <TextInput
           label="Resolution"
           placeholder="from the spoken digits"

@@ -1,0 +1,100 @@
+import { INestApplicationContext } from '@nestjs/common';
+import { AssembliesService } from '../../assemblies/assemblies.service';
+import { BuildsService } from '../../builds/builds.service';
+import { FootageService } from '../../footage/footage.service';
+import { GuidesService } from '../../guides/guides.service';
+import type { CreateStepDto } from '../../guides/dto/guide.dto';
+import { MarksService } from '../../marks/marks.service';
+import { TranscriptsService } from '../../transcripts/transcripts.service';
+import { DEMO_BUILD_TITLE } from './demo-fit-data';
+import { DEMO_FOOTAGE_TITLE } from './demo-footage';
+
+/**
+ * The demo build's published guide: the steps of the walkthrough, each anchored where its narration
+ * starts (demo-footage.ts), the 21-tooth stack's checklist and parts, and a step mark or two. All of
+ * it is invented for the demo scenario (DESIGN.md).
+ */
+export const DEMO_GUIDE_TITLE = 'Fitting the 21-tooth coupler stack';
+const DEMO_ASSEMBLY_NAME = '21-tooth coupler stack';
+
+interface DemoStep extends Omit<CreateStepDto, 'startMs' | 'endMs' | 'footageId'> {
+  /** A phrase of the cue where the step starts. */
+  cue: string;
+  /** A step mark at that cue, with this label. */
+  mark?: string;
+}
+
+const DEMO_STEPS: DemoStep[] = [
+  {
+    title: 'Make the truck safe to work under',
+    cue: 'Welcome back',
+    body: '<p>Raise the pickup at the lifting points and hold it on axle stands. Isolate the traction battery and prove it dead before reaching near the motor.</p>',
+    caution: { level: 'DANGER', text: 'The traction battery stays live until it is isolated and proven dead with a meter rated for it.' },
+  },
+  {
+    title: 'Count the splines on both sides',
+    cue: 'First, the spline',
+    body: '<p>Count the coupler’s teeth and the gearbox input shaft’s. Both must be <strong>21 teeth at 16/32 pitch</strong>; the 27-tooth catalogue coupler does not fit this shaft.</p>',
+    mark: 'Counting the coupler’s 21 teeth',
+  },
+  {
+    title: 'Seat the coupler and check end float',
+    cue: 'With the coupler seated',
+    body: '<p>Slide the coupler onto the motor shaft by hand, never with a hammer. With it seated, a feeler gauge at the motor face should show about 0.015 in of end float.</p>',
+    mark: 'Feeler gauge at the motor face',
+  },
+  {
+    title: 'Check the pilot bearing bore against the pilot nose',
+    cue: 'Next, the pilot bearing bore',
+    body: '<p>Measure the bore with a bore gauge and the pilot nose with a micrometer. Expect a close running fit of under a thousandth of clearance.</p>',
+  },
+  {
+    title: 'Check the driveshaft sits inside its window',
+    cue: 'Last, the driveshaft window',
+    body: '<p>Compare the slip yoke’s travel with the installed length at bump and at droop; keep at least 5 mm of plunge margin at each end.</p>',
+  },
+  {
+    title: 'Bolt up and turn it by hand',
+    cue: 'Bolted up on the truck',
+    body: '<p>Torque the adapter plate bolts to the figure in the motor maker’s instructions, then turn the input by hand: it should turn freely with no tight spot.</p>',
+    caution: { level: 'WARNING', text: 'Keep hands clear of the coupler whenever the motor can be powered.' },
+  },
+];
+
+interface Ids {
+  workshopId: string;
+  creatorId: string;
+}
+
+/** Idempotent: a guide of that title on the demo build means the demo guide is already there. */
+export async function loadDemoGuide(app: INestApplicationContext, { workshopId, creatorId }: Ids): Promise<string> {
+  const guides = app.get(GuidesService);
+  const build = (await app.get(BuildsService).list(workshopId)).find((candidate) => candidate.title === DEMO_BUILD_TITLE);
+  const footage = build && (await app.get(FootageService).list(workshopId, build.id)).find((item) => item.title === DEMO_FOOTAGE_TITLE);
+  if (!build || !footage?.transcript) return 'demo guide skipped: the demo footage or its transcript is missing';
+  if ((await guides.list(workshopId, build.id)).some((guide) => guide.title === DEMO_GUIDE_TITLE)) return 'demo guide already loaded';
+
+  const assembly = (await app.get(AssembliesService).list(workshopId, build.id)).find((candidate) => candidate.name === DEMO_ASSEMBLY_NAME);
+  const { cues } = await app.get(TranscriptsService).read(workshopId, footage.id);
+  const guide = await guides.create(workshopId, build.id, creatorId, {
+    title: DEMO_GUIDE_TITLE,
+    summary:
+      '<p>How Harrow Lane Garage couples the electric motor to the pickup’s original gearbox with the in-house 21-tooth coupler: ' +
+      'what to check on the bench, what to measure, and how the fit was confirmed on the truck.</p>',
+    footageId: footage.id,
+    assemblyId: assembly?.id ?? null,
+    safetyTopics: ['lifting', 'high_voltage', 'rotating_parts'],
+    tools: ['Axle stands (pair)', 'Insulated gloves and a CAT III meter', 'Feeler gauges', 'Bore gauge, 10–18 mm', '0–25 mm outside micrometer', 'Torque wrench'],
+    consumables: ['Spline grease', 'Medium-strength thread locker'],
+  });
+
+  const marks = app.get(MarksService);
+  for (const { cue: phrase, mark, ...step } of DEMO_STEPS) {
+    const cue = cues.find((candidate) => candidate.text.includes(phrase));
+    if (!cue) throw new Error(`the demo transcript has no cue saying "${phrase}"`);
+    const created = await guides.addStep(workshopId, guide.id, { ...step, startMs: cue.startMs, endMs: cue.endMs });
+    if (mark) await marks.create(workshopId, footage.id, creatorId, { kind: 'step', label: mark, startMs: cue.startMs + 500, guideStepId: created.id });
+  }
+  const revision = await guides.publish(workshopId, guide.id, creatorId, 'First publication of the bench and truck checks.');
+  return `demo guide "${DEMO_GUIDE_TITLE}" published as revision ${revision.number} with ${DEMO_STEPS.length} steps`;
+}

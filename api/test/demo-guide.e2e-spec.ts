@@ -1,0 +1,51 @@
+import { NestExpressApplication } from '@nestjs/platform-express';
+import request from 'supertest';
+import { DataSource } from 'typeorm';
+import { loadDemoAccounts } from '../src/database/demo/demo-accounts';
+import { loadDemoFitData } from '../src/database/demo/demo-fit-data';
+import { loadDemoFootage } from '../src/database/demo/demo-footage';
+import { DEMO_GUIDE_TITLE, loadDemoGuide } from '../src/database/demo/demo-guide';
+import { loadDemoMarks } from '../src/database/demo/demo-marks';
+import { createTestApp } from './create-test-app';
+
+// The demo clip may have to be generated first (about 15 s); later runs reuse it from .data/.
+jest.setTimeout(180_000);
+
+describe('demo guide (real MariaDB, Redis, S3 fake)', () => {
+  let app: NestExpressApplication;
+  beforeAll(async () => {
+    app = await createTestApp();
+  });
+  afterAll(async () => app.close());
+
+  it('publishes the walkthrough guide once, readable by anyone with its cautions, checklist and marks', async () => {
+    const accounts = await loadDemoAccounts(app.get(DataSource));
+    const ids = { workshopId: accounts.workshopId, creatorId: accounts.ownerId };
+    await loadDemoFitData(app, ids);
+    await loadDemoFootage(app, ids);
+    await loadDemoMarks(app, ids);
+    await loadDemoGuide(app, ids);
+    expect(await loadDemoGuide(app, ids)).toBe('demo guide already loaded');
+
+    const index = await request(app.getHttpServer()).get('/api/guides').query({ q: 'coupler stack' }).expect(200);
+    const entry = index.body.find((item: { title: string; workshop: { name: string } }) => item.title === DEMO_GUIDE_TITLE && item.workshop.name === 'Harrow Lane Garage');
+    expect(entry).toMatchObject({ revision: 1, stepCount: 6 });
+
+    const view = await request(app.getHttpServer()).get(`/api${entry.path}`).expect(200);
+    expect(view.body.cautions.map((caution: { level: string; topic: string }) => `${caution.level} ${caution.topic}`)).toEqual([
+      'DANGER high_voltage',
+      'WARNING lifting',
+      'WARNING rotating_parts',
+    ]);
+    expect(view.body.footage).toMatchObject({ videoUrl: `/api${entry.path}/video`, captionsUrl: `/api${entry.path}/captions.vtt` });
+    expect(view.body.checklist.assemblyName).toBe('21-tooth coupler stack');
+    expect(view.body.parts.length).toBeGreaterThan(1);
+    // Steps follow the narration: each starts later than the one before.
+    const starts = view.body.steps.map((step: { startMs: number }) => step.startMs);
+    expect(starts).toEqual([...starts].sort((a: number, b: number) => a - b));
+    expect(view.body.marks.filter((mark: { kind: string }) => mark.kind === 'step').map((mark: { label: string }) => mark.label)).toEqual([
+      'Counting the coupler’s 21 teeth',
+      'Feeler gauge at the motor face',
+    ]);
+  });
+});

@@ -1,0 +1,118 @@
+/** Shapes of the public guide routes (api/src/guides; OpenAPI at /api/docs). Anyone may read them, signed in or not. */
+
+export type CautionLevel = 'DANGER' | 'WARNING' | 'CAUTION' | 'NOTICE';
+export type SafetyTopic = 'lifting' | 'rotating_parts' | 'high_voltage' | 'welding' | 'pressing';
+export type MarkKind = 'part' | 'measurement' | 'check_evidence' | 'step' | 'caution' | 'note';
+export type CheckState = 'open' | 'bench_pass' | 'confirmed' | 'no_fit' | 'retired';
+export type ChecklistVerdict = 'open' | 'bench_pass' | 'confirmed' | 'no_fit';
+
+/** One card of the public index (GET /api/guides). */
+export interface PublishedGuideSummary {
+  workshop: { name: string; slug: string };
+  slug: string;
+  title: string;
+  buildTitle: string;
+  publishedAt: string;
+  revision: number;
+  stepCount: number;
+  posterUrl: string | null;
+  path: string;
+}
+
+export interface GuideCaution {
+  level: CautionLevel;
+  text: string;
+}
+
+export interface PublishedStep {
+  id: string;
+  position: number;
+  title: string;
+  /** Sanitised HTML from the server (may be ''). */
+  body: string;
+  footageId: string | null;
+  startMs: number | null;
+  endMs: number | null;
+  caution: GuideCaution | null;
+}
+
+export interface Cue {
+  startMs: number;
+  endMs: number;
+  text: string;
+}
+
+export interface GuidePart {
+  partNumber: string;
+  maker: string;
+  title: string;
+  category: string;
+  position: string;
+}
+
+export interface CheckEvidence {
+  kind: 'mark' | 'measurement' | 'photo';
+  label: string;
+  startMs: number | null;
+}
+
+export interface PublishedCheck {
+  id: string;
+  title: string;
+  state: CheckState;
+  required: boolean;
+  detail: string | null;
+  confirmedAt: string | null;
+  evidence: CheckEvidence[];
+}
+
+export interface PublishedChecklist {
+  assemblyName: string;
+  verdict: ChecklistVerdict;
+  checks: PublishedCheck[];
+}
+
+export interface GuideMark {
+  id: string;
+  kind: MarkKind;
+  startMs: number;
+  endMs: number | null;
+  label: string;
+  stepId: string | null;
+  fitCheckId: string | null;
+}
+
+export interface GuideFootage {
+  id: string;
+  title: string;
+  durationMs: number | null;
+  /** Same-origin API paths that redirect to short-lived storage URLs. */
+  videoUrl: string;
+  posterUrl: string | null;
+  captionsUrl: string | null;
+}
+
+/** GET /api/guides/:workshopSlug/:guideSlug (404 when not published). */
+export interface PublishedGuide {
+  workshop: { name: string; slug: string };
+  guide: {
+    title: string;
+    slug: string;
+    /** Sanitised HTML from the server. */
+    summary: string;
+    buildTitle: string;
+    vehicle: string | null;
+    tools: string[];
+    consumables: string[];
+    safetyTopics: SafetyTopic[];
+  };
+  revision: { number: number; publishedAt: string; note: string };
+  cautions: (GuideCaution & { topic: SafetyTopic })[];
+  disclaimer: string;
+  footage: GuideFootage | null;
+  steps: PublishedStep[];
+  cues: Cue[];
+  parts: GuidePart[];
+  checklist: PublishedChecklist | null;
+  marks: GuideMark[];
+}

@@ -1,0 +1,157 @@
+import { Group, List, Paper, Stack, Text, Title, UnstyledButton } from '@mantine/core';
+import type { CheckEvidence, CheckState, ChecklistVerdict, PublishedChecklist } from '../api/types';
+import classes from './guide-view.module.css';
+import { formatTime } from './playback';
+
+/**
+ * Each state in words, with its own shape: ring (open), half-filled ring (passes on the bench), filled disc with a
+ * tick (confirmed), crossed square (does not fit), dashed slashed ring (retired). Colour only helps.
+ */
+export const CHECK_STATE_LOOK: Record<CheckState, { label: string; meaning: string; colour: string }> = {
+  open: { label: 'Open', meaning: 'not proven yet', colour: '#5c6470' },
+  bench_pass: { label: 'Passes on the bench', meaning: 'the numbers fit; not yet test-fitted', colour: '#1c5fa8' },
+  confirmed: { label: 'Confirmed on the vehicle', meaning: 'test-fitted, with evidence', colour: '#0d7369' },
+  no_fit: { label: 'Does not fit', meaning: 'the numbers or the test fit say no', colour: '#b3261e' },
+  retired: { label: 'Retired', meaning: 'no longer counted', colour: '#868e96' },
+};
+
+const VERDICT_WORDS: Record<ChecklistVerdict, { label: string; explanation: string }> = {
+  open: { label: 'Not proven yet', explanation: 'Some required checks are still open.' },
+  bench_pass: { label: 'Passes on the bench', explanation: 'Every required check passes by the numbers; not all are test-fitted yet.' },
+  confirmed: { label: 'Verified fit', explanation: 'Every required check is confirmed on the vehicle, with evidence.' },
+  no_fit: { label: 'Does not fit', explanation: 'At least one required check does not fit.' },
+};
+
+const EVIDENCE_WORDS: Record<CheckEvidence['kind'], string> = { mark: 'Video', measurement: 'Measurement', photo: 'Photo' };
+
+function StateIcon({ state }: { state: CheckState }) {
+  const colour = CHECK_STATE_LOOK[state].colour;
+  return (
+    <svg width="16" height="16" viewBox="0 0 16 16" aria-hidden="true" focusable="false" data-icon={state} style={{ flex: 'none' }}>
+      {state === 'open' && <circle cx="8" cy="8" r="6" fill="none" stroke={colour} strokeWidth="2" />}
+      {state === 'bench_pass' && (
+        <>
+          <circle cx="8" cy="8" r="6" fill="none" stroke={colour} strokeWidth="2" />
+          <path d="M8 2a6 6 0 0 0 0 12z" fill={colour} />
+        </>
+      )}
+      {state === 'confirmed' && (
+        <>
+          <circle cx="8" cy="8" r="7" fill={colour} />
+          <path d="M4.5 8.2l2.3 2.3 4.7-4.8" fill="none" stroke="#fff" strokeWidth="2" strokeLinecap="round" strokeLinejoin="round" />
+        </>
+      )}
+      {state === 'no_fit' && (
+        <>
+          <rect x="1.5" y="1.5" width="13" height="13" rx="1.5" fill={colour} />
+          <path d="M5 5l6 6M11 5l-6 6" stroke="#fff" strokeWidth="2" strokeLinecap="round" />
+        </>
+      )}
+      {state === 'retired' && (
+        <>
+          <circle cx="8" cy="8" r="6" fill="none" stroke={colour} strokeWidth="1.5" strokeDasharray="2 2" />
+          <path d="M3.5 12.5l9-9" stroke={colour} strokeWidth="1.5" />
+        </>
+      )}
+    </svg>
+  );
+}
+
+export function CheckStateLabel({ state }: { state: CheckState }) {
+  const look = CHECK_STATE_LOOK[state] ?? CHECK_STATE_LOOK.open;
+  return (
+    <Group gap={6} wrap="nowrap" data-testid="check-state" data-state={state} className={classes.statePill} style={{ borderColor: look.colour }}>
+      <StateIcon state={state} />
+      <Text size="sm" fw={600} c={look.colour} style={{ whiteSpace: 'nowrap' }}>
+        {look.label}
+      </Text>
+    </Group>
+  );
+}
+
+const dateFormat = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric' });
+
+export interface ChecklistPanelProps {
+  checklist: PublishedChecklist;
+  /** Set when there is a video to move; evidence with a time then becomes a link into it. */
+  onSeek?: (ms: number) => void;
+}
+
+/** The verified-fit checklist as it stands now (it is live: a check may be confirmed after the guide was published). */
+export function ChecklistPanel({ checklist, onSeek }: ChecklistPanelProps) {
+  const verdict = VERDICT_WORDS[checklist.verdict];
+  return (
+    <Paper withBorder p="md" component="section" aria-labelledby="guide-checklist-heading" data-testid="guide-checklist">
+      <Stack gap="sm">
+        <div>
+          <Title order={2} size="h4" id="guide-checklist-heading">
+            Verified-fit checklist
+          </Title>
+          <Text size="sm" c="dimmed">
+            {checklist.assemblyName} · live: states may have changed since this revision was published
+          </Text>
+        </div>
+        <Group gap="xs" data-testid="checklist-verdict" data-verdict={checklist.verdict}>
+          <Text fw={600}>{verdict.label}</Text>
+          <Text size="sm" c="dimmed">
+            {verdict.explanation}
+          </Text>
+        </Group>
+        {checklist.checks.length === 0 && (
+          <Text size="sm" c="dimmed">
+            No checks recorded for this assembly yet.
+          </Text>
+        )}
+        <Stack gap={0} component="ul" className={classes.plainList}>
+          {checklist.checks.map((check) => (
+            <li key={check.id} className={classes.checkRow} data-testid="guide-check" data-state={check.state}>
+              <Group justify="space-between" align="flex-start" gap="xs">
+                <div style={{ flex: '1 1 16rem' }}>
+                  <Text fw={500}>{check.title}</Text>
+                  {!check.required && (
+                    <Text size="xs" c="dimmed">
+                      Optional: does not decide the verdict
+                    </Text>
+                  )}
+                  {check.detail && (
+                    <Text size="sm" c="dimmed">
+                      {check.detail}
+                    </Text>
+                  )}
+                  {check.confirmedAt && (
+                    <Text size="xs" c="dimmed">
+                      Confirmed {dateFormat.format(new Date(check.confirmedAt))}
+                    </Text>
+                  )}
+                </div>
+                <CheckStateLabel state={check.state} />
+              </Group>
+              {check.evidence.length > 0 && (
+                <List size="sm" mt={4} spacing={2} aria-label={`Evidence for ${check.title}`}>
+                  {check.evidence.map((evidence, index) => (
+                    <List.Item key={`${evidence.kind}-${index}`}>
+                      {evidence.startMs !== null && onSeek ? (
+                        <UnstyledButton
+                          className={classes.evidenceLink}
+                          onClick={() => evidence.startMs !== null && onSeek(evidence.startMs)}
+                          aria-label={`Watch the evidence at ${formatTime(evidence.startMs)}: ${evidence.label}`}
+                        >
+                          {EVIDENCE_WORDS[evidence.kind]} at <span className={classes.timeText}>{formatTime(evidence.startMs)}</span>: {evidence.label}
+                        </UnstyledButton>
+                      ) : (
+                        <Text span size="sm">
+                          {EVIDENCE_WORDS[evidence.kind]}
+                          {evidence.startMs !== null ? ` at ${formatTime(evidence.startMs)}` : ''}: {evidence.label}
+                        </Text>
+                      )}
+                    </List.Item>
+                  ))}
+                </List>
+              )}
+            </li>
+          ))}
+        </Stack>
+      </Stack>
+    </Paper>
+  );
+}

@@ -1,0 +1,145 @@
+import { Alert, Anchor, Breadcrumbs, Button, Group, Skeleton, Stack, Text, Title, Typography } from '@mantine/core';
+import { useQuery } from '@tanstack/react-query';
+import { useEffect } from 'react';
+import { Link } from 'react-router-dom';
+import { paths } from '@/config/paths';
+import { ApiError } from '@/lib/api-client';
+import { guideViewQueries } from '../api/queries';
+import type { PublishedGuide } from '../api/types';
+import { useGuidePlayer } from '../hooks/use-guide-player';
+import { CautionsBlock } from './cautions-block';
+import { ChecklistPanel } from './checklist-panel';
+import { GuideNotPublished } from './guide-not-published';
+import './guide-print.css';
+import { GuideVideo } from './guide-video';
+import classes from './guide-view.module.css';
+import { MarksStrip } from './marks-strip';
+import { PartsPanel, SuppliesPanel } from './parts-panel';
+import { currentStepId } from './playback';
+import { StepList } from './step-list';
+import { TranscriptPanel } from './transcript-panel';
+
+const longDate = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'long', year: 'numeric' });
+
+/** The tab's title names the guide while it is open (and on the printout's header line). */
+function useGuideTitle(title: string) {
+  useEffect(() => {
+    const previous = document.title;
+    document.title = `${title} · Fitwright guide`;
+    return () => {
+      document.title = previous;
+    };
+  }, [title]);
+}
+
+/** A published guide laid out to follow along: safety first, the video with its steps beside it, then the proof and the parts. */
+export function GuideDocument({ data }: { data: PublishedGuide }) {
+  const { guide, workshop, revision, footage } = data;
+  const player = useGuidePlayer();
+  useGuideTitle(guide.title);
+  const playing = currentStepId(data.steps, player.currentMs, footage?.id ?? null);
+  const seek = footage ? player.seek : undefined;
+
+  return (
+    <Stack gap="lg" className={classes.document} data-guide-document="">
+      <Stack gap={4}>
+        <Breadcrumbs className={classes.noPrint}>
+          <Anchor component={Link} to={paths.guideIndex}>
+            Guides
+          </Anchor>
+          <Text size="sm">{workshop.name}</Text>
+        </Breadcrumbs>
+        <Group justify="space-between" align="flex-start" gap="sm">
+          <div style={{ flex: '1 1 20rem' }}>
+            <Title order={1}>{guide.title}</Title>
+            <Text c="dimmed">
+              {workshop.name} · {guide.buildTitle}
+              {guide.vehicle ? ` · ${guide.vehicle}` : ''}
+            </Text>
+            <Text size="sm" data-testid="guide-revision">
+              Revision {revision.number} · published {longDate.format(new Date(revision.publishedAt))}
+              {revision.note ? ` · ${revision.note}` : ''}
+            </Text>
+          </div>
+          <Button variant="default" onClick={() => window.print()} className={classes.noPrint}>
+            Print
+          </Button>
+        </Group>
+        <Text size="xs" className={classes.printOnly}>
+          Printed from {window.location.origin}
+          {paths.publicGuide.to(workshop.slug, guide.slug)}. Check there for a newer revision and the live checklist.
+        </Text>
+      </Stack>
+
+      <CautionsBlock guide={data} />
+
+      {guide.summary && (
+        <Typography>
+          {/* The server sanitises the summary (a short allow-list of tags) before it reaches any reader. */}
+          <div dangerouslySetInnerHTML={{ __html: guide.summary }} />
+        </Typography>
+      )}
+
+      <div className={classes.followAlong} data-has-video={footage ? '' : undefined}>
+        {footage && (
+          <div className={classes.areaVideo}>
+            <GuideVideo
+              footage={footage}
+              videoRef={player.videoRef}
+              currentMs={player.currentMs}
+              failed={player.failed}
+              onRetry={player.retry}
+              events={player.videoEvents}
+            />
+            {footage.durationMs !== null && (
+              <MarksStrip marks={data.marks} durationMs={footage.durationMs} currentMs={player.currentMs} onSeek={player.seek} />
+            )}
+          </div>
+        )}
+        <div className={classes.areaSteps}>
+          <StepList steps={data.steps} marks={data.marks} mainFootageId={footage?.id ?? null} currentStepId={playing} onSeek={player.seek} />
+        </div>
+        {footage && (
+          <div className={classes.areaTranscript}>
+            <TranscriptPanel cues={data.cues} currentMs={player.currentMs} onSeek={player.seek} />
+          </div>
+        )}
+      </div>
+
+      {data.checklist && <ChecklistPanel checklist={data.checklist} onSeek={seek} />}
+      <div className={classes.reference}>
+        {/* A guide that follows no assembly has no parts list to show. */}
+        {(data.parts.length > 0 || data.checklist) && <PartsPanel parts={data.parts} />}
+        <SuppliesPanel tools={guide.tools} consumables={guide.consumables} />
+      </div>
+    </Stack>
+  );
+}
+
+/** The follow-along view of one published guide, for anyone. */
+export function FollowAlongView({ workshopSlug, guideSlug }: { workshopSlug: string; guideSlug: string }) {
+  const guide = useQuery(guideViewQueries.detail(workshopSlug, guideSlug));
+  if (guide.isPending) {
+    return (
+      <Stack gap="md" aria-label="Loading the guide">
+        <Skeleton height={36} width="60%" />
+        <Skeleton height={120} />
+        <Skeleton height={360} />
+      </Stack>
+    );
+  }
+  if (guide.isError) {
+    if (guide.error instanceof ApiError && guide.error.status === 404) return <GuideNotPublished />;
+    return (
+      <Alert color="red" title="The guide could not be loaded">
+        <Stack gap="xs" align="flex-start">
+          <Text size="sm">{guide.error.message}</Text>
+          <Button size="xs" variant="default" onClick={() => void guide.refetch()}>
+            Try again
+          </Button>
+        </Stack>
+      </Alert>
+    );
+  }
+  return <GuideDocument data={guide.data} />;
+}

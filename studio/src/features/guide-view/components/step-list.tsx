@@ -1,0 +1,124 @@
+import { Badge, Group, Paper, Stack, Text, Title, Typography, UnstyledButton } from '@mantine/core';
+import { useRef } from 'react';
+import type { GuideMark, PublishedStep } from '../api/types';
+import { CautionPanel } from './caution-panel';
+import classes from './guide-view.module.css';
+import { MARK_LOOK, MarkShape } from './marks-strip';
+import { formatTime, isInMainVideo } from './playback';
+
+export interface StepListProps {
+  steps: PublishedStep[];
+  marks: GuideMark[];
+  mainFootageId: string | null;
+  currentStepId: string | null;
+  onSeek: (ms: number) => void;
+}
+
+function StepTime({ step, mainFootageId, onSeek }: { step: PublishedStep; mainFootageId: string | null; onSeek: (ms: number) => void }) {
+  if (step.startMs === null) return null;
+  const range = `${formatTime(step.startMs)}${step.endMs !== null && step.endMs > step.startMs ? `–${formatTime(step.endMs)}` : ''}`;
+  if (!isInMainVideo(step, mainFootageId)) {
+    return (
+      <Text span size="sm" c="dimmed" className={classes.timeText}>
+        {range}
+        {mainFootageId !== null ? ' in another video' : ''}
+      </Text>
+    );
+  }
+  return (
+    <UnstyledButton
+      className={classes.stepTime}
+      onClick={() => step.startMs !== null && onSeek(step.startMs)}
+      aria-label={`Play step ${step.position} from ${formatTime(step.startMs)}`}
+      data-testid="step-time"
+    >
+      <svg width="10" height="10" viewBox="0 0 10 10" aria-hidden="true" focusable="false" className={classes.noPrint}>
+        <path d="M1 0l9 5-9 5z" fill="currentColor" />
+      </svg>
+      {range}
+    </UnstyledButton>
+  );
+}
+
+/** The steps in order; the one playing now stands out (a bar, a badge and aria-current, not colour alone). */
+export function StepList({ steps, marks, mainFootageId, currentStepId, onSeek }: StepListProps) {
+  const box = useRef<HTMLOListElement>(null);
+  const ordered = [...steps].sort((a, b) => a.position - b.position);
+
+  // Brings the playing step into view when the list scrolls on its own (beside the video); the page never jumps.
+  const followCurrent = (node: HTMLLIElement | null) => {
+    const container = box.current;
+    if (!node || !container || container.scrollHeight <= container.clientHeight) return;
+    const top = node.offsetTop - container.offsetTop;
+    if (top < container.scrollTop || top + node.offsetHeight > container.scrollTop + container.clientHeight) {
+      container.scrollTo({ top: Math.max(0, top - 16), behavior: 'smooth' });
+    }
+  };
+
+  return (
+    <Paper withBorder p="md" component="section" aria-labelledby="guide-steps-heading" className={classes.stepsPanel} data-testid="guide-steps">
+      <Title order={2} size="h4" id="guide-steps-heading" mb="sm">
+        Steps
+      </Title>
+      <ol ref={box} className={classes.stepList}>
+        {ordered.map((step) => {
+          const isCurrent = step.id === currentStepId;
+          const stepMarks = marks.filter((mark) => mark.stepId === step.id);
+          return (
+            <li
+              key={step.id}
+              ref={isCurrent ? followCurrent : undefined}
+              className={classes.step}
+              data-current={isCurrent || undefined}
+              aria-current={isCurrent ? 'step' : undefined}
+              data-testid="guide-step"
+            >
+              <Stack gap={6}>
+                <Group gap="xs" wrap="nowrap" align="flex-start">
+                  <span className={classes.stepNumber} aria-hidden="true">
+                    {step.position}
+                  </span>
+                  <div style={{ flex: 1, minWidth: 0 }}>
+                    <Title order={3} size="h5">
+                      <span className={classes.visuallyHidden}>Step {step.position}: </span>
+                      {step.title}
+                    </Title>
+                    <Group gap="xs" mt={2}>
+                      <StepTime step={step} mainFootageId={mainFootageId} onSeek={onSeek} />
+                      {isCurrent && (
+                        <Badge size="sm" variant="filled" className={classes.noPrint} data-testid="step-now">
+                          Playing now
+                        </Badge>
+                      )}
+                    </Group>
+                  </div>
+                </Group>
+                {step.caution && <CautionPanel level={step.caution.level} text={step.caution.text} compact />}
+                {step.body && (
+                  <Typography className={classes.stepBody}>
+                    {/* The server sanitises step bodies (a short allow-list of tags) before they reach any reader. */}
+                    <div dangerouslySetInnerHTML={{ __html: step.body }} />
+                  </Typography>
+                )}
+                {stepMarks.length > 0 && (
+                  <ul className={classes.markChips} aria-label={`Marks in step ${step.position}`}>
+                    {stepMarks.map((mark) => (
+                      <li key={mark.id}>
+                        <button type="button" className={classes.markChip} onClick={() => onSeek(mark.startMs)}>
+                          <MarkShape kind={mark.kind} size={10} />
+                          <span className={classes.visuallyHidden}>{MARK_LOOK[mark.kind]?.name ?? 'Mark'} </span>
+                          <span className={classes.timeText}>{formatTime(mark.startMs)}</span>
+                          <span>{mark.label || MARK_LOOK[mark.kind]?.name}</span>
+                        </button>
+                      </li>
+                    ))}
+                  </ul>
+                )}
+              </Stack>
+            </li>
+          );
+        })}
+      </ol>
+    </Paper>
+  );
+}

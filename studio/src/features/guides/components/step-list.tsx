@@ -1,0 +1,193 @@
+import { Badge, Button, Group, Paper, Stack, Text, Title, Typography, UnstyledButton, VisuallyHidden } from '@mantine/core';
+import { useEffect, useRef, useState, type ReactNode } from 'react';
+import { ConfirmButton } from '@/components/confirm-button';
+import { notifyError } from '@/lib/notify';
+import { useDeleteStep, useReorderSteps } from '../api/mutations';
+import type { GuideStep } from '../api/types';
+import { CautionNote } from './caution-note';
+import { MARK_KIND_NAMES } from './guide-labels';
+import { formatStepTime } from './step-time';
+
+export interface StepListProps {
+  workshopId: string;
+  guideId: string;
+  steps: GuideStep[];
+  /** The main footage's id: a step anchored elsewhere says so. */
+  mainFootageId: string | null;
+  /** Moves the player to a step's moment; absent when there is no player. */
+  onSeek?: (ms: number) => void;
+  onEdit: (step: GuideStep) => void;
+  /** The step being edited shows this (its form) instead of its card. */
+  editingStepId?: string | null;
+  editor?: ReactNode;
+}
+
+type Direction = 'up' | 'down';
+
+/** The order with one step moved one place; unchanged at either end. */
+export function moveStep(stepIds: string[], stepId: string, direction: Direction): string[] {
+  const from = stepIds.indexOf(stepId);
+  const to = direction === 'up' ? from - 1 : from + 1;
+  if (from < 0 || to < 0 || to >= stepIds.length) return stepIds;
+  const next = [...stepIds];
+  [next[from], next[to]] = [next[to], next[from]];
+  return next;
+}
+
+/** The guide's steps in order, each with its moment, caution, body and linked marks; move, edit or delete each. */
+export function StepList({ workshopId, guideId, steps, mainFootageId, onSeek, onEdit, editingStepId, editor }: StepListProps) {
+  const reorder = useReorderSteps(workshopId, guideId);
+  const remove = useDeleteStep(workshopId, guideId);
+  const listRef = useRef<HTMLOListElement>(null);
+  const [moved, setMoved] = useState<{ stepId: string; direction: Direction } | null>(null);
+  const [announcement, setAnnouncement] = useState('');
+
+  // A moved card is re-inserted in the DOM, which drops keyboard focus; put it back on the same button
+  // (or its twin when the step reached an end), so pressing Enter again keeps moving it.
+  useEffect(() => {
+    if (!moved || !listRef.current) return;
+    const card = listRef.current.querySelector<HTMLElement>(`[data-step-id="${moved.stepId}"]`);
+    const same = card?.querySelector<HTMLButtonElement>(`[data-move="${moved.direction}"]`);
+    const twin = card?.querySelector<HTMLButtonElement>(`[data-move="${moved.direction === 'up' ? 'down' : 'up'}"]`);
+    (same && !same.disabled ? same : twin)?.focus();
+  }, [moved, steps]);
+
+  const handleMove = (step: GuideStep, direction: Direction) => {
+    const ids = steps.map((item) => item.id);
+    const next = moveStep(ids, step.id, direction);
+    if (next === ids) return;
+    setMoved({ stepId: step.id, direction });
+    setAnnouncement(`“${step.title}” is now step ${next.indexOf(step.id) + 1} of ${next.length}.`);
+    reorder.mutate(next, {
+      onError: (error) => {
+        setAnnouncement('The step could not be moved.');
+        notifyError('The step was not moved', error);
+      },
+    });
+  };
+
+  if (steps.length === 0 && !editor) {
+    return (
+      <Text c="dimmed" data-testid="no-steps">
+        No steps yet. A guide needs at least one step before it can be published.
+      </Text>
+    );
+  }
+
+  return (
+    <>
+      <VisuallyHidden role="status" aria-live="polite">
+        {announcement}
+      </VisuallyHidden>
+      <ol ref={listRef} aria-label="Steps" data-testid="step-list" style={{ listStyle: 'none', margin: 0, padding: 0, display: 'grid', gap: 'var(--mantine-spacing-sm)' }}>
+        {steps.map((step, index) => (
+          <li key={step.id} data-step-id={step.id} data-testid="step-card">
+            {editingStepId === step.id && editor ? (
+              editor
+            ) : (
+              <Paper withBorder p="md">
+                <Stack gap="xs">
+                  <Group justify="space-between" align="flex-start" wrap="nowrap">
+                    <Group gap="xs" align="baseline" wrap="nowrap">
+                      <Badge variant="default" style={{ flex: 'none' }}>
+                        Step {index + 1}
+                      </Badge>
+                      <Title order={4} fz="md">
+                        {step.title}
+                      </Title>
+                    </Group>
+                    {step.startMs !== null && (
+                      <StepMoment step={step} mainFootageId={mainFootageId} onSeek={onSeek} />
+                    )}
+                  </Group>
+                  {step.caution && <CautionNote caution={step.caution} />}
+                  {step.body && (
+                    // Sanitised by the server (see the guides contract); never the editor's own HTML.
+                    <Typography fz="sm" dangerouslySetInnerHTML={{ __html: step.body }} />
+                  )}
+                  {step.marks.length > 0 && (
+                    <Stack gap={2} aria-label={`Marks linked to step ${index + 1}`} data-testid="step-marks">
+                      <Text size="xs" fw={600} c="dimmed">
+                        Linked marks
+                      </Text>
+                      {step.marks.map((mark) => (
+                        <Text key={mark.id} size="xs" data-testid="step-mark">
+                          <Text span ff="monospace" size="xs">
+                            {formatStepTime(mark.startMs)}
+                          </Text>{' '}
+                          <Text span fw={600} size="xs">
+                            {MARK_KIND_NAMES[mark.kind] ?? mark.kind}
+                          </Text>{' '}
+                          {mark.label}
+                        </Text>
+                      ))}
+                    </Stack>
+                  )}
+                  <Group gap={6} justify="flex-end">
+                    <Button
+                      size="compact-sm"
+                      variant="default"
+                      data-move="up"
+                      disabled={index === 0}
+                      aria-label={`Move step ${index + 1}, ${step.title}, up`}
+                      onClick={() => handleMove(step, 'up')}
+                    >
+                      ↑ Up
+                    </Button>
+                    <Button
+                      size="compact-sm"
+                      variant="default"
+                      data-move="down"
+                      disabled={index === steps.length - 1}
+                      aria-label={`Move step ${index + 1}, ${step.title}, down`}
+                      onClick={() => handleMove(step, 'down')}
+                    >
+                      ↓ Down
+                    </Button>
+                    <Button size="compact-sm" variant="default" onClick={() => onEdit(step)} aria-label={`Edit step ${index + 1}, ${step.title}`}>
+                      Edit
+                    </Button>
+                    <ConfirmButton
+                      size="compact-sm"
+                      variant="subtle"
+                      color="red"
+                      aria-label={`Delete step ${index + 1}, ${step.title}`}
+                      question={`Delete step ${index + 1}?`}
+                      detail={`“${step.title}” goes; the steps after it move up. Marks linked to it stay on the footage.`}
+                      confirmLabel="Delete step"
+                      onConfirm={() => remove.mutate(step.id, { onError: (error) => notifyError('The step was not deleted', error) })}
+                    >
+                      Delete
+                    </ConfirmButton>
+                  </Group>
+                </Stack>
+              </Paper>
+            )}
+          </li>
+        ))}
+      </ol>
+      {editor && !steps.some((step) => step.id === editingStepId) && <div>{editor}</div>}
+    </>
+  );
+}
+
+function StepMoment({ step, mainFootageId, onSeek }: { step: GuideStep; mainFootageId: string | null; onSeek?: (ms: number) => void }) {
+  const startMs = step.startMs ?? 0;
+  const label = `${formatStepTime(startMs)}${step.endMs !== null ? `–${formatStepTime(step.endMs)}` : ''}`;
+  const elsewhere = step.footageId !== null && step.footageId !== mainFootageId;
+  if (!onSeek || elsewhere) {
+    return (
+      <Text size="sm" ff="monospace" style={{ flex: 'none' }} data-testid="step-time">
+        {label}
+        {elsewhere && ' (other footage)'}
+      </Text>
+    );
+  }
+  return (
+    <UnstyledButton onClick={() => onSeek(startMs)} aria-label={`Play from ${formatStepTime(startMs)}`} style={{ flex: 'none' }}>
+      <Text size="sm" ff="monospace" c="patina.8" td="underline" data-testid="step-time">
+        {label}
+      </Text>
+    </UnstyledButton>
+  );
+}
