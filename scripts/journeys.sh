@@ -3,12 +3,7 @@
 #   bash scripts/journeys.sh studio/e2e/marks.test.mjs
 # (no argument: every journey). Builds what changed, serves the app as npm test does, stops it after.
 source "$(dirname "$0")/lib.sh"
-fw_profile_env test
-exec 9>"$FW_DATA/test-run.lock"
-flock 9 || fail "could not take the test lock"
-trap 'stop_services' EXIT
-trap 'exit 130' INT TERM
-start_services >/dev/null
+use_test_services
 build_all >/dev/null
 run_migrations >/dev/null
 (cd "$ROOT/api" && exec node dist/main.js) >"$FW_LOGS/api.log" 2>&1 &

@@ -169,3 +169,14 @@ run_migrations() {
 }
 
 http_ok() { node -e 'fetch(process.argv[1]).then((r) => process.exit(r.ok ? 0 : 1), () => process.exit(1))' "$1"; }
+
+# For scripts that run something on the test profile: takes the lock npm test takes (so no run resets
+# the database under another), starts the services not running yet; they stop when the script exits.
+use_test_services() {
+  fw_profile_env test
+  exec 9>"$FW_DATA/test-run.lock"
+  flock 9 || fail "could not take the test lock"
+  trap 'stop_services' EXIT
+  trap 'exit 130' INT TERM
+  start_services >/dev/null
+}

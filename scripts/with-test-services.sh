@@ -4,12 +4,7 @@
 # It takes the same lock as npm test, starts what is not running, migrates, runs the command from
 # the current folder, and stops what it started.
 source "$(dirname "$0")/lib.sh"
-fw_profile_env test
-exec 9>"$FW_DATA/test-run.lock"
-flock 9 || fail "could not take the test lock"
-trap 'stop_services' EXIT
-trap 'exit 130' INT TERM
-start_services >/dev/null
+use_test_services
 build_if_changed api "$ROOT/api/src" "$ROOT/api/tsconfig.json" "$ROOT/api/tsconfig.build.json" "$ROOT/package-lock.json" >/dev/null
 run_migrations >/dev/null
 "$@"

@@ -4,7 +4,7 @@ import type { DeviationUnit } from '@/components/diagrams/tolerance-zone-geometr
 import type { ChecklistAssembly, FitCheck, FitCheckState, Reading } from '../api/queries';
 import { checkSummary } from './check-detail';
 import { CheckDiagram } from './check-diagram';
-import { CheckStateBadge, STATE_LOOK } from './check-state';
+import { CheckStateBadge, STATE_LOOK } from '@/components/check-state';
 import { EvidenceForm, type ReadingChoice } from './evidence-form';
 import { ACTION_LABELS } from './transition-modal';
 import { WhatIfPanel } from './what-if-panel';

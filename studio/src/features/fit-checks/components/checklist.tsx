@@ -6,7 +6,7 @@ import type { DeviationUnit } from '@/components/diagrams/tolerance-zone-geometr
 import { UnitToggle } from '@/components/unit-toggle';
 import { fitCheckQueries, type ChecklistAssembly, type ChecklistVerdict, type FitCheck, type FitCheckState, type Reading } from '../api/queries';
 import { CheckCard } from './check-card';
-import { StateIcon, STATE_LOOK, VERDICT_LOOK } from './check-state';
+import { StateIcon, STATE_LOOK, VERDICT_LOOK } from '@/components/check-state';
 import type { ReadingChoice } from './evidence-form';
 import { HistoryDrawer } from './history-drawer';
 import { ManualCheckForm } from './manual-check-form';

@@ -1,7 +1,7 @@
 import { Alert, Drawer, Skeleton, Stack, Text, Timeline } from '@mantine/core';
 import { useQuery } from '@tanstack/react-query';
 import { fitCheckQueries, type FitCheck } from '../api/queries';
-import { StateIcon, STATE_LOOK } from './check-state';
+import { StateIcon, STATE_LOOK } from '@/components/check-state';
 
 /** Every state a check has been in, who or what moved it, and why. */
 export function HistoryDrawer({ workshopId, check, onClose }: { workshopId: string; check: FitCheck | null; onClose: () => void }) {

@@ -3,7 +3,7 @@ import { useState } from 'react';
 import { notifyDone, notifyError } from '@/lib/notify';
 import { useTransitionCheck } from '../api/mutations';
 import type { FitCheck, FitCheckState } from '../api/queries';
-import { STATE_LOOK } from './check-state';
+import { STATE_LOOK } from '@/components/check-state';
 
 export interface TransitionRequest {
   check: FitCheck;

@@ -1,19 +1,8 @@
 import { Group, List, Paper, Stack, Text, Title, UnstyledButton } from '@mantine/core';
-import type { CheckEvidence, CheckState, ChecklistVerdict, PublishedChecklist } from '../api/types';
+import type { CheckEvidence, ChecklistVerdict, PublishedChecklist } from '../api/types';
+import { CheckStateBadge } from '@/components/check-state';
 import classes from './guide-view.module.css';
 import { formatTime } from './playback';
-
-/**
- * Each state in words, with its own shape: ring (open), half-filled ring (passes on the bench), filled disc with a
- * tick (confirmed), crossed square (does not fit), dashed slashed ring (retired). Colour only helps.
- */
-export const CHECK_STATE_LOOK: Record<CheckState, { label: string; meaning: string; colour: string }> = {
-  open: { label: 'Open', meaning: 'not proven yet', colour: '#5c6470' },
-  bench_pass: { label: 'Passes on the bench', meaning: 'the numbers fit; not yet test-fitted', colour: '#1c5fa8' },
-  confirmed: { label: 'Confirmed on the vehicle', meaning: 'test-fitted, with evidence', colour: '#0d7369' },
-  no_fit: { label: 'Does not fit', meaning: 'the numbers or the test fit say no', colour: '#b3261e' },
-  retired: { label: 'Retired', meaning: 'no longer counted', colour: '#868e96' },
-};
 
 const VERDICT_WORDS: Record<ChecklistVerdict, { label: string; explanation: string }> = {
   open: { label: 'Not proven yet', explanation: 'Some required checks are still open.' },
@@ -23,51 +12,6 @@ const VERDICT_WORDS: Record<ChecklistVerdict, { label: string; explanation: stri
 };
 
 const EVIDENCE_WORDS: Record<CheckEvidence['kind'], string> = { mark: 'Video', measurement: 'Measurement', photo: 'Photo' };
-
-function StateIcon({ state }: { state: CheckState }) {
-  const colour = CHECK_STATE_LOOK[state].colour;
-  return (
-    <svg width="16" height="16" viewBox="0 0 16 16" aria-hidden="true" focusable="false" data-icon={state} style={{ flex: 'none' }}>
-      {state === 'open' && <circle cx="8" cy="8" r="6" fill="none" stroke={colour} strokeWidth="2" />}
-      {state === 'bench_pass' && (
-        <>
-          <circle cx="8" cy="8" r="6" fill="none" stroke={colour} strokeWidth="2" />
-          <path d="M8 2a6 6 0 0 0 0 12z" fill={colour} />
-        </>
-      )}
-      {state === 'confirmed' && (
-        <>
-          <circle cx="8" cy="8" r="7" fill={colour} />
-          <path d="M4.5 8.2l2.3 2.3 4.7-4.8" fill="none" stroke="#fff" strokeWidth="2" strokeLinecap="round" strokeLinejoin="round" />
-        </>
-      )}
-      {state === 'no_fit' && (
-        <>
-          <rect x="1.5" y="1.5" width="13" height="13" rx="1.5" fill={colour} />
-          <path d="M5 5l6 6M11 5l-6 6" stroke="#fff" strokeWidth="2" strokeLinecap="round" />
-        </>
-      )}
-      {state === 'retired' && (
-        <>
-          <circle cx="8" cy="8" r="6" fill="none" stroke={colour} strokeWidth="1.5" strokeDasharray="2 2" />
-          <path d="M3.5 12.5l9-9" stroke={colour} strokeWidth="1.5" />
-        </>
-      )}
-    </svg>
-  );
-}
-
-export function CheckStateLabel({ state }: { state: CheckState }) {
-  const look = CHECK_STATE_LOOK[state] ?? CHECK_STATE_LOOK.open;
-  return (
-    <Group gap={6} wrap="nowrap" data-testid="check-state" data-state={state} className={classes.statePill} style={{ borderColor: look.colour }}>
-      <StateIcon state={state} />
-      <Text size="sm" fw={600} c={look.colour} style={{ whiteSpace: 'nowrap' }}>
-        {look.label}
-      </Text>
-    </Group>
-  );
-}
 
 const dateFormat = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric' });
 
@@ -124,7 +68,7 @@ export function ChecklistPanel({ checklist, onSeek }: ChecklistPanelProps) {
                     </Text>
                   )}
                 </div>
-                <CheckStateLabel state={check.state} />
+                <CheckStateBadge state={check.state} />
               </Group>
               {check.evidence.length > 0 && (
                 <List size="sm" mt={4} spacing={2} aria-label={`Evidence for ${check.title}`}>
