@@ -14,6 +14,7 @@ import { WorkshopsModule } from './workshops/workshops.module';
 import { AssembliesModule } from './assemblies/assemblies.module';
 import { BuildsModule } from './builds/builds.module';
 import { FitChecksModule } from './fit-checks/fit-checks.module';
+import { FollowsModule } from './follows/follows.module';
 import { FootageModule } from './footage/footage.module';
 import { GuidesModule } from './guides/guides.module';
 import { MarksModule } from './marks/marks.module';
@@ -50,6 +51,7 @@ import { TranscriptsModule } from './transcripts/transcripts.module';
     TranscriptsModule,
     MarksModule,
     GuidesModule,
+    FollowsModule,
   ],
 })
 export class AppModule implements NestModule {

@@ -4,9 +4,11 @@ import { DataSource } from 'typeorm';
 import { loadDemoAccounts } from '../src/database/demo/demo-accounts';
 import { loadDemoFitData } from '../src/database/demo/demo-fit-data';
 import { loadDemoFootage } from '../src/database/demo/demo-footage';
-import { DEMO_GUIDE_TITLE, loadDemoGuide } from '../src/database/demo/demo-guide';
+import { DEMO_PASSWORD, DEMO_PEOPLE } from '../src/database/demo/demo-accounts';
+import { DEMO_GUIDE_TITLE, loadDemoFollows, loadDemoGuide } from '../src/database/demo/demo-guide';
 import { loadDemoMarks } from '../src/database/demo/demo-marks';
 import { createTestApp } from './create-test-app';
+import { signIn } from './support/accounts';
 
 // The demo clip may have to be generated first (about 15 s); later runs reuse it from .data/.
 jest.setTimeout(180_000);
@@ -26,6 +28,10 @@ describe('demo guide (real MariaDB, Redis, S3 fake)', () => {
     await loadDemoMarks(app, ids);
     await loadDemoGuide(app, ids);
     expect(await loadDemoGuide(app, ids)).toBe('demo guide already loaded');
+    await loadDemoFollows(app, { workshopId: accounts.workshopId, followerId: accounts.followerId });
+    expect(await loadDemoFollows(app, { workshopId: accounts.workshopId, followerId: accounts.followerId })).toBe('demo follows already loaded');
+    const follower = await signIn(app, DEMO_PEOPLE.follower.email, DEMO_PASSWORD);
+    expect((await follower.get('/api/follows').expect(200)).body.map((follow: { label: string }) => follow.label)).toEqual(['Motor-to-gearbox coupler']);
 
     const index = await request(app.getHttpServer()).get('/api/guides').query({ q: 'coupler stack' }).expect(200);
     const entry = index.body.find((item: { title: string; workshop: { name: string } }) => item.title === DEMO_GUIDE_TITLE && item.workshop.name === 'Harrow Lane Garage');

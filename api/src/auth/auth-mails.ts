@@ -1,21 +1,10 @@
+import { composeMail } from '../infra/mail/compose-mail';
 import type { OutgoingMail } from '../infra/mail/mail.service';
 
-/** The account e-mails. Plain text first (it is what most clients preview), a small HTML twin with the same link. */
-
-function mail(to: string, subject: string, paragraphs: string[], link?: { label: string; url: string }): OutgoingMail {
-  const text = [...paragraphs, ...(link ? [`${link.label}: ${link.url}`] : []), '— Fitwright'].join('\n\n');
-  const escape = (value: string) =>
-    value.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;');
-  const html = [
-    ...paragraphs.map((paragraph) => `<p>${escape(paragraph)}</p>`),
-    ...(link ? [`<p><a href="${escape(link.url)}">${escape(link.label)}</a></p>`] : []),
-    '<p>— Fitwright</p>',
-  ].join('\n');
-  return { to, subject, text, html };
-}
+/** The account e-mails. */
 
 export function verifyEmailMail(to: string, displayName: string, url: string): OutgoingMail {
-  return mail(
+  return composeMail(
     to,
     'Confirm your e-mail address for Fitwright',
     [`Hello ${displayName},`, 'Please confirm that this is your e-mail address. The link works for 48 hours.'],
@@ -24,7 +13,7 @@ export function verifyEmailMail(to: string, displayName: string, url: string): O
 }
 
 export function accountExistsMail(to: string, signInUrl: string, resetUrl: string): OutgoingMail {
-  return mail(to, 'Someone tried to sign up with your e-mail address', [
+  return composeMail(to, 'Someone tried to sign up with your e-mail address', [
     'Someone (perhaps you) tried to create a Fitwright account with this address, which already has one.',
     `If it was you, sign in at ${signInUrl}, or choose a new password at ${resetUrl}.`,
     'If it was not you, you can ignore this message; your account is unchanged.',
@@ -32,7 +21,7 @@ export function accountExistsMail(to: string, signInUrl: string, resetUrl: strin
 }
 
 export function resetPasswordMail(to: string, url: string): OutgoingMail {
-  return mail(
+  return composeMail(
     to,
     'Choose a new Fitwright password',
     [
@@ -44,7 +33,7 @@ export function resetPasswordMail(to: string, url: string): OutgoingMail {
 }
 
 export function changeEmailMail(to: string, url: string): OutgoingMail {
-  return mail(
+  return composeMail(
     to,
     'Confirm your new e-mail address for Fitwright',
     ['Please confirm that Fitwright should use this address for your account. The link works for 24 hours.'],
@@ -53,21 +42,21 @@ export function changeEmailMail(to: string, url: string): OutgoingMail {
 }
 
 export function emailTakenMail(to: string): OutgoingMail {
-  return mail(to, 'Your e-mail address is already on Fitwright', [
+  return composeMail(to, 'Your e-mail address is already on Fitwright', [
     'Someone asked to move a Fitwright account to this address, but this address already has an account.',
     'Nothing was changed. If this was you, sign in with this address instead.',
   ]);
 }
 
 export function emailChangedMail(to: string, newEmail: string): OutgoingMail {
-  return mail(to, 'Your Fitwright e-mail address was changed', [
+  return composeMail(to, 'Your Fitwright e-mail address was changed', [
     `Your Fitwright account now uses ${newEmail}. Messages will no longer come to this address.`,
     'If you did not make this change, reply to this message or contact the site administrators at once.',
   ]);
 }
 
 export function passwordChangedMail(to: string): OutgoingMail {
-  return mail(to, 'Your Fitwright password was changed', [
+  return composeMail(to, 'Your Fitwright password was changed', [
     'The password of your Fitwright account was just changed, and other signed-in browsers were signed out.',
     'If you did not make this change, reset your password now and contact the site administrators.',
   ]);

@@ -4,6 +4,8 @@ import type { FitCheckState } from '../engine/checklist';
 export const FIT_CHECK_CHANGED = 'fit-check.changed';
 
 export interface FitCheckChangedEvent {
+  /** The history row of this change: one notification per change, however often it is delivered. */
+  eventId: string;
   workshopId: string;
   assemblyId: string;
   fitCheckId: string;

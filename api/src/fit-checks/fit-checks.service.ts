@@ -339,9 +339,10 @@ export class FitChecksService {
   // ---- helpers ----
 
   private async record(check: FitCheck, from: FitCheckState | null, to: FitCheckState, reason: string, actorId: string | null) {
-    await this.events.save(this.events.create({ fitCheckId: check.id, fromState: from, toState: to, reason: reason.slice(0, 500), actorId }));
+    const history = await this.events.save(this.events.create({ fitCheckId: check.id, fromState: from, toState: to, reason: reason.slice(0, 500), actorId }));
     if (from === to) return;
     const event: FitCheckChangedEvent = {
+      eventId: history.id,
       workshopId: check.workshopId,
       assemblyId: check.assemblyId,
       fitCheckId: check.id,

@@ -152,6 +152,12 @@ export class PublishedGuidesService {
         : [],
       parts,
       checklist: checklist?.view ?? null,
+      // What a signed-in reader may follow from here (POST /api/follows).
+      followTargets: {
+        workshop: { id: workshop.id, label: workshop.name },
+        build: { id: build.id, label: build.title },
+        assembly: checklist && content.assemblyId ? { id: content.assemblyId, label: checklist.view.assemblyName } : null,
+      },
       marks: this.marksUsed(content.stepMarks, checklist?.evidenceMarks ?? [], footage?.id ?? null),
     };
   }

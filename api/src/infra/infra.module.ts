@@ -30,7 +30,7 @@ import { StorageService } from './storage/storage.service';
         };
       },
     }),
-    BullModule.registerQueue({ name: QUEUES.mail }, { name: QUEUES.media }, { name: QUEUES.marks }),
+    BullModule.registerQueue({ name: QUEUES.mail }, { name: QUEUES.media }, { name: QUEUES.marks }, { name: QUEUES.notifications }),
   ],
   providers: [StorageService, MailService, MailQueueService, MailProcessor, MediaToolsService, QueueWorkersLifecycle],
   exports: [StorageService, MailService, MailQueueService, BullModule, MediaToolsService],

@@ -8,6 +8,8 @@ export interface InboxMessage {
   subject: string;
   text: string;
   html?: string;
+  /** As the fake received them, names in lower case. */
+  headers?: Record<string, string>;
   to: { address: string; name?: string }[];
   /** When it was sent (whole seconds). */
   time: string;

@@ -1,6 +1,7 @@
 import { INestApplicationContext } from '@nestjs/common';
 import { AssembliesService } from '../../assemblies/assemblies.service';
 import { BuildsService } from '../../builds/builds.service';
+import { FollowsService } from '../../follows/follows.service';
 import { FootageService } from '../../footage/footage.service';
 import { GuidesService } from '../../guides/guides.service';
 import type { CreateStepDto } from '../../guides/dto/guide.dto';
@@ -97,4 +98,12 @@ export async function loadDemoGuide(app: INestApplicationContext, { workshopId, 
   }
   const revision = await guides.publish(workshopId, guide.id, creatorId, 'First publication of the bench and truck checks.');
   return `demo guide "${DEMO_GUIDE_TITLE}" published as revision ${revision.number} with ${DEMO_STEPS.length} steps`;
+}
+
+/** The demo follower follows the guide's build, so fit news about it reaches her inbox. Idempotent. */
+export async function loadDemoFollows(app: INestApplicationContext, { workshopId, followerId }: { workshopId: string; followerId: string }): Promise<string> {
+  const build = (await app.get(BuildsService).list(workshopId)).find((candidate) => candidate.title === DEMO_BUILD_TITLE);
+  if (!build) return 'demo follows skipped: the demo build is missing';
+  const { created } = await app.get(FollowsService).follow(followerId, 'build', build.id);
+  return created ? `the demo follower now follows "${DEMO_BUILD_TITLE}"` : 'demo follows already loaded';
 }

@@ -5,6 +5,7 @@ import { Footage1764840000000 } from './1764840000000-footage';
 import { Marks1764900000000 } from './1764900000000-marks';
 import { MarkEvidence1764900000001 } from './1764900000001-mark-evidence';
 import { Guides1765000000000 } from './1765000000000-guides';
+import { Follows1765100000000 } from './1765100000000-follows';
 
 /** Every migration, oldest first. Listed explicitly so the same list works from src (tests) and dist. */
 // eslint-disable-next-line @typescript-eslint/no-unsafe-function-type
@@ -15,4 +16,5 @@ export const migrations: MixedList<Function> = [
   Marks1764900000000,
   MarkEvidence1764900000001,
   Guides1765000000000,
+  Follows1765100000000,
 ];

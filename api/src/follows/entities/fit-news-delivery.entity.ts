@@ -1,0 +1,31 @@
+import { Column, Entity, Index, PrimaryColumn } from 'typeorm';
+import { CreatedAtColumn, newId } from '../../common/database/columns';
+
+/** One fit-news e-mail to one person for one fit-check change; its token unsubscribes from the follow behind it. */
+@Entity('fit_news_deliveries')
+@Index(['fitCheckEventId', 'userId'], { unique: true })
+@Index(['tokenHash'], { unique: true })
+export class FitNewsDelivery {
+  @PrimaryColumn({ type: 'char', length: 36 })
+  id: string = newId();
+
+  @Column({ name: 'fit_check_event_id', type: 'char', length: 36 })
+  fitCheckEventId!: string;
+
+  @Column({ name: 'user_id', type: 'char', length: 36 })
+  userId!: string;
+
+  /** Null once that follow is gone. */
+  @Column({ name: 'follow_id', type: 'char', length: 36, nullable: true })
+  followId!: string | null;
+
+  /** What was followed, as named when the e-mail went out. */
+  @Column({ name: 'follow_label', type: 'varchar', length: 200 })
+  followLabel!: string;
+
+  @Column({ name: 'token_hash', type: 'char', length: 64 })
+  tokenHash!: string;
+
+  @CreatedAtColumn()
+  createdAt!: Date;
+}

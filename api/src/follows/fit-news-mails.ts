@@ -1,0 +1,39 @@
+import { composeMail } from '../infra/mail/compose-mail';
+import type { OutgoingMail } from '../infra/mail/mail.service';
+
+export interface FitNews {
+  to: string;
+  news: 'confirmed' | 'no_fit';
+  checkTitle: string;
+  reason: string;
+  evidence: string[];
+  workshopName: string;
+  assemblyName: string;
+  buildTitle: string;
+  guideUrl: string;
+  followLabel: string;
+  /** The studio page that unfollows (for people). */
+  unsubscribePageUrl: string;
+  /** The API address that unfollows in one POST (for mail clients, RFC 8058). */
+  oneClickUnsubscribeUrl: string;
+}
+
+/** The e-mail a follower gets when a fit is confirmed or fails. */
+export function fitNewsMail(news: FitNews): OutgoingMail {
+  const outcome = news.news === 'confirmed' ? 'confirmed it fits, test-fitted on the vehicle' : 'found that it does not fit';
+  return composeMail(
+    news.to,
+    `${news.news === 'confirmed' ? 'Fit confirmed' : 'No fit'}: ${news.checkTitle}`,
+    [
+      `${news.workshopName} has ${outcome}: “${news.checkTitle}” in “${news.assemblyName}” (${news.buildTitle}).`,
+      ...(news.reason ? [`Their note: ${news.reason}`] : []),
+      ...(news.evidence.length ? [`Evidence: ${news.evidence.join('; ')}.`] : []),
+      `You get this because you follow ${news.followLabel}. To stop, open ${news.unsubscribePageUrl}`,
+    ],
+    { label: 'See the verified-fit checklist', url: news.guideUrl },
+    {
+      'List-Unsubscribe': `<${news.oneClickUnsubscribeUrl}>`,
+      'List-Unsubscribe-Post': 'List-Unsubscribe=One-Click',
+    },
+  );
+}

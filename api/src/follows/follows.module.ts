@@ -1,0 +1,28 @@
+import { Module } from '@nestjs/common';
+import { TypeOrmModule } from '@nestjs/typeorm';
+import { Assembly } from '../assemblies/entities/assembly.entity';
+import { Build } from '../builds/entities/build.entity';
+import { FitCheckEvidence } from '../fit-checks/entities/fit-check-evidence.entity';
+import { Guide } from '../guides/entities/guide.entity';
+import { Mark } from '../marks/entities/mark.entity';
+import { Measurement } from '../measurements/entities/measurement.entity';
+import { User } from '../users/entities/user.entity';
+import { WorkshopMember } from '../workshops/entities/workshop-member.entity';
+import { Workshop } from '../workshops/entities/workshop.entity';
+import { FitNewsDelivery } from './entities/fit-news-delivery.entity';
+import { Follow } from './entities/follow.entity';
+import { FitNewsListener } from './fit-news.listener';
+import { FitNewsProcessor } from './fit-news.processor';
+import { FitNewsService } from './fit-news.service';
+import { FollowsController } from './follows.controller';
+import { FollowsService } from './follows.service';
+
+@Module({
+  imports: [
+    TypeOrmModule.forFeature([Follow, FitNewsDelivery, Workshop, WorkshopMember, Build, Assembly, Guide, User, FitCheckEvidence, Mark, Measurement]),
+  ],
+  controllers: [FollowsController],
+  providers: [FollowsService, FitNewsService, FitNewsListener, FitNewsProcessor],
+  exports: [FollowsService],
+})
+export class FollowsModule {}
