@@ -14,6 +14,7 @@ import { WorkshopsModule } from './workshops/workshops.module';
 import { AssembliesModule } from './assemblies/assemblies.module';
 import { BuildsModule } from './builds/builds.module';
 import { FitChecksModule } from './fit-checks/fit-checks.module';
+import { FitReportsModule } from './fit-reports/fit-reports.module';
 import { FollowsModule } from './follows/follows.module';
 import { FootageModule } from './footage/footage.module';
 import { GuidesModule } from './guides/guides.module';
@@ -52,6 +53,7 @@ import { TranscriptsModule } from './transcripts/transcripts.module';
     MarksModule,
     GuidesModule,
     FollowsModule,
+    FitReportsModule,
   ],
 })
 export class AppModule implements NestModule {

@@ -10,8 +10,14 @@ export interface FitNews {
   workshopName: string;
   assemblyName: string;
   buildTitle: string;
-  guideUrl: string;
-  followLabel: string;
+  /** The guide's checklist, or the reporter's account page when no published guide shows the assembly. */
+  link: { label: string; url: string };
+  because: FollowReason | { kind: 'report' };
+}
+
+export interface FollowReason {
+  kind: 'follow';
+  label: string;
   /** The studio page that unfollows (for people). */
   unsubscribePageUrl: string;
   /** The API address that unfollows in one POST (for mail clients, RFC 8058). */
@@ -28,12 +34,13 @@ export function fitNewsMail(news: FitNews): OutgoingMail {
       `${news.workshopName} has ${outcome}: “${news.checkTitle}” in “${news.assemblyName}” (${news.buildTitle}).`,
       ...(news.reason ? [`Their note: ${news.reason}`] : []),
       ...(news.evidence.length ? [`Evidence: ${news.evidence.join('; ')}.`] : []),
-      `You get this because you follow ${news.followLabel}. To stop, open ${news.unsubscribePageUrl}`,
+      news.because.kind === 'follow'
+        ? `You get this because you follow ${news.because.label}. To stop, open ${news.because.unsubscribePageUrl}`
+        : 'You get this because you sent a fit report that this check verifies.',
     ],
-    { label: 'See the verified-fit checklist', url: news.guideUrl },
-    {
-      'List-Unsubscribe': `<${news.oneClickUnsubscribeUrl}>`,
-      'List-Unsubscribe-Post': 'List-Unsubscribe=One-Click',
-    },
+    news.link,
+    news.because.kind === 'follow'
+      ? { 'List-Unsubscribe': `<${news.because.oneClickUnsubscribeUrl}>`, 'List-Unsubscribe-Post': 'List-Unsubscribe=One-Click' }
+      : undefined,
   );
 }

@@ -9,6 +9,7 @@ import { hashSecretToken, newSecretToken } from '../common/secret-token';
 import type { AppConfig } from '../config/app-config';
 import { formatLength } from '../engine/units';
 import { FitCheckEvidence } from '../fit-checks/entities/fit-check-evidence.entity';
+import { FitReport } from '../fit-reports/entities/fit-report.entity';
 import type { FitCheckChangedEvent } from '../fit-checks/fit-checks.events';
 import { Guide } from '../guides/entities/guide.entity';
 import { publicGuidePath } from '../guides/guide.mapper';
@@ -28,10 +29,10 @@ export const NEWS_STATES = ['confirmed', 'no_fit'] as const;
 const CLOSEST_FIRST: FollowTargetKind[] = ['assembly', 'build', 'workshop'];
 
 /**
- * E-mails the followers of an assembly, its build and its workshop when one of its fit checks becomes
- * confirmed or no fit. Only news of an assembly a published guide shows goes out (the e-mail links to
- * that guide's checklist), only to confirmed addresses of active accounts, never to the person who made
- * the change, and once per person and change.
+ * E-mails news of a fit check that became confirmed or no fit: to the people whose fit report it
+ * verifies, and to the followers of its assembly, build and workshop when a published guide shows that
+ * assembly (the e-mail links to the guide's checklist). Only confirmed addresses of active accounts,
+ * never the person who made the change, once per person and change.
  */
 @Injectable()
 export class FitNewsService {
@@ -41,6 +42,7 @@ export class FitNewsService {
   constructor(
     @InjectRepository(Follow) private readonly follows: Repository<Follow>,
     @InjectRepository(FitNewsDelivery) private readonly deliveries: Repository<FitNewsDelivery>,
+    @InjectRepository(FitReport) private readonly reports: Repository<FitReport>,
     @InjectRepository(Guide) private readonly guides: Repository<Guide>,
     @InjectRepository(Assembly) private readonly assemblies: Repository<Assembly>,
     @InjectRepository(Build) private readonly builds: Repository<Build>,
@@ -55,48 +57,54 @@ export class FitNewsService {
     this.appOrigin = config.get('appOrigin', { infer: true });
   }
 
-  /** Returns how many e-mails were queued (0 when the change is not news or nobody follows). */
+  /** Returns how many e-mails were queued (0 when the change is not news or nobody is to hear). */
   async deliver(event: FitCheckChangedEvent): Promise<number> {
     if (!(NEWS_STATES as readonly string[]).includes(event.to)) return 0;
     const workshop = await this.workshops.findOneBy({ id: event.workshopId, disabledAt: IsNull() });
     const assembly = await this.assemblies.findOneBy({ id: event.assemblyId });
+    if (!workshop || !assembly) return 0;
+    const build = await this.builds.findOneByOrFail({ id: assembly.buildId });
     const guide = await this.guides.findOne({
       where: { assemblyId: event.assemblyId, publishedRevisionId: Not(IsNull()) },
       order: { createdAt: 'ASC' },
     });
-    if (!workshop || !assembly || !guide) return 0;
-    const build = await this.builds.findOneByOrFail({ id: assembly.buildId });
-
     const targets: Record<FollowTargetKind, { id: string; label: string }> = {
       assembly: { id: assembly.id, label: assembly.name },
       build: { id: build.id, label: build.title },
       workshop: { id: workshop.id, label: workshop.name },
     };
-    const follows = await this.follows.find({
-      where: CLOSEST_FIRST.map((kind) => ({ targetKind: kind, targetId: targets[kind].id })),
-    });
-    const closest = new Map<string, Follow>();
-    for (const kind of CLOSEST_FIRST) {
-      for (const follow of follows) if (follow.targetKind === kind && !closest.has(follow.userId)) closest.set(follow.userId, follow);
+
+    // Who hears, and why: reporters whose claim this check verifies, then followers through their closest follow.
+    // Followers only hear of assemblies a published guide shows; a reporter's report was tied to the check on purpose.
+    const reasons = new Map<string, Follow | 'report'>();
+    const reports = await this.reports.find({ where: { fitCheckId: event.fitCheckId, status: Not('declined') }, select: { reporterId: true } });
+    for (const report of reports) reasons.set(report.reporterId, 'report');
+    if (guide) {
+      const follows = await this.follows.find({ where: CLOSEST_FIRST.map((kind) => ({ targetKind: kind, targetId: targets[kind].id })) });
+      for (const kind of CLOSEST_FIRST) {
+        for (const follow of follows) if (follow.targetKind === kind && !reasons.has(follow.userId)) reasons.set(follow.userId, follow);
+      }
     }
-    const recipients = closest.size
-      ? await this.users.findBy({ id: In([...closest.keys()]), emailVerifiedAt: Not(IsNull()), disabledAt: IsNull() })
+    reasons.delete(event.actorId ?? '');
+    const recipients = reasons.size
+      ? await this.users.findBy({ id: In([...reasons.keys()]), emailVerifiedAt: Not(IsNull()), disabledAt: IsNull() })
       : [];
-    const evidence = await this.evidenceLines(event.fitCheckId);
-    const guideUrl = `${this.appOrigin}${publicGuidePath(workshop.slug, guide.slug)}#checklist`;
+    const evidence = recipients.length ? await this.evidenceLines(event.fitCheckId) : [];
+    const link = guide
+      ? { label: 'See the verified-fit checklist', url: `${this.appOrigin}${publicGuidePath(workshop.slug, guide.slug)}#checklist` }
+      : { label: 'See your fit reports', url: `${this.appOrigin}/account` };
 
     let queued = 0;
     for (const user of recipients) {
-      if (user.id === event.actorId) continue;
-      const follow = closest.get(user.id)!;
+      const reason = reasons.get(user.id)!;
       const token = newSecretToken();
       try {
         await this.deliveries.insert(
           this.deliveries.create({
             fitCheckEventId: event.eventId,
             userId: user.id,
-            followId: follow.id,
-            followLabel: targets[follow.targetKind].label,
+            followId: reason === 'report' ? null : reason.id,
+            followLabel: reason === 'report' ? 'your fit report' : targets[reason.targetKind].label,
             tokenHash: hashSecretToken(token),
           }),
         );
@@ -114,10 +122,16 @@ export class FitNewsService {
           workshopName: workshop.name,
           assemblyName: assembly.name,
           buildTitle: build.title,
-          guideUrl,
-          followLabel: targets[follow.targetKind].label,
-          unsubscribePageUrl: `${this.appOrigin}/unsubscribe?token=${token}`,
-          oneClickUnsubscribeUrl: `${this.appOrigin}/api/follows/unsubscribe?token=${token}`,
+          link,
+          because:
+            reason === 'report'
+              ? { kind: 'report' }
+              : {
+                  kind: 'follow',
+                  label: targets[reason.targetKind].label,
+                  unsubscribePageUrl: `${this.appOrigin}/unsubscribe?token=${token}`,
+                  oneClickUnsubscribeUrl: `${this.appOrigin}/api/follows/unsubscribe?token=${token}`,
+                },
         }),
       );
       queued += 1;

@@ -3,6 +3,7 @@ import { TypeOrmModule } from '@nestjs/typeorm';
 import { Assembly } from '../assemblies/entities/assembly.entity';
 import { Build } from '../builds/entities/build.entity';
 import { FitCheckEvidence } from '../fit-checks/entities/fit-check-evidence.entity';
+import { FitReport } from '../fit-reports/entities/fit-report.entity';
 import { Guide } from '../guides/entities/guide.entity';
 import { Mark } from '../marks/entities/mark.entity';
 import { Measurement } from '../measurements/entities/measurement.entity';
@@ -19,7 +20,7 @@ import { FollowsService } from './follows.service';
 
 @Module({
   imports: [
-    TypeOrmModule.forFeature([Follow, FitNewsDelivery, Workshop, WorkshopMember, Build, Assembly, Guide, User, FitCheckEvidence, Mark, Measurement]),
+    TypeOrmModule.forFeature([Follow, FitNewsDelivery, FitReport, Workshop, WorkshopMember, Build, Assembly, Guide, User, FitCheckEvidence, Mark, Measurement]),
   ],
   controllers: [FollowsController],
   providers: [FollowsService, FitNewsService, FitNewsListener, FitNewsProcessor],

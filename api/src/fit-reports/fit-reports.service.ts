@@ -1,0 +1,168 @@
+import { BadRequestException, HttpException, HttpStatus, Injectable, NotFoundException } from '@nestjs/common';
+import { InjectRepository } from '@nestjs/typeorm';
+import { In, IsNull, MoreThan, Not, Repository } from 'typeorm';
+import { Assembly } from '../assemblies/entities/assembly.entity';
+import { Build } from '../builds/entities/build.entity';
+import { newId } from '../common/database/columns';
+import { requireImage, type UploadedFileLike } from '../common/uploads/image-file';
+import { FitCheck } from '../fit-checks/entities/fit-check.entity';
+import { Guide } from '../guides/entities/guide.entity';
+import { publicGuidePath } from '../guides/guide.mapper';
+import { StorageService } from '../infra/storage/storage.service';
+import { photoIdOf } from '../parts/part-photos';
+import { User } from '../users/entities/user.entity';
+import { Workshop } from '../workshops/entities/workshop.entity';
+import type { CreateFitReportDto, UpdateFitReportDto } from './dto/fit-report.dto';
+import { FitReport, type FitReportStatus } from './entities/fit-report.entity';
+
+export const FIT_REPORT_PHOTO_MAX_BYTES = 15 * 1024 * 1024;
+const MAX_PHOTOS = 6;
+/** Enough for a keen subscriber, too few to flood a workshop. */
+const REPORTS_PER_HOUR = 10;
+/** A reporter may add photos until the creator has decided. */
+const OPEN_STATUSES: FitReportStatus[] = ['new', 'investigating'];
+
+type Viewer = { kind: 'reporter' } | { kind: 'workshop'; workshopId: string };
+
+/**
+ * Fit reports: sent by signed-in readers from a published guide, reviewed by the workshop. The
+ * workshop sees the reporter's display name, never their address; the reporter sees the status and
+ * the creator's note.
+ */
+@Injectable()
+export class FitReportsService {
+  constructor(
+    @InjectRepository(FitReport) private readonly reports: Repository<FitReport>,
+    @InjectRepository(Guide) private readonly guides: Repository<Guide>,
+    @InjectRepository(Workshop) private readonly workshops: Repository<Workshop>,
+    @InjectRepository(Build) private readonly builds: Repository<Build>,
+    @InjectRepository(FitCheck) private readonly checks: Repository<FitCheck>,
+    @InjectRepository(Assembly) private readonly assemblies: Repository<Assembly>,
+    @InjectRepository(User) private readonly users: Repository<User>,
+    private readonly storage: StorageService,
+  ) {}
+
+  async create(reporterId: string, workshopSlug: string, guideSlug: string, input: CreateFitReportDto) {
+    const workshop = await this.workshops.findOneBy({ slug: workshopSlug, disabledAt: IsNull() });
+    const guide = workshop ? await this.guides.findOneBy({ workshopId: workshop.id, slug: guideSlug, publishedRevisionId: Not(IsNull()) }) : null;
+    if (!workshop || !guide) throw new NotFoundException('This guide is not published.');
+    const lastHour = await this.reports.countBy({ reporterId, createdAt: MoreThan(new Date(Date.now() - 3_600_000)) });
+    if (lastHour >= REPORTS_PER_HOUR) {
+      throw new HttpException(`You have sent ${REPORTS_PER_HOUR} fit reports in the last hour; please wait before sending more.`, HttpStatus.TOO_MANY_REQUESTS);
+    }
+    const report = await this.reports.save(
+      this.reports.create({
+        workshopId: workshop.id,
+        buildId: guide.buildId,
+        guideId: guide.id,
+        reporterId,
+        outcome: input.outcome,
+        parts: input.parts.trim(),
+        vehicle: input.vehicle?.trim() ?? '',
+        notes: input.notes?.trim() ?? '',
+        photoKeys: [],
+        status: 'new',
+        creatorNote: '',
+        fitCheckId: null,
+      }),
+    );
+    return (await this.describe([report], { kind: 'reporter' }))[0];
+  }
+
+  /** Stores a photo (PNG, JPEG or WebP, checked by content) with the reporter's own report. */
+  async addPhoto(reporterId: string, reportId: string, file: UploadedFileLike | undefined) {
+    const report = await this.reports.findOneBy({ id: reportId, reporterId });
+    if (!report) throw new NotFoundException('Fit report not found');
+    if (!OPEN_STATUSES.includes(report.status)) throw new BadRequestException('This report has been decided; it takes no more photos.');
+    if (report.photoKeys.length >= MAX_PHOTOS) throw new BadRequestException(`A fit report keeps at most ${MAX_PHOTOS} photos.`);
+    const image = requireImage(file, { field: 'photo', what: 'The photo', maxBytes: FIT_REPORT_PHOTO_MAX_BYTES });
+    const key = `workshops/${report.workshopId}/fit-reports/${report.id}/${newId()}.${image.extension}`;
+    await this.storage.putObject(key, image.bytes, image.contentType);
+    report.photoKeys = [...report.photoKeys, key];
+    await this.reports.update({ id: report.id }, { photoKeys: report.photoKeys });
+    return (await this.describe([report], { kind: 'reporter' }))[0];
+  }
+
+  async mine(reporterId: string) {
+    const reports = await this.reports.find({ where: { reporterId }, order: { createdAt: 'DESC' } });
+    return this.describe(reports, { kind: 'reporter' });
+  }
+
+  async listForWorkshop(workshopId: string, status?: FitReportStatus) {
+    const reports = await this.reports.find({ where: { workshopId, ...(status ? { status } : {}) }, order: { createdAt: 'DESC' } });
+    return this.describe(reports, { kind: 'workshop', workshopId });
+  }
+
+  async update(workshopId: string, reportId: string, input: UpdateFitReportDto) {
+    const report = await this.reports.findOneBy({ id: reportId, workshopId });
+    if (!report) throw new NotFoundException('Fit report not found');
+    if (input.fitCheckId !== undefined) {
+      if (input.fitCheckId !== null && !(await this.checks.existsBy({ id: input.fitCheckId, workshopId }))) {
+        throw new NotFoundException('Fit check not found');
+      }
+      report.fitCheckId = input.fitCheckId;
+      // Tying a fresh report to a check is starting to verify it.
+      if (input.fitCheckId && report.status === 'new' && input.status === undefined) report.status = 'investigating';
+    }
+    if (input.status !== undefined) report.status = input.status;
+    if (input.creatorNote !== undefined) report.creatorNote = input.creatorNote.trim();
+    await this.reports.save(report);
+    return (await this.describe([report], { kind: 'workshop', workshopId }))[0];
+  }
+
+  async photoUrlForReporter(reporterId: string, reportId: string, photoId: string): Promise<string> {
+    const report = await this.reports.findOneBy({ id: reportId, reporterId });
+    return this.photoUrl(report, photoId);
+  }
+
+  async photoUrlForWorkshop(workshopId: string, reportId: string, photoId: string): Promise<string> {
+    const report = await this.reports.findOneBy({ id: reportId, workshopId });
+    return this.photoUrl(report, photoId);
+  }
+
+  private async photoUrl(report: FitReport | null, photoId: string): Promise<string> {
+    const key = report?.photoKeys.find((candidate) => photoIdOf(candidate) === photoId);
+    if (!key) throw new NotFoundException('Photo not found');
+    return this.storage.presignedGetUrl(key, 300);
+  }
+
+  private async describe(reports: FitReport[], viewer: Viewer) {
+    if (reports.length === 0) return [];
+    const ids = <K extends keyof FitReport>(key: K) => [...new Set(reports.map((report) => report[key]).filter((id): id is NonNullable<FitReport[K]> => !!id))] as string[];
+    const [guides, builds, workshops, checks, reporters] = await Promise.all([
+      ids('guideId').length ? this.guides.findBy({ id: In(ids('guideId')) }) : [],
+      this.builds.findBy({ id: In(ids('buildId')) }),
+      this.workshops.findBy({ id: In(ids('workshopId')) }),
+      ids('fitCheckId').length ? this.checks.findBy({ id: In(ids('fitCheckId')) }) : [],
+      this.users.findBy({ id: In(ids('reporterId')) }),
+    ]);
+    const assemblies = checks.length ? await this.assemblies.findBy({ id: In(checks.map((check) => check.assemblyId)) }) : [];
+    return reports.map((report) => {
+      const workshop = workshops.find((candidate) => candidate.id === report.workshopId);
+      const guide = guides.find((candidate) => candidate.id === report.guideId);
+      const build = builds.find((candidate) => candidate.id === report.buildId);
+      const check = checks.find((candidate) => candidate.id === report.fitCheckId);
+      const photoBase =
+        viewer.kind === 'reporter' ? `/api/fit-reports/${report.id}/photos` : `/api/workshops/${viewer.workshopId}/fit-reports/${report.id}/photos`;
+      return {
+        id: report.id,
+        outcome: report.outcome,
+        parts: report.parts,
+        vehicle: report.vehicle,
+        notes: report.notes,
+        status: report.status,
+        creatorNote: report.creatorNote,
+        fitCheck: check
+          ? { id: check.id, title: check.title, state: check.state, assemblyName: assemblies.find((candidate) => candidate.id === check.assemblyId)?.name ?? '' }
+          : null,
+        guide: guide && workshop ? { title: guide.title, path: publicGuidePath(workshop.slug, guide.slug) } : null,
+        build: { id: report.buildId, title: build?.title ?? '' },
+        workshop: { name: workshop?.name ?? '', slug: workshop?.slug ?? '' },
+        reporter: { displayName: reporters.find((candidate) => candidate.id === report.reporterId)?.displayName ?? '' },
+        photos: report.photoKeys.map((key) => ({ id: photoIdOf(key), url: `${photoBase}/${photoIdOf(key)}` })),
+        createdAt: report.createdAt.toISOString(),
+        updatedAt: report.updatedAt.toISOString(),
+      };
+    });
+  }
+}
