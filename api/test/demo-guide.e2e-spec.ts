@@ -5,7 +5,7 @@ import { loadDemoAccounts } from '../src/database/demo/demo-accounts';
 import { loadDemoFitData } from '../src/database/demo/demo-fit-data';
 import { loadDemoFootage } from '../src/database/demo/demo-footage';
 import { DEMO_PASSWORD, DEMO_PEOPLE } from '../src/database/demo/demo-accounts';
-import { DEMO_GUIDE_TITLE, loadDemoFollows, loadDemoGuide } from '../src/database/demo/demo-guide';
+import { DEMO_GUIDE_TITLE, loadDemoFollower, loadDemoGuide } from '../src/database/demo/demo-guide';
 import { loadDemoMarks } from '../src/database/demo/demo-marks';
 import { createTestApp } from './create-test-app';
 import { signIn } from './support/accounts';
@@ -28,10 +28,12 @@ describe('demo guide (real MariaDB, Redis, S3 fake)', () => {
     await loadDemoMarks(app, ids);
     await loadDemoGuide(app, ids);
     expect(await loadDemoGuide(app, ids)).toBe('demo guide already loaded');
-    await loadDemoFollows(app, { workshopId: accounts.workshopId, followerId: accounts.followerId });
-    expect(await loadDemoFollows(app, { workshopId: accounts.workshopId, followerId: accounts.followerId })).toBe('demo follows already loaded');
+    await loadDemoFollower(app, { workshopId: accounts.workshopId, followerId: accounts.followerId });
+    expect(await loadDemoFollower(app, { workshopId: accounts.workshopId, followerId: accounts.followerId })).toBe('demo follower already loaded');
     const follower = await signIn(app, DEMO_PEOPLE.follower.email, DEMO_PASSWORD);
     expect((await follower.get('/api/follows').expect(200)).body.map((follow: { label: string }) => follow.label)).toEqual(['Motor-to-gearbox coupler']);
+    const [report] = (await follower.get('/api/fit-reports').expect(200)).body;
+    expect(report).toMatchObject({ outcome: 'fit', status: 'investigating', fitCheck: { title: 'Retention: coupler set screw and key staked' } });
 
     const index = await request(app.getHttpServer()).get('/api/guides').query({ q: 'coupler stack' }).expect(200);
     const entry = index.body.find((item: { title: string; workshop: { name: string } }) => item.title === DEMO_GUIDE_TITLE && item.workshop.name === 'Harrow Lane Garage');

@@ -14,5 +14,6 @@ import { FitReportsService } from './fit-reports.service';
   imports: [TypeOrmModule.forFeature([FitReport, Guide, Workshop, Build, FitCheck, Assembly, User])],
   controllers: [FitReportsController, WorkshopFitReportsController],
   providers: [FitReportsService],
+  exports: [FitReportsService],
 })
 export class FitReportsModule {}

@@ -1,12 +1,15 @@
 import { INestApplicationContext } from '@nestjs/common';
 import { AssembliesService } from '../../assemblies/assemblies.service';
 import { BuildsService } from '../../builds/builds.service';
+import { FitChecksService } from '../../fit-checks/fit-checks.service';
+import { FitReportsService } from '../../fit-reports/fit-reports.service';
 import { FollowsService } from '../../follows/follows.service';
 import { FootageService } from '../../footage/footage.service';
 import { GuidesService } from '../../guides/guides.service';
 import type { CreateStepDto } from '../../guides/dto/guide.dto';
 import { MarksService } from '../../marks/marks.service';
 import { TranscriptsService } from '../../transcripts/transcripts.service';
+import { DEMO_WORKSHOP } from './demo-accounts';
 import { DEMO_BUILD_TITLE } from './demo-fit-data';
 import { DEMO_FOOTAGE_TITLE } from './demo-footage';
 
@@ -100,10 +103,32 @@ export async function loadDemoGuide(app: INestApplicationContext, { workshopId, 
   return `demo guide "${DEMO_GUIDE_TITLE}" published as revision ${revision.number} with ${DEMO_STEPS.length} steps`;
 }
 
-/** The demo follower follows the guide's build, so fit news about it reaches her inbox. Idempotent. */
-export async function loadDemoFollows(app: INestApplicationContext, { workshopId, followerId }: { workshopId: string; followerId: string }): Promise<string> {
+/**
+ * The demo follower follows the guide's build and has sent a fit report from the guide (invented: a
+ * 21-tooth coupler on a sister truck), which the workshop tied to its retention check. Idempotent.
+ */
+export async function loadDemoFollower(app: INestApplicationContext, { workshopId, followerId }: { workshopId: string; followerId: string }): Promise<string> {
   const build = (await app.get(BuildsService).list(workshopId)).find((candidate) => candidate.title === DEMO_BUILD_TITLE);
-  if (!build) return 'demo follows skipped: the demo build is missing';
+  if (!build) return 'demo follower skipped: the demo build is missing';
   const { created } = await app.get(FollowsService).follow(followerId, 'build', build.id);
-  return created ? `the demo follower now follows "${DEMO_BUILD_TITLE}"` : 'demo follows already loaded';
+  const reports = app.get(FitReportsService);
+  const guide = (await app.get(GuidesService).list(workshopId, build.id)).find((candidate) => candidate.title === DEMO_GUIDE_TITLE);
+  if (guide && (await reports.mine(followerId)).length === 0) {
+    const report = await reports.create(followerId, DEMO_WORKSHOP.slug, guide.slug, {
+      outcome: 'fit',
+      parts: 'HL-2107 coupler on the five-speed input shaft (OM-G5-IN), with the adapter plate from the guide',
+      vehicle: 'Compact pickup, same generation, long bed',
+      notes: 'Slid on by hand and turned freely. I used a new set screw; is staking it enough?',
+    });
+    const retention = await findRetentionCheck(app, workshopId, build.id);
+    if (retention) await reports.update(workshopId, report.id, { fitCheckId: retention, creatorNote: 'Thanks! We are checking retention on our truck next.' });
+  }
+  return created ? `the demo follower follows "${DEMO_BUILD_TITLE}" and has sent a fit report` : 'demo follower already loaded';
+}
+
+async function findRetentionCheck(app: INestApplicationContext, workshopId: string, buildId: string): Promise<string | null> {
+  const assembly = (await app.get(AssembliesService).list(workshopId, buildId)).find((candidate) => candidate.name === DEMO_ASSEMBLY_NAME);
+  if (!assembly) return null;
+  const { items } = await app.get(FitChecksService).checklist(workshopId, assembly.id);
+  return items.find(({ check }) => check.title.startsWith('Retention'))?.check.id ?? null;
 }

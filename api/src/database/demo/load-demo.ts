@@ -5,7 +5,7 @@ import { AppModule } from '../../app.module';
 import { demoSignInLines, loadDemoAccounts } from './demo-accounts';
 import { loadDemoFitData } from './demo-fit-data';
 import { loadDemoFootage } from './demo-footage';
-import { loadDemoFollows, loadDemoGuide } from './demo-guide';
+import { loadDemoFollower, loadDemoGuide } from './demo-guide';
 import { loadDemoMarks } from './demo-marks';
 
 /**
@@ -24,7 +24,7 @@ async function loadDemo(): Promise<void> {
     console.log(`[demo] ${await loadDemoMarks(app, { workshopId: accounts.workshopId, creatorId: accounts.ownerId })}`);
     // The build's published guide, with step marks; after the marks, so it can point at them.
     console.log(`[demo] ${await loadDemoGuide(app, { workshopId: accounts.workshopId, creatorId: accounts.ownerId })}`);
-    console.log(`[demo] ${await loadDemoFollows(app, { workshopId: accounts.workshopId, followerId: accounts.followerId })}`);
+    console.log(`[demo] ${await loadDemoFollower(app, { workshopId: accounts.workshopId, followerId: accounts.followerId })}`);
     // Printed plainly (the app's logger is quietened to warnings while the demo loads).
     console.log(`[demo] workshop "Harrow Lane Garage" is ready: ${accounts.workshopId}`);
     for (const line of demoSignInLines()) console.log(`[demo] ${line}`);
