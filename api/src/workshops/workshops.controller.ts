@@ -17,11 +17,11 @@ import {
   ApiOkResponse,
   ApiTags,
 } from '@nestjs/swagger';
-import { SignedIn, WorkshopEditor } from '../common/decorators/access.decorator';
+import { SignedIn, WorkshopEditor, WorkshopOwner } from '../common/decorators/access.decorator';
 import { CurrentMembership } from '../common/decorators/current-membership.decorator';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import type { SessionUser, WorkshopMembership } from '../common/types/access-context';
-import { CreateWorkshopDto, UpdateWorkshopDto } from './dto/workshop.dto';
+import { CreateWorkshopDto, DeleteWorkshopDto, UpdateWorkshopDto } from './dto/workshop.dto';
 import { WorkshopView } from './dto/workshop-views.dto';
 import { SingleFileUpload } from '../common/uploads/single-file-upload.decorator';
 import type { UploadedFileLike } from '../common/uploads/image-file';
@@ -58,6 +58,15 @@ export class WorkshopsController {
   @ApiOkResponse({ type: WorkshopView })
   update(@CurrentMembership() membership: WorkshopMembership, @Body() dto: UpdateWorkshopDto): Promise<WorkshopView> {
     return this.workshops.update(membership, dto);
+  }
+
+  /** Everything goes: members, builds, footage, guides, reports and every stored file. Owners only. */
+  @WorkshopOwner()
+  @Delete(':workshopId')
+  @HttpCode(204)
+  @ApiNoContentResponse({ description: 'Deleted with all its data and files' })
+  async remove(@CurrentMembership() membership: WorkshopMembership, @Body() dto: DeleteWorkshopDto): Promise<void> {
+    await this.workshops.remove(membership, dto.confirmName);
   }
 
   @WorkshopEditor()

@@ -5,6 +5,7 @@ import {
   Injectable,
   Logger,
   NotFoundException,
+  UnprocessableEntityException,
 } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import { randomUUID } from 'node:crypto';
@@ -116,6 +117,28 @@ export class WorkshopsService {
     workshop.logoKey = null;
     await this.workshops.save(workshop);
     await this.deleteQuietly(previous);
+  }
+
+  /**
+   * Deletes the workshop; the database cascades to everything that belongs to it, then its stored files
+   * (all under workshops/<id>/) are removed. Typing the name again guards against the wrong tab.
+   */
+  async remove(membership: WorkshopMembership, confirmName: string): Promise<void> {
+    const workshop = await this.getEntity(membership.workshopId);
+    if (confirmName.trim() !== workshop.name) {
+      throw new UnprocessableEntityException({
+        message: `Type the workshop's name, ${workshop.name}, to delete it.`,
+        errors: { confirmName: 'does not match the workshop’s name' },
+      });
+    }
+    await this.workshops.delete({ id: workshop.id });
+    try {
+      const files = await this.storage.deletePrefix(`workshops/${workshop.id}/`);
+      this.logger.log(`workshop ${workshop.id} deleted with ${files} stored file(s)`);
+    } catch (error) {
+      // The rows are gone already; leftover files are unreachable and a bucket lifecycle rule can sweep them.
+      this.logger.warn(`workshop ${workshop.id} deleted; its files could not all be removed: ${error instanceof Error ? error.message : String(error)}`);
+    }
   }
 
   private async getEntity(workshopId: string): Promise<Workshop> {

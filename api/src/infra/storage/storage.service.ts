@@ -6,6 +6,7 @@ import {
   GetObjectCommand,
   HeadBucketCommand,
   HeadObjectCommand,
+  ListObjectsV2Command,
   PutObjectCommand,
   S3Client,
   S3ServiceException,
@@ -63,6 +64,23 @@ export class StorageService implements OnModuleDestroy {
   /** Deletes an object; deleting a missing key is not an error (as on S3). */
   async deleteObject(key: string): Promise<void> {
     await this.client.send(new DeleteObjectCommand({ Bucket: this.bucket, Key: key }));
+  }
+
+  /**
+   * Deletes every object whose key starts with `prefix` (a whole workshop's files), a page of keys at a
+   * time; returns how many. One DeleteObject per key, as the local S3 fake lacks the batch call.
+   */
+  async deletePrefix(prefix: string): Promise<number> {
+    let deleted = 0;
+    let continuationToken: string | undefined;
+    do {
+      const page = await this.client.send(new ListObjectsV2Command({ Bucket: this.bucket, Prefix: prefix, ContinuationToken: continuationToken }));
+      const keys = (page.Contents ?? []).map((item) => item.Key).filter((key): key is string => !!key);
+      for (const key of keys) await this.deleteObject(key);
+      deleted += keys.length;
+      continuationToken = page.IsTruncated ? page.NextContinuationToken : undefined;
+    } while (continuationToken);
+    return deleted;
   }
 
   /** A time-limited GET link a browser can use without credentials. */

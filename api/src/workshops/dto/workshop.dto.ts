@@ -61,3 +61,10 @@ export class UpdateWorkshopDto {
   @MaxLength(500, { message: 'Description must be at most 500 characters' })
   description?: string;
 }
+
+export class DeleteWorkshopDto {
+  @ApiProperty({ description: 'The workshop’s name, typed again: deleting cannot be undone' })
+  @IsString()
+  @MaxLength(120)
+  confirmName!: string;
+}

@@ -110,6 +110,18 @@ export function useLeaveWorkshop(workshopId: string) {
   });
 }
 
+/** Deletes the workshop with everything in it; the server wants its name typed again. */
+export function useDeleteWorkshop(workshopId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (confirmName: string) => apiRequest<null>(`/workshops/${workshopId}`, { method: 'DELETE', body: { confirmName } }),
+    onSuccess: () => {
+      queryClient.removeQueries({ queryKey: workshopQueries.detail(workshopId).queryKey });
+      return queryClient.invalidateQueries({ queryKey: workshopQueries.mine().queryKey });
+    },
+  });
+}
+
 export function useAcceptInvitation() {
   const queryClient = useQueryClient();
   return useMutation({

@@ -1,9 +1,11 @@
 import { Alert, Avatar, Button, FileButton, Group, Paper, Stack, Text, Textarea, TextInput, Title } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
+import { useNavigate } from 'react-router-dom';
+import { paths } from '@/config/paths';
 import { splitApiErrors } from '@/lib/form-errors';
 import { notifyDone, notifyError } from '@/lib/notify';
-import { useRemoveLogo, useUpdateWorkshop, useUploadLogo } from '../api/mutations';
+import { useDeleteWorkshop, useRemoveLogo, useUpdateWorkshop, useUploadLogo } from '../api/mutations';
 import type { Workshop } from '../api/queries';
 import { WorkshopGate } from './workshop-gate';
 import { WorkshopHeader } from './workshop-header';
@@ -116,6 +118,55 @@ function LogoPanel({ workshop, readOnly }: { workshop: Workshop; readOnly: boole
   );
 }
 
+/** Owners only: typing the name again is the confirmation, because nothing of it can be brought back. */
+export function DeleteWorkshopPanel({ workshop }: { workshop: Workshop }) {
+  const remove = useDeleteWorkshop(workshop.id);
+  const navigate = useNavigate();
+  const [typed, setTyped] = useState('');
+  const [problem, setProblem] = useState<string | null>(null);
+  const matches = typed.trim() === workshop.name;
+  return (
+    <form
+      noValidate
+      aria-label="Delete this workshop"
+      onSubmit={(event) => {
+        event.preventDefault();
+        setProblem(null);
+        remove.mutate(typed, {
+          onSuccess: () => {
+            notifyDone(`${workshop.name} was deleted`);
+            navigate(paths.workshops);
+          },
+          onError: (error) => setProblem(error instanceof Error ? error.message : 'The workshop could not be deleted.'),
+        });
+      }}
+    >
+      <Stack gap="sm">
+        <Text size="sm">
+          Deletes the workshop for everyone: its members, builds, parts, footage and transcripts, marks, guides (published ones
+          disappear from the public pages), fit reports and every stored file. Followers stop hearing from it. This cannot be undone.
+        </Text>
+        <TextInput
+          label={`Type the workshop's name, ${workshop.name}, to confirm`}
+          value={typed}
+          onChange={(event) => setTyped(event.currentTarget.value)}
+          autoComplete="off"
+        />
+        {problem && (
+          <Alert color="red" role="alert">
+            {problem}
+          </Alert>
+        )}
+        <Group>
+          <Button type="submit" color="red" disabled={!matches} loading={remove.isPending}>
+            Delete this workshop
+          </Button>
+        </Group>
+      </Stack>
+    </form>
+  );
+}
+
 function Settings({ workshop }: { workshop: Workshop }) {
   const readOnly = workshop.role === 'admin' || workshop.disabled;
   return (
@@ -134,6 +185,14 @@ function Settings({ workshop }: { workshop: Workshop }) {
           </Title>
           <LogoPanel workshop={workshop} readOnly={readOnly} />
         </Paper>
+        {workshop.role === 'owner' && (
+          <Paper withBorder p="lg" radius="md" style={{ borderColor: 'var(--mantine-color-red-6)' }}>
+            <Title order={3} size="h4" mb="sm">
+              Delete the workshop
+            </Title>
+            <DeleteWorkshopPanel workshop={workshop} />
+          </Paper>
+        )}
       </Stack>
     </Stack>
   );
