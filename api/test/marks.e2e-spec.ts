@@ -122,6 +122,15 @@ describe('marks and suggestions mined from the transcript (real MariaDB and Redi
     expect((await suggestions('accepted')).map((row) => row.id)).toEqual([thou.id]);
   });
 
+  it('moves the reading with its mark when the mark is re-timed', async () => {
+    const moved = await owner.agent.patch(`${base}/marks/${acceptedMarkId}`).send({ startMs: 14200 }).expect(200);
+    const { measurements: readings } = (
+      await owner.agent.get(`/api/workshops/${workshopId}/measurements`).query({ featureId: part.features[0].id }).expect(200)
+    ).body;
+    expect(readings.find((reading: { id: string }) => reading.id === moved.body.measurementId).footageTimeMs).toBe(14200);
+    await owner.agent.patch(`${base}/marks/${acceptedMarkId}`).send({ startMs: 14000 }).expect(200);
+  });
+
   it('dismisses a suggestion, and a replacement transcript (re-timed) does not bring it back', async () => {
     const mm = (await suggestions()).find((row) => row.phrase === 'twenty-two millimetres')!;
     await owner.agent.post(`${base}/mark-suggestions/${mm.id}/dismiss`).expect(201);

@@ -73,6 +73,7 @@ export class MarksService {
   async update(workshopId: string, footageId: string, markId: string, actorId: string, input: UpdateMarkDto): Promise<Mark> {
     const footage = await this.footage.get(workshopId, footageId);
     const mark = await this.get(workshopId, footageId, markId);
+    const previousStartMs = mark.startMs;
     if (input.startMs !== undefined) mark.startMs = input.startMs;
     if (input.endMs !== undefined) mark.endMs = input.endMs;
     if (input.kind !== undefined) mark.kind = input.kind;
@@ -88,6 +89,13 @@ export class MarksService {
     await this.validate(workshopId, mark, footage.durationMs);
     const saved = await this.marks.save(mark);
     await this.syncCheckEvidence(saved, actorId);
+    if (saved.kind === 'measurement' && saved.measurementId && saved.startMs !== previousStartMs) {
+      // A reading taken at the mark's moment moves with it; one tied to another moment keeps its own.
+      await this.measurementRows.update(
+        { id: saved.measurementId, footageId: saved.footageId, footageTimeMs: previousStartMs },
+        { footageTimeMs: saved.startMs },
+      );
+    }
     return saved;
   }
 
