@@ -51,6 +51,10 @@ fw_profile_env() {
   export MAIL_FROM="${MAIL_FROM:-Fitwright <no-reply@fitwright.local>}"
 
   # Accounts with these (verified) e-mail addresses become site admins; comma separated, optional.
+  # Every browser journey signs in from the same address (127.0.0.1), as a whole shop behind one router would;
+  # the test profile allows more attempts a minute so the journeys do not trip over each other. The limit itself
+  # is tested with its own low setting (api/test/auth.e2e-spec.ts).
+  export AUTH_RATE_LIMIT="${AUTH_RATE_LIMIT:-$([ "$profile" = test ] && echo 200 || echo 10)}"
   # The test profile names the one the browser journey signs up with.
   export ADMIN_EMAILS="${ADMIN_EMAILS:-$([ "$profile" = test ] && echo journey-admin@fitwright.test || true)}"
 

@@ -26,6 +26,7 @@ const router = createBrowserRouter([
       { path: paths.forgotPassword, lazy: async () => ({ Component: (await import('./routes/accounts')).ForgotPasswordRoute }) },
       { path: paths.resetPassword, lazy: async () => ({ Component: (await import('./routes/accounts')).ResetPasswordRoute }) },
       { path: paths.acceptInvitation, lazy: async () => ({ Component: (await import('./routes/accounts')).AcceptInvitationRoute }) },
+      { path: paths.unsubscribe, lazy: async () => ({ Component: (await import('./routes/unsubscribe')).UnsubscribeRoute }) },
       // Creator pages: signed-out visitors are sent to sign in and back (?next=). Add workshop pages here.
       {
         element: <RequireSignIn />,
@@ -49,6 +50,10 @@ const router = createBrowserRouter([
           { path: paths.assembly.path, lazy: async () => ({ Component: (await import('./routes/assembly')).AssemblyRoute }) },
           { path: paths.footage.path, lazy: async () => ({ Component: (await import('./routes/footage')).FootagePlayerRoute }) },
           { path: paths.guide.path, lazy: async () => ({ Component: (await import('./routes/guide')).GuideRoute }) },
+          {
+            path: paths.workshopFitReports.path,
+            lazy: async () => ({ Component: (await import('./routes/fit-reports')).WorkshopFitReportsRoute }),
+          },
         ],
       },
       {

@@ -54,7 +54,14 @@ export const paths = {
     path: '/workshops/:workshopId/members',
     to: (workshopId: string) => `/workshops/${workshopId}/members`,
   },
+  // Fit reports sent to a workshop from its published guides (?status= filters them).
+  workshopFitReports: {
+    path: '/workshops/:workshopId/fit-reports',
+    to: (workshopId: string) => `/workshops/${workshopId}/fit-reports`,
+  },
   acceptInvitation: '/invitations/accept',
+  // The stop link in every fit-news e-mail (?token=), open to everyone.
+  unsubscribe: '/unsubscribe',
   // Site administration.
   adminUsers: '/admin/users',
   adminWorkshops: '/admin/workshops',

@@ -1,3 +1,4 @@
+import { Stack } from '@mantine/core';
 import { useSearchParams } from 'react-router-dom';
 import { AccountSettings } from '@/features/auth/components/account-settings';
 import {
@@ -8,6 +9,8 @@ import {
   SignUpPage,
   VerifyEmailPage,
 } from '@/features/auth/components/auth-pages';
+import { MyFitReports } from '@/features/fit-reports/components/my-fit-reports';
+import { FollowingSection } from '@/features/follows/components/following-section';
 import { AcceptInvitationPage } from '@/features/workshops/components/accept-invitation';
 
 export const SignInRoute = SignInPage;
@@ -16,7 +19,17 @@ export const VerifyEmailRoute = VerifyEmailPage;
 export const ConfirmEmailRoute = ConfirmEmailPage;
 export const ForgotPasswordRoute = ForgotPasswordPage;
 export const ResetPasswordRoute = ResetPasswordPage;
-export const AccountRoute = AccountSettings;
+
+/** Account settings, then what the person follows and the fit reports they sent (composed here: features do not import each other). */
+export function AccountRoute() {
+  return (
+    <Stack maw={640} gap="lg">
+      <AccountSettings />
+      <FollowingSection />
+      <MyFitReports />
+    </Stack>
+  );
+}
 
 export function AcceptInvitationRoute() {
   const [params] = useSearchParams();

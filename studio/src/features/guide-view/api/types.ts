@@ -92,6 +92,13 @@ export interface GuideFootage {
   captionsUrl: string | null;
 }
 
+/** What a reader may follow from a guide (the follows contract): its workshop, its build, and the checklist's assembly. */
+export interface GuideFollowTargets {
+  workshop: { id: string; label: string };
+  build: { id: string; label: string };
+  assembly: { id: string; label: string } | null;
+}
+
 /** GET /api/guides/:workshopSlug/:guideSlug (404 when not published). */
 export interface PublishedGuide {
   workshop: { name: string; slug: string };
@@ -115,4 +122,5 @@ export interface PublishedGuide {
   parts: GuidePart[];
   checklist: PublishedChecklist | null;
   marks: GuideMark[];
+  followTargets: GuideFollowTargets;
 }

@@ -1,11 +1,11 @@
-import { Alert, Anchor, Breadcrumbs, Button, Group, Skeleton, Stack, Text, Title, Typography } from '@mantine/core';
+import { Alert, Anchor, Box, Breadcrumbs, Button, Group, Skeleton, Stack, Text, Title, Typography } from '@mantine/core';
 import { useQuery } from '@tanstack/react-query';
-import { useEffect } from 'react';
+import { useEffect, type ReactNode } from 'react';
 import { Link } from 'react-router-dom';
 import { paths } from '@/config/paths';
 import { ApiError } from '@/lib/api-client';
 import { guideViewQueries } from '../api/queries';
-import type { PublishedGuide } from '../api/types';
+import type { GuideFollowTargets, PublishedGuide } from '../api/types';
 import { useGuidePlayer } from '../hooks/use-guide-player';
 import { CautionsBlock } from './cautions-block';
 import { ChecklistPanel } from './checklist-panel';
@@ -32,8 +32,14 @@ function useGuideTitle(title: string) {
   }, [title]);
 }
 
+/** The route hands in what goes beside the title to follow the guide's fit news (features do not import each other). */
+export type FollowSlot = (targets: GuideFollowTargets) => ReactNode;
+
+/** The route hands in what offers to send a fit report from this guide. */
+export type ReportSlot = (guide: { workshopSlug: string; guideSlug: string; guideTitle: string }) => ReactNode;
+
 /** A published guide laid out to follow along: safety first, the video with its steps beside it, then the proof and the parts. */
-export function GuideDocument({ data }: { data: PublishedGuide }) {
+export function GuideDocument({ data, followSlot, reportSlot }: { data: PublishedGuide; followSlot?: FollowSlot; reportSlot?: ReportSlot }) {
   const { guide, workshop, revision, footage } = data;
   const player = useGuidePlayer();
   useGuideTitle(guide.title);
@@ -60,6 +66,17 @@ export function GuideDocument({ data }: { data: PublishedGuide }) {
               Revision {revision.number} · published {longDate.format(new Date(revision.publishedAt))}
               {revision.note ? ` · ${revision.note}` : ''}
             </Text>
+            {/* An API from before follows sends no targets: then there is nothing to offer. */}
+            {followSlot && data.followTargets && (
+              <Box mt="xs" className={classes.noPrint}>
+                {followSlot(data.followTargets)}
+              </Box>
+            )}
+            {reportSlot && (
+              <Box mt="xs" className={classes.noPrint}>
+                {reportSlot({ workshopSlug: workshop.slug, guideSlug: guide.slug, guideTitle: guide.title })}
+              </Box>
+            )}
           </div>
           <Button variant="default" onClick={() => window.print()} className={classes.noPrint}>
             Print
@@ -117,7 +134,17 @@ export function GuideDocument({ data }: { data: PublishedGuide }) {
 }
 
 /** The follow-along view of one published guide, for anyone. */
-export function FollowAlongView({ workshopSlug, guideSlug }: { workshopSlug: string; guideSlug: string }) {
+export function FollowAlongView({
+  workshopSlug,
+  guideSlug,
+  followSlot,
+  reportSlot,
+}: {
+  workshopSlug: string;
+  guideSlug: string;
+  followSlot?: FollowSlot;
+  reportSlot?: ReportSlot;
+}) {
   const guide = useQuery(guideViewQueries.detail(workshopSlug, guideSlug));
   if (guide.isPending) {
     return (
@@ -141,5 +168,5 @@ export function FollowAlongView({ workshopSlug, guideSlug }: { workshopSlug: str
       </Alert>
     );
   }
-  return <GuideDocument data={guide.data} />;
+  return <GuideDocument data={guide.data} followSlot={followSlot} reportSlot={reportSlot} />;
 }

@@ -72,6 +72,11 @@ export function testGuide(overrides: Partial<PublishedGuide> = {}): PublishedGui
       { id: 'm1', kind: 'measurement', startMs: 12_500, endMs: null, label: 'Spigot 0.015 in over', stepId: 's2', fitCheckId: null },
       { id: 'm2', kind: 'check_evidence', startMs: 9_000, endMs: null, label: 'Slides on by hand', stepId: null, fitCheckId: 'c1' },
     ],
+    followTargets: {
+      workshop: { id: 'w1', label: 'Harrow Lane Garage' },
+      build: { id: 'b1', label: 'Motor-to-gearbox coupler' },
+      assembly: { id: 'a1', label: '21-tooth coupler' },
+    },
     ...overrides,
   };
 }

@@ -13,6 +13,7 @@ export function WorkshopHeader({ workshop }: { workshop: Workshop }) {
     { value: paths.workshop.to(workshop.id), label: 'Overview' },
     { value: paths.builds.to(workshop.id), label: 'Builds' },
     { value: paths.parts.to(workshop.id), label: 'Parts' },
+    { value: paths.workshopFitReports.to(workshop.id), label: 'Fit reports' },
     { value: paths.workshopMembers.to(workshop.id), label: 'Members' },
     { value: paths.workshopSettings.to(workshop.id), label: 'Settings' },
   ];

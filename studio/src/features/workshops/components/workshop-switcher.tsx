@@ -27,7 +27,7 @@ export function WorkshopSwitcher() {
     if (value === ALL_WORKSHOPS) return navigate(paths.workshops);
     const rest = current ? location.pathname.slice(`/workshops/${current}`.length) : '';
     // Pages about one build or part belong to the old workshop; keep only the section.
-    const section = /^\/(members|settings|builds|parts)$/.exec(rest)?.[0] ?? '';
+    const section = /^\/(members|settings|builds|parts|fit-reports)$/.exec(rest)?.[0] ?? '';
     navigate(`${paths.workshop.to(value)}${section}`);
   };
 

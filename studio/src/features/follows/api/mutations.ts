@@ -1,0 +1,36 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { apiRequest } from '@/lib/api-client';
+import { followQueries, type Follow, type FollowTargetKind, type UnsubscribeResult } from './queries';
+
+/** Waits for my follows to be read again, so a checkbox or a list never shows the old state in between. */
+function useRefreshFollows() {
+  const queryClient = useQueryClient();
+  return () => queryClient.invalidateQueries({ queryKey: followQueries.all() });
+}
+
+export function useFollow() {
+  const refresh = useRefreshFollows();
+  return useMutation({
+    mutationFn: (target: { targetKind: FollowTargetKind; targetId: string }) =>
+      apiRequest<Follow>('/follows', { method: 'POST', body: target }),
+    onSuccess: refresh,
+  });
+}
+
+export function useUnfollow() {
+  const refresh = useRefreshFollows();
+  return useMutation({
+    mutationFn: (followId: string) => apiRequest<null>(`/follows/${encodeURIComponent(followId)}`, { method: 'DELETE' }),
+    onSuccess: refresh,
+  });
+}
+
+/** The e-mailed "stop" link: works signed out, with nothing but the link's token. */
+export function useUnsubscribe() {
+  const refresh = useRefreshFollows();
+  return useMutation({
+    mutationFn: (token: string) => apiRequest<UnsubscribeResult>('/follows/unsubscribe', { method: 'POST', body: { token } }),
+    // The person may be signed in in this browser: their list of follows changed too.
+    onSuccess: () => void refresh(),
+  });
+}
