@@ -82,6 +82,26 @@ describe('accounts (real MariaDB, Redis and mail fake)', () => {
     expect(hashes).not.toContain(token);
   });
 
+  it('slides a session forward with use, but never past 90 days after sign-in', async () => {
+    const account = await signUpAndSignIn(app);
+    // Signed in 89 days ago and last seen two hours ago: this request slides the expiry, capped at day 90.
+    await db.query(
+      'UPDATE sessions SET created_at = NOW(3) - INTERVAL 89 DAY, last_seen_at = NOW(3) - INTERVAL 2 HOUR WHERE user_id = ?',
+      [account.id],
+    );
+    await account.agent.get('/api/auth/me').expect(200);
+    const [slid] = await db.query('SELECT TIMESTAMPDIFF(SECOND, created_at, expires_at) AS lifetime FROM sessions WHERE user_id = ?', [account.id]);
+    expect(Number(slid.lifetime)).toBe(90 * 24 * 3600);
+    // Past day 90 the session is over, whatever its expiry says.
+    await db.query(
+      'UPDATE sessions SET created_at = NOW(3) - INTERVAL 90 DAY - INTERVAL 1 MINUTE, expires_at = NOW(3) + INTERVAL 1 DAY WHERE user_id = ?',
+      [account.id],
+    );
+    const me = await account.agent.get('/api/auth/me').expect(200);
+    expect(me.body.user).toBeNull();
+    expect(await db.query('SELECT id FROM sessions WHERE user_id = ?', [account.id])).toEqual([]);
+  });
+
   it('sets an httpOnly, SameSite=Lax session cookie, not Secure over http', async () => {
     const account = await signUpAndSignIn(app);
     const response = await account.agent.post('/api/auth/login').send({ email: account.email, password: account.password });

@@ -70,6 +70,27 @@ describe('deleting a workshop (real MariaDB, S3 fake)', () => {
     await app.close();
   });
 
+  it('deleting a build removes its stored files (footage, poster, evidence photos) and keeps the rest', async () => {
+    const base = `/api/workshops/${workshopId}`;
+    const buildId = (await owner.agent.post(`${base}/builds`).send({ title: 'Short-lived build' }).expect(201)).body.id;
+    const footageId = await uploadFile(owner.agent, workshopId, buildId, makeClip('short-lived.mp4', { seconds: 3, width: 160, height: 120, rate: 10 }));
+    await waitUntilProcessed(owner.agent, workshopId, footageId);
+    const assemblyId = (await owner.agent.post(`${base}/builds/${buildId}/assemblies`).send({ name: 'Short-lived stack' }).expect(201)).body.id;
+    const checkId = (await owner.agent.post(`${base}/assemblies/${assemblyId}/checks`).send({ title: 'Fits' }).expect(201)).body.id;
+    await owner.agent.post(`${base}/checks/${checkId}/photos`).attach('photo', PNG, 'fit.png').expect(201);
+    const before = await storedKeys(`workshops/${workshopId}/`);
+    expect((await storedKeys(`workshops/${workshopId}/footage/${footageId}/`)).sort()).toEqual([
+      `workshops/${workshopId}/footage/${footageId}/original.mp4`,
+      `workshops/${workshopId}/footage/${footageId}/poster.jpg`,
+    ]);
+
+    await owner.agent.delete(`${base}/builds/${buildId}`).expect(204);
+    expect(await storedKeys(`workshops/${workshopId}/footage/${footageId}/`)).toEqual([]);
+    expect(await storedKeys(`workshops/${workshopId}/checks/${checkId}/`)).toEqual([]);
+    // Everything else of the workshop is still there.
+    expect((await storedKeys(`workshops/${workshopId}/`)).length).toBe(before.length - 3);
+  });
+
   it('is for owners only, and asks for the name typed again', async () => {
     await editor.agent.delete(`/api/workshops/${workshopId}`).send({ confirmName: 'Doomed Shop' }).expect(403);
     await reader.agent.delete(`/api/workshops/${workshopId}`).send({ confirmName: 'Doomed Shop' }).expect(404);

@@ -7,6 +7,8 @@ export const CSRF_HEADER = 'x-csrf-token';
 /** Sessions slide: each request pushes expiry this far ahead (written at most once an hour). */
 export const SESSION_TTL_MS = 14 * 24 * 3600 * 1000;
 export const SESSION_REFRESH_AFTER_MS = 3600 * 1000;
+/** However much it is used, a session ends this long after sign-in (then sign in again). */
+export const SESSION_MAX_AGE_MS = 90 * 24 * 3600 * 1000;
 
 export const EMAIL_TOKEN_TTL_MS = {
   'verify-email': 48 * 3600 * 1000,

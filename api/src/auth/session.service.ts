@@ -7,7 +7,7 @@ import type { SessionUser } from '../common/types/access-context';
 import { User } from '../users/entities/user.entity';
 import { toSessionUser } from '../users/users.mapper';
 import { AuthCookies } from './auth-cookies';
-import { SESSION_REFRESH_AFTER_MS, SESSION_TTL_MS } from './auth.constants';
+import { SESSION_MAX_AGE_MS, SESSION_REFRESH_AFTER_MS, SESSION_TTL_MS } from './auth.constants';
 import { Session } from './entities/session.entity';
 
 /** Server-side sessions in MariaDB, so any API process can serve any request. */
@@ -37,14 +37,15 @@ export class SessionService {
 
   /**
    * The user behind the request's session cookie, or null when there is none, it expired, or the
-   * account is disabled. Slides the expiry forward (at most one write an hour).
+   * account is disabled. Slides the expiry forward (at most one write an hour), never past the
+   * session's maximum age.
    */
   async resolve(request: Request, response: Response): Promise<SessionUser | null> {
     const token = this.cookies.readSessionToken(request);
     if (!token) return null;
     const session = await this.sessions.findOneBy({ tokenHash: hashSecretToken(token) });
     const now = Date.now();
-    if (!session || session.expiresAt.getTime() <= now) {
+    if (!session || session.expiresAt.getTime() <= now || session.createdAt.getTime() + SESSION_MAX_AGE_MS <= now) {
       if (session) await this.sessions.delete({ id: session.id });
       this.cookies.clearSession(response);
       return null;
@@ -58,7 +59,7 @@ export class SessionService {
     if (now - session.lastSeenAt.getTime() > SESSION_REFRESH_AFTER_MS) {
       await this.sessions.update(
         { id: session.id },
-        { lastSeenAt: new Date(now), expiresAt: new Date(now + SESSION_TTL_MS) },
+        { lastSeenAt: new Date(now), expiresAt: new Date(Math.min(now + SESSION_TTL_MS, session.createdAt.getTime() + SESSION_MAX_AGE_MS)) },
       );
       this.cookies.setSession(response, token);
     }
