@@ -122,6 +122,13 @@ export async function loadDemoFollower(app: INestApplicationContext, { workshopI
     });
     const retention = await findRetentionCheck(app, workshopId, build.id);
     if (retention) await reports.update(workshopId, report.id, { fitCheckId: retention, creatorNote: 'Thanks! We are checking retention on our truck next.' });
+    // A second, newer claim waits for review.
+    await reports.create(followerId, DEMO_WORKSHOP.slug, guide.slug, {
+      outcome: 'no_fit',
+      parts: 'BD-2741 catalogue coupler on the five-speed input shaft',
+      vehicle: 'Compact pickup, same generation, long bed',
+      notes: 'Would not start onto the shaft at all. Counted 27 teeth on the coupler.',
+    });
   }
   return created ? `the demo follower follows "${DEMO_BUILD_TITLE}" and has sent a fit report` : 'demo follower already loaded';
 }

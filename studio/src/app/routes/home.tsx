@@ -16,8 +16,14 @@ export function HomeRoute() {
         <List.Item>Followers hear the moment a fit is confirmed.</List.Item>
       </List>
       <Group>
-        <Button component={Link} to={paths.status} variant="light">
-          Check system status
+        <Button component={Link} to={paths.guideIndex}>
+          Read the published build guides
+        </Button>
+        <Button component={Link} to={paths.fitCalculator} variant="light">
+          Try the fit calculator
+        </Button>
+        <Button component={Link} to={paths.workshops} variant="subtle">
+          Open your workshop
         </Button>
       </Group>
     </Stack>

@@ -26,6 +26,11 @@ function Overview({ workshop }: { workshop: Workshop }) {
       <SimpleGrid cols={{ base: 1, sm: 2 }} maw={880}>
         <Destination to={paths.builds.to(workshop.id)} title="Builds" text="Projects, their assemblies and verified-fit checklists." />
         <Destination to={paths.parts.to(workshop.id)} title="Parts" text="Part numbers, makers and the features that mate." />
+        <Destination
+          to={paths.workshopFitReports.to(workshop.id)}
+          title="Fit reports"
+          text="Readers' claims that a combination fit, or did not, to review and verify."
+        />
         <Destination to={paths.workshopMembers.to(workshop.id)} title="Members" text="Who may edit this workshop, and invitations." />
         <Destination to={paths.workshopSettings.to(workshop.id)} title="Settings" text="Name, web address, description and logo." />
       </SimpleGrid>
