@@ -28,13 +28,8 @@ export function WorkshopFitReports({ workshopId, readOnly = false }: { workshopI
   const reports = useQuery(fitReportQueries.workshop(workshopId));
   const [params, setParams] = useSearchParams();
   const requested = params.get('status');
+  const status: FitReportStatus = isStatus(requested) ? requested : 'new';
   const counts = countByStatus(reports.data ?? []);
-  // Without a chosen filter, open on New, or on the first status that has reports when nothing is new.
-  const status: FitReportStatus = isStatus(requested)
-    ? requested
-    : counts.new > 0
-      ? 'new'
-      : (FIT_REPORT_STATUSES.find((candidate) => counts[candidate] > 0) ?? 'new');
   const shown = (reports.data ?? []).filter((report) => report.status === status);
 
   const handleStatus = (value: string) =>
