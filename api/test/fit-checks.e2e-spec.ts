@@ -1,12 +1,11 @@
 import { NestExpressApplication } from '@nestjs/platform-express';
 import { EventEmitter2 } from '@nestjs/event-emitter';
 import { createTestApp } from './create-test-app';
-import { signUpAndSignIn, TestAccount } from './support/accounts';
+import { signUpAndSignIn, TestAccount, uniqueSlug } from './support/accounts';
 import { FIT_CHECK_CHANGED, type FitCheckChangedEvent } from '../src/fit-checks/fit-checks.events';
 
 jest.setTimeout(60_000);
 
-const uniqueSlug = (label: string) => `${label}-${Date.now().toString(36)}-${Math.floor(Math.random() * 1e6)}`;
 
 interface Check {
   id: string;

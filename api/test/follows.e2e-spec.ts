@@ -1,12 +1,11 @@
 import { NestExpressApplication } from '@nestjs/platform-express';
 import request from 'supertest';
 import { createTestApp } from './create-test-app';
-import { signUpAndSignIn, TestAccount } from './support/accounts';
+import { signUpAndSignIn, TestAccount, uniqueSlug } from './support/accounts';
 import { inboxSnapshot, linkFrom, listMail, tokenFrom, waitForMail } from './support/mail-inbox';
 
 jest.setTimeout(90_000);
 
-const uniqueSlug = (label: string) => `${label}-${Date.now().toString(36)}-${Math.floor(Math.random() * 1e6)}`;
 
 /** Resolves when the mail job has had time to send anything queued (the fan-out runs on the Bull worker). */
 const settle = () => new Promise((resolve) => setTimeout(resolve, 3000));

@@ -5,13 +5,12 @@ import { join } from 'node:path';
 import { DataSource } from 'typeorm';
 import { StorageService } from '../src/infra/storage/storage.service';
 import { createTestApp } from './create-test-app';
-import { browserAgent, signUpAndSignIn, TestAccount } from './support/accounts';
+import { browserAgent, signUpAndSignIn, TestAccount, uniqueSlug } from './support/accounts';
 import { makeClip, removeScratch, scratchDir, startUpload, uploadFile, uploadParts, waitUntilProcessed } from './support/footage';
 
 jest.setTimeout(60_000);
 
 const md5 = (bytes: Buffer) => createHash('md5').update(bytes).digest('hex');
-const uniqueSlug = (label: string) => `${label}-${Date.now().toString(36)}-${Math.floor(Math.random() * 1e6)}`;
 const MiB = 1024 * 1024;
 
 describe('footage: direct-to-storage multipart uploads, media processing, playback (real MariaDB, Redis, S3 fake, ffmpeg)', () => {

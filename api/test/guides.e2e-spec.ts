@@ -1,12 +1,11 @@
 import { NestExpressApplication } from '@nestjs/platform-express';
 import request from 'supertest';
 import { createTestApp } from './create-test-app';
-import { signUpAndSignIn, TestAccount } from './support/accounts';
+import { signUpAndSignIn, TestAccount, uniqueSlug } from './support/accounts';
 import { makeClip, removeScratch, uploadFile, waitUntilProcessed } from './support/footage';
 
 jest.setTimeout(90_000);
 
-const uniqueSlug = (label: string) => `${label}-${Date.now().toString(36)}-${Math.floor(Math.random() * 1e6)}`;
 
 /** Invented narration written for this test. */
 const CAPTIONS = `WEBVTT

@@ -1,11 +1,10 @@
 import { NestExpressApplication } from '@nestjs/platform-express';
 import { createTestApp } from './create-test-app';
-import { browserAgent, signUpAndSignIn, TestAccount } from './support/accounts';
+import { browserAgent, signUpAndSignIn, TestAccount, uniqueSlug } from './support/accounts';
 import { makeClip, removeScratch, uploadFile, waitUntilProcessed } from './support/footage';
 
 jest.setTimeout(90_000);
 
-const uniqueSlug = (label: string) => `${label}-${Date.now().toString(36)}-${Math.floor(Math.random() * 1e6)}`;
 
 /** Invented shop talk written for this test: three real hits and decoys that only look like numbers. */
 const LINES = [

@@ -1,15 +1,10 @@
 import { NestExpressApplication } from '@nestjs/platform-express';
 import { createTestApp } from './create-test-app';
-import { signUpAndSignIn, TestAccount } from './support/accounts';
+import { ONE_PIXEL_PNG as PNG } from './support/images';
+import { signUpAndSignIn, TestAccount, uniqueSlug } from './support/accounts';
 
 jest.setTimeout(60_000);
 
-// A 1×1 PNG (RFC 2083 signature and chunks), made for the test.
-const PNG = Buffer.from(
-  'iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mNk+M9QDwADhgGAWjR9awAAAABJRU5ErkJggg==',
-  'base64',
-);
-const uniqueSlug = (label: string) => `${label}-${Date.now().toString(36)}-${Math.floor(Math.random() * 1e6)}`;
 
 describe('part photos and photo evidence (real MariaDB and S3 fake)', () => {
   let app: NestExpressApplication;

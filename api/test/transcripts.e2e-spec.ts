@@ -1,12 +1,11 @@
 import { NestExpressApplication } from '@nestjs/platform-express';
 import { parseTranscript } from '../src/engine/transcript-formats';
 import { createTestApp } from './create-test-app';
-import { browserAgent, signUpAndSignIn, TestAccount } from './support/accounts';
+import { browserAgent, signUpAndSignIn, TestAccount, uniqueSlug } from './support/accounts';
 import { makeClip, removeScratch, uploadFile, waitUntilProcessed } from './support/footage';
 
 jest.setTimeout(60_000);
 
-const uniqueSlug = (label: string) => `${label}-${Date.now().toString(36)}-${Math.floor(Math.random() * 1e6)}`;
 
 /** Invented demo narration (DESIGN.md's scenario), never from a real video. */
 const SPLINE_VTT = `WEBVTT - coupler check

@@ -3,15 +3,13 @@ import { ListObjectsV2Command, S3Client } from '@aws-sdk/client-s3';
 import request from 'supertest';
 import { DataSource } from 'typeorm';
 import { createTestApp } from './create-test-app';
-import { signUpAndSignIn, TestAccount } from './support/accounts';
+import { ONE_PIXEL_PNG as PNG } from './support/images';
+import { signUpAndSignIn, TestAccount, uniqueSlug } from './support/accounts';
 import { makeClip, removeScratch, uploadFile, waitUntilProcessed } from './support/footage';
 import { tokenFrom, waitForMail } from './support/mail-inbox';
 
 jest.setTimeout(120_000);
 
-// A 1×1 PNG (RFC 2083 signature and chunks), made for the test.
-const PNG = Buffer.from('iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mNk+M9QDwADhgGAWjR9awAAAABJRU5ErkJggg==', 'base64');
-const uniqueSlug = (label: string) => `${label}-${Date.now().toString(36)}-${Math.floor(Math.random() * 1e6)}`;
 
 /** Keys stored under a prefix, read straight from the S3 fake. */
 async function storedKeys(prefix: string): Promise<string[]> {

@@ -3,17 +3,13 @@ import { createHash } from 'node:crypto';
 import request from 'supertest';
 import { DataSource } from 'typeorm';
 import { createTestApp } from './create-test-app';
-import { browserAgent, signUpAndSignIn, TestAccount, uniqueEmail } from './support/accounts';
+import { ONE_PIXEL_PNG as PNG } from './support/images';
+import { browserAgent, signUpAndSignIn, TestAccount, uniqueEmail, uniqueSlug } from './support/accounts';
 import { inboxSnapshot, linkFrom, tokenFrom, waitForMail } from './support/mail-inbox';
 
 jest.setTimeout(30_000);
 
 const sha256 = (value: string) => createHash('sha256').update(value).digest('hex');
-const PNG = Buffer.from(
-  'iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mNk+M9QDwADhgGAWjR9awAAAABJRU5ErkJggg==',
-  'base64',
-);
-const uniqueSlug = (label: string) => `${label}-${Date.now().toString(36)}-${Math.floor(Math.random() * 1e6)}`;
 
 describe('workshops, members and invitations (real MariaDB, S3 fake, mail fake)', () => {
   let app: NestExpressApplication;

@@ -10,7 +10,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { after, before, test } from 'node:test';
 import { baseUrl, launchBrowser } from './browser.mjs';
-import { apiClient, choose, mailIds, signUpThroughApi, waitForMail } from './support.mjs';
+import { apiClient, choose, confirmCheckWithReading, mailIds, publishGuideWithOpenCheck, signUpThroughApi, waitForMail } from './support.mjs';
 
 const screenshots = new URL('./screenshots/', import.meta.url);
 mkdirSync(screenshots, { recursive: true });
@@ -46,31 +46,10 @@ before(async () => {
   browser = await launchBrowser();
   creatorContext = await browser.newContext({ viewport: { width: 1280, height: 900 } });
   creatorApi = await signUpThroughApi(creatorContext, creator);
-  const api = creatorApi;
-  const workshop = await api.post('/workshops', { name: workshopName, slug: `harrow-reports-${run}` });
-  ids.workshopId = workshop.id;
-  ids.workshopSlug = workshop.slug;
-  const w = `/workshops/${workshop.id}`;
-  ids.w = w;
-  const build = await api.post(`${w}/builds`, { title: 'Motor-to-gearbox coupler', vehicle: '1980s compact pickup, electric conversion' });
-
-  // The assembly the guide follows, with a manual check still open when the guide is published.
-  const coupler = await api.post(`${w}/parts`, {
-    partNumber: 'HL-2107',
-    maker: 'Brackwater Drive',
-    title: 'Coupler, 21-tooth',
-    category: 'coupler',
-    features: [{ name: 'pilot bore', kind: 'diameter', role: 'hole', nominal: '15', toleranceClass: 'H7', unit: 'mm' }],
-  });
-  ids.boreFeatureId = coupler.features.find((feature) => feature.name === 'pilot bore').id;
-  const assembly = await api.post(`${w}/builds/${build.id}/assemblies`, { name: assemblyName });
-  await api.put(`${w}/assemblies/${assembly.id}/parts/${coupler.id}`, { position: 'motor side' });
-  ids.checkId = (await api.post(`${w}/assemblies/${assembly.id}/checks`, { title: checkTitle, required: true })).id;
-
-  const guide = await api.post(`${w}/builds/${build.id}/guides`, { assemblyId: assembly.id, title: guideTitle, tools: ['Bore gauge'] });
-  ids.guideSlug = guide.slug;
-  await api.post(`${w}/guides/${guide.id}/steps`, { title: 'Slide the coupler on', body: '<p>It should slide on <em>by hand</em>.</p>' });
-  await api.post(`${w}/guides/${guide.id}/revisions`, { note: 'First edition' });
+  Object.assign(
+    ids,
+    await publishGuideWithOpenCheck(creatorApi, { workshopName, workshopSlug: `harrow-reports-${run}`, assemblyName, checkTitle, guideTitle }),
+  );
 
   // The reader has an account and is signed in, in a browser of their own.
   readerContext = await browser.newContext({ viewport: { width: 1280, height: 900 } });
@@ -164,16 +143,7 @@ test('a reader reports a fit with a photo; the creator ties it to a check and co
 
   // The creator confirms the check on the vehicle, with a measurement as its evidence.
   const before = await mailIds(reader.email);
-  const bore = await creatorApi.post(`${ids.w}/measurements`, {
-    featureId: ids.boreFeatureId,
-    quantity: 'diameter',
-    value: '15.008',
-    unit: 'mm',
-    instrumentKind: 'bore_gauge',
-    resolution: '0.001',
-  });
-  await creatorApi.post(`${ids.w}/checks/${ids.checkId}/evidence`, { kind: 'measurement', measurementId: bore.id });
-  await creatorApi.post(`${ids.w}/checks/${ids.checkId}/transitions`, { to: 'confirmed', reason: 'Test-fitted on the vehicle' });
+  await confirmCheckWithReading(creatorApi, ids);
 
   // The reporter follows nothing, yet hears: they sent the report.
   const mail = await waitForMail(reader.email, new RegExp(`^Fit confirmed: ${checkTitle}$`), 20_000, before);

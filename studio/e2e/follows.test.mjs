@@ -7,7 +7,7 @@ import assert from 'node:assert/strict';
 import { mkdirSync } from 'node:fs';
 import { after, before, test } from 'node:test';
 import { baseUrl, launchBrowser } from './browser.mjs';
-import { apiClient, mailIds, signUpThroughApi, waitForMail } from './support.mjs';
+import { apiClient, confirmCheckWithReading, mailIds, publishGuideWithOpenCheck, signUpThroughApi, waitForMail } from './support.mjs';
 
 const screenshots = new URL('./screenshots/', import.meta.url);
 mkdirSync(screenshots, { recursive: true });
@@ -36,31 +36,16 @@ before(async () => {
   browser = await launchBrowser();
   creatorContext = await browser.newContext();
   creatorApi = await signUpThroughApi(creatorContext, creator);
-  const api = creatorApi;
-  const workshop = await api.post('/workshops', { name: `Harrow Lane Garage ${run}`, slug: `harrow-follows-${run}` });
-  ids.workshopSlug = workshop.slug;
-  const w = `/workshops/${workshop.id}`;
-  ids.w = w;
-  const build = await api.post(`${w}/builds`, { title: 'Motor-to-gearbox coupler', vehicle: '1980s compact pickup, electric conversion' });
-
-  // The assembly the guide follows, with a manual check still open when the guide is published.
-  const coupler = await api.post(`${w}/parts`, {
-    partNumber: 'HL-2107',
-    maker: 'Brackwater Drive',
-    title: 'Coupler, 21-tooth',
-    category: 'coupler',
-    features: [{ name: 'pilot bore', kind: 'diameter', role: 'hole', nominal: '15', toleranceClass: 'H7', unit: 'mm' }],
-  });
-  ids.boreFeatureId = coupler.features.find((feature) => feature.name === 'pilot bore').id;
-  const assembly = await api.post(`${w}/builds/${build.id}/assemblies`, { name: assemblyName });
-  await api.put(`${w}/assemblies/${assembly.id}/parts/${coupler.id}`, { position: 'motor side' });
-  ids.assemblyId = assembly.id;
-  ids.checkId = (await api.post(`${w}/assemblies/${assembly.id}/checks`, { title: checkTitle, required: true })).id;
-
-  const guide = await api.post(`${w}/builds/${build.id}/guides`, { assemblyId: assembly.id, title: guideTitle, tools: ['Bore gauge'] });
-  ids.guideSlug = guide.slug;
-  await api.post(`${w}/guides/${guide.id}/steps`, { title: 'Slide the coupler on', body: '<p>It should slide on <em>by hand</em>.</p>' });
-  await api.post(`${w}/guides/${guide.id}/revisions`, { note: 'First edition' });
+  Object.assign(
+    ids,
+    await publishGuideWithOpenCheck(creatorApi, {
+      workshopName: `Harrow Lane Garage ${run}`,
+      workshopSlug: `harrow-follows-${run}`,
+      assemblyName,
+      checkTitle,
+      guideTitle,
+    }),
+  );
 
   // The follower has an account already, made in a browser of their own.
   const signUpContext = await browser.newContext();
@@ -123,16 +108,7 @@ test('a reader follows an assembly, is e-mailed when its fit is confirmed, and s
   // The creator confirms the check on the vehicle, with a measurement as its evidence.
   const before = await mailIds(viewer.email);
   const creatorMail = await mailIds(creator.email);
-  const bore = await creatorApi.post(`${ids.w}/measurements`, {
-    featureId: ids.boreFeatureId,
-    quantity: 'diameter',
-    value: '15.008',
-    unit: 'mm',
-    instrumentKind: 'bore_gauge',
-    resolution: '0.001',
-  });
-  await creatorApi.post(`${ids.w}/checks/${ids.checkId}/evidence`, { kind: 'measurement', measurementId: bore.id });
-  await creatorApi.post(`${ids.w}/checks/${ids.checkId}/transitions`, { to: 'confirmed', reason: 'Test-fitted on the vehicle' });
+  await confirmCheckWithReading(creatorApi, ids);
 
   const mail = await waitForMail(viewer.email, new RegExp(`^Fit confirmed: ${checkTitle}$`), 20_000, before);
   assert.match(mail.text, /Test-fitted on the vehicle/);

@@ -57,3 +57,49 @@ export async function choose(scope, label, option) {
   await field(scope, label).click();
   await scope.page().getByRole('option', { name: option, exact: true }).click();
 }
+
+/**
+ * Publishes (through `api`, a creator's client) a guide whose assembly holds one coupler with a pilot bore
+ * and one manual fit check left open: what the follow and fit-report journeys start from.
+ */
+export async function publishGuideWithOpenCheck(api, { workshopName, workshopSlug, assemblyName, checkTitle, guideTitle }) {
+  const workshop = await api.post('/workshops', { name: workshopName, slug: workshopSlug });
+  const w = `/workshops/${workshop.id}`;
+  const build = await api.post(`${w}/builds`, { title: 'Motor-to-gearbox coupler', vehicle: '1980s compact pickup, electric conversion' });
+  const coupler = await api.post(`${w}/parts`, {
+    partNumber: 'HL-2107',
+    maker: 'Brackwater Drive',
+    title: 'Coupler, 21-tooth',
+    category: 'coupler',
+    features: [{ name: 'pilot bore', kind: 'diameter', role: 'hole', nominal: '15', toleranceClass: 'H7', unit: 'mm' }],
+  });
+  const assembly = await api.post(`${w}/builds/${build.id}/assemblies`, { name: assemblyName });
+  await api.put(`${w}/assemblies/${assembly.id}/parts/${coupler.id}`, { position: 'motor side' });
+  const check = await api.post(`${w}/assemblies/${assembly.id}/checks`, { title: checkTitle, required: true });
+  const guide = await api.post(`${w}/builds/${build.id}/guides`, { assemblyId: assembly.id, title: guideTitle, tools: ['Bore gauge'] });
+  await api.post(`${w}/guides/${guide.id}/steps`, { title: 'Slide the coupler on', body: '<p>It should slide on <em>by hand</em>.</p>' });
+  await api.post(`${w}/guides/${guide.id}/revisions`, { note: 'First edition' });
+  return {
+    workshopId: workshop.id,
+    workshopSlug: workshop.slug,
+    w,
+    boreFeatureId: coupler.features.find((feature) => feature.name === 'pilot bore').id,
+    assemblyId: assembly.id,
+    checkId: check.id,
+    guideSlug: guide.slug,
+  };
+}
+
+/** The creator confirms the check on the vehicle, with a bore-gauge reading as its evidence. */
+export async function confirmCheckWithReading(api, { w, boreFeatureId, checkId }) {
+  const bore = await api.post(`${w}/measurements`, {
+    featureId: boreFeatureId,
+    quantity: 'diameter',
+    value: '15.008',
+    unit: 'mm',
+    instrumentKind: 'bore_gauge',
+    resolution: '0.001',
+  });
+  await api.post(`${w}/checks/${checkId}/evidence`, { kind: 'measurement', measurementId: bore.id });
+  await api.post(`${w}/checks/${checkId}/transitions`, { to: 'confirmed', reason: 'Test-fitted on the vehicle' });
+}

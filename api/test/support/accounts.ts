@@ -27,6 +27,11 @@ export function uniqueEmail(label = 'user'): string {
   return `${label}-${Date.now().toString(36)}-${randomBytes(3).toString('hex')}@fitwright.test`;
 }
 
+/** A workshop web address nobody else in this run uses. */
+export function uniqueSlug(label: string): string {
+  return `${label}-${Date.now().toString(36)}-${Math.floor(Math.random() * 1e6)}`;
+}
+
 /** A random address in 10.0.0.0/8, as seen by the rate limiter. */
 export function uniqueClientIp(): string {
   const bytes = randomBytes(3);
