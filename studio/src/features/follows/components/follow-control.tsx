@@ -1,6 +1,6 @@
 import { Alert, Anchor, Button, Checkbox, Group, Loader, Popover, Stack, Text } from '@mantine/core';
 import { useQuery } from '@tanstack/react-query';
-import { useId } from 'react';
+import { useId, useState } from 'react';
 import { Link, useLocation } from 'react-router-dom';
 import { signInPathFor } from '@/components/route-guards';
 import { paths } from '@/config/paths';
@@ -61,15 +61,40 @@ function SignedInFollowControl({ user, targets }: { user: SessionUser; targets: 
   const choices = choicesOf(targets);
   const followed = choices.filter((choice) => findFollow(follows.data, choice.kind, choice.target.id));
 
+  // The person's latest choice per target, set in the click itself so the box never flips back for a frame while
+  // the request starts. It holds until the list of follows is read again (after the change) or the change fails.
+  const [wantedNow, setWantedNow] = useState<Record<string, { wanted: boolean; listAt: number }>>({});
+  const keyOf = (choice: Choice) => `${choice.kind}:${choice.target.id}`;
+  const want = (choice: Choice, wanted: boolean) =>
+    setWantedNow((current) => ({ ...current, [keyOf(choice)]: { wanted, listAt: follows.dataUpdatedAt } }));
+  const forget = (choice: Choice) =>
+    setWantedNow((current) => {
+      const next = { ...current };
+      delete next[keyOf(choice)];
+      return next;
+    });
+
   const handleToggle = (choice: Choice, wanted: boolean) => {
     const existing = findFollow(follows.data, choice.kind, choice.target.id);
     if (wanted && !existing) {
+      want(choice, true);
       follow.mutate(
         { targetKind: choice.kind, targetId: choice.target.id },
-        { onError: (error) => notifyError(`Could not follow ${choice.target.label}`, error) },
+        {
+          onError: (error) => {
+            forget(choice);
+            notifyError(`Could not follow ${choice.target.label}`, error);
+          },
+        },
       );
     } else if (!wanted && existing) {
-      unfollow.mutate(existing.id, { onError: (error) => notifyError(`Could not unfollow ${choice.target.label}`, error) });
+      want(choice, false);
+      unfollow.mutate(existing.id, {
+        onError: (error) => {
+          forget(choice);
+          notifyError(`Could not unfollow ${choice.target.label}`, error);
+        },
+      });
     }
   };
 
@@ -79,8 +104,11 @@ function SignedInFollowControl({ user, targets }: { user: SessionUser; targets: 
     unfollow.isPending && unfollow.variables === findFollow(follows.data, choice.kind, choice.target.id)?.id;
   /** A checkbox shows the person's choice at once and waits while it is on its way (and the list is read again). */
   const isBusy = (choice: Choice) => isFollowing(choice) || isUnfollowing(choice);
-  const isChecked = (choice: Choice) =>
-    isFollowing(choice) || (!isUnfollowing(choice) && Boolean(findFollow(follows.data, choice.kind, choice.target.id)));
+  const isChecked = (choice: Choice) => {
+    const choiceNow = wantedNow[keyOf(choice)];
+    if (choiceNow && choiceNow.listAt === follows.dataUpdatedAt) return choiceNow.wanted;
+    return isFollowing(choice) || (!isUnfollowing(choice) && Boolean(findFollow(follows.data, choice.kind, choice.target.id)));
+  };
 
   return (
     <Group gap="sm" data-testid="follow-control">
