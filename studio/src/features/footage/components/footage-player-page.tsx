@@ -1,6 +1,6 @@
 import { Alert, Anchor, Badge, Breadcrumbs, Grid, Group, Skeleton, Stack, Text, Title } from '@mantine/core';
 import { useQuery } from '@tanstack/react-query';
-import { useRef, useState, type ComponentType, type SyntheticEvent } from 'react';
+import { useRef, useState, type ComponentType } from 'react';
 import { Link } from 'react-router-dom';
 import { paths } from '@/config/paths';
 import { captionsUrl, footageQueries, transcriptQueries } from '../api/queries';
@@ -8,6 +8,7 @@ import type { Footage } from '../api/types';
 import { FootageStateBadge } from './footage-state-badge';
 import { formatBytes, formatClock } from './format';
 import { TranscriptPane } from './transcript-pane';
+import { useRenewingVideoLink } from '@/lib/use-renewing-video-link';
 
 export interface FootagePlayerPageProps {
   workshopId: string;
@@ -48,8 +49,6 @@ export function FootagePlayerPage({ workshopId, footageId, startAtMs, workspace:
   const limits = useQuery(footageQueries.limits(workshopId));
   const video = useRef<HTMLVideoElement>(null);
   const [currentMs, setCurrentMs] = useState(0);
-  const [videoError, setVideoError] = useState<string | null>(null);
-  const resumeAt = useRef<number | undefined>(startAtMs);
 
   const seek = (ms: number) => {
     const element = video.current;
@@ -64,24 +63,11 @@ export function FootagePlayerPage({ workshopId, footageId, startAtMs, workspace:
   const readPositionMs = () => (video.current ? video.current.currentTime * 1000 : currentMs);
   const pause = () => video.current?.pause();
 
-  const handleLoadedMetadata = (event: SyntheticEvent<HTMLVideoElement>) => {
-    if (resumeAt.current === undefined) return;
-    event.currentTarget.currentTime = resumeAt.current / 1000;
-    setCurrentMs(resumeAt.current);
-    resumeAt.current = undefined;
-  };
-
-  // A playback link lasts an hour; when it has run out, fetch a new one and carry on from the same place.
-  // Any other error (a codec the browser lacks) is shown rather than retried.
-  const handleVideoError = (event: SyntheticEvent<HTMLVideoElement>) => {
-    const expired = playback.data !== undefined && Date.parse(playback.data.expiresAt) - Date.now() < 60_000;
-    if (!expired) {
-      setVideoError('This browser cannot play the video. Download it, or convert it to H.264 MP4 or VP9 WebM.');
-      return;
-    }
-    resumeAt.current = event.currentTarget.currentTime * 1000;
-    void playback.refetch();
-  };
+  const { videoError, onLoadedMetadata, onError } = useRenewingVideoLink(playback, {
+    cannotPlay: 'This browser cannot play the video. Download it, or convert it to H.264 MP4 or VP9 WebM.',
+    startAtMs,
+    onResumed: setCurrentMs,
+  });
 
   if (footage.isPending) return <Skeleton height={420} />;
   if (footage.isError) return <Alert color="red" title="Footage not found">{footage.error.message}</Alert>;
@@ -133,8 +119,8 @@ export function FootagePlayerPage({ workshopId, footageId, startAtMs, workspace:
                 playsInline
                 onTimeUpdate={(event) => setCurrentMs(event.currentTarget.currentTime * 1000)}
                 onSeeked={(event) => setCurrentMs(event.currentTarget.currentTime * 1000)}
-                onLoadedMetadata={handleLoadedMetadata}
-                onError={handleVideoError}
+                onLoadedMetadata={onLoadedMetadata}
+                onError={onError}
                 data-testid="footage-video"
                 style={{ width: '100%', aspectRatio: item.width && item.height ? `${item.width} / ${item.height}` : '16 / 9', background: '#000', borderRadius: 8 }}
               >

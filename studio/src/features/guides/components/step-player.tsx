@@ -1,9 +1,10 @@
 import { Alert, Badge, Group, Skeleton, Stack, Text } from '@mantine/core';
 import { useQuery } from '@tanstack/react-query';
-import { useRef, useState, type RefObject, type SyntheticEvent } from 'react';
+import { useRef, useState, type RefObject } from 'react';
 import { guideQueries } from '../api/queries';
 import type { FootageChoice } from '../api/types';
 import { formatStepTime } from './step-time';
+import { useRenewingVideoLink } from '@/lib/use-renewing-video-link';
 
 /** The player as the step form sees it: where it is now, and how to move it. */
 export interface StepPlayerControls {
@@ -47,24 +48,7 @@ export interface StepPlayerProps {
 export function StepPlayer({ workshopId, footage, videoRef, currentMs, onTimeChange }: StepPlayerProps) {
   const ready = footage.state === 'ready';
   const playback = useQuery({ ...guideQueries.playback(workshopId, footage.id), enabled: ready });
-  const [videoError, setVideoError] = useState<string | null>(null);
-  const resumeAt = useRef<number | undefined>(undefined);
-
-  const handleLoadedMetadata = (event: SyntheticEvent<HTMLVideoElement>) => {
-    if (resumeAt.current === undefined) return;
-    event.currentTarget.currentTime = resumeAt.current / 1000;
-    resumeAt.current = undefined;
-  };
-
-  const handleError = (event: SyntheticEvent<HTMLVideoElement>) => {
-    const expired = playback.data !== undefined && Date.parse(playback.data.expiresAt) - Date.now() < 60_000;
-    if (!expired) {
-      setVideoError('This browser cannot play the video.');
-      return;
-    }
-    resumeAt.current = event.currentTarget.currentTime * 1000;
-    void playback.refetch();
-  };
+  const { videoError, onLoadedMetadata, onError } = useRenewingVideoLink(playback, { cannotPlay: 'This browser cannot play the video.' });
 
   if (!ready) {
     return (
@@ -92,8 +76,8 @@ export function StepPlayer({ workshopId, footage, videoRef, currentMs, onTimeCha
           aria-label={`Main footage: ${footage.title}`}
           onTimeUpdate={(event) => onTimeChange(event.currentTarget.currentTime * 1000)}
           onSeeked={(event) => onTimeChange(event.currentTarget.currentTime * 1000)}
-          onLoadedMetadata={handleLoadedMetadata}
-          onError={handleError}
+          onLoadedMetadata={onLoadedMetadata}
+          onError={onError}
           data-testid="step-video"
           style={{
             width: '100%',
