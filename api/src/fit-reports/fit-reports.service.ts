@@ -9,7 +9,7 @@ import { FitCheck } from '../fit-checks/entities/fit-check.entity';
 import { Guide } from '../guides/entities/guide.entity';
 import { publicGuidePath } from '../guides/guide.mapper';
 import { StorageService } from '../infra/storage/storage.service';
-import { photoIdOf } from '../parts/part-photos';
+import { photoIdOf } from '../common/uploads/photo-id';
 import { User } from '../users/entities/user.entity';
 import { Workshop } from '../workshops/entities/workshop.entity';
 import type { CreateFitReportDto, UpdateFitReportDto } from './dto/fit-report.dto';

@@ -1,6 +1,6 @@
 import { ConflictException, Injectable, NotFoundException, UnprocessableEntityException } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
-import { EntityManager, In, Repository } from 'typeorm';
+import { In, Not, Repository } from 'typeorm';
 import { Assembly } from '../assemblies/entities/assembly.entity';
 import { BuildsService } from '../builds/builds.service';
 import { isDuplicateKey } from '../common/database/errors';
@@ -332,15 +332,13 @@ export class GuidesService {
   }
 
   /** Saves the guide under its title's slug, or the first free "-2", "-3"… in the workshop. */
-  private async saveWithFreeSlug(guide: Guide, manager: EntityManager = this.guides.manager): Promise<void> {
+  private async saveWithFreeSlug(guide: Guide): Promise<void> {
     const base = slugFromTitle(guide.title);
     for (let attempt = 1; attempt <= SLUG_ATTEMPTS; attempt++) {
       guide.slug = attempt === 1 ? base : `${base}-${attempt}`;
-      const taken = await manager.existsBy(Guide, { workshopId: guide.workshopId, slug: guide.slug });
-      const takenByOther = taken && !(await manager.existsBy(Guide, { id: guide.id, slug: guide.slug }));
-      if (takenByOther) continue;
+      if (await this.guides.existsBy({ workshopId: guide.workshopId, slug: guide.slug, id: Not(guide.id) })) continue;
       try {
-        await manager.save(guide);
+        await this.guides.save(guide);
         return;
       } catch (error) {
         if (!isDuplicateKey(error)) throw error;

@@ -218,7 +218,9 @@ export class PublishedGuidesService {
     const evidence = items.flatMap((item) => item.evidence);
     const markIds = evidence.map((item) => item.markId).filter((id): id is string => !!id);
     const checkIds = items.map((item) => item.check.id);
-    const marks = markIds.length || checkIds.length ? await this.marks.find({ where: [{ id: In(markIds.length ? markIds : ['-']) }, { fitCheckId: In(checkIds.length ? checkIds : ['-']) }] }) : [];
+    // Marks attached as evidence, and check-evidence marks pointing at these checks.
+    const markWhere = [...(markIds.length ? [{ id: In(markIds) }] : []), ...(checkIds.length ? [{ fitCheckId: In(checkIds) }] : [])];
+    const marks = markWhere.length ? await this.marks.find({ where: markWhere }) : [];
     const measurementIds = evidence.map((item) => item.measurementId).filter((id): id is string => !!id);
     const measurements = measurementIds.length ? await this.measurements.findBy({ id: In(measurementIds) }) : [];
     const checks = items

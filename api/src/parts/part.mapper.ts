@@ -1,7 +1,7 @@
 import { describeFeatureSpec } from './feature-spec';
 import { PartFeature } from './entities/part-feature.entity';
 import { Part } from './entities/part.entity';
-import { photoIdOf } from './part-photos';
+import { photoIdOf } from '../common/uploads/photo-id';
 
 export function toFeatureResponse(feature: PartFeature) {
   return {

@@ -10,7 +10,7 @@ import { requireImage, type UploadedFileLike } from '../common/uploads/image-fil
 import { formatLengthValue } from '../engine/units';
 import { StorageService } from '../infra/storage/storage.service';
 import { toFeatureSpec } from './feature-spec';
-import { photoIdOf } from './part-photos';
+import { photoIdOf } from '../common/uploads/photo-id';
 import { PART_FEATURE_CHANGED, PartFeatureChangedEvent } from './parts.events';
 
 const DUPLICATE_ENTRY = 'ER_DUP_ENTRY';
