@@ -159,9 +159,11 @@ build_if_changed() {
   touch "$stamp"
 }
 
+# The studio's build script sets NODE_ENV=production itself: the profiles export development or test for
+# the API, and Vite would otherwise emit React's development build (studio/e2e/shell.test.mjs checks).
 build_all() {
   build_if_changed api "$ROOT/api/src" "$ROOT/api/tsconfig.json" "$ROOT/api/tsconfig.build.json" "$ROOT/package-lock.json"
-  build_if_changed studio "$ROOT/studio/src" "$ROOT/studio/index.html" "$ROOT/studio/vite.config.ts" "$ROOT/package-lock.json"
+  build_if_changed studio "$ROOT/studio/src" "$ROOT/studio/index.html" "$ROOT/studio/vite.config.ts" "$ROOT/studio/package.json" "$ROOT/package-lock.json"
 }
 
 run_migrations() {

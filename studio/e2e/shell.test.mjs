@@ -47,3 +47,14 @@ test('an unknown address shows the not-found page inside the shell', async () =>
   await page.getByRole('heading', { name: 'Page not found' }).waitFor();
   assert.ok(await page.getByText('Fitwright', { exact: true }).isVisible());
 });
+
+test('the served studio is a production build of React', async () => {
+  const html = await (await fetch(baseUrl)).text();
+  const scripts = [...html.matchAll(/<script[^>]+src="([^"]+)"/g)].map((match) => new URL(match[1], baseUrl).href);
+  assert.ok(scripts.length > 0, 'index.html loads a script');
+  for (const url of scripts) {
+    const source = await (await fetch(url)).text();
+    // React's development JSX runtime is called jsxDEV; its production runtime never contains the name.
+    assert.doesNotMatch(source, /jsxDEV/, `${url} is a development build`);
+  }
+});
