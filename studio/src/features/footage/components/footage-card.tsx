@@ -6,7 +6,8 @@ import { notifyError } from '@/lib/notify';
 import { useDeleteFootage } from '../api/mutations';
 import type { Footage } from '../api/types';
 import { FootageStateBadge } from './footage-state-badge';
-import { formatBytes, formatClock } from './format';
+import { formatClock } from '@/lib/clock';
+import { formatBytes } from './format';
 
 export interface FootageCardProps {
   footage: Footage;

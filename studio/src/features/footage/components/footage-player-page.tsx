@@ -6,7 +6,8 @@ import { paths } from '@/config/paths';
 import { captionsUrl, footageQueries, transcriptQueries } from '../api/queries';
 import type { Footage } from '../api/types';
 import { FootageStateBadge } from './footage-state-badge';
-import { formatBytes, formatClock } from './format';
+import { formatClock } from '@/lib/clock';
+import { formatBytes } from './format';
 import { TranscriptPane } from './transcript-pane';
 import { useRenewingVideoLink } from '@/lib/use-renewing-video-link';
 

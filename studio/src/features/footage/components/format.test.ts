@@ -1,13 +1,11 @@
 import { describe, expect, it } from 'vitest';
-import { formatBytes, formatClock, formatTimeLeft } from './format';
+import { formatBytes, formatTimeLeft } from './format';
 import { activeCueIndex } from './transcript-pane';
 
 describe('footage display helpers', () => {
-  it('shows sizes in decimal units and times as clocks', () => {
+  it('shows sizes in decimal units and the time left', () => {
     expect(formatBytes(20_800_000)).toBe('20.8 MB');
     expect(formatBytes(20_000_000_000)).toBe('20 GB');
-    expect(formatClock(754_000)).toBe('12:34');
-    expect(formatClock(3_723_000)).toBe('1:02:03');
     expect(formatTimeLeft(42)).toBe('42 s left');
     expect(formatTimeLeft(7_500)).toBe('about 2 h 5 min left');
   });

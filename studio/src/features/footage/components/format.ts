@@ -1,4 +1,4 @@
-/** Display helpers for footage: sizes in decimal units (as file managers show them), times as clocks. */
+/** Display helpers for footage: sizes in decimal units (as file managers show them), times left (clocks are in lib/clock.ts). */
 
 export function formatBytes(bytes: number): string {
   const units = ['bytes', 'kB', 'MB', 'GB', 'TB'];
@@ -10,15 +10,6 @@ export function formatBytes(bytes: number): string {
   }
   const digits = unit === 0 || value >= 100 || Number.isInteger(value) ? 0 : 1;
   return `${value.toFixed(digits)} ${units[unit]}`;
-}
-
-/** "1:02:03" or "2:03" (from milliseconds). */
-export function formatClock(ms: number): string {
-  const total = Math.max(0, Math.floor(ms / 1000));
-  const hours = Math.floor(total / 3600);
-  const minutes = Math.floor(total / 60) % 60;
-  const seconds = String(total % 60).padStart(2, '0');
-  return hours > 0 ? `${hours}:${String(minutes).padStart(2, '0')}:${seconds}` : `${minutes}:${seconds}`;
 }
 
 export function formatSpeed(bytesPerSecond: number): string {

@@ -4,7 +4,7 @@ import { useQuery } from '@tanstack/react-query';
 import { useRef, useState } from 'react';
 import { downloadUrl, transcriptQueries } from '../api/queries';
 import type { Cue, Transcript } from '../api/types';
-import { formatClock } from './format';
+import { formatClock } from '@/lib/clock';
 import { HighlightTerms } from './highlight-terms';
 import { TranscriptAttach } from './transcript-attach';
 import classes from './transcript-pane.module.css';

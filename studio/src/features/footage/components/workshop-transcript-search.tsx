@@ -5,7 +5,7 @@ import { useState } from 'react';
 import { Link } from 'react-router-dom';
 import { paths } from '@/config/paths';
 import { transcriptQueries } from '../api/queries';
-import { formatClock } from './format';
+import { formatClock } from '@/lib/clock';
 import { HighlightTerms } from './highlight-terms';
 
 /** Searches every transcript of the workshop; each result opens the player at that moment. */

@@ -2,7 +2,7 @@ import { Group, List, Paper, Stack, Text, Title, UnstyledButton } from '@mantine
 import type { CheckEvidence, ChecklistVerdict, PublishedChecklist } from '../api/types';
 import { CheckStateBadge } from '@/components/check-state';
 import classes from './guide-view.module.css';
-import { formatTime } from './playback';
+import { formatClock } from '@/lib/clock';
 
 const VERDICT_WORDS: Record<ChecklistVerdict, { label: string; explanation: string }> = {
   open: { label: 'Not proven yet', explanation: 'Some required checks are still open.' },
@@ -78,14 +78,14 @@ export function ChecklistPanel({ checklist, onSeek }: ChecklistPanelProps) {
                         <UnstyledButton
                           className={classes.evidenceLink}
                           onClick={() => evidence.startMs !== null && onSeek(evidence.startMs)}
-                          aria-label={`Watch the evidence at ${formatTime(evidence.startMs)}: ${evidence.label}`}
+                          aria-label={`Watch the evidence at ${formatClock(evidence.startMs)}: ${evidence.label}`}
                         >
-                          {EVIDENCE_WORDS[evidence.kind]} at <span className={classes.timeText}>{formatTime(evidence.startMs)}</span>: {evidence.label}
+                          {EVIDENCE_WORDS[evidence.kind]} at <span className={classes.timeText}>{formatClock(evidence.startMs)}</span>: {evidence.label}
                         </UnstyledButton>
                       ) : (
                         <Text span size="sm">
                           {EVIDENCE_WORDS[evidence.kind]}
-                          {evidence.startMs !== null ? ` at ${formatTime(evidence.startMs)}` : ''}: {evidence.label}
+                          {evidence.startMs !== null ? ` at ${formatClock(evidence.startMs)}` : ''}: {evidence.label}
                         </Text>
                       )}
                     </List.Item>

@@ -2,7 +2,7 @@ import { Alert, Button, Group, Text } from '@mantine/core';
 import type { RefObject, SyntheticEvent } from 'react';
 import type { GuideFootage } from '../api/types';
 import classes from './guide-view.module.css';
-import { formatTime } from './playback';
+import { formatClock } from '@/lib/clock';
 
 export interface GuideVideoProps {
   footage: GuideFootage;
@@ -47,8 +47,8 @@ export function GuideVideo({ footage, videoRef, currentMs, failed, onRetry, even
         {footage.captionsUrl && <track kind="captions" srcLang="en" label="English captions" src={footage.captionsUrl} default />}
       </video>
       <Text size="xs" c="dimmed" mt={4} data-testid="video-position">
-        {formatTime(currentMs)}
-        {footage.durationMs !== null ? ` of ${formatTime(footage.durationMs)}` : ''} · {footage.title}
+        {formatClock(currentMs)}
+        {footage.durationMs !== null ? ` of ${formatClock(footage.durationMs)}` : ''} · {footage.title}
       </Text>
     </div>
   );

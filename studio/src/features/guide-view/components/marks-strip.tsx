@@ -1,7 +1,7 @@
 import { Group, Text } from '@mantine/core';
 import type { GuideMark, MarkKind } from '../api/types';
 import classes from './guide-view.module.css';
-import { formatTime } from './playback';
+import { formatClock } from '@/lib/clock';
 
 /** Each kind has its own shape (a path in a 12×12 box) and name, as in the creator's player, so the strip reads without colour. */
 export const MARK_LOOK: Record<MarkKind, { name: string; shape: string; colour: string }> = {
@@ -66,7 +66,7 @@ export function MarksStrip({ marks, durationMs, currentMs, onSeek }: MarksStripP
       >
         <div aria-hidden className={classes.playhead} style={{ left: `${Math.min(100, (currentMs / durationMs) * 100)}%` }} />
         {placed.map(({ mark, x, lane }) => {
-          const name = `${lookOf(mark.kind).name} at ${formatTime(mark.startMs)}${mark.label ? `: ${mark.label}` : ''}`;
+          const name = `${lookOf(mark.kind).name} at ${formatClock(mark.startMs)}${mark.label ? `: ${mark.label}` : ''}`;
           return (
             <button
               key={mark.id}
@@ -99,7 +99,7 @@ export function MarksStrip({ marks, durationMs, currentMs, onSeek }: MarksStripP
             <button type="button" className={classes.markChip} data-kind={mark.kind} onClick={() => onSeek(mark.startMs)}>
               <MarkShape kind={mark.kind} size={10} />
               <span className={classes.visuallyHidden}>{lookOf(mark.kind).name} </span>
-              <span className={classes.timeText}>{formatTime(mark.startMs)}</span>
+              <span className={classes.timeText}>{formatClock(mark.startMs)}</span>
               <span>{mark.label || lookOf(mark.kind).name}</span>
             </button>
           </li>

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { currentCueIndex, currentStepId, filterCues, formatTime, searchWords, type TimedStep } from './playback';
+import { currentCueIndex, currentStepId, filterCues, searchWords, type TimedStep } from './playback';
 
 const MAIN = 'footage-main';
 const step = (id: string, position: number, startMs: number | null, extra: Partial<TimedStep> = {}): TimedStep => ({
@@ -121,15 +121,5 @@ describe('transcript search', () => {
     expect(filterCues(cues, 'deja').map((match) => match.index)).toEqual([3]);
     expect(searchWords('  “Spigot”,  bore! ')).toEqual(['spigot', 'bore']);
     expect(searchWords('-- ...')).toEqual([]);
-  });
-});
-
-describe('formatTime', () => {
-  it('writes m:ss, and h:mm:ss past the hour', () => {
-    expect(formatTime(0)).toBe('0:00');
-    expect(formatTime(5_999)).toBe('0:05');
-    expect(formatTime(65_000)).toBe('1:05');
-    expect(formatTime(3_725_000)).toBe('1:02:05');
-    expect(formatTime(-10)).toBe('0:00');
   });
 });

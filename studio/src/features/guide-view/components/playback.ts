@@ -4,15 +4,6 @@
  */
 import type { Cue } from '../api/types';
 
-/** "m:ss", or "h:mm:ss" past the hour, from milliseconds (rounded down to the second, as players show it). */
-export function formatTime(ms: number): string {
-  const total = Math.max(0, Math.floor(ms / 1000));
-  const hours = Math.floor(total / 3600);
-  const minutes = Math.floor(total / 60) % 60;
-  const seconds = String(total % 60).padStart(2, '0');
-  return hours > 0 ? `${hours}:${String(minutes).padStart(2, '0')}:${seconds}` : `${minutes}:${seconds}`;
-}
-
 /** What the step highlighting needs of a step. */
 export interface TimedStep {
   id: string;

@@ -4,7 +4,8 @@ import type { GuideMark, PublishedStep } from '../api/types';
 import { CautionPanel } from './caution-panel';
 import classes from './guide-view.module.css';
 import { MARK_LOOK, MarkShape } from './marks-strip';
-import { formatTime, isInMainVideo } from './playback';
+import { formatClock } from '@/lib/clock';
+import { isInMainVideo } from './playback';
 
 export interface StepListProps {
   steps: PublishedStep[];
@@ -16,7 +17,7 @@ export interface StepListProps {
 
 function StepTime({ step, mainFootageId, onSeek }: { step: PublishedStep; mainFootageId: string | null; onSeek: (ms: number) => void }) {
   if (step.startMs === null) return null;
-  const range = `${formatTime(step.startMs)}${step.endMs !== null && step.endMs > step.startMs ? `–${formatTime(step.endMs)}` : ''}`;
+  const range = `${formatClock(step.startMs)}${step.endMs !== null && step.endMs > step.startMs ? `–${formatClock(step.endMs)}` : ''}`;
   if (!isInMainVideo(step, mainFootageId)) {
     return (
       <Text span size="sm" c="dimmed" className={classes.timeText}>
@@ -29,7 +30,7 @@ function StepTime({ step, mainFootageId, onSeek }: { step: PublishedStep; mainFo
     <UnstyledButton
       className={classes.stepTime}
       onClick={() => step.startMs !== null && onSeek(step.startMs)}
-      aria-label={`Play step ${step.position} from ${formatTime(step.startMs)}`}
+      aria-label={`Play step ${step.position} from ${formatClock(step.startMs)}`}
       data-testid="step-time"
     >
       <svg width="10" height="10" viewBox="0 0 10 10" aria-hidden="true" focusable="false" className={classes.noPrint}>
@@ -107,7 +108,7 @@ export function StepList({ steps, marks, mainFootageId, currentStepId, onSeek }:
                         <button type="button" className={classes.markChip} onClick={() => onSeek(mark.startMs)}>
                           <MarkShape kind={mark.kind} size={10} />
                           <span className={classes.visuallyHidden}>{MARK_LOOK[mark.kind]?.name ?? 'Mark'} </span>
-                          <span className={classes.timeText}>{formatTime(mark.startMs)}</span>
+                          <span className={classes.timeText}>{formatClock(mark.startMs)}</span>
                           <span>{mark.label || MARK_LOOK[mark.kind]?.name}</span>
                         </button>
                       </li>

@@ -2,7 +2,8 @@ import { Highlight, Paper, Stack, Text, TextInput, Title, UnstyledButton } from 
 import { useDeferredValue, useRef, useState } from 'react';
 import type { Cue } from '../api/types';
 import classes from './guide-view.module.css';
-import { currentCueIndex, filterCues, formatTime, searchWords } from './playback';
+import { formatClock } from '@/lib/clock';
+import { currentCueIndex, filterCues, searchWords } from './playback';
 
 export interface TranscriptPanelProps {
   cues: Cue[];
@@ -64,7 +65,7 @@ export function TranscriptPanel({ cues, currentMs, onSeek }: TranscriptPanelProp
                       onClick={() => onSeek(cue.startMs)}
                       data-testid="transcript-cue"
                     >
-                      <span className={classes.cueTime}>{formatTime(cue.startMs)}</span>
+                      <span className={classes.cueTime}>{formatClock(cue.startMs)}</span>
                       {words.length > 0 ? (
                         <Highlight component="span" size="sm" highlight={words}>
                           {cue.text}

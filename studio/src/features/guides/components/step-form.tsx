@@ -6,7 +6,8 @@ import { useSaveStep } from '../api/mutations';
 import { CAUTION_LEVELS, type CautionLevel, type FootageChoice, type GuideStep } from '../api/types';
 import { CAUTION_LOOK } from './guide-labels';
 import { RichTextField } from './rich-text-field';
-import { formatStepTime, parseStepTime } from './step-time';
+import { formatClock } from '@/lib/clock';
+import { parseStepTime } from './step-time';
 
 const FIELD_LABELS = {
   title: 'Title',
@@ -36,8 +37,8 @@ function valuesOf(step: GuideStep | null, mainFootageId: string | null): StepVal
     title: step?.title ?? '',
     body: step?.body ?? '',
     footageId: step?.footageId ?? mainFootageId,
-    start: step?.startMs != null ? formatStepTime(step.startMs) : '',
-    end: step?.endMs != null ? formatStepTime(step.endMs) : '',
+    start: step?.startMs != null ? formatClock(step.startMs, { tenths: true }) : '',
+    end: step?.endMs != null ? formatClock(step.endMs, { tenths: true }) : '',
     cautionLevel: step?.caution?.level ?? null,
     cautionText: step?.caution?.text ?? '',
   };
@@ -64,7 +65,7 @@ export function StepForm({ workshopId, guideId, step, mainFootage, readPositionM
   const checkTime = (text: string) => {
     const ms = parseStepTime(text);
     if (ms === undefined) return TIME_HINT;
-    if (ms !== null && durationMs !== null && ms > durationMs) return `The footage is ${formatStepTime(durationMs)} long`;
+    if (ms !== null && durationMs !== null && ms > durationMs) return `The footage is ${formatClock(durationMs, { tenths: true })} long`;
     return null;
   };
 
@@ -92,7 +93,7 @@ export function StepForm({ workshopId, guideId, step, mainFootage, readPositionM
 
   const takeCurrentTime = (field: 'start' | 'end') => {
     if (!readPositionMs || !mainFootage) return;
-    form.setFieldValue(field, formatStepTime(readPositionMs()));
+    form.setFieldValue(field, formatClock(readPositionMs(), { tenths: true }));
     form.setFieldValue('footageId', mainFootage.id);
   };
 

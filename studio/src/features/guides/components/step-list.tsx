@@ -6,7 +6,7 @@ import { useDeleteStep, useReorderSteps } from '../api/mutations';
 import type { GuideStep } from '../api/types';
 import { CautionNote } from './caution-note';
 import { MARK_KIND_NAMES } from './guide-labels';
-import { formatStepTime } from './step-time';
+import { formatClock } from '@/lib/clock';
 
 export interface StepListProps {
   workshopId: string;
@@ -113,7 +113,7 @@ export function StepList({ workshopId, guideId, steps, mainFootageId, onSeek, on
                       {step.marks.map((mark) => (
                         <Text key={mark.id} size="xs" data-testid="step-mark">
                           <Text span ff="monospace" size="xs">
-                            {formatStepTime(mark.startMs)}
+                            {formatClock(mark.startMs, { tenths: true })}
                           </Text>{' '}
                           <Text span fw={600} size="xs">
                             {MARK_KIND_NAMES[mark.kind] ?? mark.kind}
@@ -173,7 +173,7 @@ export function StepList({ workshopId, guideId, steps, mainFootageId, onSeek, on
 
 function StepMoment({ step, mainFootageId, onSeek }: { step: GuideStep; mainFootageId: string | null; onSeek?: (ms: number) => void }) {
   const startMs = step.startMs ?? 0;
-  const label = `${formatStepTime(startMs)}${step.endMs !== null ? `–${formatStepTime(step.endMs)}` : ''}`;
+  const label = `${formatClock(startMs, { tenths: true })}${step.endMs !== null ? `–${formatClock(step.endMs, { tenths: true })}` : ''}`;
   const elsewhere = step.footageId !== null && step.footageId !== mainFootageId;
   if (!onSeek || elsewhere) {
     return (
@@ -184,7 +184,7 @@ function StepMoment({ step, mainFootageId, onSeek }: { step: GuideStep; mainFoot
     );
   }
   return (
-    <UnstyledButton onClick={() => onSeek(startMs)} aria-label={`Play from ${formatStepTime(startMs)}`} style={{ flex: 'none' }}>
+    <UnstyledButton onClick={() => onSeek(startMs)} aria-label={`Play from ${formatClock(startMs, { tenths: true })}`} style={{ flex: 'none' }}>
       <Text size="sm" ff="monospace" c="patina.8" td="underline" data-testid="step-time">
         {label}
       </Text>

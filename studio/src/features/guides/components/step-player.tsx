@@ -3,7 +3,7 @@ import { useQuery } from '@tanstack/react-query';
 import { useRef, useState, type RefObject } from 'react';
 import { guideQueries } from '../api/queries';
 import type { FootageChoice } from '../api/types';
-import { formatStepTime } from './step-time';
+import { formatClock } from '@/lib/clock';
 import { useRenewingVideoLink } from '@/lib/use-renewing-video-link';
 
 /** The player as the step form sees it: where it is now, and how to move it. */
@@ -91,11 +91,11 @@ export function StepPlayer({ workshopId, footage, videoRef, currentMs, onTimeCha
       )}
       <Group gap="xs">
         <Badge variant="default" data-testid="step-player-position">
-          {formatStepTime(currentMs)}
+          {formatClock(currentMs, { tenths: true })}
         </Badge>
         {footage.durationMs !== null && (
           <Text size="xs" c="dimmed">
-            of {formatStepTime(footage.durationMs)}
+            of {formatClock(footage.durationMs, { tenths: true })}
           </Text>
         )}
       </Group>

@@ -22,14 +22,3 @@ export function parseStepTime(text: string): number | null | undefined {
 function fraction(digits: string | undefined): number {
   return digits ? Math.round(Number(`0.${digits}`) * 1000) : 0;
 }
-
-/** 75 300 ms → "1:15.3"; 3 725 000 ms → "1:02:05.0". Tenths are cut, not rounded, so a time never shows later than it is. */
-export function formatStepTime(ms: number): string {
-  const tenths = Math.floor(Math.max(0, ms) / 100);
-  const totalSeconds = Math.floor(tenths / 10);
-  const hours = Math.floor(totalSeconds / 3600);
-  const minutes = Math.floor(totalSeconds / 60) % 60;
-  const seconds = String(totalSeconds % 60).padStart(2, '0');
-  const clock = hours > 0 ? `${hours}:${String(minutes).padStart(2, '0')}:${seconds}` : `${minutes}:${seconds}`;
-  return `${clock}.${tenths % 10}`;
-}

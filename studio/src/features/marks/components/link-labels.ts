@@ -1,6 +1,6 @@
 import { paths } from '@/config/paths';
 import type { GuideStepChoice, LinkAssembly, Mark, MeasurementChoice, PartChoice } from '../api/queries';
-import { formatMarkTime } from './format-time';
+import { formatClock } from '@/lib/clock';
 import { CHECK_STATE_WORDS, LINK_OF_KIND } from './mark-kinds';
 
 /** Everything a mark can point at, as far as it has been loaded (undefined while a list is not). */
@@ -72,7 +72,7 @@ export function fitCheckChoices(assemblies: LinkAssembly[], buildId: string | un
 export function readingChoices(measurements: MeasurementChoice[], footageId: string, sources: Pick<LinkSources, 'parts' | 'assemblies'>) {
   const item = (reading: MeasurementChoice) => {
     const subject = subjectName(reading, sources);
-    const at = reading.footageId === footageId && reading.footageTimeMs !== null ? ` at ${formatMarkTime(reading.footageTimeMs)}` : '';
+    const at = reading.footageId === footageId && reading.footageTimeMs !== null ? ` at ${formatClock(reading.footageTimeMs, { tenths: true })}` : '';
     return { value: reading.id, label: `${reading.shown}${subject ? ` · ${subject}` : ''} (${reading.quantity})${at}` };
   };
   return [
@@ -85,7 +85,7 @@ export function readingChoices(measurements: MeasurementChoice[], footageId: str
 export function guideStepChoices(steps: { inFootage: GuideStepChoice[]; others: GuideStepChoice[] }) {
   const item = (step: GuideStepChoice, withTime: boolean) => ({
     value: step.id,
-    label: `${step.guideTitle} · ${step.position}. ${step.title}${withTime && step.startMs !== null ? ` (${formatMarkTime(step.startMs)})` : ''}`,
+    label: `${step.guideTitle} · ${step.position}. ${step.title}${withTime && step.startMs !== null ? ` (${formatClock(step.startMs, { tenths: true })})` : ''}`,
   });
   return [
     { group: 'Anchored in this footage', items: steps.inFootage.map((step) => item(step, true)) },

@@ -4,7 +4,7 @@ import { splitApiErrors } from '@/lib/form-errors';
 import { notifyDone, notifyError } from '@/lib/notify';
 import { useDismissSuggestion, useRecordReading, useSaveMark } from '../api/mutations';
 import { MARK_KINDS, type Mark, type MarkKind } from '../api/queries';
-import { formatMarkTime } from './format-time';
+import { formatClock } from '@/lib/clock';
 import { FitCheckPicker, GuideStepPicker, PartPicker, ReadingPicker } from './link-pickers';
 import { KIND_LOOK, LINK_FIELDS, LINK_OF_KIND, type MarkLinkField } from './mark-kinds';
 import {
@@ -60,7 +60,7 @@ export function MarkForm({ workshopId, footageId, draft, onClose }: MarkFormProp
       opened={draft !== null}
       onClose={onClose}
       size="lg"
-      title={draft?.id ? 'Edit mark' : `New mark at ${formatMarkTime(draft?.startMs ?? 0)}`}
+      title={draft?.id ? 'Edit mark' : `New mark at ${formatClock(draft?.startMs ?? 0, { tenths: true })}`}
     >
       {draft && <MarkFields key={draft.id ?? draft.startMs} workshopId={workshopId} footageId={footageId} draft={draft} onClose={onClose} />}
     </Modal>
@@ -124,7 +124,7 @@ function MarkFields({ workshopId, footageId, draft, onClose }: { workshopId: str
       },
       {
         onSuccess: (recorded) => {
-          notifyDone(`Reading ${recorded.shown} recorded at ${formatMarkTime(value.startMs)}`);
+          notifyDone(`Reading ${recorded.shown} recorded at ${formatClock(value.startMs, { tenths: true })}`);
           // From here the reading exists: a retry after a failed mark links it rather than recording it again.
           setValue((current) => ({ ...current, measurementId: recorded.id }));
           setReadingMode('existing');

@@ -4,7 +4,7 @@ import { ConfirmButton } from '@/components/confirm-button';
 import { notifyError } from '@/lib/notify';
 import { useRemoveMark } from '../api/mutations';
 import { MARK_KINDS, type Mark, type MarkKind } from '../api/queries';
-import { formatMarkTime } from './format-time';
+import { formatClock } from '@/lib/clock';
 import { KindShape } from './kind-shape';
 import { MarkLink } from './mark-link';
 import { KIND_LOOK } from './mark-kinds';
@@ -43,9 +43,9 @@ export function MarksList({ workshopId, footageId, marks, onSeek, onEdit }: Mark
           {shown.map((mark) => (
             <Group key={mark.id} justify="space-between" wrap="nowrap" data-testid="mark-row">
               <Group gap="xs" wrap="nowrap" align="flex-start" style={{ minWidth: 0 }}>
-                <UnstyledButton onClick={() => onSeek(mark.startMs)} aria-label={`Jump to ${formatMarkTime(mark.startMs)}`}>
+                <UnstyledButton onClick={() => onSeek(mark.startMs)} aria-label={`Jump to ${formatClock(mark.startMs, { tenths: true })}`}>
                   <Text size="sm" ff="monospace">
-                    {formatMarkTime(mark.startMs)}
+                    {formatClock(mark.startMs, { tenths: true })}
                   </Text>
                 </UnstyledButton>
                 <Group gap="xs" wrap="nowrap" h={22} style={{ flex: 'none' }}>

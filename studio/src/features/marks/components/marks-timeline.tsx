@@ -1,7 +1,7 @@
 import { Group, Text } from '@mantine/core';
 import { useRef, type MouseEvent } from 'react';
 import { MARK_KINDS, type Mark } from '../api/queries';
-import { formatMarkTime } from './format-time';
+import { formatClock } from '@/lib/clock';
 import { KindShape } from './kind-shape';
 import { KIND_LOOK } from './mark-kinds';
 import { placeMarks, timeAt } from './timeline-geometry';
@@ -53,7 +53,7 @@ export function MarksTimeline({ marks, durationMs, currentMs, onSeek }: MarksTim
           const mark = byId.get(item.id);
           if (!mark) return null;
           const look = KIND_LOOK[mark.kind];
-          const title = `${look.name} at ${formatMarkTime(mark.startMs)}${mark.label ? `: ${mark.label}` : ''}`;
+          const title = `${look.name} at ${formatClock(mark.startMs, { tenths: true })}${mark.label ? `: ${mark.label}` : ''}`;
           return (
             <button
               key={mark.id}

@@ -4,7 +4,7 @@ import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { markQueries, type MarkSuggestion } from '../api/queries';
 import { MARKING_SHORTCUTS, useMarkingShortcuts } from '../hooks/marking-shortcuts';
-import { formatMarkTime } from './format-time';
+import { formatClock } from '@/lib/clock';
 import { draftOf, emptyLinks, MarkForm, type MarkDraft, type SpokenReading } from './mark-form';
 import { MarksList } from './marks-list';
 import { MarksTimeline } from './marks-timeline';
@@ -63,7 +63,7 @@ export function MarksWorkspace({ workshopId, footageId, player }: MarksWorkspace
       )}
       <Group gap="xs">
         <Button onClick={handlers.pin} data-testid="pin-mark">
-          Pin a mark at {formatMarkTime(player.currentMs)}
+          Pin a mark at {formatClock(player.currentMs, { tenths: true })}
         </Button>
         <Button variant="subtle" onClick={help.open}>
           Keys <Kbd ml={6}>?</Kbd>

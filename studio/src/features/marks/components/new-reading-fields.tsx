@@ -2,7 +2,7 @@ import { Select, SimpleGrid, Stack, Text, TextInput } from '@mantine/core';
 import { useQuery } from '@tanstack/react-query';
 import type { LengthUnit } from '@/lib/units';
 import { markQueries } from '../api/queries';
-import { formatMarkTime } from './format-time';
+import { formatClock } from '@/lib/clock';
 import { buildFirst, subjectChoices } from './link-labels';
 import { INSTRUMENT_CHOICES, QUANTITY_CHOICES, stepOfDigits, UNIT_CHOICES } from './reading-choices';
 
@@ -144,7 +144,7 @@ export function NewReadingFields({ workshopId, footageId, atMs, reading, spoken,
         />
       </SimpleGrid>
       <Text size="xs" c="dimmed">
-        The reading is linked to this footage at {formatMarkTime(atMs)}.
+        The reading is linked to this footage at {formatClock(atMs, { tenths: true })}.
       </Text>
     </Stack>
   );

@@ -4,7 +4,7 @@ import { useState } from 'react';
 import { notifyDone, notifyError } from '@/lib/notify';
 import { useAcceptSuggestion, useDismissSuggestion } from '../api/mutations';
 import { markQueries, type MarkSuggestion } from '../api/queries';
-import { formatMarkTime } from './format-time';
+import { formatClock } from '@/lib/clock';
 import { KindShape } from './kind-shape';
 import { INSTRUMENT_CHOICES } from './reading-choices';
 
@@ -52,7 +52,7 @@ export function SuggestionsPanel({ workshopId, footageId, onSeek }: SuggestionsP
             <Group key={suggestion.id} justify="space-between" wrap="nowrap" data-testid="suggestion-row">
               <Group gap="xs" wrap="nowrap">
                 <Button size="compact-xs" variant="subtle" ff="monospace" onClick={() => onSeek(suggestion.startMs)}>
-                  {formatMarkTime(suggestion.startMs)}
+                  {formatClock(suggestion.startMs, { tenths: true })}
                 </Button>
                 <KindShape kind={suggestion.kind} />
                 <Text size="sm">
@@ -94,7 +94,7 @@ export function SuggestionsPanel({ workshopId, footageId, onSeek }: SuggestionsP
                 {
                   onSuccess: (result) => {
                     setReading(null);
-                    notifyDone(`Reading ${result.measurement?.shown ?? ''} recorded at ${formatMarkTime(reading.startMs)}`);
+                    notifyDone(`Reading ${result.measurement?.shown ?? ''} recorded at ${formatClock(reading.startMs, { tenths: true })}`);
                   },
                   onError: (error) => notifyError('The reading was not recorded', error),
                 },
@@ -131,7 +131,7 @@ function ReadingFields({ workshopId, suggestion, pending, onCancel, onAccept }: 
         <TextInput label="Unit" value={suggestion.unit ?? ''} readOnly />
       </Group>
       <Text size="xs" c="dimmed">
-        Heard at {formatMarkTime(suggestion.startMs)}: “{suggestion.phrase}”. The reading is linked to this moment.
+        Heard at {formatClock(suggestion.startMs, { tenths: true })}: “{suggestion.phrase}”. The reading is linked to this moment.
       </Text>
       <Select
         label="Feature measured"
