@@ -1,4 +1,6 @@
 import fc from 'fast-check';
+import { toWords } from 'number-to-words';
+import wordsToNumbers from 'words-to-numbers';
 import { extractMeasurements, findPartNumbers, type SpokenMeasurement } from './spoken-measurements';
 
 /** Written for these tests (an invented bench session); not taken from any real video. */
@@ -135,6 +137,103 @@ describe('extractMeasurements', () => {
 
     it('does not read across a blank line', () => {
       expect(extractMeasurements('fifteen\n\nthou')).toEqual([]);
+    });
+  });
+
+  describe('readings said in two parts (coarse, then finer) are one measurement', () => {
+    // Shop usage (common practice, from memory): "a thou and two tenths" is 0.0012 in; "an inch and a
+    // quarter" is 1.25 in; "millionths" are microinches. Sentences written for these tests.
+    it.each<[string, Expected]>([
+      ['it came in at one thousandth and two tenths over', { phrase: 'one thousandth and two tenths', value: 0.0012, unit: 'in', millimetres: 0.03048 }],
+      ['cut it an inch and a quarter long', { phrase: 'an inch and a quarter', value: 1.25, unit: 'in', millimetres: 31.75 }],
+      ['the stub is two inches and fifteen thousandths', { phrase: 'two inches and fifteen thousandths', value: 2.015, unit: 'in', millimetres: 51.181 }],
+      ['runout was three thou and a half, too much', { phrase: 'three thou and a half', value: 0.0035, unit: 'in', millimetres: 0.0889 }],
+      ['fifteen thou and two tenths, no more', { phrase: 'fifteen thou and two tenths', value: 0.0152, unit: 'in', millimetres: 0.38608 }],
+      ['a tenth and a half, end to end', { phrase: 'a tenth and a half', value: 0.00015, unit: 'in', millimetres: 0.00381 }],
+      ['two inches and three eighths overall', { phrase: 'two inches and three eighths', value: 2.375, unit: 'in', millimetres: 60.325 }],
+      ['the bore reads 1.250 inch and two tenths', { phrase: '1.250 inch and two tenths', value: 1.2502, unit: 'in', millimetres: 31.75508 }],
+      ['half a thou and a tenth is the limit', { phrase: 'half a thou and a tenth', value: 0.0006, unit: 'in', millimetres: 0.01524 }],
+      ['twenty-two millimetres and a half', { phrase: 'twenty-two millimetres and a half', value: 22.5, unit: 'mm', millimetres: 22.5 }],
+      ['an inch and five thirty-seconds', { phrase: 'an inch and five thirty-seconds', value: 1.15625, unit: 'in', millimetres: 29.36875 }],
+    ])('%s', (text, expected) => {
+      expect(only(text)).toEqual(expected);
+    });
+
+    it.each<[string, Expected]>([
+      ['the finish is fifty millionths of an inch', { phrase: 'fifty millionths of an inch', value: 0.00005, unit: 'in', millimetres: 0.00127 }],
+      ['flat to fifty millionths', { phrase: 'fifty millionths', value: 0.00005, unit: 'in', millimetres: 0.00127 }],
+      ['a millionth of an inch', { phrase: 'a millionth of an inch', value: 0.000001, unit: 'in', millimetres: 0.000025 }],
+      ['sixteen microinches Ra', { phrase: 'sixteen microinches', value: 0.000016, unit: 'in', millimetres: 0.000406 }],
+    ])('millionths of an inch are a unit: %s', (text, expected) => {
+      expect(only(text)).toEqual(expected);
+    });
+
+    it('keeps the phrase span over both parts, in a longer sentence', () => {
+      const text = 'Okay, so the shaft is two inches and fifteen thousandths, and the bore is 22 mm.';
+      const [first, second] = extractMeasurements(text);
+      expect(text.slice(first.start, first.end)).toBe('two inches and fifteen thousandths');
+      expect(first.start).toBe(text.indexOf('two inches'));
+      expect(second.phrase).toBe('22 mm');
+    });
+
+    it.each([
+      ['a larger second part', 'two inches and three inches', ['two inches', 'three inches']],
+      ['another unit system', '15 thou and 22 mm', ['15 thou', '22 mm']],
+      ['a count of parts after "and"', 'an inch and two bolts', ['an inch']],
+      ['a fraction of something else', 'one inch and a quarter of the way', ['one inch']],
+      ['a time after "and"', 'it was 2 inches and 3:15 later', ['2 inches']],
+      ['a part number after "and"', 'a thou and HL-2107', ['a thou']],
+      ['a blank line between the parts', 'two inches and\n\nfifteen thousandths', ['two inches', 'fifteen thousandths']],
+    ])('stays apart with %s: %s', (_label, text, phrases) => {
+      expect(extractMeasurements(text).map((hit) => hit.phrase)).toEqual(phrases);
+    });
+  });
+
+  describe('round trips through number words from npm (number-to-words 1.2.4, checked with words-to-numbers 1.5.1)', () => {
+    /** number-to-words writes "one thousand, two hundred"; nobody says the comma. */
+    const spoken = (value: number): string => toWords(value).replace(/,/g, '');
+
+    it('reads "<n> thousandths" as n/1000 in', () => {
+      fc.assert(
+        fc.property(fc.integer({ min: 1, max: 999_999 }), (count) => {
+          expect(only(`that is ${spoken(count)} thousandths over`).value).toBe(Number(`${count}e-3`));
+        }),
+        { numRuns: 200 },
+      );
+    });
+
+    it('agrees with words-to-numbers below a thousand (above, 1.5.1 reads "twenty-one thousand" as 1020)', () => {
+      fc.assert(
+        fc.property(fc.integer({ min: 1, max: 999 }), (count) => {
+          const words = spoken(count);
+          expect(wordsToNumbers(words)).toBe(count);
+          expect(only(`${words} thou`).value).toBe(Number(`${count}e-3`));
+        }),
+        { numRuns: 200 },
+      );
+    });
+
+    it('reads "<a> thousandths and <b> tenths" as one reading of a·10 + b tenths', () => {
+      fc.assert(
+        fc.property(fc.integer({ min: 1, max: 999 }), fc.integer({ min: 1, max: 9 }), (thousandths, tenths) => {
+          const text = `about ${spoken(thousandths)} thousandths and ${spoken(tenths)} tenths`;
+          const hit = only(text);
+          expect(hit.phrase).toBe(text.slice('about '.length));
+          expect(hit.value).toBe(Number(`${thousandths * 10 + tenths}e-4`));
+        }),
+        { numRuns: 200 },
+      );
+    });
+
+    it('reads "<w> inches and <t> thousandths" as w + t/1000 in', () => {
+      fc.assert(
+        fc.property(fc.integer({ min: 1, max: 99 }), fc.integer({ min: 1, max: 999 }), (inches, thousandths) => {
+          const hit = only(`${spoken(inches)} inches and ${spoken(thousandths)} thousandths`);
+          expect(hit.value).toBe(Number(`${inches * 1000 + thousandths}e-3`));
+          expect(hit.unit).toBe('in');
+        }),
+        { numRuns: 200 },
+      );
     });
   });
 

@@ -97,6 +97,7 @@ interface UnitScale {
 const INCH: UnitScale = { unit: 'in', size: fraction(1n) };
 const THOU: UnitScale = { unit: 'in', size: fraction(1n, 1000n) };
 const TENTH: UnitScale = { unit: 'in', size: fraction(1n, 10_000n) };
+const MICROINCH: UnitScale = { unit: 'in', size: fraction(1n, 1_000_000n) };
 const MILLIMETRE: UnitScale = { unit: 'mm', size: fraction(1n) };
 const MICROMETRE: UnitScale = { unit: 'um', size: fraction(1n) };
 
@@ -119,6 +120,8 @@ const UNIT_WORDS: ReadonlyMap<string, UnitScale> = new Map(
   thous: THOU,
   mil: THOU,
   mils: THOU,
+  microinch: MICROINCH,
+  microinches: MICROINCH,
   micron: MICROMETRE,
   microns: MICROMETRE,
   '\u00b5m': MICROMETRE, // µm with MICRO SIGN
@@ -144,6 +147,7 @@ const SINGULAR_UNIT_WORDS: ReadonlyMap<string, UnitScale> = new Map(
   thousandth: THOU,
   mil: THOU,
   tenth: TENTH,
+  microinch: MICROINCH,
   micron: MICROMETRE,
   }),
 );
@@ -184,6 +188,8 @@ const DENOMINATOR_WORDS: readonly DenominatorWord[] = [
   ...denominator(['sixteenth', 'sixteenths'], 16n, INCH),
   ...denominator(['hundredth', 'hundredths'], 100n),
   ...denominator(['thousandth', 'thousandths'], 1000n, INCH),
+  // "fifty millionths" in the shop is microinches (common practice in US precision grinding).
+  ...denominator(['millionth', 'millionths'], 1_000_000n, INCH),
 ];
 
 /* ---------------------------------------------------------------- tokens */
@@ -197,24 +203,125 @@ interface Token {
   end: number;
   /** True for the second half of a hyphenated compound ("twenty-two"). */
   hyphenJoined: boolean;
+  /** Only whitespace with at most one line break since the previous token (a blank line ends a phrase). */
+  closeToPrevious: boolean;
 }
 
 const HYPHENS = new Set(['-', '\u2010', '\u2011']);
+const APOSTROPHES = new Set(["'", '\u2019']);
 
-function tokenize(text: string, pattern: RegExp): Token[] {
-  const raw: Token[] = [];
-  for (const match of text.matchAll(pattern)) {
-    const piece = match[0];
-    const start = match.index;
-    const kind = /^[0-9.]/u.test(piece) && piece !== '.' ? 'number' : /^\p{L}/u.test(piece) ? 'word' : 'symbol';
-    raw.push({ kind, text: piece, key: piece.toLowerCase(), start, end: start + piece.length, hyphenJoined: false });
+const LINE_FEED = 0x0a;
+const FULL_STOP = 0x2e;
+
+function isAsciiDigit(code: number): boolean {
+  return code >= 0x30 && code <= 0x39;
+}
+
+/** The characters JavaScript's `\s` matches, tested one code point at a time. */
+function isWhitespace(code: number): boolean {
+  if (code < 0x80) return code === 0x20 || (code >= 0x09 && code <= 0x0d);
+  return /^\s$/u.test(String.fromCodePoint(code));
+}
+
+function isLetter(code: number): boolean {
+  if (code < 0x80) return (code >= 0x41 && code <= 0x5a) || (code >= 0x61 && code <= 0x7a);
+  return /^\p{L}$/u.test(String.fromCodePoint(code));
+}
+
+function codePointWidth(code: number): number {
+  return code > 0xffff ? 2 : 1;
+}
+
+function endOfDigits(text: string, from: number): number {
+  let at = from;
+  while (at < text.length && isAsciiDigit(text.charCodeAt(at))) at += 1;
+  return at;
+}
+
+function endOfLetters(text: string, from: number): number {
+  let at = from;
+  while (at < text.length) {
+    const code = text.codePointAt(at) ?? 0;
+    if (!isLetter(code)) break;
+    at += codePointWidth(code);
   }
-  return raw;
+  return at;
+}
+
+/**
+ * Work is cut into slices so a caller holding an event loop can let other work run between them
+ * (`extractMeasurementsInSlices`); a slice is a few milliseconds at most.
+ */
+const SLICE_CHARACTERS = 16_384;
+const SLICE_TOKENS = 4_096;
+
+/** Runs sliced work to the end in one go. */
+function runToEnd<T>(steps: Generator<void, T, void>): T {
+  for (;;) {
+    const step = steps.next();
+    if (step.done) return step.value;
+  }
+}
+
+/**
+ * One left-to-right pass over the text: each character is looked at a bounded number of times,
+ * so the time is linear in the length whatever the text holds (long runs of spaces included).
+ * `measurement` reads decimals ("1.250", ".0004") and words with apostrophes ("shaft's") as one
+ * token; `part-number` splits letters from digits, so "hl2107" is two tokens with nothing between.
+ */
+function* tokenize(text: string, forms: 'measurement' | 'part-number'): Generator<void, Token[], void> {
+  const tokens: Token[] = [];
+  let lineBreaks = 0;
+  let at = 0;
+  let sliceEnd = SLICE_CHARACTERS;
+  while (at < text.length) {
+    if (at >= sliceEnd) {
+      sliceEnd = at + SLICE_CHARACTERS;
+      yield;
+    }
+    const code = text.codePointAt(at) ?? 0;
+    if (isWhitespace(code)) {
+      if (code === LINE_FEED) lineBreaks += 1;
+      at += codePointWidth(code);
+      continue;
+    }
+    const start = at;
+    let kind: Token['kind'];
+    const decimalFirst = forms === 'measurement' && code === FULL_STOP && isAsciiDigit(text.charCodeAt(at + 1));
+    if (isAsciiDigit(code) || decimalFirst) {
+      kind = 'number';
+      at = endOfDigits(text, decimalFirst ? at + 1 : at);
+      if (forms === 'measurement' && !decimalFirst && text.charCodeAt(at) === FULL_STOP && isAsciiDigit(text.charCodeAt(at + 1))) {
+        at = endOfDigits(text, at + 1);
+      }
+    } else if (isLetter(code)) {
+      kind = 'word';
+      at = endOfLetters(text, at);
+      while (forms === 'measurement' && APOSTROPHES.has(text[at]) && isLetter(text.codePointAt(at + 1) ?? 0)) {
+        at = endOfLetters(text, at + 1);
+      }
+    } else {
+      kind = 'symbol';
+      at += codePointWidth(code);
+    }
+    const piece = text.slice(start, at);
+    tokens.push({
+      kind,
+      text: piece,
+      key: piece.toLowerCase(),
+      start,
+      end: at,
+      hyphenJoined: false,
+      closeToPrevious: lineBreaks <= 1,
+    });
+    lineBreaks = 0;
+  }
+  return tokens;
 }
 
 /** Words and numbers for measurements; hyphens inside compounds ("twenty-two") are folded away. */
-function tokenizeForMeasurements(text: string): Token[] {
-  const raw = tokenize(text, /[0-9]+(?:\.[0-9]+)?|\.[0-9]+|\p{L}+(?:['\u2019]\p{L}+)*|\S/gu);
+function* tokenizeForMeasurements(text: string): Generator<void, Token[], void> {
+  const raw = yield* tokenize(text, 'measurement');
   const tokens: Token[] = [];
   for (let i = 0; i < raw.length; i += 1) {
     const [previous, current, next] = [raw[i - 1], raw[i], raw[i + 1]];
@@ -240,9 +347,9 @@ function tokenizeForMeasurements(text: string): Token[] {
  */
 const MAX_NUMBER_WORDS = 16;
 
-/** Whitespace with at most one line break between the two tokens (a blank line ends a phrase). */
-function connected(text: string, left: Token, right: Token): boolean {
-  return right.hyphenJoined || /^[^\S\n]*\n?[^\S\n]*$/u.test(text.slice(left.end, right.start));
+/** `right` follows `left` in the same phrase: a hyphen, or whitespace with at most one line break. */
+function connected(right: Token): boolean {
+  return right.hyphenJoined || right.closeToPrevious;
 }
 
 function adjacent(left: Token | undefined, right: Token | undefined): boolean {
@@ -256,6 +363,8 @@ type AmountKind = 'whole' | 'decimal' | 'fraction' | 'article' | 'implied';
 interface Amount {
   value: Fraction;
   kind: AmountKind;
+  /** The finest place the amount was said to: 1 for "fifteen", 1/1000 for "1.250", 1/8 for "3/8". */
+  step: Fraction;
   /** Index of the first token after the amount. */
   next: number;
   /** The number opened a quotation, so a closing `"` is not an inch mark. */
@@ -266,21 +375,45 @@ interface Measured {
   quantity: Fraction;
   scale: UnitScale;
   next: number;
+  /** The finest place said, in the same units as `quantity` ("fifteen thousandths" → 1/1000). */
+  step: Fraction;
+  /** "an inch and a quarter", "a tenth and a half": a plain count may take a trailing fraction. */
+  takesTrailingFraction: boolean;
+}
+
+const ONE = fraction(1n);
+
+function isLess(a: Fraction, b: Fraction): boolean {
+  return a.numerator * b.denominator < b.numerator * a.denominator;
+}
+
+function inverse(value: Fraction): Fraction {
+  return fraction(value.denominator, value.numerator);
 }
 
 class MeasurementScanner {
-  private readonly tokens: Token[];
   /** Token index where the phrase being read starts. */
   private phraseStart = 0;
 
-  constructor(private readonly text: string) {
-    this.tokens = tokenizeForMeasurements(text);
-  }
+  constructor(
+    private readonly text: string,
+    private readonly tokens: Token[],
+  ) {}
 
-  scan(): SpokenMeasurement[] {
+  /**
+   * Each start position reads a bounded number of tokens ahead (number words are capped, units are
+   * one or three words), and a hit moves past its phrase, so the scan is linear in the token count.
+   */
+  *scan(): Generator<void, SpokenMeasurement[], void> {
     const found: SpokenMeasurement[] = [];
+    let sliceEnd = SLICE_TOKENS;
     for (let index = 0; index < this.tokens.length; ) {
-      const measured = this.measurementAt(index);
+      if (index >= sliceEnd) {
+        sliceEnd = index + SLICE_TOKENS;
+        yield;
+      }
+      const single = this.measurementAt(index);
+      const measured = single && this.withFinerPart(single);
       if (!measured) {
         index += 1;
         continue;
@@ -313,9 +446,71 @@ class MeasurementScanner {
     const mixed = amount.kind === 'whole' ? this.andFractionAfter(amount) : null;
     const total = mixed ?? amount;
     const unit = this.unitWordAt(total);
-    if (unit) return this.withTrailingHalf({ quantity: total.value, scale: unit.scale, next: unit.next }, total);
-    if (amount.kind === 'fraction') return this.ofUnitAt(amount.next, amount.value);
+    if (unit) {
+      return {
+        quantity: total.value,
+        scale: unit.scale,
+        next: unit.next,
+        step: total.step,
+        takesTrailingFraction: total.kind === 'whole' || total.kind === 'article',
+      };
+    }
+    if (amount.kind === 'fraction') return this.ofUnitAt(amount.next, amount.value, amount.step);
     return null;
+  }
+
+  /**
+   * A reading said in two parts, coarse then finer, is one length: "one thousandth and two tenths"
+   * (0.0012 in), "two inches and fifteen thousandths" (2.015 in). The second part must be in the
+   * same unit system and smaller than the first part's finest place, or the two stay separate
+   * ("two inches and three inches" is two lengths). Otherwise a trailing fraction may follow.
+   */
+  private withFinerPart(first: Measured): Measured {
+    const andIndex = first.next;
+    const partStart = andIndex + 1;
+    const partToken = this.tokens[partStart];
+    if (this.wordAt(andIndex) !== 'and' || partToken === undefined || !connected(partToken)) return first;
+    const phraseStart = this.phraseStart;
+    const second = this.measurementAt(partStart);
+    this.phraseStart = phraseStart;
+    if (second && second.scale.unit === first.scale.unit) {
+      const secondLength = times(second.quantity, second.scale.size);
+      if (isLess(secondLength, times(first.step, first.scale.size))) {
+        const secondInFirstUnits = times(secondLength, inverse(first.scale.size));
+        return {
+          quantity: plus(first.quantity, secondInFirstUnits),
+          scale: first.scale,
+          next: second.next,
+          step: times(second.step, times(second.scale.size, inverse(first.scale.size))),
+          takesTrailingFraction: false,
+        };
+      }
+    }
+    return this.withTrailingFraction(first);
+  }
+
+  /** "an inch and a quarter", "three thou and a half", "a tenth and a half": a fraction of the finest place. */
+  private withTrailingFraction(measured: Measured): Measured {
+    if (!measured.takesTrailingFraction || this.wordAt(measured.next) !== 'and') return measured;
+    const countIndex = measured.next + 1;
+    const countWord = this.wordAt(countIndex);
+    if (countWord === undefined) return measured;
+    const count =
+      countWord === 'a' || countWord === 'an' ? { value: 1, wordCount: 1 } : parseCardinalAt(this.wordRun(countIndex), 0);
+    if (!count) return measured;
+    const denominatorWord = this.denominatorAt(countIndex + count.wordCount);
+    // Fractions with a unit of their own ("and two tenths") were read as a finer part, or are another length.
+    if (!denominatorWord || denominatorWord.bareUnit) return measured;
+    const after = this.wordAt(denominatorWord.next);
+    if (after === 'of' || (after !== undefined && UNIT_WORDS.has(after))) return measured;
+    const part = times(fraction(BigInt(count.value), denominatorWord.divisor), measured.step);
+    return {
+      ...measured,
+      quantity: plus(measured.quantity, part),
+      next: denominatorWord.next,
+      step: times(measured.step, fraction(1n, denominatorWord.divisor)),
+      takesTrailingFraction: false,
+    };
   }
 
   /* ----- amounts */
@@ -352,13 +547,16 @@ class MeasurementScanner {
       const separatedWell =
         fractionStart === index + 2
           ? adjacent(hyphen, tokens[index + 2])
-          : next !== undefined && !adjacent(first, next) && connected(this.text, first, next);
+          : next !== undefined && !adjacent(first, next) && connected(next);
       const part = separatedWell ? fractionAt(fractionStart) : null;
       if (part) {
-        return { value: plus(fraction(BigInt(first.text)), part.value), kind: 'fraction', next: part.next, quoted };
+        const value = plus(fraction(BigInt(first.text)), part.value);
+        return { value, kind: 'fraction', step: fraction(1n, part.value.denominator), next: part.next, quoted };
       }
       const simple = fractionAt(index);
-      if (simple) return { value: simple.value, kind: 'fraction', next: simple.next, quoted };
+      if (simple) {
+        return { value: simple.value, kind: 'fraction', step: fraction(1n, simple.value.denominator), next: simple.next, quoted };
+      }
     }
 
     const after = tokens[index + 1];
@@ -370,6 +568,7 @@ class MeasurementScanner {
     return {
       value: fractionFromDecimal(whole, fractionDigits),
       kind: first.text.includes('.') ? 'decimal' : 'whole',
+      step: fraction(1n, 10n ** BigInt(fractionDigits.length)),
       next: index + 1,
       quoted,
     };
@@ -381,7 +580,7 @@ class MeasurementScanner {
     for (let at = index; at < this.tokens.length && words.length < MAX_NUMBER_WORDS; at += 1) {
       const token = this.tokens[at];
       if (token.kind !== 'word') break;
-      if (at > index && !connected(this.text, this.tokens[at - 1], token)) break;
+      if (at > index && !connected(token)) break;
       words.push(token.key);
     }
     return words;
@@ -396,20 +595,22 @@ class MeasurementScanner {
       return {
         value: plus(fraction(BigInt(decimal.integerPart)), fractionFromDecimal('0', decimal.fractionDigits)),
         kind: 'decimal',
+        step: fraction(1n, 10n ** BigInt(decimal.fractionDigits.length)),
         next: index + decimal.wordCount,
         quoted: false,
       };
     }
     const cardinal: WordNumberMatch | null = parseCardinalAt(words, 0);
     if (cardinal) {
-      return { value: fraction(BigInt(cardinal.value)), kind: 'whole', next: index + cardinal.wordCount, quoted: false };
+      const value = fraction(BigInt(cardinal.value));
+      return { value, kind: 'whole', step: ONE, next: index + cardinal.wordCount, quoted: false };
     }
     if (token.key === 'a' || token.key === 'an') {
-      return { value: fraction(1n), kind: 'article', next: index + 1, quoted: false };
+      return { value: ONE, kind: 'article', step: ONE, next: index + 1, quoted: false };
     }
     // "half a thou", "quarter inch": the fraction word itself starts the phrase.
     if (token.key === 'half' || token.key === 'quarter') {
-      return { value: fraction(1n), kind: 'implied', next: index, quoted: false };
+      return { value: ONE, kind: 'implied', step: ONE, next: index, quoted: false };
     }
     return null;
   }
@@ -420,7 +621,7 @@ class MeasurementScanner {
   private wordAt(index: number): string | undefined {
     const token = this.tokens[index];
     if (token?.kind !== 'word') return undefined;
-    const continues = index === this.phraseStart || connected(this.text, this.tokens[index - 1], token);
+    const continues = index === this.phraseStart || connected(token);
     return continues ? token.key : undefined;
   }
 
@@ -439,33 +640,36 @@ class MeasurementScanner {
   private fractionOfUnit(amount: Amount): Measured | null | undefined {
     const denominatorWord = this.denominatorAt(amount.next);
     if (!denominatorWord) return undefined;
-    const quantity = times(amount.value, fraction(1n, denominatorWord.divisor));
+    const perDenominator = fraction(1n, denominatorWord.divisor);
+    const quantity = times(amount.value, perDenominator);
+    const step = times(amount.step, perDenominator);
+    const takesTrailingFraction = amount.kind === 'whole' || amount.kind === 'article';
     const after = denominatorWord.next;
 
-    if (this.wordAt(after) === 'of') return this.ofUnitAt(after, quantity);
+    if (this.wordAt(after) === 'of') return this.ofUnitAt(after, quantity, step);
     const isHalf = denominatorWord.divisor === 2n;
     const article = this.wordAt(after);
     if (isHalf && (article === 'a' || article === 'an')) {
       const unit = SINGULAR_UNIT_WORDS.get(this.wordAt(after + 1) ?? '');
-      if (unit) return { quantity, scale: unit, next: after + 2 };
+      if (unit) return { quantity, scale: unit, next: after + 2, step, takesTrailingFraction: false };
     }
     const unitWord = this.wordAt(after);
     const direct = unitWord !== undefined && !INSTRUMENT_NAMED_UNITS.has(unitWord) ? UNIT_WORDS.get(unitWord) : undefined;
-    if (direct) return { quantity, scale: direct, next: after + 1 };
-    if (this.inchMarkAt(after, amount)) return { quantity, scale: INCH, next: after + 1 };
+    if (direct) return { quantity, scale: direct, next: after + 1, step, takesTrailingFraction };
+    if (this.inchMarkAt(after, amount)) return { quantity, scale: INCH, next: after + 1, step, takesTrailingFraction };
     if (amount.kind !== 'implied' && denominatorWord.bareUnit) {
-      return { quantity, scale: denominatorWord.bareUnit, next: after };
+      return { quantity, scale: denominatorWord.bareUnit, next: after, step, takesTrailingFraction };
     }
     return null;
   }
 
   /** "of a millimetre", "of an inch", "of a thou" — or null ("a tenth of a second" is not a length). */
-  private ofUnitAt(ofIndex: number, quantity: Fraction): Measured | null {
+  private ofUnitAt(ofIndex: number, quantity: Fraction, step: Fraction): Measured | null {
     if (this.wordAt(ofIndex) !== 'of') return null;
     const article = this.wordAt(ofIndex + 1);
     if (article !== 'a' && article !== 'an') return null;
     const unit = SINGULAR_UNIT_WORDS.get(this.wordAt(ofIndex + 2) ?? '');
-    return unit ? { quantity, scale: unit, next: ofIndex + 3 } : null;
+    return unit ? { quantity, scale: unit, next: ofIndex + 3, step, takesTrailingFraction: false } : null;
   }
 
   /** "one and a half", "two and three quarters": the amount grows; the unit is still required. */
@@ -480,7 +684,8 @@ class MeasurementScanner {
     const denominatorWord = this.denominatorAt(countIndex + count.wordCount);
     if (!denominatorWord) return null;
     const part = fraction(BigInt(count.value), denominatorWord.divisor);
-    return { ...amount, kind: 'fraction', value: plus(amount.value, part), next: denominatorWord.next };
+    const step = fraction(1n, denominatorWord.divisor);
+    return { ...amount, kind: 'fraction', value: plus(amount.value, part), step, next: denominatorWord.next };
   }
 
   /** `0.015"`, `3/8"`: an inch mark written right after digits (not closing a quotation). */
@@ -510,14 +715,6 @@ class MeasurementScanner {
     if (amount.kind === 'article' && (INSTRUMENT_NAMED_UNITS.has(word) || word === 'mm')) return null;
     return { scale, next: index + 1 };
   }
-
-  /** "an inch and a half", "a thou and a half". */
-  private withTrailingHalf(measured: Measured, amount: Amount): Measured {
-    if (amount.kind !== 'whole' && amount.kind !== 'article') return measured;
-    const at = measured.next;
-    if (!this.wordsAt(at, ['and', 'a', 'half'])) return measured;
-    return { ...measured, quantity: plus(measured.quantity, fraction(1n, 2n)), next: at + 3 };
-  }
 }
 
 /**
@@ -529,7 +726,16 @@ class MeasurementScanner {
  * counts only when a unit follows. Bare "in" counts only after a decimal or a fraction.
  */
 export function extractMeasurements(text: string): SpokenMeasurement[] {
-  return new MeasurementScanner(text).scan();
+  return runToEnd(extractMeasurementsInSlices(text));
+}
+
+/**
+ * `extractMeasurements` cut into slices of a few milliseconds: each `next()` does one slice and the
+ * last returns the measurements, so a server can let other requests run between slices.
+ */
+export function* extractMeasurementsInSlices(text: string): Generator<void, SpokenMeasurement[], void> {
+  const tokens = yield* tokenizeForMeasurements(text);
+  return yield* new MeasurementScanner(text, tokens).scan();
 }
 
 /* ---------------------------------------------------------------- part numbers */
@@ -547,7 +753,7 @@ class PartNumberMatcher {
 
   constructor(private readonly text: string) {
     // Letters and digits split apart, so "hl2107" is two tokens with nothing between them.
-    this.tokens = tokenize(text, /\p{L}+|[0-9]+|\S/gu);
+    this.tokens = runToEnd(tokenize(text, 'part-number'));
   }
 
   /** Every place `canonical` (upper-case letters and digits) is written or spoken. */
