@@ -5,6 +5,8 @@
 # the current folder, and stops what it started.
 source "$(dirname "$0")/lib.sh"
 use_test_services
-build_if_changed api "$ROOT/api/src" "$ROOT/api/tsconfig.json" "$ROOT/api/tsconfig.build.json" "$ROOT/package-lock.json" >/dev/null
-run_migrations >/dev/null
+# Quiet when all is well; a failed build or migration shows why instead of exiting silently.
+quietly() { local out; out="$("$@" 2>&1)" || { printf '%s\n' "$out" >&2; fail "failed: $*"; }; }
+quietly build_if_changed api "$ROOT/api/src" "$ROOT/api/tsconfig.json" "$ROOT/api/tsconfig.build.json" "$ROOT/package-lock.json"
+quietly run_migrations
 "$@"
