@@ -104,7 +104,9 @@ start_node_service() {
     say "$name already answering on port $port"
     return 0
   fi
-  node "$ROOT/$script" >"$FW_LOGS/$name.log" 2>&1 &
+  # Under a supervisor that starts the fake again if it dies (with back-off, logged in the same file);
+  # stopping the supervisor stops the fake, so stop_services still ends everything it started.
+  node "$ROOT/local-services/supervise.js" "$name" "$ROOT/$script" >"$FW_LOGS/$name.log" 2>&1 &
   FW_STARTED_PIDS+=($!)
   wait_for "$name" 80 port_open "$port"
 }
