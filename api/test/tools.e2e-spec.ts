@@ -18,8 +18,21 @@ describe('public calculators (contract in DESIGN.md)', () => {
         shaft: { upper: -7, lower: -20 },
         clearance: { max: 41, min: 7 },
         kind: 'clearance',
+        convention: { jsRounding: 'none', description: 'js/JS = ±IT/2 exactly, as in the current ISO 286-2 tables' },
       });
     });
+
+    it('gives js/JS as ±IT/2 by default and rounds odd IT7 to even only when asked, saying which', async () => {
+      // ISO 286-2, 18–30 mm: IT7 = 21 µm, so JS7 = ±10.5 µm; the older rounding gives ±10 µm. h6 = 0/−13 µm.
+      const server = app.getHttpServer();
+      const current = await request(server).get('/api/tools/fits?size=25&unit=mm&hole=JS7&shaft=h6').expect(200);
+      expect(current.body).toMatchObject({ hole: { upper: 10.5, lower: -10.5 }, convention: { jsRounding: 'none' } });
+      const older = await request(server).get('/api/tools/fits?size=25&unit=mm&hole=JS7&shaft=h6&jsRounding=even').expect(200);
+      expect(older.body).toMatchObject({ hole: { upper: 10, lower: -10 }, clearance: { max: 23, min: -10 }, convention: { jsRounding: 'even' } });
+      const bad = await request(server).get('/api/tools/fits?size=25&unit=mm&hole=JS7&shaft=h6&jsRounding=odd').expect(400);
+      expect(JSON.stringify(bad.body.message)).toMatch(/jsRounding must be none or even/);
+    });
+
 
     it('takes a size in inches (1 in = 25.4 mm, in the 18–30 mm range)', async () => {
       const response = await request(app.getHttpServer()).get('/api/tools/fits?size=1&unit=in&hole=H7&shaft=g6').expect(200);

@@ -17,7 +17,7 @@ import {
  *
  * Deviations are computed in integer nanometres and reported in micrometres. They are whole
  * micrometres except where the standard itself prints fractions: IT1/IT2 values, Δ for fine
- * grades (K4 at 3–6 mm is +0.5/−3.5) and js/JS of odd fine grades (js5 at 18–30 mm is ±4.5).
+ * grades (K4 at 3–6 mm is +0.5/−3.5) and js/JS of odd grades (js7 at 18–30 mm is ±10.5).
  *
  * J/j (the asymmetric "j" deviations) are not covered: the standard tabulates them separately
  * for a few grades only.
@@ -54,15 +54,37 @@ export interface FitLimits {
   shaft: Limits;
   clearance: Clearance;
   kind: FitKind;
+  /** Which js/JS convention produced these numbers (stated in every answer, whatever the classes). */
+  convention: FitConvention;
 }
 
+/**
+ * js/JS limit deviations:
+ * - 'none' (default): ±IT/2 exactly, as the limit-deviation tables of the current ISO 286-2 print them
+ *   (js7 over 18 up to 30 mm: ±10.5 µm);
+ * - 'even': the older practice of rounding odd IT7–IT11 values down to the even value below, so ±IT/2
+ *   is a whole micrometre (js7 over 18 up to 30 mm: ±10 µm). Kept as an explicit option for old drawings.
+ */
+export type JsRounding = 'none' | 'even';
+
 export interface FitOptions {
-  /**
-   * ISO 286-1 allows the odd IT7–IT11 values to be rounded down to the next even value for js/JS,
-   * so ±IT/2 is a whole micrometre (js7 at 18–30 mm: ±10 rather than ±10.5). 'even' (default) applies it;
-   * 'none' keeps ±IT/2 exactly, as some printed charts do.
-   */
-  jsRounding?: 'even' | 'none';
+  jsRounding?: JsRounding;
+}
+
+export interface FitConvention {
+  jsRounding: JsRounding;
+  /** The convention in words, for a person reading the answer. */
+  description: string;
+}
+
+export const JS_CONVENTION_DESCRIPTIONS: Readonly<Record<JsRounding, string>> = {
+  none: 'js/JS = ±IT/2 exactly, as in the current ISO 286-2 tables',
+  even: 'js/JS = ±IT/2 with odd IT7–IT11 rounded down to even (older practice)',
+};
+
+export function fitConvention(options: FitOptions = {}): FitConvention {
+  const jsRounding = options.jsRounding ?? 'none';
+  return { jsRounding, description: JS_CONVENTION_DESCRIPTIONS[jsRounding] };
 }
 
 export type FitErrorCode = 'FIT_UNKNOWN_CLASS' | 'FIT_NOT_DEFINED' | 'FIT_SIZE_OUT_OF_RANGE' | 'FIT_INVALID_CLEARANCE';
@@ -130,6 +152,7 @@ export function fitLimits(
     shaft: { upper: nmToUm(shaft.upper), lower: nmToUm(shaft.lower) },
     clearance,
     kind: classifyFit(clearance),
+    convention: fitConvention(options),
   };
 }
 
@@ -251,10 +274,10 @@ function notDefined(cls: ToleranceClass, sizeMm: number, why: string): FitError 
   return new FitError(`${cls.text} is not defined at ${sizeMm} mm: ${why}`, 'FIT_NOT_DEFINED');
 }
 
-/** js/JS: ±IT/2, with the optional ISO 286-1 rounding of odd IT7–IT11 values down to even. */
+/** js/JS: ±IT/2 (current ISO 286-2), or on request the older rounding of odd IT7–IT11 values down to even. */
 function symmetricZoneNm(sizeMm: number, grade: number, options: FitOptions): ZoneNm {
   const itNm = standardToleranceNm(sizeMm, grade);
-  const roundToEven = (options.jsRounding ?? 'even') === 'even' && grade >= 7 && grade <= 11 && (itNm / 1000) % 2 === 1;
+  const roundToEven = (options.jsRounding ?? 'none') === 'even' && grade >= 7 && grade <= 11 && (itNm / 1000) % 2 === 1;
   const half = (roundToEven ? itNm - 1000 : itNm) / 2;
   return { upper: half, lower: -half };
 }
@@ -289,9 +312,8 @@ function shaftZoneNm(sizeMm: number, cls: ToleranceClass, options: FitOptions): 
  * - A to H: EI = −es of the same shaft letter (general rule);
  * - K, M, N up to IT8 and P to ZC up to IT7: ES = −ei + Δ (special rule, so that e.g. H7/p6 and P7/h6 have the same clearances);
  * - coarser grades: ES = −ei, except K above IT8 (ES = 0, only tabulated up to 3 mm) and N above IT8 (ES = 0 above 3 mm).
- * The K/N exceptions and the M6 special case are from memory of ISO 286-1 Table 3 and its footnotes.
- * Cross-checks (see fits.spec.ts): M6 −9/−41 at 250–315 mm matches parkergreene/isofits; K above IT8
- * stopping at 3 mm matches bell-jamie/iso-286; N9 = 0/−IT9 above 3 mm matches common-practice keyway tables.
+ * The K/N exceptions and the M6 special case are from memory of ISO 286-1 Table 3 and its footnotes;
+ * N9 = 0/−IT9 above 3 mm is also the common-practice keyway-width tolerance.
  */
 function holeZoneNm(sizeMm: number, cls: ToleranceClass, options: FitOptions): ZoneNm {
   const it = standardToleranceNm(sizeMm, cls.grade);

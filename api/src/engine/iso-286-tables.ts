@@ -1,9 +1,10 @@
 /**
  * ISO 286-1 data for nominal sizes up to 500 mm, in micrometres, as the standard prints them.
  *
- * Provenance: written from memory of ISO 286-1 (Tables 1, 2 and 3) and checked value by value
- * against two independent open-source tables (see fits.spec.ts for the comparison):
- * bell-jamie/iso-286 `src/tables.rs` and parkergreene/isofits `iso_holes.csv` / `iso_shafts.csv`.
+ * Provenance: written from memory of ISO 286-1 (Tables 1, 2 and 3). What is checked (fits.spec.ts):
+ * ISO 286-2 limit deviations recalled row by row, IT2–IT8 typed a second time and compared, Δ against
+ * those independent IT values, IT5–IT16 against the standard's tolerance-unit formula, and the
+ * standard's own symmetry rules (EI = −es, the Δ rule) as properties. No outside data set is compared.
  *
  * Ranges are "over the previous bound up to and including this bound": 30 mm belongs to "over 18
  * up to 30"; the first range is "up to and including 3".

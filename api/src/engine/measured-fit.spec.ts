@@ -10,7 +10,7 @@ function reading(text: string, resolutionNm: number) {
 }
 
 describe('measuredClearance', () => {
-  it('gives the clearance ± the sum of half-resolutions', () => {
+  it("gives the clearance ± the sum of half-resolutions (Fitwright's own worst-case rule)", () => {
     // 1.2505 in bore, 1.2500 in shaft, both read to 0.0001 in: 0.0005 in ± 0.0001 in (1 in = 25.4 mm exactly, NIST SP 811 App. B.8).
     const result = measuredClearance({ bore: reading('1.2505 in', TENTH_MICROMETER), shaft: reading('1.2500 in', TENTH_MICROMETER) });
     expect(result).toEqual({ nominalNm: 12_700, minNm: 10_160, maxNm: 15_240, uncertaintyNm: 2_540, kind: 'clearance' });

@@ -5,9 +5,10 @@ import { fromNanometres, Nanometres } from './units';
 /**
  * Fits from measured parts.
  *
- * Uncertainty model (stated so a reader can check it): a reading is the true size rounded to the
- * instrument's resolution, so the true size lies within ± half a resolution step of the reading.
- * Clearance = bore − shaft, and its bounds widen by the sum of the two half-steps. Instrument error
+ * Uncertainty model — Fitwright's own rule, not taken from a standard (stated so a reader can check
+ * it): a reading is the true size rounded to the instrument's resolution, so the true size lies within
+ * ± half a resolution step of the reading. Clearance = bore − shaft, and its bounds widen by the sum of
+ * the two half-steps (worst case, no statistical combination). Instrument error
  * beyond its resolution (calibration, temperature, technique) is not modelled: enter a coarser
  * resolution to allow for it. Half-steps are rounded up to whole nanometres, which only widens the range.
  */

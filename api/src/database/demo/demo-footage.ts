@@ -52,8 +52,9 @@ export const DEMO_CARDS: TitleCard[] = [
   },
   {
     title: '3 · Pilot bearing bore',
+    // 15.008 mm − 0.5902 in × 25.4 mm/in = 15.008 − 14.99108 = 0.01692 mm = 0.000666 in, about seven tenths (0.0007 in).
     subtitle: 'About seven tenths of clearance',
-    narration: 'That leaves about seven tenths of a thou of clearance: a close running fit.',
+    narration: 'That leaves about seven tenths of a thou of clearance: a sliding fit, as H7 over g6 should give.',
   },
   {
     title: '4 · Driveshaft length window',

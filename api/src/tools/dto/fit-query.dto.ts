@@ -1,6 +1,6 @@
-import { ApiProperty } from '@nestjs/swagger';
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
-import { IsIn, IsNumber, IsPositive, Matches } from 'class-validator';
+import { IsIn, IsNumber, IsOptional, IsPositive, Matches } from 'class-validator';
 
 export class FitQueryDto {
   @ApiProperty({ example: 25, description: 'Nominal size, in `unit`' })
@@ -20,4 +20,13 @@ export class FitQueryDto {
   @ApiProperty({ example: 'g6', description: 'Shaft tolerance class: lower-case letter(s) and IT grade' })
   @Matches(/^[a-z]{1,2}\d{1,2}$/, { message: 'shaft must be a shaft tolerance class such as g6' })
   shaft!: string;
+
+  @ApiPropertyOptional({
+    enum: ['none', 'even'],
+    default: 'none',
+    description: 'js/JS: `none` gives ±IT/2 as the current ISO 286-2 tables do; `even` rounds odd IT7–IT11 down to even (older practice)',
+  })
+  @IsOptional()
+  @IsIn(['none', 'even'], { message: 'jsRounding must be none or even' })
+  jsRounding: 'none' | 'even' = 'none';
 }
