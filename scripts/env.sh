@@ -8,6 +8,8 @@ fw_profile_env() {
   case "$profile" in
     dev) offset=0 ;;
     test) offset=10 ;;
+    # npm run test:faults: its own MariaDB, Redis, fakes and API processes, which the fault tests stop on purpose.
+    faults) offset=20 ;;
     *) echo "unknown profile $profile" >&2; return 1 ;;
   esac
   export FW_PROFILE="$profile"

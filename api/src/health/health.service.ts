@@ -13,7 +13,7 @@ export interface HealthReport {
 }
 
 /** A dead service must not hang the health route: each probe gets this long. */
-const PROBE_TIMEOUT_MS = 5000;
+const PROBE_TIMEOUT_MS = 3000;
 
 @Injectable()
 export class HealthService {

@@ -1,6 +1,7 @@
 import { ArgumentsHost, Catch, ExceptionFilter, HttpException, HttpStatus, Logger } from '@nestjs/common';
 import type { Response } from 'express';
 import { EngineError } from '../../engine/engine-error';
+import { databaseUnavailableBody } from './database-unavailable';
 
 interface ErrorBody {
   statusCode: number;
@@ -37,6 +38,6 @@ export class AllExceptionsFilter implements ExceptionFilter {
       if (exception.line !== undefined) body.line = exception.line;
       return body;
     }
-    return { statusCode: HttpStatus.INTERNAL_SERVER_ERROR, message: 'Internal server error' };
+    return databaseUnavailableBody(exception) ?? { statusCode: HttpStatus.INTERNAL_SERVER_ERROR, message: 'Internal server error' };
   }
 }
