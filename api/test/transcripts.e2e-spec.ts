@@ -181,6 +181,8 @@ describe('transcripts: attach, replace (revisions kept), export WebVTT, FULLTEXT
       const found = await owner.agent.get(transcriptUrl(footageId, '/search?q=Pilot%20bearing')).expect(200);
       expect(found.body).toEqual({
         terms: ['pilot', 'bearing'],
+        total: 1,
+        offset: 0,
         results: [{ cueIndex: 0, startMs: 2000, endMs: 5000, text: 'Pilot bearing out, bore cleaned.' }],
       });
       // Prefixes match longer words; replaced revisions are not searched.
@@ -190,8 +192,24 @@ describe('transcripts: attach, replace (revisions kept), export WebVTT, FULLTEXT
       expect(old.body.results).toEqual([]);
     });
 
+    it('pages through every hit, saying how many there are in all', async () => {
+      const first = await owner.agent.get(transcriptUrl(footageId, '/search?q=drive&limit=1')).expect(200);
+      expect(first.body).toMatchObject({ total: 1, offset: 0 });
+      expect(first.body.results).toHaveLength(1);
+      const past = await owner.agent.get(transcriptUrl(footageId, '/search?q=drive&limit=1&offset=1')).expect(200);
+      expect(past.body).toMatchObject({ total: 1, offset: 1, results: [] });
+      const everywhere = await owner.agent.get(`/api/workshops/${workshopId}/transcripts/search?q=bearing&limit=1`).expect(200);
+      expect(everywhere.body).toMatchObject({ total: 2, offset: 0 });
+      const second = await owner.agent.get(`/api/workshops/${workshopId}/transcripts/search?q=bearing&limit=1&offset=1`).expect(200);
+      expect(second.body.total).toBe(2);
+      // The two pages together are the two hits, none repeated.
+      expect(new Set([everywhere.body.results[0].startMs, second.body.results[0].startMs])).toEqual(new Set([2000, 9000]));
+      await owner.agent.get(transcriptUrl(footageId, '/search?q=drive&offset=-1')).expect(400);
+    });
+
     it("searches across the workshop's footage, naming the footage and build of each cue", async () => {
       const found = await owner.agent.get(`/api/workshops/${workshopId}/transcripts/search?q=bearing`).expect(200);
+      expect(found.body.total).toBe(2);
       expect(found.body.results).toHaveLength(2);
       expect(found.body.results).toEqual(
         expect.arrayContaining([

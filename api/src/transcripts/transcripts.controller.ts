@@ -133,7 +133,7 @@ export class TranscriptsController {
     @Param('footageId', ParseUUIDPipe) footageId: string,
     @Query() query: SearchQueryDto,
   ): Promise<FootageSearchResponseDto> {
-    return this.transcripts.searchFootage(workshopId, footageId, query.q, query.limit);
+    return this.transcripts.searchFootage(workshopId, footageId, query);
   }
 
   @Get('transcripts/search')
@@ -142,6 +142,6 @@ export class TranscriptsController {
     @Param('workshopId', ParseUUIDPipe) workshopId: string,
     @Query() query: SearchQueryDto,
   ): Promise<WorkshopSearchResponseDto> {
-    return this.transcripts.searchWorkshop(workshopId, query.q, query.limit);
+    return this.transcripts.searchWorkshop(workshopId, query);
   }
 }

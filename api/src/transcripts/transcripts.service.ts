@@ -17,6 +17,7 @@ import { sanitiseFileName } from '../footage/upload-plan';
 import {
   CueMatchDto,
   FootageSearchResponseDto,
+  SearchQueryDto,
   TranscriptDto,
   TranscriptFormatChoice,
   TranscriptRevisionDto,
@@ -141,11 +142,11 @@ export class TranscriptsService {
     return { fileName: `${stem}-r${transcript.revision}.vtt`, body };
   }
 
-  /** Cues of the footage's active transcript containing every word searched for, in time order. */
-  async searchFootage(workshopId: string, footageId: string, query: string, limit: number): Promise<FootageSearchResponseDto> {
+  /** Cues of the footage's active transcript containing every word searched for, in time order, a page at a time. */
+  async searchFootage(workshopId: string, footageId: string, page: SearchQueryDto): Promise<FootageSearchResponseDto> {
     await this.footage.get(workshopId, footageId);
-    const { terms, booleanQuery } = this.requireTerms(query);
-    const rows = await this.cues
+    const { terms, booleanQuery } = this.requireTerms(page.q);
+    const [rows, total] = await this.cues
       .createQueryBuilder('cue')
       .innerJoin(Transcript, 'transcript', 'transcript.id = cue.transcriptId')
       .where('transcript.workshopId = :workshopId', { workshopId })
@@ -153,14 +154,28 @@ export class TranscriptsService {
       .andWhere('transcript.isActive = 1')
       .andWhere('MATCH(cue.text) AGAINST (:booleanQuery IN BOOLEAN MODE)', { booleanQuery })
       .orderBy('cue.startMs', 'ASC')
-      .limit(limit)
-      .getMany();
-    return { terms, results: rows.map(toCueMatch) };
+      // A stable order, so pages never repeat or skip a cue.
+      .addOrderBy('cue.cueIndex', 'ASC')
+      .offset(page.offset)
+      .limit(page.limit)
+      .getManyAndCount();
+    return { terms, total, offset: page.offset, results: rows.map(toCueMatch) };
   }
 
-  /** Cues of every active transcript in the workshop containing every word, best match first. */
-  async searchWorkshop(workshopId: string, query: string, limit: number): Promise<WorkshopSearchResponseDto> {
-    const { terms, booleanQuery } = this.requireTerms(query);
+  /** Cues of every active transcript in the workshop containing every word, best match first, a page at a time. */
+  async searchWorkshop(workshopId: string, page: SearchQueryDto): Promise<WorkshopSearchResponseDto> {
+    const { terms, booleanQuery } = this.requireTerms(page.q);
+    const matching = `FROM transcript_cues cue
+         JOIN transcripts transcript ON transcript.id = cue.transcript_id AND transcript.is_active = 1
+         JOIN footage ON footage.id = transcript.footage_id
+         JOIN builds ON builds.id = footage.build_id
+        WHERE transcript.workshop_id = ? AND footage.workshop_id = ?
+          AND MATCH(cue.text) AGAINST (? IN BOOLEAN MODE)`;
+    const [{ hits }]: { hits: number | string }[] = await this.cues.query(`SELECT COUNT(*) AS hits ${matching}`, [
+      workshopId,
+      workshopId,
+      booleanQuery,
+    ]);
     const rows: {
       cue_index: number | string;
       start_ms: number | string;
@@ -174,18 +189,15 @@ export class TranscriptsService {
       `SELECT cue.cue_index, cue.start_ms, cue.end_ms, cue.text,
               footage.id AS footage_id, footage.title AS footage_title, builds.id AS build_id, builds.title AS build_title,
               MATCH(cue.text) AGAINST (? IN BOOLEAN MODE) AS relevance
-         FROM transcript_cues cue
-         JOIN transcripts transcript ON transcript.id = cue.transcript_id AND transcript.is_active = 1
-         JOIN footage ON footage.id = transcript.footage_id
-         JOIN builds ON builds.id = footage.build_id
-        WHERE transcript.workshop_id = ? AND footage.workshop_id = ?
-          AND MATCH(cue.text) AGAINST (? IN BOOLEAN MODE)
-        ORDER BY relevance DESC, footage.created_at DESC, cue.start_ms ASC
-        LIMIT ?`,
-      [booleanQuery, workshopId, workshopId, booleanQuery, limit],
+        ${matching}
+        ORDER BY relevance DESC, footage.created_at DESC, cue.start_ms ASC, cue.transcript_id ASC, cue.cue_index ASC
+        LIMIT ? OFFSET ?`,
+      [booleanQuery, workshopId, workshopId, booleanQuery, page.limit, page.offset],
     );
     return {
       terms,
+      total: Number(hits),
+      offset: page.offset,
       results: rows.map((row) => ({
         cueIndex: Number(row.cue_index),
         startMs: Number(row.start_ms),

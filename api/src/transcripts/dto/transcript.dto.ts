@@ -1,8 +1,9 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
-import { Transform, Type } from 'class-transformer';
+import { Transform } from 'class-transformer';
 import { IsBoolean, IsIn, IsInt, IsOptional, IsString, Length, Max, MaxLength, Min } from 'class-validator';
 import { TRANSCRIPT_FORMATS, type StoredTranscriptFormat } from '../entities/transcript.entity';
 import { TRANSCRIPT_MAX_BYTES } from '../transcript-limits';
+import { NumberFromText } from '../../common/decorators/number-from-text.decorator';
 
 const FORMAT_CHOICES = ['auto', ...TRANSCRIPT_FORMATS] as const;
 export type TranscriptFormatChoice = (typeof FORMAT_CHOICES)[number];
@@ -33,9 +34,10 @@ export class AttachTranscriptFileDto {
 export class TranscriptQueryDto {
   @ApiPropertyOptional({ description: 'A revision number; the active revision when absent' })
   @IsOptional()
-  @Type(() => Number)
+  @NumberFromText()
   @IsInt()
   @Min(1)
+  @Max(1_000_000)
   revision?: number;
 }
 
@@ -55,11 +57,19 @@ export class SearchQueryDto {
 
   @ApiPropertyOptional({ default: 50, minimum: 1, maximum: 200 })
   @IsOptional()
-  @Type(() => Number)
+  @NumberFromText()
   @IsInt()
   @Min(1)
   @Max(200)
   limit: number = 50;
+
+  @ApiPropertyOptional({ default: 0, minimum: 0, maximum: 100000, description: 'How many hits to skip: the next page starts at offset + limit' })
+  @IsOptional()
+  @NumberFromText()
+  @IsInt()
+  @Min(0)
+  @Max(100000)
+  offset: number = 0;
 }
 
 export class CueDto {
@@ -94,6 +104,8 @@ export class CueMatchDto {
 
 export class FootageSearchResponseDto {
   @ApiProperty({ description: 'The words searched for' }) terms!: string[];
+  @ApiProperty({ description: 'How many cues match in all; results holds at most `limit` of them' }) total!: number;
+  @ApiProperty({ description: 'Where this page starts among all the hits' }) offset!: number;
   @ApiProperty({ type: [CueMatchDto], description: 'Matching cues of the active transcript, in time order' })
   results!: CueMatchDto[];
 }
@@ -107,6 +119,8 @@ export class WorkshopCueMatchDto extends CueMatchDto {
 
 export class WorkshopSearchResponseDto {
   @ApiProperty() terms!: string[];
+  @ApiProperty({ description: 'How many cues match in all; results holds at most `limit` of them' }) total!: number;
+  @ApiProperty({ description: 'Where this page starts among all the hits' }) offset!: number;
   @ApiProperty({ type: [WorkshopCueMatchDto], description: "Matching cues of the workshop's active transcripts, best first" })
   results!: WorkshopCueMatchDto[];
 }

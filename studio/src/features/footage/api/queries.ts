@@ -1,4 +1,4 @@
-import { queryOptions } from '@tanstack/react-query';
+import { infiniteQueryOptions, queryOptions } from '@tanstack/react-query';
 import { ApiError, apiRequest } from '@/lib/api-client';
 import type { CueMatch, Footage, FootageLimits, Playback, SearchResults, Transcript, TranscriptRevision, WorkshopCueMatch } from './types';
 
@@ -58,24 +58,40 @@ export const transcriptQueries = {
       queryFn: ({ signal }) =>
         apiRequest<TranscriptRevision[]>(`/workshops/${workshopId}/footage/${footageId}/transcript/revisions`, { signal }),
     }),
+  /** Every hit, a page at a time ("Show more" fetches the next page). */
   search: (workshopId: string, footageId: string, q: string) =>
-    queryOptions({
+    infiniteQueryOptions({
       queryKey: [...transcriptQueries.all(), 'search', workshopId, footageId, q] as const,
-      queryFn: ({ signal }) =>
+      queryFn: ({ signal, pageParam }) =>
         apiRequest<SearchResults<CueMatch>>(`/workshops/${workshopId}/footage/${footageId}/transcript/search`, {
           signal,
-          query: { q },
+          query: { q, offset: pageParam, limit: SEARCH_PAGE_SIZE },
         }),
+      initialPageParam: 0,
+      getNextPageParam: nextSearchOffset,
       enabled: q.trim().length > 0,
     }),
   workshopSearch: (workshopId: string, q: string) =>
-    queryOptions({
+    infiniteQueryOptions({
       queryKey: [...transcriptQueries.all(), 'workshop-search', workshopId, q] as const,
-      queryFn: ({ signal }) =>
-        apiRequest<SearchResults<WorkshopCueMatch>>(`/workshops/${workshopId}/transcripts/search`, { signal, query: { q } }),
+      queryFn: ({ signal, pageParam }) =>
+        apiRequest<SearchResults<WorkshopCueMatch>>(`/workshops/${workshopId}/transcripts/search`, {
+          signal,
+          query: { q, offset: pageParam, limit: SEARCH_PAGE_SIZE },
+        }),
+      initialPageParam: 0,
+      getNextPageParam: nextSearchOffset,
       enabled: q.trim().length > 0,
     }),
 };
+
+const SEARCH_PAGE_SIZE = 50;
+
+/** Where the next page of hits starts, or undefined when every hit has been fetched. */
+export function nextSearchOffset(last: SearchResults<unknown>): number | undefined {
+  const next = last.offset + last.results.length;
+  return last.results.length > 0 && next < last.total ? next : undefined;
+}
 
 /** Where the player fetches captions: same origin, so the session cookie goes along. */
 export function captionsUrl(workshopId: string, footageId: string, revision: number): string {

@@ -85,7 +85,10 @@ export interface WorkshopCueMatch extends CueMatch {
   buildTitle: string;
 }
 
+/** One page of search hits: `total` counts every hit, `offset` is where this page starts. */
 export interface SearchResults<T> {
   terms: string[];
+  total: number;
+  offset: number;
   results: T[];
 }

@@ -1,11 +1,12 @@
 import { Anchor, Button, Group, Loader, Paper, ScrollArea, Stack, Text, TextInput, Title, UnstyledButton } from '@mantine/core';
 import { useDebouncedValue, useDisclosure } from '@mantine/hooks';
-import { useQuery } from '@tanstack/react-query';
+import { useInfiniteQuery } from '@tanstack/react-query';
 import { useRef, useState } from 'react';
 import { downloadUrl, transcriptQueries } from '../api/queries';
 import type { Cue, Transcript } from '../api/types';
 import { formatClock } from '@/lib/clock';
 import { HighlightTerms } from './highlight-terms';
+import { SearchHitsFooter } from './search-hits-footer';
 import { TranscriptAttach } from './transcript-attach';
 import classes from './transcript-pane.module.css';
 
@@ -35,7 +36,12 @@ export function TranscriptPane({ workshopId, footageId, transcript, currentMs, t
   const [attaching, { open, close }] = useDisclosure(false);
   const [query, setQuery] = useState('');
   const [debounced] = useDebouncedValue(query.trim(), 250);
-  const search = useQuery({ ...transcriptQueries.search(workshopId, footageId, debounced), enabled: debounced !== '' && transcript !== null });
+  const search = useInfiniteQuery({
+    ...transcriptQueries.search(workshopId, footageId, debounced),
+    enabled: debounced !== '' && transcript !== null,
+  });
+  const hits = search.data?.pages.flatMap((page) => page.results) ?? [];
+  const firstPage = search.data?.pages[0];
   const viewport = useRef<HTMLDivElement>(null);
   const active = transcript ? activeCueIndex(transcript.cues, currentMs) : -1;
 
@@ -97,21 +103,28 @@ export function TranscriptPane({ workshopId, footageId, transcript, currentMs, t
               Attach the transcript of this video to follow along, search it, and show captions in the player.
             </Text>
           )}
-          {transcript && debounced !== '' && search.data && (
+          {transcript && debounced !== '' && firstPage && (
             <Stack gap={4} data-testid="transcript-search-results">
-              {search.data.results.length === 0 && (
+              {hits.length === 0 && (
                 <Text size="sm" c="dimmed">
                   No cue mentions “{debounced}”.
                 </Text>
               )}
-              {search.data.results.map((result) => (
+              {hits.map((result) => (
                 <UnstyledButton key={result.cueIndex} className={classes.cue} onClick={() => onSeek(result.startMs)}>
                   <Text span size="xs" c="dimmed" className={classes.time}>
                     {formatClock(result.startMs)}
                   </Text>
-                  <HighlightTerms text={result.text} terms={search.data.terms} />
+                  <HighlightTerms text={result.text} terms={firstPage.terms} />
                 </UnstyledButton>
               ))}
+              <SearchHitsFooter
+                total={firstPage.total}
+                shown={hits.length}
+                hasMore={search.hasNextPage}
+                loadingMore={search.isFetchingNextPage}
+                onMore={() => void search.fetchNextPage()}
+              />
             </Stack>
           )}
           {transcript && debounced === '' && (

@@ -1,18 +1,21 @@
 import { Anchor, Loader, Popover, ScrollArea, Stack, Text, TextInput } from '@mantine/core';
 import { useDebouncedValue } from '@mantine/hooks';
-import { useQuery } from '@tanstack/react-query';
+import { useInfiniteQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
 import { paths } from '@/config/paths';
 import { transcriptQueries } from '../api/queries';
 import { formatClock } from '@/lib/clock';
 import { HighlightTerms } from './highlight-terms';
+import { SearchHitsFooter } from './search-hits-footer';
 
 /** Searches every transcript of the workshop; each result opens the player at that moment. */
 export function WorkshopTranscriptSearch({ workshopId }: { workshopId: string }) {
   const [query, setQuery] = useState('');
   const [debounced] = useDebouncedValue(query.trim(), 300);
-  const search = useQuery(transcriptQueries.workshopSearch(workshopId, debounced));
+  const search = useInfiniteQuery(transcriptQueries.workshopSearch(workshopId, debounced));
+  const hits = search.data?.pages.flatMap((page) => page.results) ?? [];
+  const firstPage = search.data?.pages[0];
   const opened = debounced.length > 0;
 
   return (
@@ -33,15 +36,15 @@ export function WorkshopTranscriptSearch({ workshopId }: { workshopId: string })
             {search.error.message}
           </Text>
         )}
-        {search.data && search.data.results.length === 0 && (
+        {firstPage && hits.length === 0 && (
           <Text size="sm" c="dimmed">
             No cue mentions “{debounced}”.
           </Text>
         )}
-        {search.data && search.data.results.length > 0 && (
+        {firstPage && hits.length > 0 && (
           <ScrollArea.Autosize mah={360}>
             <Stack gap="sm">
-              {search.data.results.map((result) => (
+              {hits.map((result) => (
                 <div key={`${result.footageId}-${result.cueIndex}`}>
                   <Anchor
                     component={Link}
@@ -54,9 +57,16 @@ export function WorkshopTranscriptSearch({ workshopId }: { workshopId: string })
                   <Text size="xs" c="dimmed">
                     {result.buildTitle}
                   </Text>
-                  <HighlightTerms text={result.text} terms={search.data.terms} />
+                  <HighlightTerms text={result.text} terms={firstPage.terms} />
                 </div>
               ))}
+              <SearchHitsFooter
+                total={firstPage.total}
+                shown={hits.length}
+                hasMore={search.hasNextPage}
+                loadingMore={search.isFetchingNextPage}
+                onMore={() => void search.fetchNextPage()}
+              />
             </Stack>
           </ScrollArea.Autosize>
         )}
