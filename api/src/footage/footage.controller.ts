@@ -1,5 +1,14 @@
 import { Body, Controller, Delete, Get, HttpCode, Inject, Param, ParseIntPipe, ParseUUIDPipe, Patch, Post, Put } from '@nestjs/common';
-import { ApiConflictResponse, ApiCreatedResponse, ApiNoContentResponse, ApiOkResponse, ApiTags } from '@nestjs/swagger';
+import {
+  ApiBadRequestResponse,
+  ApiConflictResponse,
+  ApiCreatedResponse,
+  ApiNoContentResponse,
+  ApiOkResponse,
+  ApiServiceUnavailableResponse,
+  ApiTags,
+  ApiUnprocessableEntityResponse,
+} from '@nestjs/swagger';
 import { WorkshopEditor } from '../common/decorators/access.decorator';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import type { SessionUser } from '../common/types/access-context';
@@ -46,6 +55,7 @@ export class FootageController {
 
   @Post('builds/:buildId/footage')
   @ApiCreatedResponse({ type: CreateFootageResponseDto, description: 'Footage in state "uploading" and its part plan' })
+  @ApiServiceUnavailableResponse({ description: 'Storage is not answering (`code: storage_unavailable`); try again' })
   create(
     @Param('workshopId', ParseUUIDPipe) workshopId: string,
     @Param('buildId', ParseUUIDPipe) buildId: string,
@@ -117,6 +127,7 @@ export class FootageController {
 
   @Put('footage/:footageId/upload/parts/:partNumber')
   @ApiOkResponse({ type: RecordPartResponseDto, description: 'The part is recorded as finished' })
+  @ApiBadRequestResponse({ description: 'The part number is outside the plan, or the ETag is not one storage gives a part' })
   recordPart(
     @Param('workshopId', ParseUUIDPipe) workshopId: string,
     @Param('footageId', ParseUUIDPipe) footageId: string,
@@ -129,7 +140,11 @@ export class FootageController {
   @Post('footage/:footageId/upload/complete')
   @HttpCode(200)
   @ApiOkResponse({ type: FootageResponseDto, description: 'Assembled; the footage is now processing' })
-  @ApiConflictResponse({ description: 'Parts are missing (listed in `missingParts`)' })
+  @ApiConflictResponse({ description: 'Parts are missing (listed in `missingParts`), or storage no longer has the upload' })
+  @ApiUnprocessableEntityResponse({
+    description: 'Storage does not hold a recorded part as recorded (`invalidParts`); that record is dropped: upload the part again',
+  })
+  @ApiServiceUnavailableResponse({ description: 'Storage is not answering (`code: storage_unavailable`); the upload is kept, try again' })
   complete(
     @Param('workshopId', ParseUUIDPipe) workshopId: string,
     @Param('footageId', ParseUUIDPipe) footageId: string,

@@ -2,10 +2,12 @@ import { InjectQueue } from '@nestjs/bull';
 import {
   BadRequestException,
   ConflictException,
+  HttpException,
   Inject,
   Injectable,
   Logger,
   NotFoundException,
+  UnprocessableEntityException,
 } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { InjectRepository } from '@nestjs/typeorm';
@@ -14,6 +16,7 @@ import { In, QueryFailedError, Repository } from 'typeorm';
 import { BuildsService } from '../builds/builds.service';
 import { AppConfig } from '../config/app-config';
 import { QUEUES } from '../infra/jobs/queues';
+import { MultipartRefusedError, StorageUnavailableError } from '../infra/storage/storage-errors';
 import { StorageService } from '../infra/storage/storage.service';
 import { TRANSCRIPT_MAX_BYTES, TRANSCRIPT_MAX_CUES } from '../transcripts/transcript-limits';
 import {
@@ -206,13 +209,13 @@ export class FootageService {
         parts.map(({ partNumber, etag }) => ({ partNumber, etag })),
       );
     } catch (error) {
+      // Storage down: a 503 for the caller, who tries again; nothing recorded changes.
+      if (error instanceof StorageUnavailableError) throw error;
       // A repeated call after storage already assembled the object finds it in place.
       const stored = await this.storage.headObject(footage.objectKey);
       if (!stored) {
         this.logger.warn(`completing upload of footage ${footage.id} failed: ${errorMessage(error)}`);
-        throw new ConflictException(
-          `Storage could not assemble the uploaded parts (${errorMessage(error)}). Cancel this upload and start again.`,
-        );
+        throw await this.refusedCompletion(footage.id, parts, error);
       }
     }
     const stored = await this.storage.headObject(footage.objectKey);
@@ -230,6 +233,39 @@ export class FootageService {
     });
     if (moved) await this.enqueueProcessing(footage.id);
     return this.describe(await this.get(workshopId, footageId));
+  }
+
+  /**
+   * The answer when storage would not assemble the recorded parts. A part storage does not hold as
+   * recorded (never uploaded, or another ETag) is forgotten, so the upload resumes by sending that
+   * part again; every other part and the upload itself stay as they were.
+   */
+  private async refusedCompletion(footageId: string, parts: FootageUploadPart[], error: unknown): Promise<HttpException> {
+    if (!(error instanceof MultipartRefusedError)) {
+      return new ConflictException(`Storage could not assemble the uploaded parts (${errorMessage(error)}). Cancel this upload and start again.`);
+    }
+    if (error.refusal === 'NoSuchUpload') {
+      return new ConflictException({
+        message: 'Storage no longer has this upload (it expired or was cancelled). Cancel it and upload the file again.',
+        code: 'upload_gone',
+      });
+    }
+    const refused = error.refusal === 'InvalidPart' ? parts.find((part) => part.partNumber === error.partNumber) : undefined;
+    if (!refused) {
+      const where = error.partNumber === undefined ? 'without saying which part' : `at part ${error.partNumber}`;
+      return new UnprocessableEntityException({
+        message: `Storage refused the recorded parts (${error.refusal}, ${where}). Cancel this upload and start again.`,
+        code: 'part_invalid',
+        invalidParts: [],
+      });
+    }
+    // Conditional on the ETag, so a part recorded again meanwhile is kept.
+    await this.parts.delete({ footageId, partNumber: refused.partNumber, etag: refused.etag });
+    return new UnprocessableEntityException({
+      message: `Storage does not hold part ${refused.partNumber} as recorded (it was not uploaded, or its ETag differs). Upload part ${refused.partNumber} again, then finish.`,
+      code: 'part_invalid',
+      invalidParts: [refused.partNumber],
+    });
   }
 
   /** Cancels an unfinished upload: storage drops the parts and the footage is deleted. */

@@ -1,5 +1,4 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
-import { Type } from 'class-transformer';
 import {
   ArrayMaxSize,
   ArrayMinSize,
@@ -54,7 +53,6 @@ export class PartUrlsRequestDto {
   @ArrayMinSize(1)
   @ArrayMaxSize(100)
   @ArrayUnique()
-  @Type(() => Number)
   @IsInt({ each: true })
   @Min(1, { each: true })
   @Max(MAX_PARTS, { each: true })
@@ -62,10 +60,15 @@ export class PartUrlsRequestDto {
 }
 
 export class RecordPartDto {
-  @ApiProperty({ example: '"9b2cf535f27731c974343645a3985328"', description: 'The ETag header storage answered the part upload with' })
+  @ApiProperty({
+    example: '"9b2cf535f27731c974343645a3985328"',
+    description: "The ETag header storage answered the part upload with: a part's MD5 in hex, quoted or bare",
+  })
   @IsString()
-  @Length(1, 200)
-  @Matches(/^[\x21-\x7e]+$/u, { message: 'etag must be the ETag header value, printable ASCII without spaces' })
+  // S3 gives every uploaded part (plain, SSE-S3 or SSE-KMS) a 32-hex-digit ETag; anything else was never a part's.
+  @Matches(/^(?:"[0-9a-fA-F]{32}"|[0-9a-fA-F]{32})$/u, {
+    message: 'etag must be the ETag storage answered for the part: 32 hexadecimal digits, bare or in double quotes',
+  })
   etag!: string;
 }
 

@@ -13,13 +13,19 @@ import {
   UploadPartCommand,
 } from '@aws-sdk/client-s3';
 import { getSignedUrl } from '@aws-sdk/s3-request-presigner';
-import { Inject, Injectable, OnModuleDestroy } from '@nestjs/common';
+import { Inject, Injectable, Logger, OnModuleDestroy } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { AppConfig } from '../../config/app-config';
+import { isStorageUnavailable, multipartRefusal, StorageUnavailableError } from './storage-errors';
+
+/** A dead or stopped store must fail a request in seconds, not hold it (and its caller) open. */
+const STORAGE_CONNECT_TIMEOUT_MS = 3_000;
+const STORAGE_REQUEST_TIMEOUT_MS = 30_000;
 
 /** The only place that talks to S3; services ask it for objects and presigned URLs. */
 @Injectable()
 export class StorageService implements OnModuleDestroy {
+  private readonly logger = new Logger(StorageService.name);
   private readonly client: S3Client;
   /** Signs URLs for browsers, which may reach storage at another address than the API does. */
   private readonly publicClient: S3Client;
@@ -36,6 +42,7 @@ export class StorageService implements OnModuleDestroy {
       // The SDK's default streaming checksums corrupt objects on the local S3 fake; real S3 accepts both.
       requestChecksumCalculation: 'WHEN_REQUIRED',
       responseChecksumValidation: 'WHEN_REQUIRED',
+      requestHandler: { connectionTimeout: STORAGE_CONNECT_TIMEOUT_MS, requestTimeout: STORAGE_REQUEST_TIMEOUT_MS },
     });
     this.publicClient = new S3Client({
       endpoint: storage.publicEndpoint,
@@ -49,21 +56,21 @@ export class StorageService implements OnModuleDestroy {
 
   /** Stores a small object held in memory (logos, photos); large media goes browser → storage directly. */
   async putObject(key: string, body: Buffer, contentType: string): Promise<void> {
-    await this.client.send(
-      new PutObjectCommand({ Bucket: this.bucket, Key: key, Body: body, ContentType: contentType }),
+    await this.reach(() =>
+      this.client.send(new PutObjectCommand({ Bucket: this.bucket, Key: key, Body: body, ContentType: contentType })),
     );
   }
 
   /** Reads a whole object into memory; meant for small objects. */
   async getObject(key: string): Promise<{ body: Buffer; contentType?: string }> {
-    const result = await this.client.send(new GetObjectCommand({ Bucket: this.bucket, Key: key }));
+    const result = await this.reach(() => this.client.send(new GetObjectCommand({ Bucket: this.bucket, Key: key })));
     const bytes = result.Body ? await result.Body.transformToByteArray() : new Uint8Array();
     return { body: Buffer.from(bytes), contentType: result.ContentType };
   }
 
   /** Deletes an object; deleting a missing key is not an error (as on S3). */
   async deleteObject(key: string): Promise<void> {
-    await this.client.send(new DeleteObjectCommand({ Bucket: this.bucket, Key: key }));
+    await this.reach(() => this.client.send(new DeleteObjectCommand({ Bucket: this.bucket, Key: key })));
   }
 
   /**
@@ -74,7 +81,9 @@ export class StorageService implements OnModuleDestroy {
     let deleted = 0;
     let continuationToken: string | undefined;
     do {
-      const page = await this.client.send(new ListObjectsV2Command({ Bucket: this.bucket, Prefix: prefix, ContinuationToken: continuationToken }));
+      const page = await this.reach(() =>
+        this.client.send(new ListObjectsV2Command({ Bucket: this.bucket, Prefix: prefix, ContinuationToken: continuationToken })),
+      );
       const keys = (page.Contents ?? []).map((item) => item.Key).filter((key): key is string => !!key);
       for (const key of keys) await this.deleteObject(key);
       deleted += keys.length;
@@ -94,8 +103,8 @@ export class StorageService implements OnModuleDestroy {
 
   /** Starts a multipart upload the browser fills part by part with presigned URLs; returns its upload id. */
   async createMultipartUpload(key: string, contentType: string): Promise<string> {
-    const result = await this.client.send(
-      new CreateMultipartUploadCommand({ Bucket: this.bucket, Key: key, ContentType: contentType }),
+    const result = await this.reach(() =>
+      this.client.send(new CreateMultipartUploadCommand({ Bucket: this.bucket, Key: key, ContentType: contentType })),
     );
     if (!result.UploadId) throw new Error('Storage started a multipart upload without an upload id');
     return result.UploadId;
@@ -110,16 +119,26 @@ export class StorageService implements OnModuleDestroy {
     );
   }
 
-  /** Assembles the object from its parts; `parts` come from our own records (the S3 fake has no ListParts). */
+  /**
+   * Assembles the object from its parts; `parts` come from our own records (the S3 fake has no
+   * ListParts). Storage itself checks each part's ETag against what it holds: its refusal
+   * (InvalidPart, InvalidPartOrder, NoSuchUpload) is thrown as a `MultipartRefusedError` naming the part.
+   */
   async completeMultipartUpload(key: string, uploadId: string, parts: { partNumber: number; etag: string }[]): Promise<void> {
-    await this.client.send(
-      new CompleteMultipartUploadCommand({
-        Bucket: this.bucket,
-        Key: key,
-        UploadId: uploadId,
-        MultipartUpload: { Parts: parts.map((part) => ({ PartNumber: part.partNumber, ETag: part.etag })) },
-      }),
-    );
+    try {
+      await this.reach(() =>
+        this.client.send(
+          new CompleteMultipartUploadCommand({
+            Bucket: this.bucket,
+            Key: key,
+            UploadId: uploadId,
+            MultipartUpload: { Parts: parts.map((part) => ({ PartNumber: part.partNumber, ETag: part.etag })) },
+          }),
+        ),
+      );
+    } catch (error) {
+      throw multipartRefusal(error) ?? error;
+    }
   }
 
   /**
@@ -129,7 +148,7 @@ export class StorageService implements OnModuleDestroy {
    */
   async abortMultipartUpload(key: string, uploadId: string): Promise<boolean> {
     try {
-      await this.client.send(new AbortMultipartUploadCommand({ Bucket: this.bucket, Key: key, UploadId: uploadId }));
+      await this.reach(() => this.client.send(new AbortMultipartUploadCommand({ Bucket: this.bucket, Key: key, UploadId: uploadId })));
       return true;
     } catch (error) {
       const status = error instanceof S3ServiceException ? error.$metadata.httpStatusCode : undefined;
@@ -141,7 +160,7 @@ export class StorageService implements OnModuleDestroy {
   /** Size and type of a stored object, or null when there is none. */
   async headObject(key: string): Promise<{ sizeBytes: number; contentType?: string } | null> {
     try {
-      const result = await this.client.send(new HeadObjectCommand({ Bucket: this.bucket, Key: key }));
+      const result = await this.reach(() => this.client.send(new HeadObjectCommand({ Bucket: this.bucket, Key: key })));
       return { sizeBytes: result.ContentLength ?? 0, contentType: result.ContentType };
     } catch (error) {
       if (error instanceof S3ServiceException && error.$metadata.httpStatusCode === 404) return null;
@@ -157,11 +176,29 @@ export class StorageService implements OnModuleDestroy {
   }
 
   async ping(): Promise<void> {
-    await this.client.send(new HeadBucketCommand({ Bucket: this.bucket }));
+    await this.reach(() => this.client.send(new HeadBucketCommand({ Bucket: this.bucket })));
+  }
+
+  /** Runs one storage request; "storage is not there" becomes a 503 for whoever asked. */
+  private async reach<T>(request: () => Promise<T>): Promise<T> {
+    try {
+      return await request();
+    } catch (error) {
+      if (isStorageUnavailable(error)) {
+        this.logger.warn(`storage unavailable: ${errorText(error)}`);
+        throw new StorageUnavailableError(errorText(error));
+      }
+      throw error;
+    }
   }
 
   onModuleDestroy(): void {
     this.client.destroy();
     this.publicClient.destroy();
   }
+}
+
+function errorText(error: unknown): string {
+  if (error instanceof AggregateError) return error.errors.map(errorText).join('; ');
+  return error instanceof Error ? `${error.name}: ${error.message}` : String(error);
 }
