@@ -14,6 +14,50 @@ export interface FitAnswer {
   shaft: { upper: number; lower: number };
   clearance: { max: number; min: number };
   kind: 'clearance' | 'transition' | 'interference';
+  /** Which js/JS convention the numbers follow, in words (the API states it in every answer). */
+  convention: { jsRounding: 'none' | 'even'; description: string };
+}
+
+export interface SplineQuery {
+  teeth: string;
+  pitch: string;
+  pressureAngle: '30' | '37.5' | '45';
+  root: 'flat' | 'fillet';
+  fit: 'side' | 'major';
+}
+
+export interface SplineLength {
+  value: number;
+  unit: 'in' | 'mm';
+  converted: { value: number; unit: 'in' | 'mm' };
+}
+
+export type SplineDimensionName =
+  | 'pitchDiameter'
+  | 'baseDiameter'
+  | 'circularPitch'
+  | 'basicSpaceWidth'
+  | 'basicToothThickness'
+  | 'internalMajorDiameter'
+  | 'externalMajorDiameter'
+  | 'internalMinorDiameter'
+  | 'externalMinorDiameter'
+  | 'internalFormDiameter'
+  | 'externalFormDiameter'
+  | 'formClearance';
+
+/** GET /api/tools/splines: basic dimensions in the designation's own unit, each with its exact conversion. */
+export interface SplineDimensionsAnswer {
+  designation: string;
+  standard: string;
+  teeth: number;
+  pitch: string;
+  pressureAngle: number;
+  root: 'flat' | 'fillet';
+  fit: 'side' | 'major';
+  unit: 'in' | 'mm';
+  dimensions: Record<SplineDimensionName, SplineLength>;
+  notes: string[];
 }
 
 export const fitCalculatorQueries = {
@@ -23,6 +67,13 @@ export const fitCalculatorQueries = {
       queryKey: [...fitCalculatorQueries.all(), query] as const,
       queryFn: ({ signal }) => apiRequest<FitAnswer>('/tools/fits', { signal, query: { ...query } }),
       // ISO 286 tables do not change while the page is open.
+      staleTime: Infinity,
+    }),
+  splineDimensions: (query: SplineQuery) =>
+    queryOptions({
+      queryKey: [...fitCalculatorQueries.all(), 'spline', query] as const,
+      queryFn: ({ signal }) => apiRequest<SplineDimensionsAnswer>('/tools/splines', { signal, query: { ...query } }),
+      // The standards' equations do not change while the page is open.
       staleTime: Infinity,
     }),
 };

@@ -11,7 +11,14 @@ describe('FitCalculator', () => {
     const requests = stubApi([
       {
         path: /^\/tools\/fits\?/,
-        body: { hole: { upper: 21, lower: 0 }, shaft: { upper: -7, lower: -20 }, clearance: { max: 41, min: 7 }, kind: 'clearance' },
+        // ISO 286-2, 18–30 mm: H7 +21/0, g6 −7/−20 µm; clearance 21 − (−20) = 41 and 0 − (−7) = 7 µm.
+        body: {
+          hole: { upper: 21, lower: 0 },
+          shaft: { upper: -7, lower: -20 },
+          clearance: { max: 41, min: 7 },
+          kind: 'clearance',
+          convention: { jsRounding: 'none', description: 'js/JS = ±IT/2 exactly, as in the current ISO 286-2 tables' },
+        },
       },
     ]);
     renderWithProviders(<FitCalculator />, { route: '/tools/fit-calculator?size=25&unit=mm&hole=H7&shaft=g6' });
@@ -21,6 +28,7 @@ describe('FitCalculator', () => {
     expect(within(limits).getByText('25.021 mm')).toBeTruthy();
     expect(within(limits).getByText('24.980 mm')).toBeTruthy();
     expect(screen.getByTestId('tolerance-zone-diagram')).toBeTruthy();
+    expect(screen.getByTestId('fit-convention').textContent).toBe('Convention: js/JS = ±IT/2 exactly, as in the current ISO 286-2 tables.');
     expect(requests[0].url.search).toBe('?size=25&unit=mm&hole=H7&shaft=g6');
   });
 

@@ -8,16 +8,19 @@ import { UnitToggle } from '@/components/unit-toggle';
 import { splitApiErrors } from '@/lib/form-errors';
 import { formatLength, formatReadableLength, toNanometres } from '@/lib/units';
 import { fitCalculatorQueries, type FitAnswer, type FitQuery } from '../api/queries';
+import { SplineSection } from './spline-section';
 
 const LABELS = { size: 'Nominal size', unit: 'Unit', hole: 'Hole class', shaft: 'Shaft class' };
 const HOLE_CLASSES = ['H6', 'H7', 'H8', 'H9', 'H11', 'G7', 'F8', 'E9', 'D10', 'JS7', 'K7', 'M7', 'N7', 'P7', 'R7', 'S7'];
 const SHAFT_CLASSES = ['h6', 'h7', 'h9', 'g6', 'f7', 'e8', 'd9', 'c11', 'js6', 'k6', 'm6', 'n6', 'p6', 'r6', 's6', 'u6'];
+// Names of the common hole-basis fits as shop practice uses them (ISO 286-2's preferred fits):
+// H8/f7 is close running, H7/g6 sliding — two different classes.
 const COMMON_PAIRS = [
+  { hole: 'H8', shaft: 'f7', label: 'H8/f7 close running' },
   { hole: 'H7', shaft: 'g6', label: 'H7/g6 sliding' },
-  { hole: 'H7', shaft: 'h6', label: 'H7/h6 snug' },
-  { hole: 'H7', shaft: 'k6', label: 'H7/k6 transition' },
-  { hole: 'H7', shaft: 'p6', label: 'H7/p6 press' },
-  { hole: 'H8', shaft: 'f7', label: 'H8/f7 running' },
+  { hole: 'H7', shaft: 'h6', label: 'H7/h6 locational clearance' },
+  { hole: 'H7', shaft: 'k6', label: 'H7/k6 locational transition' },
+  { hole: 'H7', shaft: 'p6', label: 'H7/p6 locational interference' },
 ];
 const KIND_WORDS: Record<FitAnswer['kind'], string> = {
   clearance: 'Clearance fit: the shaft is always smaller than the hole.',
@@ -151,6 +154,7 @@ export function FitCalculator() {
         </Alert>
       )}
       {answer.data && asked && <FitResult query={asked} answer={answer.data} deviationUnit={deviationUnit} onUnit={setDeviationUnit} />}
+      <SplineSection />
     </Stack>
   );
 }
@@ -185,6 +189,9 @@ function FitResult({
           </Title>
           <Text fw={600} data-testid="fit-kind">
             {KIND_WORDS[answer.kind]}
+          </Text>
+          <Text size="sm" c="dimmed" data-testid="fit-convention">
+            Convention: {answer.convention.description}.
           </Text>
           <Text>
             Clearance from <strong>{signed(answer.clearance.min)} µm</strong> to <strong>{signed(answer.clearance.max)} µm</strong>

@@ -1,0 +1,88 @@
+import { useId } from 'react';
+import { DiagramPatterns, patternIds } from './diagram-patterns';
+import { splineDiametersGeometry, type SplineDiameterName } from './spline-diameters-geometry';
+
+export interface SplineDiametersDiagramProps {
+  /** e.g. "21T 16/32 DP 30° flat root side fit (ANSI B92.1)". */
+  designation: string;
+  unit: 'in' | 'mm';
+  diameters: Readonly<Record<SplineDiameterName, number>>;
+}
+
+const INK = '#1f2328';
+/** Below this width the labels would shrink past reading. */
+const MIN_WIDTH = 480;
+
+/**
+ * The key diameters of an involute spline: the hub's teeth (internal) and the shaft's tooth
+ * (external) side on, with a line and a label for each diameter. Heights to scale, widths schematic.
+ */
+export function SplineDiametersDiagram(props: SplineDiametersDiagramProps) {
+  const id = useId();
+  const ids = patternIds(`sd${id}`);
+  const titleId = `${ids.hatch}-title`;
+  const descId = `${ids.hatch}-desc`;
+  const geometry = splineDiametersGeometry(props);
+  const { plot } = geometry;
+  const labelX = plot.x + plot.width + 16;
+
+  return (
+    <div style={{ overflowX: 'auto', maxWidth: '100%' }}>
+      <svg
+        viewBox={`0 0 ${geometry.width} ${geometry.height}`}
+        width="100%"
+        style={{ maxWidth: geometry.width, minWidth: MIN_WIDTH, display: 'block', fontFamily: 'inherit' }}
+        role="img"
+        aria-labelledby={`${titleId} ${descId}`}
+        data-testid="spline-diameters-diagram"
+      >
+        <title id={titleId}>Key diameters of {props.designation}</title>
+        <desc id={descId}>{describe(props)}</desc>
+        <DiagramPatterns ids={ids} />
+
+        {geometry.hubTeeth.map((points, index) => (
+          <polygon key={`hub${index}`} data-testid="hub-tooth" points={points} fill={`url(#${ids.dots})`} stroke={INK} strokeWidth={1.5} />
+        ))}
+        <polygon data-testid="shaft-tooth" points={geometry.shaftTooth} fill={`url(#${ids.hatch})`} stroke={INK} strokeWidth={1.5} />
+
+        {geometry.lines.map((line) => (
+          <g key={line.name} data-testid={`diameter-${line.name}`}>
+            <line
+              x1={plot.x}
+              x2={plot.x + plot.width}
+              y1={line.y}
+              y2={line.y}
+              stroke={line.name === 'pitchDiameter' ? '#0d7369' : '#5c6470'}
+              strokeDasharray={line.name === 'pitchDiameter' ? '8 4' : line.name === 'baseDiameter' ? '2 3' : undefined}
+              strokeWidth={line.name === 'pitchDiameter' ? 1.5 : 1}
+            />
+            <line x1={plot.x + plot.width} x2={labelX - 4} y1={line.y} y2={line.labelY} stroke="#8a929c" />
+            <text x={labelX} y={line.labelY + 4} fontSize={12} fill={INK}>
+              {line.label}: {formatSplineDiameter(line.value, props.unit)} {props.unit}
+            </text>
+          </g>
+        ))}
+
+        <text x={plot.x} y={plot.y - 8} fontSize={11} fill="#5c6470">
+          Hub (dotted) over shaft (hatched); heights to scale, widths schematic
+        </text>
+      </svg>
+    </div>
+  );
+}
+
+/** Four places in inches and three in millimetres, as spline drawings usually carry them. */
+export function formatSplineDiameter(value: number, unit: 'in' | 'mm'): string {
+  return value.toFixed(unit === 'in' ? 4 : 3);
+}
+
+function describe(props: SplineDiametersDiagramProps): string {
+  const d = props.diameters;
+  const format = (value: number) => formatSplineDiameter(value, props.unit);
+  return (
+    `${props.designation}. Internal major diameter ${format(d.internalMajorDiameter)} ${props.unit}, ` +
+    `external major ${format(d.externalMajorDiameter)}, pitch ${format(d.pitchDiameter)}, ` +
+    `internal minor ${format(d.internalMinorDiameter)}, external minor ${format(d.externalMinorDiameter)}, ` +
+    `base ${format(d.baseDiameter)} ${props.unit}.`
+  );
+}
