@@ -2,6 +2,7 @@ import { ArgumentsHost, Catch, ExceptionFilter, HttpException, HttpStatus, Logge
 import type { Response } from 'express';
 import { EngineError } from '../../engine/engine-error';
 import { databaseUnavailableBody } from './database-unavailable';
+import { queueUnavailableBody } from './queue-unavailable';
 
 interface ErrorBody {
   statusCode: number;
@@ -38,6 +39,6 @@ export class AllExceptionsFilter implements ExceptionFilter {
       if (exception.line !== undefined) body.line = exception.line;
       return body;
     }
-    return databaseUnavailableBody(exception) ?? { statusCode: HttpStatus.INTERNAL_SERVER_ERROR, message: 'Internal server error' };
+    return databaseUnavailableBody(exception) ?? queueUnavailableBody(exception) ?? { statusCode: HttpStatus.INTERNAL_SERVER_ERROR, message: 'Internal server error' };
   }
 }
