@@ -52,6 +52,13 @@ fw_profile_env() {
   export SMTP_IGNORE_TLS="${SMTP_IGNORE_TLS:-true}"
   export MAIL_FROM="${MAIL_FROM:-Fitwright <no-reply@fitwright.local>}"
 
+  # Proxies whose X-Forwarded-For is believed (a hop count, or addresses/CIDRs/"loopback"); empty trusts nobody, as
+  # an API listening directly must. The test profile trusts loopback: its helpers act as a local proxy that gives each
+  # test client its own address. Behind a load balancer, set it to the balancer's addresses.
+  export TRUST_PROXY="${TRUST_PROXY:-$([ "$profile" = test ] && echo loopback || true)}"
+  # Signs CSRF tokens to their session; a fixed local value so restarts keep browsers' tokens valid. Production sets its own.
+  export CSRF_SECRET="${CSRF_SECRET:-fitwright-local-$profile-csrf-key-not-for-production}"
+
   # Accounts with these (verified) e-mail addresses become site admins; comma separated, optional.
   # Every browser journey signs in from the same address (127.0.0.1), as a whole shop behind one router would;
   # the test profile allows more attempts a minute so the journeys do not trip over each other. The limit itself

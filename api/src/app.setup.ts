@@ -20,7 +20,8 @@ export function configureApp(app: NestExpressApplication): void {
   app.setGlobalPrefix('api');
   app.enableShutdownHooks();
   app.disable('x-powered-by');
-  app.set('trust proxy', 'loopback');
+  // Trust X-Forwarded-For only from configured proxies (TRUST_PROXY; default nobody), or clients pick their own address.
+  app.set('trust proxy', config.get('trustProxy', { infer: true }));
   app.use(
     helmet({
       contentSecurityPolicy: {

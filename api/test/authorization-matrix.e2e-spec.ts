@@ -5,6 +5,7 @@ import { NestExpressApplication } from '@nestjs/platform-express';
 import { randomUUID } from 'node:crypto';
 import request from 'supertest';
 import { DataSource } from 'typeorm';
+import { AuthCookies } from '../src/auth/auth-cookies';
 import { hashPassword } from '../src/auth/password-hasher';
 import { ACCESS_RULE, type AccessRule } from '../src/common/decorators/access.decorator';
 import { ACCESS_CODES } from '../src/common/guards/access.guard';
@@ -121,7 +122,6 @@ describe('authorization matrix: every route × anonymous, non-member, editor, ow
   const workshopId = randomUUID();
   const slug = `matrix-${Date.now().toString(36)}`;
   const people = {} as Record<Exclude<Role, 'anonymous'>, { id: string; token: string }>;
-  const csrf = newSecretToken();
   const clientIps = Object.fromEntries(ROLES.map((role) => [role, uniqueClientIp()])) as Record<Role, string>;
 
   beforeAll(async () => {
@@ -172,8 +172,11 @@ describe('authorization matrix: every route × anonymous, non-member, editor, ow
       .replace(/\*\w*|\{\*\w+\}/g, 'x');
     const server = request(app.getHttpServer());
     const method = route.method.toLowerCase() as 'get' | 'post' | 'put' | 'patch' | 'delete' | 'head' | 'options';
+    // CSRF tokens are signed to their session: each caller sends the one a browser of theirs would hold.
+    const sessionToken = role === 'anonymous' ? undefined : people[role].token;
+    const csrf = app.get(AuthCookies).csrfTokenFor(sessionToken);
     const cookies = [`fw_csrf=${csrf}`];
-    if (role !== 'anonymous') cookies.push(`fw_session=${people[role].token}`);
+    if (sessionToken) cookies.push(`fw_session=${sessionToken}`);
     const test = server[method](url)
       .set('Cookie', cookies.join('; '))
       .set('X-CSRF-Token', csrf)

@@ -71,7 +71,7 @@ export function watchRss(pid, everyMs = 50) {
 /** A cookie jar and CSRF header for fetch, as the studio's browser would have. */
 export function session(baseUrl) {
   const cookies = new Map();
-  // Its own client address (the app trusts loopback proxies), so the sign-in rate limit of other local runs never trips it.
+  // Its own client address, so the sign-in rate limit of other local runs never trips it (believed only when TRUST_PROXY trusts loopback).
   const clientIp = `10.${Math.floor(Math.random() * 256)}.${Math.floor(Math.random() * 256)}.${Math.floor(Math.random() * 256)}`;
   const remember = (response) => {
     for (const line of response.headers.getSetCookie()) {

@@ -7,6 +7,7 @@ import type { AppConfig } from '../config/app-config';
 import { AccessGuard } from '../common/guards/access.guard';
 import { UsersModule } from '../users/users.module';
 import { WorkshopsModule } from '../workshops/workshops.module';
+import { AccountsProcessor } from './accounts.processor';
 import { AuthCookies } from './auth-cookies';
 import { AuthController } from './auth.controller';
 import { AuthService } from './auth.service';
@@ -15,12 +16,14 @@ import { EmailToken } from './entities/email-token.entity';
 import { Session } from './entities/session.entity';
 import { RedisThrottlerStorage } from './redis-throttler.storage';
 import { SessionService } from './session.service';
+import { SignInAttemptsStore } from './sign-in-attempts.store';
 
 export const TOO_MANY_ATTEMPTS = 'Too many attempts. Please wait a minute and try again.';
 
 /**
  * Accounts and sessions, and the global access guard every route passes. Rate limits: the
- * `ThrottlerGuard` on auth routes counts per client address in Redis (shared by all API processes).
+ * `ThrottlerGuard` on auth routes counts per client address in Redis (shared by all API processes);
+ * `SignInAttemptsStore` counts failed sign-ins per account there too.
  */
 @Module({
   imports: [TypeOrmModule.forFeature([Session, EmailToken]), UsersModule, WorkshopsModule],
@@ -30,7 +33,16 @@ export const TOO_MANY_ATTEMPTS = 'Too many attempts. Please wait a minute and tr
     SessionService,
     EmailTokenService,
     AuthCookies,
+    AccountsProcessor,
     { provide: APP_GUARD, useClass: AccessGuard },
+    {
+      provide: SignInAttemptsStore,
+      inject: [ConfigService],
+      useFactory: (config: ConfigService<AppConfig, true>) => {
+        const redis = config.get('redis', { infer: true });
+        return new SignInAttemptsStore({ host: redis.host, port: redis.port, password: redis.password }, redis.prefix);
+      },
+    },
     {
       provide: RedisThrottlerStorage,
       inject: [ConfigService],

@@ -1,16 +1,21 @@
+import { InjectQueue } from '@nestjs/bull';
 import {
   BadRequestException,
   ConflictException,
   ForbiddenException,
+  HttpException,
+  HttpStatus,
   Inject,
   Injectable,
   Logger,
   UnauthorizedException,
 } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
+import type { Queue } from 'bull';
 import type { Request, Response } from 'express';
 import type { AppConfig } from '../config/app-config';
 import type { SessionUser } from '../common/types/access-context';
+import { QUEUES } from '../infra/jobs/queues';
 import { MailQueueService } from '../infra/mail/mail-queue.service';
 import { normalizeEmail } from '../users/email-address';
 import { User } from '../users/entities/user.entity';
@@ -25,6 +30,7 @@ import {
   resetPasswordMail,
   verifyEmailMail,
 } from './auth-mails';
+import { ACCOUNTS_JOBS, type PasswordResetRequestedJob } from './accounts-jobs';
 import { EmailTokenService } from './email-token.service';
 import type {
   ChangeEmailDto,
@@ -35,6 +41,7 @@ import type {
 } from './dto/auth.dto';
 import { hashPassword, spendPasswordCheck, verifyPassword } from './password-hasher';
 import { SessionService } from './session.service';
+import { SignInAttemptsStore } from './sign-in-attempts.store';
 import { isDuplicateKey } from '../common/database/errors';
 
 /** One sentence for every failed sign-in, so the answer never tells whether an account exists. */
@@ -52,6 +59,8 @@ export class AuthService {
     @Inject(SessionService) private readonly sessions: SessionService,
     @Inject(EmailTokenService) private readonly tokens: EmailTokenService,
     @Inject(MailQueueService) private readonly mail: MailQueueService,
+    @Inject(SignInAttemptsStore) private readonly signInAttempts: SignInAttemptsStore,
+    @InjectQueue(QUEUES.accounts) private readonly accountsQueue: Queue<PasswordResetRequestedJob>,
     @Inject(ConfigService) config: ConfigService<AppConfig, true>,
   ) {
     this.appOrigin = config.get('appOrigin', { infer: true });
@@ -85,8 +94,26 @@ export class AuthService {
     await this.sendVerification(user);
   }
 
+  /**
+   * Signs in. Every attempt counts against the address first (known or not, so a pause reveals nothing);
+   * after a few failures the address pauses with 429 and Retry-After, and the right password clears the count.
+   */
   async login(dto: LoginDto, request: Request, response: Response): Promise<SessionUser> {
-    const user = await this.users.findByEmail(dto.email);
+    const email = normalizeEmail(dto.email);
+    const pausedMs = await this.signInAttempts.take(email);
+    if (pausedMs > 0) {
+      const seconds = Math.ceil(pausedMs / 1000);
+      response.setHeader('Retry-After', String(seconds));
+      throw new HttpException(
+        {
+          message: `Too many failed sign-ins for this address. Try again in ${waitInWords(seconds)}, or reset the password.`,
+          code: 'sign_in_paused',
+          retryAfterSeconds: seconds,
+        },
+        HttpStatus.TOO_MANY_REQUESTS,
+      );
+    }
+    const user = await this.users.findByEmail(email);
     if (!user) {
       await spendPasswordCheck(dto.password);
       throw new UnauthorizedException({ message: LOGIN_FAILED, code: 'login_failed' });
@@ -94,6 +121,7 @@ export class AuthService {
     if (!(await verifyPassword(user.passwordHash, dto.password))) {
       throw new UnauthorizedException({ message: LOGIN_FAILED, code: 'login_failed' });
     }
+    await this.signInAttempts.clear(email);
     // Only now, with the right password, may the answer differ.
     if (user.disabledAt) {
       throw new ForbiddenException({
@@ -129,12 +157,21 @@ export class AuthService {
     await this.sendVerification(user);
   }
 
-  /** Always answers the same; only an existing, enabled account gets a link. */
+  /**
+   * Queues the request and returns: the request path does the same work for every address, so neither
+   * the answer nor its timing tells whether an account exists. The job does the lookup.
+   */
   async forgotPassword(email: string): Promise<void> {
+    await this.accountsQueue.add(ACCOUNTS_JOBS.passwordResetRequested, { email: normalizeEmail(email) });
+  }
+
+  /** The job's half of a reset request: only an existing, enabled account gets a link. Returns whether one was sent. */
+  async sendPasswordResetLink(email: string): Promise<boolean> {
     const user = await this.users.findByEmail(email);
-    if (!user || user.disabledAt) return;
+    if (!user || user.disabledAt) return false;
     const token = await this.tokens.issue(user.id, 'reset-password');
     await this.mail.enqueue(resetPasswordMail(user.email, this.link('/reset-password', token)));
+    return true;
   }
 
   /** Sets the new password, confirms the address (the link proved it) and signs out every browser. */
@@ -214,4 +251,9 @@ export class AuthService {
     await this.users.save(user);
     this.logger.log(`user ${user.id} is a site admin (ADMIN_EMAILS)`);
   }
+}
+
+function waitInWords(seconds: number): string {
+  if (seconds < 90) return `${seconds} seconds`;
+  return `${Math.ceil(seconds / 60)} minutes`;
 }

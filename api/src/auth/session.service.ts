@@ -19,7 +19,7 @@ export class SessionService {
     @Inject(AuthCookies) private readonly cookies: AuthCookies,
   ) {}
 
-  /** Starts a session and sets its cookie (and a CSRF token if the browser has none yet). */
+  /** Starts a session and sets its cookie and a new CSRF token signed to it (any earlier token stops working). */
   async start(userId: string, request: Request, response: Response): Promise<void> {
     const token = newSecretToken();
     const now = new Date();
@@ -31,8 +31,7 @@ export class SessionService {
       userAgent: request.headers['user-agent']?.slice(0, 255) ?? null,
     });
     await this.sessions.insert(session);
-    this.cookies.setSession(response, token);
-    this.cookies.ensureCsrf(request, response);
+    this.cookies.startSession(response, token);
   }
 
   /**

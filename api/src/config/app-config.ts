@@ -1,4 +1,6 @@
+import { randomBytes } from 'node:crypto';
 import { EnvironmentVariables, validateEnvironment } from './environment';
+import { parseTrustProxy, type TrustProxySetting } from './trust-proxy';
 
 export interface AppConfig {
   env: EnvironmentVariables['NODE_ENV'];
@@ -7,7 +9,9 @@ export interface AppConfig {
   appOrigin: string;
   studioDist?: string;
   footage: { maxBytes: number };
-  auth: { adminEmails: string[]; rateLimitPerMinute: number };
+  auth: { adminEmails: string[]; rateLimitPerMinute: number; csrfSecret: string };
+  /** Express's `trust proxy`: whom to believe about the client's address (X-Forwarded-For). */
+  trustProxy: TrustProxySetting;
   database: { host: string; port: number; user: string; password: string; name: string };
   redis: { host: string; port: number; password?: string; prefix: string };
   storage: {
@@ -44,7 +48,10 @@ export function buildAppConfig(env: EnvironmentVariables): AppConfig {
         .map((email) => email.trim().toLowerCase())
         .filter((email) => email.length > 0),
       rateLimitPerMinute: env.AUTH_RATE_LIMIT,
+      // Outside production an unset key is random per process: tokens then last as long as the process.
+      csrfSecret: env.CSRF_SECRET ?? randomBytes(32).toString('base64url'),
     },
+    trustProxy: parseTrustProxy(env.TRUST_PROXY),
     database: {
       host: env.DB_HOST,
       port: env.DB_PORT,

@@ -10,8 +10,13 @@ import {
   IsUrl,
   Max,
   Min,
+  MinLength,
+  ValidateBy,
+  ValidateIf,
   validateSync,
+  type ValidationArguments,
 } from 'class-validator';
+import { trustProxyProblem } from './trust-proxy';
 
 const toBoolean = ({ value }: { value: unknown }) =>
   value === undefined ? undefined : value === true || value === 'true' || value === '1';
@@ -147,6 +152,31 @@ export class EnvironmentVariables {
   @IsInt()
   @Min(1)
   AUTH_RATE_LIMIT: number = 10;
+
+  /**
+   * Proxies allowed to name the client's address in X-Forwarded-For: a hop count, or a comma-separated list of
+   * addresses, CIDR ranges and `loopback` / `linklocal` / `uniquelocal`. Empty (the default) trusts nobody, which
+   * is right when the API listens directly; otherwise any client could pick its own address and dodge rate limits.
+   */
+  @IsOptional()
+  @ValidateBy({
+    name: 'isTrustProxy',
+    validator: {
+      validate: (value: unknown) => typeof value === 'string' && trustProxyProblem(value) === undefined,
+      defaultMessage: (args?: ValidationArguments) =>
+        `TRUST_PROXY ${typeof args?.value === 'string' ? (trustProxyProblem(args.value) ?? 'is invalid') : 'must be text'}`,
+    },
+  })
+  TRUST_PROXY?: string;
+
+  /**
+   * Key for signing CSRF tokens to their session (HMAC-SHA256); at least 32 characters, the same on every API
+   * process. Required in production; elsewhere a random key per process is used when it is not set.
+   */
+  @ValidateIf((env: EnvironmentVariables) => env.NODE_ENV === 'production' || env.CSRF_SECRET !== undefined)
+  @IsString()
+  @MinLength(32)
+  CSRF_SECRET?: string;
 
   /** Largest footage file accepted for upload, in bytes (default 20 GB). At most 640 GiB: 10,000 parts of 64 MiB. */
   @Transform(({ value }) => (value === undefined ? undefined : Number(value)))

@@ -34,7 +34,7 @@ import { StorageService } from './storage/storage.service';
         };
       },
     }),
-    BullModule.registerQueue({ name: QUEUES.mail }, { name: QUEUES.media }, { name: QUEUES.marks }, { name: QUEUES.notifications }),
+    BullModule.registerQueue({ name: QUEUES.mail }, { name: QUEUES.media }, { name: QUEUES.marks }, { name: QUEUES.notifications }, { name: QUEUES.accounts }),
   ],
   providers: [StorageService, MailService, MailQueueService, MailProcessor, MediaToolsService, QueueWorkersLifecycle],
   exports: [StorageService, MailService, MailQueueService, BullModule, MediaToolsService],

@@ -5,8 +5,8 @@ import { tokenFrom, waitForMail } from './mail-inbox';
 
 /**
  * Test helpers for anything behind sign-in. Every agent keeps its cookies, sends the CSRF header the
- * studio would send, and comes from its own client address (X-Forwarded-For; the app trusts loopback
- * proxies) so the per-address rate limits of one test never trip another.
+ * studio would send, and comes from its own client address (X-Forwarded-For; the test profile sets
+ * TRUST_PROXY=loopback) so the per-address rate limits of one test never trip another.
  */
 
 export type Agent = ReturnType<typeof request.agent>;
@@ -50,15 +50,21 @@ function cookieValue(setCookie: string[] | string | undefined, name: string): st
 
 /**
  * A browser-like agent with no session yet: it has fetched `GET /api/auth/me` once, holds the
- * `fw_csrf` cookie and echoes it in `X-CSRF-Token` on every request.
+ * `fw_csrf` cookie and, as the studio does, echoes the cookie's current value in `X-CSRF-Token` on every
+ * request (the token changes at sign-in and sign-out). A test may still `.set()` its own header on one request.
  */
 export async function browserAgent(app: INestApplication, clientIp = uniqueClientIp()): Promise<Agent> {
   const agent = request.agent(app.getHttpServer());
+  let csrf: string | undefined;
   agent.set('X-Forwarded-For', clientIp);
-  const me = await agent.get('/api/auth/me').expect(200);
-  const csrf = cookieValue(me.headers['set-cookie'], 'fw_csrf');
+  agent.on('response', (response: request.Response) => {
+    csrf = cookieValue(response.headers['set-cookie'], 'fw_csrf') || csrf;
+  });
+  agent.use((outgoing: request.Test) => {
+    if (csrf) outgoing.set('X-CSRF-Token', csrf);
+  });
+  await agent.get('/api/auth/me').expect(200);
   if (!csrf) throw new Error('GET /api/auth/me did not set the fw_csrf cookie');
-  agent.set('X-CSRF-Token', csrf);
   return agent;
 }
 
