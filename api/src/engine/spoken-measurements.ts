@@ -252,8 +252,8 @@ function endOfLetters(text: string, from: number): number {
  * Work is cut into slices so a caller holding an event loop can let other work run between them
  * (`extractMeasurementsInSlices`); a slice is a few milliseconds at most.
  */
-const SLICE_CHARACTERS = 16_384;
-const SLICE_TOKENS = 4_096;
+const SLICE_CHARACTERS = 4_096;
+const SLICE_TOKENS = 1_024;
 
 /** Runs sliced work to the end in one go. */
 function runToEnd<T>(steps: Generator<void, T, void>): T {
@@ -346,6 +346,12 @@ function* tokenizeForMeasurements(text: string): Generator<void, Token[], void> 
  * unpunctuated automatic captions.
  */
 const MAX_NUMBER_WORDS = 16;
+
+/**
+ * No reading has more digits than this ("1234.5678" is nine); a longer run of digits is a serial or
+ * an accident, and turning it into an exact fraction would cost time growing faster than its length.
+ */
+const MAX_DIGIT_CHARACTERS = 16;
 
 /** `right` follows `left` in the same phrase: a hyphen, or whitespace with at most one line break. */
 function connected(right: Token): boolean {
@@ -519,6 +525,7 @@ class MeasurementScanner {
   private digitAmountAt(index: number): Amount | null {
     const tokens = this.tokens;
     const first = tokens[index];
+    if (first.text.length > MAX_DIGIT_CHARACTERS) return null;
     const before = tokens[index - 1];
     let quoted = false;
     if (adjacent(before, first)) {
@@ -526,7 +533,7 @@ class MeasurementScanner {
       quoted = QUOTE_MARKS.has(before.text);
     }
     const isWhole = (token: Token | undefined): token is Token =>
-      token !== undefined && token.kind === 'number' && /^[0-9]+$/u.test(token.text);
+      token !== undefined && token.kind === 'number' && token.text.length <= MAX_DIGIT_CHARACTERS && /^[0-9]+$/u.test(token.text);
     const fractionAt = (at: number): { value: Fraction; next: number } | null => {
       const [top, slash, bottom, after] = [tokens[at], tokens[at + 1], tokens[at + 2], tokens[at + 3]];
       if (!isWhole(top) || slash?.text !== '/' || !isWhole(bottom)) return null;
