@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { toWords } from 'number-to-words';
 import wordsToNumbers from 'words-to-numbers';
-import { extractMeasurements, findPartNumbers, type SpokenMeasurement } from './spoken-measurements';
+import { extractMeasurements, extractMeasurementsInSlices, findPartNumbers, type SpokenMeasurement } from './spoken-measurements';
 
 /** Written for these tests (an invented bench session); not taken from any real video. */
 const BENCH_TALK = [
@@ -261,8 +261,26 @@ describe('extractMeasurements', () => {
       ['a spline count', 'a 21-tooth spline'],
       ['archaic "thou"', 'thou shalt measure twice'],
       ['a quoted article', 'say "a" twice'],
+      ['a run of digits longer than any reading', 'serial 12345678901234567 mm'],
     ])('%s: %s', (_label, text) => {
       expect(extractMeasurements(text)).toEqual([]);
+    });
+  });
+
+  describe('in slices', () => {
+    it('gives the same measurements as one call, in slices of bounded work', () => {
+      const text = `${BENCH_TALK}\n`.repeat(200);
+      const slices = extractMeasurementsInSlices(text);
+      let sliceCount = 1;
+      let slice = slices.next();
+      while (!slice.done) {
+        sliceCount += 1;
+        slice = slices.next();
+      }
+      expect(slice.value).toEqual(extractMeasurements(text));
+      expect(slice.value).toHaveLength(2_000);
+      // About 80,000 characters and 16,000 tokens: several slices, each a few thousand characters or a thousand tokens.
+      expect(sliceCount).toBeGreaterThan(text.length / 4_096);
     });
   });
 
