@@ -11,6 +11,7 @@ export {
   formatLength,
   formatLengthValue,
   fromNanometres,
+  parseLength,
   toNanometres,
   unitLabel,
 } from '../../../api/src/engine/units';

@@ -86,3 +86,44 @@ export const partQueries = {
       queryFn: ({ signal }) => apiRequest<Part>(`/workshops/${workshopId}/parts/${partId}`, { signal }),
     }),
 };
+
+/** GET /api/tools/splines/identify: a shaft's major diameter or a hub's bore (minor diameter), with the reading's unit. */
+export interface SplineIdentifyQuery {
+  teeth: number;
+  majorDiameter?: number;
+  minorDiameter?: number;
+  unit: 'in' | 'mm';
+  resolution?: number;
+}
+
+export interface SplineCandidate {
+  designation: string;
+  standard: string;
+  /** "16/32" or "m1.25". */
+  pitch: string;
+  pressureAngle: number;
+  alsoFits: string[];
+  basicDiameter: { value: number; unit: 'in' | 'mm'; converted: { value: number; unit: 'in' | 'mm' } };
+  deviation: { value: number; unit: 'in' | 'mm' };
+  explainsReading: boolean;
+}
+
+export interface SplineIdentification {
+  teeth: number;
+  feature: 'major' | 'minor';
+  measured: { value: number; unit: 'in' | 'mm'; resolution: number };
+  candidates: SplineCandidate[];
+  pitfalls: string[];
+  rule: string;
+}
+
+export const splineToolQueries = {
+  all: () => ['spline-tools'] as const,
+  identify: (query: SplineIdentifyQuery) =>
+    queryOptions({
+      queryKey: [...splineToolQueries.all(), 'identify', query] as const,
+      queryFn: ({ signal }) => apiRequest<SplineIdentification>('/tools/splines/identify', { signal, query: { ...query } }),
+      // The standards' sizes do not change while the form is open.
+      staleTime: Infinity,
+    }),
+};

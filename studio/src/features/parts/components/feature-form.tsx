@@ -6,6 +6,7 @@ import { LENGTH_UNITS, unitLabel, type LengthUnit } from '@/lib/units';
 import type { FeatureInput } from '../api/mutations';
 import { FEATURE_KINDS, type FeatureKind, type PartFeature } from '../api/queries';
 import { FEATURE_KIND_LABELS } from './part-labels';
+import { SplineIdentifyOffer } from './spline-identify-offer';
 
 const LABELS = {
   name: 'Name',
@@ -262,6 +263,19 @@ export function FeatureForm({ feature, pending, onSubmit, onCancel }: FeatureFor
               <TextInput label={LABELS.majorDiameter} placeholder="optional" {...form.getInputProps('majorDiameter')} />
               {unitSelect}
             </SimpleGrid>
+            <SplineIdentifyOffer
+              teeth={values.teeth}
+              gender={values.gender}
+              majorDiameter={values.majorDiameter}
+              unit={values.unit}
+              onUse={(pitch) =>
+                form.setValues(
+                  pitch.system === 'diametral'
+                    ? { pitchSystem: 'diametral', diametralPitch: pitch.diametralPitch, stubPitch: pitch.stubPitch }
+                    : { pitchSystem: 'module', module: pitch.module },
+                )
+              }
+            />
           </>
         )}
 
