@@ -48,11 +48,12 @@ describe('TranscriptPane search', () => {
     );
     fireEvent.change(screen.getByLabelText('Search this transcript'), { target: { value: 'spline' } });
 
-    expect(await screen.findByText('18 hits — showing 1–10')).toBeTruthy();
+    // Generous waits: the debounce, then two answers, on a busy machine.
+    expect(await screen.findByText('18 hits — showing 1–10', {}, { timeout: 5_000 })).toBeTruthy();
     expect(screen.getAllByText(/number/)).toHaveLength(10);
 
     fireEvent.click(screen.getByRole('button', { name: 'Show more' }));
-    await waitFor(() => expect(screen.getAllByText(/number/)).toHaveLength(18));
+    await waitFor(() => expect(screen.getAllByText(/number/)).toHaveLength(18), { timeout: 5_000 });
     expect(screen.getByText('18 hits')).toBeTruthy();
     expect(screen.queryByRole('button', { name: 'Show more' })).toBeNull();
     // The second page started where the first ended.
@@ -60,7 +61,7 @@ describe('TranscriptPane search', () => {
     expect(offsets).toEqual(['0', '10']);
     // Times past the hour read as hours: the last hit is at 2 h 50 min.
     expect(screen.getByText('2:50:00')).toBeTruthy();
-  });
+  }, 20_000);
 });
 
 function withLimit(url: URL, limit: number): URL {

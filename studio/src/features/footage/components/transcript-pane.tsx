@@ -1,7 +1,9 @@
 import { Anchor, Button, Group, Loader, Paper, ScrollArea, Stack, Text, TextInput, Title, UnstyledButton } from '@mantine/core';
 import { useDebouncedValue, useDisclosure } from '@mantine/hooks';
 import { useInfiniteQuery } from '@tanstack/react-query';
-import { useRef, useState } from 'react';
+import { useState } from 'react';
+import { BackToNow } from '@/components/back-to-now';
+import { useFollowPlayback } from '@/lib/use-follow-playback';
 import { downloadUrl, transcriptQueries } from '../api/queries';
 import type { Cue, Transcript } from '../api/types';
 import { formatClock } from '@/lib/clock';
@@ -42,18 +44,8 @@ export function TranscriptPane({ workshopId, footageId, transcript, currentMs, t
   });
   const hits = search.data?.pages.flatMap((page) => page.results) ?? [];
   const firstPage = search.data?.pages[0];
-  const viewport = useRef<HTMLDivElement>(null);
+  const { following, box, currentRow, resume } = useFollowPlayback<HTMLDivElement>('third');
   const active = transcript ? activeCueIndex(transcript.cues, currentMs) : -1;
-
-  // Keeps the playing cue in view without moving the page around it.
-  const followActive = (node: HTMLButtonElement | null) => {
-    const box = viewport.current;
-    if (!node || !box) return;
-    const top = node.offsetTop - box.offsetTop;
-    if (top < box.scrollTop || top + node.offsetHeight > box.scrollTop + box.clientHeight) {
-      box.scrollTo({ top: Math.max(0, top - box.clientHeight / 3), behavior: 'smooth' });
-    }
-  };
 
   return (
     <Paper withBorder p="md" h="100%">
@@ -92,12 +84,17 @@ export function TranscriptPane({ workshopId, footageId, transcript, currentMs, t
             rightSection={search.isFetching ? <Loader size="xs" /> : null}
           />
         )}
+        {transcript && debounced === '' && !following && (
+          <Group justify="flex-end">
+            <BackToNow onClick={resume} />
+          </Group>
+        )}
         {search.isError && debounced !== '' && (
           <Text size="sm" c="red">
             {search.error.message}
           </Text>
         )}
-        <ScrollArea viewportRef={viewport} style={{ flex: 1 }} mah={520} type="auto">
+        <ScrollArea viewportRef={box} style={{ flex: 1 }} mah={520} type="auto">
           {!transcript && (
             <Text size="sm" c="dimmed">
               Attach the transcript of this video to follow along, search it, and show captions in the player.
@@ -134,7 +131,7 @@ export function TranscriptPane({ workshopId, footageId, transcript, currentMs, t
                   key={cue.index}
                   className={classes.cue}
                   data-active={cue.index === active || undefined}
-                  ref={cue.index === active ? followActive : undefined}
+                  ref={cue.index === active ? currentRow : undefined}
                   onClick={() => onSeek(cue.startMs)}
                 >
                   <Text span size="xs" c="dimmed" className={classes.time}>

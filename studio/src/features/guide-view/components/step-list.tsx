@@ -1,5 +1,6 @@
 import { Badge, Group, Paper, Stack, Text, Title, Typography, UnstyledButton } from '@mantine/core';
-import { useRef } from 'react';
+import { BackToNow } from '@/components/back-to-now';
+import { useFollowPlayback } from '@/lib/use-follow-playback';
 import type { GuideMark, PublishedStep } from '../api/types';
 import { CautionPanel } from './caution-panel';
 import classes from './guide-view.module.css';
@@ -43,24 +44,18 @@ function StepTime({ step, mainFootageId, onSeek }: { step: PublishedStep; mainFo
 
 /** The steps in order; the one playing now stands out (a bar, a badge and aria-current, not colour alone). */
 export function StepList({ steps, marks, mainFootageId, currentStepId, onSeek }: StepListProps) {
-  const box = useRef<HTMLOListElement>(null);
+  // The playing step stays in view while the list scrolls on its own beside the video; the page never jumps.
+  const { following, box, currentRow, resume } = useFollowPlayback<HTMLOListElement>('top');
   const ordered = [...steps].sort((a, b) => a.position - b.position);
-
-  // Brings the playing step into view when the list scrolls on its own (beside the video); the page never jumps.
-  const followCurrent = (node: HTMLLIElement | null) => {
-    const container = box.current;
-    if (!node || !container || container.scrollHeight <= container.clientHeight) return;
-    const top = node.offsetTop - container.offsetTop;
-    if (top < container.scrollTop || top + node.offsetHeight > container.scrollTop + container.clientHeight) {
-      container.scrollTo({ top: Math.max(0, top - 16), behavior: 'smooth' });
-    }
-  };
 
   return (
     <Paper withBorder p="md" component="section" aria-labelledby="guide-steps-heading" className={classes.stepsPanel} data-testid="guide-steps">
-      <Title order={2} size="h4" id="guide-steps-heading" mb="sm">
-        Steps
-      </Title>
+      <Group justify="space-between" mb="sm">
+        <Title order={2} size="h4" id="guide-steps-heading">
+          Steps
+        </Title>
+        {!following && <BackToNow onClick={resume} />}
+      </Group>
       <ol ref={box} className={classes.stepList}>
         {ordered.map((step) => {
           const isCurrent = step.id === currentStepId;
@@ -68,7 +63,7 @@ export function StepList({ steps, marks, mainFootageId, currentStepId, onSeek }:
           return (
             <li
               key={step.id}
-              ref={isCurrent ? followCurrent : undefined}
+              ref={isCurrent ? currentRow : undefined}
               className={classes.step}
               data-current={isCurrent || undefined}
               aria-current={isCurrent ? 'step' : undefined}

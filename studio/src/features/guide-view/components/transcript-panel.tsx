@@ -1,5 +1,7 @@
-import { Highlight, Paper, Stack, Text, TextInput, Title, UnstyledButton } from '@mantine/core';
-import { useDeferredValue, useRef, useState } from 'react';
+import { Group, Highlight, Paper, Stack, Text, TextInput, Title, UnstyledButton } from '@mantine/core';
+import { useDeferredValue, useState } from 'react';
+import { BackToNow } from '@/components/back-to-now';
+import { useFollowPlayback } from '@/lib/use-follow-playback';
 import type { Cue } from '../api/types';
 import classes from './guide-view.module.css';
 import { formatClock } from '@/lib/clock';
@@ -19,17 +21,7 @@ export function TranscriptPanel({ cues, currentMs, onSeek }: TranscriptPanelProp
   const words = searchWords(deferredQuery);
   const matches = filterCues(cues, deferredQuery);
   const current = currentCueIndex(cues, currentMs);
-  const box = useRef<HTMLDivElement>(null);
-
-  // Keeps the playing cue in view inside the box, never by scrolling the page.
-  const followCurrent = (node: HTMLButtonElement | null) => {
-    const container = box.current;
-    if (!node || !container || container.scrollHeight <= container.clientHeight) return;
-    const top = node.offsetTop - container.offsetTop;
-    if (top < container.scrollTop || top + node.offsetHeight > container.scrollTop + container.clientHeight) {
-      container.scrollTo({ top: Math.max(0, top - container.clientHeight / 3), behavior: 'smooth' });
-    }
-  };
+  const { following, box, currentRow, resume } = useFollowPlayback<HTMLDivElement>('third');
 
   return (
     <Paper withBorder p="md" component="section" aria-labelledby="guide-transcript-heading" className={classes.transcript} data-testid="guide-transcript">
@@ -50,9 +42,12 @@ export function TranscriptPanel({ cues, currentMs, onSeek }: TranscriptPanelProp
               value={query}
               onChange={(event) => setQuery(event.currentTarget.value)}
             />
-            <Text size="xs" c="dimmed" aria-live="polite" data-testid="transcript-count">
-              {words.length === 0 ? `${cues.length} cues` : `${matches.length} of ${cues.length} cues mention “${deferredQuery.trim()}”`}
-            </Text>
+            <Group justify="space-between" gap="xs">
+              <Text size="xs" c="dimmed" aria-live="polite" data-testid="transcript-count">
+                {words.length === 0 ? `${cues.length} cues` : `${matches.length} of ${cues.length} cues mention “${deferredQuery.trim()}”`}
+              </Text>
+              {words.length === 0 && !following && <BackToNow onClick={resume} />}
+            </Group>
             <div ref={box} className={classes.cueBox}>
               <ul className={classes.plainList}>
                 {matches.map(({ index, cue }) => (
@@ -61,7 +56,7 @@ export function TranscriptPanel({ cues, currentMs, onSeek }: TranscriptPanelProp
                       className={classes.cue}
                       data-current={index === current || undefined}
                       aria-current={index === current ? 'time' : undefined}
-                      ref={index === current && words.length === 0 ? followCurrent : undefined}
+                      ref={index === current && words.length === 0 ? currentRow : undefined}
                       onClick={() => onSeek(cue.startMs)}
                       data-testid="transcript-cue"
                     >
