@@ -113,11 +113,13 @@ test('the creator records three parts with their features, and readings of the p
   await addReading('pilot bore', { value: '15.012', instrument: 'Bore gauge', resolution: '0.001' }, '01b-reading-form');
   await addReading('pilot bore', { value: '15.013', instrument: 'Bore gauge', resolution: '0.001' });
   const summary = page.getByRole('region', { name: 'Readings of pilot bore' }).getByTestId('readings-summary');
+  // Mean (15.012 + 15.013) / 2 = 15.0125 mm, shown at the bore gauge's 0.001 mm (half rounds up); spread 15.013 − 15.012.
   assert.match(await summary.textContent(), /2 readings · mean 15\.013 mm · spread 0\.001 mm/);
 
   // The unit toggle converts each reading, keeping the bore gauge's resolution.
   const readings = page.getByRole('region', { name: 'Readings of pilot bore' });
   await readings.locator('label').filter({ hasText: /^in$/ }).click();
+  // 15.012 mm ÷ 25.4 mm/in = 0.5910236 in, to 5 places (0.001 mm is 0.00004 in, so a 5th place is still meaningful).
   await readings.getByRole('cell', { name: '0.59102 in' }).waitFor();
   await page.waitForTimeout(300); // the toggle's marker slides across
   await shot(page, '01-part-with-readings');
@@ -218,6 +220,7 @@ test('the checklist shows each state, the verdict and both diagrams', async () =
   assert.match(await zones.locator('title').first().textContent(), /Fit: pilot bearing fit/);
   const window = card('Length window: driveshaft in the tunnel').getByTestId('length-window-diagram');
   await window.waitFor();
+  // Fully extended 565 mm − longest installed 562 mm = 3 mm, under the 5 mm the creator asked to keep.
   assert.equal(await window.getByTestId('extension-left').textContent(), '3 mm left');
   await card('Length window: driveshaft in the tunnel').getByText(/extension left at the longest installed length is 3 mm, less than the 5 mm margin/).waitFor();
 
@@ -265,6 +268,7 @@ test('confirming needs evidence: refused without, done with a reading attached',
   await fit.getByLabel('What if the shaft were larger by').fill('0.002');
   await fit.getByRole('button', { name: 'Work it out' }).click();
   const answer = await fit.getByTestId('what-if-answer').textContent();
+  // Measured clearance: bore mean 15.0125 mm − journal 14.990 mm = 22.5 µm; 2 µm / 22.5 µm = 8.89 %.
   assert.match(answer, /takes 8\.9 % of the measured clearance/);
 
   // The history keeps every change with its reason (notifications closed first, so they do not cover it).
@@ -287,10 +291,11 @@ test('anyone can use the fit calculator from the navigation, signed in or not', 
   await calculator.getByRole('navigation', { name: 'Main navigation' }).getByRole('link', { name: 'Fit calculator' }).click();
   await calculator.getByRole('heading', { name: 'Fit calculator' }).waitFor();
   await calculator.getByLabel('Nominal size').fill('25');
-  await calculator.locator('label').filter({ hasText: 'H7/p6 press' }).click();
+  await calculator.locator('label').filter({ hasText: 'H7/p6 locational interference' }).click();
   await calculator.getByTestId('fit-kind').getByText(/^Interference fit/).waitFor();
   assert.match(calculator.url(), /size=25&unit=mm&hole=H7&shaft=p6/);
   const limits = calculator.getByRole('table', { name: 'Limits' });
+  // ISO 286-2, 18–30 mm: p6 = +35/+22 µm, so the largest shaft is 25 mm + 0.035 mm.
   await limits.getByText('25.035 mm').waitFor();
   await calculator.getByTestId('tolerance-zone-diagram').waitFor();
   await shot(calculator, '10-fit-calculator');
