@@ -104,6 +104,7 @@ describe('ToleranceZoneDiagram', () => {
   });
 
   it('writes limits in thou under the thou toggle', () => {
+    // 25.4 µm = 0.0254 mm = 0.001 in = 1 thou (1 in = 25.4 mm exactly).
     render(<ToleranceZoneDiagram nominal="1.000 in" hole={{ upper: 25.4, lower: 0 }} shaft={null} unit="thou" />);
     expect(screen.getByText('+1.00 thou')).toBeTruthy();
     expect(screen.getByText(/Deviation from 1.000 in, thou/)).toBeTruthy();

@@ -69,6 +69,7 @@ export function testGuide(overrides: Partial<PublishedGuide> = {}): PublishedGui
       ],
     },
     marks: [
+      // "fifteen thousandths" in the cue above = 15 × 0.001 in = 0.015 in.
       { id: 'm1', kind: 'measurement', startMs: 12_500, endMs: null, label: 'Spigot 0.015 in over', stepId: 's2', fitCheckId: null },
       { id: 'm2', kind: 'check_evidence', startMs: 9_000, endMs: null, label: 'Slides on by hand', stepId: null, fitCheckId: 'c1' },
     ],

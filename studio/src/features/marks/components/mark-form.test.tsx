@@ -15,7 +15,7 @@ const READING = {
   id: 'm1',
   featureId: 'f2',
   interfaceId: null,
-  shown: '0.5902 in',
+  shown: '0.5902 in', // the demo's pilot nose as miked in its footage ("zero point five nine zero two inch")
   quantity: 'diameter',
   footageId: null,
   footageTimeMs: null,

@@ -26,6 +26,7 @@ const reading = (id: string, value: string, valueNm: number) => ({
 // 0.6692 in and 0.6690 in, read with a 0.0001 in micrometer.
 const LIST = {
   measurements: [reading('m1', '0.6692', 0.6692 * IN), reading('m2', '0.6690', 0.669 * IN)],
+  // Mean (0.6692 + 0.6690) / 2 = 0.6691 in = 0.6691 × 25 400 000 nm = 16 995 140 nm; spread 0.0002 in = 5 080 nm.
   summary: { count: 2, unit: 'in', meanNm: 16_995_140, spreadNm: 5_080, mean: '0.6691 in', spread: '0.0002 in' },
 };
 
@@ -52,7 +53,8 @@ describe('SubjectReadings', () => {
     await screen.findByText(/2 readings/);
     const toggle = screen.getByRole('radiogroup');
     fireEvent.click(within(toggle).getByLabelText('mm'));
-    // 0.0001 in is 2.54 µm: three decimals of a millimetre, no more.
+    // 0.0001 in is 2.54 µm: three decimals of a millimetre, no more. 0.6692 × 25.4 = 16.99768 → 16.998;
+    // 0.6690 × 25.4 = 16.9926 → 16.993; mean 0.6691 × 25.4 = 16.99514 → 16.995; spread 0.0002 × 25.4 = 0.00508 → 0.005.
     await waitFor(() =>
       expect(screen.getAllByTestId('reading-converted').map((cell) => cell.textContent)).toEqual(['16.998 mm', '16.993 mm']),
     );
@@ -62,6 +64,7 @@ describe('SubjectReadings', () => {
     expect(screen.getAllByTestId('reading-as-taken')[0].textContent).toBe('0.6692 in');
 
     fireEvent.click(within(toggle).getByLabelText('thou'));
+    // 0.6692 in = 669.2 thou (1 thou = 0.001 in), one decimal for the 0.0001 in step.
     await waitFor(() =>
       expect(screen.getAllByTestId('reading-converted').map((cell) => cell.textContent)).toEqual(['669.2 thou', '669.0 thou']),
     );
