@@ -6,6 +6,8 @@ export interface FitQuery {
   unit: 'mm' | 'in';
   hole: string;
   shaft: string;
+  /** Only when asked: the older rounding of odd js/JS IT7–IT11 to even; the API's default is ±IT/2. */
+  jsRounding?: 'even';
 }
 
 /** Deviations and clearances in µm; a negative clearance minimum means the parts may interfere. */

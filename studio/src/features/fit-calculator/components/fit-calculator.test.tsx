@@ -44,6 +44,30 @@ describe('FitCalculator', () => {
     expect(await screen.findByText('Shaft class must be a shaft tolerance class such as g6')).toBeTruthy();
   });
 
+  it('asks for the older js/JS rounding only when ticked, and says on screen which convention applied', async () => {
+    const requests = stubApi([
+      {
+        path: /^\/tools\/fits\?/,
+        // ISO 286-2, 18–30 mm: IT7 = 21 µm, rounded down to 20 → JS7 ±10 µm; h6 0/−13 µm.
+        body: {
+          hole: { upper: 10, lower: -10 },
+          shaft: { upper: 0, lower: -13 },
+          clearance: { max: 23, min: -10 },
+          kind: 'transition',
+          convention: { jsRounding: 'even', description: 'js/JS = ±IT/2 with odd IT7–IT11 rounded down to even (older practice)' },
+        },
+      },
+    ]);
+    renderWithProviders(<FitCalculator />, { route: '/tools/fit-calculator' });
+    fireEvent.change(screen.getByRole('combobox', { name: 'Hole class' }), { target: { value: 'JS7' } });
+    fireEvent.change(screen.getByRole('combobox', { name: 'Shaft class' }), { target: { value: 'h6' } });
+    fireEvent.click(screen.getByRole('checkbox', { name: /round odd IT7–IT11 down to even/ }));
+    fireEvent.click(screen.getByRole('button', { name: 'Calculate' }));
+    expect(await screen.findByTestId('fit-convention')).toBeTruthy();
+    expect(screen.getByTestId('fit-convention').textContent).toBe('Convention: js/JS = ±IT/2 with odd IT7–IT11 rounded down to even (older practice).');
+    expect(requests[0]?.url.searchParams.get('jsRounding')).toBe('even');
+  }, 30_000);
+
   it('checks the classes before asking', async () => {
     const requests = stubApi([]);
     renderWithProviders(<FitCalculator />, { route: '/tools/fit-calculator' });

@@ -1,4 +1,4 @@
-import { Alert, Autocomplete, Button, Chip, Group, Input, Paper, SegmentedControl, SimpleGrid, Stack, Table, Text, TextInput, Title } from '@mantine/core';
+import { Alert, Autocomplete, Button, Checkbox, Chip, Group, Input, Paper, SegmentedControl, SimpleGrid, Stack, Table, Text, TextInput, Title } from '@mantine/core';
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { useSearchParams } from 'react-router-dom';
@@ -37,7 +37,8 @@ function queryFromParams(params: URLSearchParams): FitQuery | null {
   const hole = params.get('hole');
   const shaft = params.get('shaft');
   const unit = params.get('unit') === 'in' ? 'in' : 'mm';
-  return size && hole && shaft ? { size, unit, hole, shaft } : null;
+  const rounding = params.get('jsRounding') === 'even' ? { jsRounding: 'even' as const } : {};
+  return size && hole && shaft ? { size, unit, hole, shaft, ...rounding } : null;
 }
 
 /**
@@ -61,7 +62,13 @@ export function FitCalculator() {
     if (!/^[a-z]{1,2}\d{1,2}$/.test(next.shaft.trim())) errors.shaft = 'A shaft class is written in lower case, e.g. g6';
     setLocalErrors(errors);
     if (Object.keys(errors).length > 0) return;
-    setParams({ size: next.size.trim(), unit: next.unit, hole: next.hole.trim(), shaft: next.shaft.trim() });
+    setParams({
+      size: next.size.trim(),
+      unit: next.unit,
+      hole: next.hole.trim(),
+      shaft: next.shaft.trim(),
+      ...(next.jsRounding ? { jsRounding: next.jsRounding } : {}),
+    });
   };
 
   const change = (field: keyof FitQuery, value: string) => {
@@ -123,6 +130,14 @@ export function FitCalculator() {
                 error={errorOf('shaft')}
               />
             </SimpleGrid>
+            <Checkbox
+              label="js/JS: round odd IT7–IT11 down to even (older practice; the current ISO 286-2 tables give ±IT/2)"
+              checked={values.jsRounding === 'even'}
+              onChange={(event) => {
+                const checked = event.currentTarget.checked;
+                setValues(({ jsRounding: _previous, ...current }) => (checked ? { ...current, jsRounding: 'even' } : current));
+              }}
+            />
             <Group justify="space-between" wrap="wrap">
               <Group gap={6} aria-label="Common pairs">
                 {COMMON_PAIRS.map((pair) => (
