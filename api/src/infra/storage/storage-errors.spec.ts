@@ -17,6 +17,9 @@ describe('isStorageUnavailable', () => {
     }
     // Node 20 connecting to every address of "localhost" (::1 and 127.0.0.1).
     expect(isStorageUnavailable(new AggregateError([nodeError('ECONNREFUSED'), nodeError('ECONNREFUSED')], ''))).toBe(true);
+    // The SDK's retry layer keeps only the text of an error from another realm (Node core seen from a VM context).
+    expect(isStorageUnavailable(new Error('AWS SDK error wrapper for Error: connect ECONNREFUSED 127.0.0.1:4569'))).toBe(true);
+    expect(isStorageUnavailable(new Error('AWS SDK error wrapper for Error: something else'))).toBe(false);
   });
 
   it('is true for a timeout and for storage server errors (S3: 500 InternalError, 503 SlowDown are "retry later")', () => {

@@ -46,6 +46,9 @@ const NETWORK_ERROR_CODES = new Set([
 /** The SDK's names for a request that ran out of time. */
 const TIMEOUT_ERROR_NAMES = new Set(['TimeoutError', 'RequestTimeout', 'RequestTimeoutException']);
 
+/** The text of a network error code inside a message ("connect ECONNREFUSED 127.0.0.1:4569"). */
+const NETWORK_CODE_IN_TEXT = new RegExp(`\\b(?:${[...NETWORK_ERROR_CODES].join('|')})\\b`, 'u');
+
 /** True when the error means "storage is not there or not well", as opposed to "storage said no". */
 export function isStorageUnavailable(error: unknown): boolean {
   if (error instanceof S3ServiceException) {
@@ -53,12 +56,15 @@ export function isStorageUnavailable(error: unknown): boolean {
     // No status at all: the SDK got no HTTP answer to read.
     return status === undefined || status >= 500;
   }
-  if (!(error instanceof Error)) return false;
-  if (TIMEOUT_ERROR_NAMES.has(error.name)) return true;
-  const code = (error as NodeJS.ErrnoException).code;
-  if (code !== undefined && NETWORK_ERROR_CODES.has(code)) return true;
+  // Duck-typed: an error made in another realm (Node core's, seen from a VM context) is no `instanceof Error` here.
+  if (typeof error !== 'object' || error === null) return false;
+  const { name, code, message, errors } = error as { name?: unknown; code?: unknown; message?: unknown; errors?: unknown };
+  if (typeof name === 'string' && TIMEOUT_ERROR_NAMES.has(name)) return true;
+  if (typeof code === 'string' && NETWORK_ERROR_CODES.has(code)) return true;
   // Node 20 tries every address of a host name and reports an AggregateError of the refusals.
-  return error instanceof AggregateError && error.errors.some((inner) => isStorageUnavailable(inner));
+  if (Array.isArray(errors) && errors.some((inner) => isStorageUnavailable(inner))) return true;
+  // The SDK's retry layer wraps an error it does not recognise as one and keeps only its text.
+  return typeof message === 'string' && message.startsWith('AWS SDK error wrapper for ') && NETWORK_CODE_IN_TEXT.test(message);
 }
 
 const REFUSALS: readonly MultipartRefusal[] = ['InvalidPart', 'InvalidPartOrder', 'NoSuchUpload'];
