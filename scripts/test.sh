@@ -38,6 +38,8 @@ step "dependency audit: its own tests" node --test scripts/audit.test.mjs
 step "dependency audit (npm audit; continues when the advisory service does not answer)" node scripts/audit.mjs
 step "api tests (unit + e2e on real services)" npm test -w api --silent
 step "studio component tests" npm test -w studio --silent
+# Its own profile ("faults"): it starts, stops and kills its own MariaDB, Redis and API processes, never these.
+step "fault tests (MariaDB and Redis restarted, API killed mid-job)" bash scripts/faults.sh
 
 # The browser journeys run against the built app served by its own process, as npm start serves it.
 (cd "$ROOT/api" && exec node dist/main.js) >"$FW_LOGS/api.log" 2>&1 &
