@@ -64,6 +64,9 @@ fw_profile_env() {
   # the test profile allows more attempts a minute so the journeys do not trip over each other. The limit itself
   # is tested with its own low setting (api/test/auth.e2e-spec.ts).
   export AUTH_RATE_LIMIT="${AUTH_RATE_LIMIT:-$([ "$profile" = test ] && echo 200 || echo 10)}"
+  # Public calculators, per client address a minute (all tools / the text tools); the browser journeys need room.
+  export TOOLS_RATE_LIMIT="${TOOLS_RATE_LIMIT:-$([ "$profile" = test ] && echo 10000 || echo 300)}"
+  export TOOLS_TEXT_RATE_LIMIT="${TOOLS_TEXT_RATE_LIMIT:-$([ "$profile" = test ] && echo 1000 || echo 30)}"
   # The test profile names the one the browser journey signs up with.
   export ADMIN_EMAILS="${ADMIN_EMAILS:-$([ "$profile" = test ] && echo journey-admin@fitwright.test || true)}"
 

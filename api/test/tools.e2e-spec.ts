@@ -33,7 +33,6 @@ describe('public calculators (contract in DESIGN.md)', () => {
       expect(JSON.stringify(bad.body.message)).toMatch(/jsRounding must be none or even/);
     });
 
-
     it('takes a size in inches (1 in = 25.4 mm, in the 18–30 mm range)', async () => {
       const response = await request(app.getHttpServer()).get('/api/tools/fits?size=1&unit=in&hole=H7&shaft=g6').expect(200);
       expect(response.body.clearance).toEqual({ max: 41, min: 7 });
@@ -72,6 +71,33 @@ describe('public calculators (contract in DESIGN.md)', () => {
       expect(found[1]).toMatchObject({ unit: 'mm', value: 22, millimetres: 22 });
     });
 
+    it('reads a reading said in two parts as one measurement, and says nothing was left out', async () => {
+      const text = 'Okay, the stub is two inches and fifteen thousandths.';
+      const response = await request(app.getHttpServer()).post('/api/tools/measurements/extract').send({ text }).expect(200);
+      expect(response.body).toEqual({
+        measurements: [
+          { phrase: 'two inches and fifteen thousandths', start: 18, end: 52, value: 2.015, unit: 'in', millimetres: 51.181 },
+        ],
+        total: 1,
+        truncated: false,
+      });
+    });
+
+    it('returns at most 1,000 measurements, with the total and truncated: true', async () => {
+      const text = Array.from({ length: 1_200 }, (_, index) => `${index + 1} mm`).join(', ');
+      const response = await request(app.getHttpServer()).post('/api/tools/measurements/extract').send({ text }).expect(200);
+      expect(response.body.measurements).toHaveLength(1_000);
+      expect(response.body).toMatchObject({ total: 1_200, truncated: true });
+      expect(response.body.measurements[999]).toMatchObject({ phrase: '1000 mm', value: 1000 });
+    });
+
+    it('refuses text over 200,000 characters with a 400 naming the field and the cap', async () => {
+      const text = 'a'.repeat(200_001);
+      const response = await request(app.getHttpServer()).post('/api/tools/measurements/extract').send({ text }).expect(400);
+      expect(response.body.message).toEqual([expect.stringMatching(/^text is longer than 200,000 characters/)]);
+      await request(app.getHttpServer()).post('/api/tools/measurements/extract').send({ text: text.slice(1) }).expect(200);
+    });
+
     it('refuses a body without text', async () => {
       await request(app.getHttpServer()).post('/api/tools/measurements/extract').send({ words: 'x' }).expect(400);
     });
@@ -87,6 +113,8 @@ describe('public calculators (contract in DESIGN.md)', () => {
           { startMs: 1000, endMs: 4500, text: 'Lift the gearbox onto the jack.' },
           { startMs: 5000, endMs: 9000, text: 'Check the spline.' },
         ],
+        total: 2,
+        truncated: false,
       });
     });
 
@@ -94,6 +122,45 @@ describe('public calculators (contract in DESIGN.md)', () => {
       const text = 'WEBVTT\n\n00:00:01.000 --> 00:00:04.000\nfine\n\n00:00:05 -> 9\nbroken\n';
       const response = await request(app.getHttpServer()).post('/api/tools/transcripts/parse').send({ text, format: 'webvtt' }).expect(422);
       expect(response.body).toMatchObject({ statusCode: 422, line: 6, message: expect.stringMatching(/^Line 6: /) });
+    });
+  });
+
+  describe('rate limits per client address', () => {
+    /** Its own Redis prefix, so the low limits and their blocks never touch other tests' counters. */
+    const limitedEnv = (limits: Record<string, string>) => ({ ...limits, QUEUE_PREFIX: `fitwright-test-tools-limit-${process.pid}-${Date.now()}` });
+
+    it('answers 429 with a readable message once the text tools budget is spent; other calculators still answer', async () => {
+      const limitedApp = await createTestApp(limitedEnv({ TOOLS_TEXT_RATE_LIMIT: '3', TOOLS_RATE_LIMIT: '100' }));
+      try {
+        const extract = () => request(limitedApp.getHttpServer()).post('/api/tools/measurements/extract').send({ text: 'a thou' });
+        for (let i = 0; i < 3; i += 1) await extract().expect(200);
+        const limited = await extract().expect(429);
+        expect(limited.body).toMatchObject({
+          statusCode: 429,
+          message: 'Too many calculator requests from this address. Please wait a minute and try again.',
+        });
+        expect(Number(limited.headers['retry-after-tools-text'])).toBeGreaterThan(0);
+        // Parsing shares the text budget; the fit calculator does not.
+        await request(limitedApp.getHttpServer()).post('/api/tools/transcripts/parse').send({ text: 'WEBVTT\n' }).expect(429);
+        await request(limitedApp.getHttpServer()).get('/api/tools/fits?size=25&unit=mm&hole=H7&shaft=g6').expect(200);
+      } finally {
+        await limitedApp.close();
+      }
+    });
+
+    it('counts every calculator route against one budget per address', async () => {
+      const limitedApp = await createTestApp(limitedEnv({ TOOLS_RATE_LIMIT: '4', TOOLS_TEXT_RATE_LIMIT: '100' }));
+      try {
+        const server = limitedApp.getHttpServer();
+        await request(server).get('/api/tools/fits?size=25&unit=mm&hole=H7&shaft=g6').expect(200);
+        await request(server).get('/api/tools/fits?size=10&unit=mm&hole=H7&shaft=h6').expect(200);
+        await request(server).post('/api/tools/measurements/extract').send({ text: '22 mm' }).expect(200);
+        await request(server).post('/api/tools/transcripts/parse').send({ text: 'WEBVTT\n' }).expect(200);
+        const limited = await request(server).get('/api/tools/fits?size=25&unit=mm&hole=H7&shaft=g6').expect(429);
+        expect(limited.headers['retry-after-tools']).toBeDefined();
+      } finally {
+        await limitedApp.close();
+      }
     });
   });
 });

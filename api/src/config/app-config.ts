@@ -9,6 +9,8 @@ export interface AppConfig {
   appOrigin: string;
   studioDist?: string;
   footage: { maxBytes: number };
+  /** Public calculators: requests a minute per client address, for all of them and for the text tools. */
+  tools: { rateLimitPerMinute: number; textRateLimitPerMinute: number };
   auth: { adminEmails: string[]; rateLimitPerMinute: number; csrfSecret: string };
   /** Express's `trust proxy`: whom to believe about the client's address (X-Forwarded-For). */
   trustProxy: TrustProxySetting;
@@ -42,6 +44,7 @@ export function buildAppConfig(env: EnvironmentVariables): AppConfig {
     appOrigin: env.APP_ORIGIN.replace(/\/$/, ''),
     studioDist: env.STUDIO_DIST,
     footage: { maxBytes: env.FOOTAGE_MAX_BYTES },
+    tools: { rateLimitPerMinute: env.TOOLS_RATE_LIMIT, textRateLimitPerMinute: env.TOOLS_TEXT_RATE_LIMIT },
     auth: {
       adminEmails: (env.ADMIN_EMAILS ?? '')
         .split(',')

@@ -153,6 +153,18 @@ export class EnvironmentVariables {
   @Min(1)
   AUTH_RATE_LIMIT: number = 10;
 
+  /** Requests per minute and client address on all public calculators together (/api/tools/*). */
+  @Transform(({ value }) => (value === undefined ? undefined : Number(value)))
+  @IsInt()
+  @Min(1)
+  TOOLS_RATE_LIMIT: number = 300;
+
+  /** Requests per minute and client address on the text tools (measurement extraction, transcript parsing). */
+  @Transform(({ value }) => (value === undefined ? undefined : Number(value)))
+  @IsInt()
+  @Min(1)
+  TOOLS_TEXT_RATE_LIMIT: number = 30;
+
   /**
    * Proxies allowed to name the client's address in X-Forwarded-For: a hop count, or a comma-separated list of
    * addresses, CIDR ranges and `loopback` / `linklocal` / `uniquelocal`. Empty (the default) trusts nobody, which

@@ -1,17 +1,32 @@
-import { Body, Controller, Get, HttpCode, Inject, Post, Query } from '@nestjs/common';
-import { ApiBadRequestResponse, ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
+import { Body, Controller, Get, HttpCode, Inject, Post, Query, UseGuards } from '@nestjs/common';
+import {
+  ApiBadRequestResponse,
+  ApiOkResponse,
+  ApiOperation,
+  ApiTags,
+  ApiTooManyRequestsResponse,
+  ApiUnprocessableEntityResponse,
+} from '@nestjs/swagger';
 import { Public } from '../common/decorators/access.decorator';
 import { FitQueryDto } from './dto/fit-query.dto';
 import { SplineDimensionsDto, SplineDimensionsQueryDto, SplineIdentificationDto, SplineIdentifyQueryDto } from './dto/spline-query.dto';
 import { ExtractMeasurementsDto, ParseTranscriptDto } from './dto/text-input.dto';
+import { ExtractedMeasurementsDto, ParsedTranscriptDto } from './dto/text-output.dto';
+import { TextToolsService } from './text-tools.service';
+import { TextWork, ToolsThrottlerGuard } from './tools-throttler.guard';
 import { ToolsService } from './tools.service';
 
-/** Calculators open to everyone, viewers included. */
+/** Calculators open to everyone, viewers included; rate-limited per client address (TOOLS_RATE_LIMIT, TOOLS_TEXT_RATE_LIMIT). */
 @ApiTags('tools')
 @Public()
+@UseGuards(ToolsThrottlerGuard)
+@ApiTooManyRequestsResponse({ description: 'Too many calculator requests from this address; wait a minute' })
 @Controller('tools')
 export class ToolsController {
-  constructor(@Inject(ToolsService) private readonly tools: ToolsService) {}
+  constructor(
+    @Inject(ToolsService) private readonly tools: ToolsService,
+    @Inject(TextToolsService) private readonly textTools: TextToolsService,
+  ) {}
 
   @Get('fits')
   fits(@Query() query: FitQueryDto) {
@@ -36,13 +51,20 @@ export class ToolsController {
 
   @Post('measurements/extract')
   @HttpCode(200)
-  extractMeasurements(@Body() body: ExtractMeasurementsDto) {
-    return this.tools.extractMeasurements(body.text);
+  @TextWork()
+  @ApiOkResponse({ type: ExtractedMeasurementsDto, description: 'At most 1,000 measurements; `truncated` says when there were more' })
+  @ApiBadRequestResponse({ description: 'text missing, not a string, or longer than 200,000 characters' })
+  extractMeasurements(@Body() body: ExtractMeasurementsDto): Promise<ExtractedMeasurementsDto> {
+    return this.textTools.extractMeasurements(body.text);
   }
 
   @Post('transcripts/parse')
   @HttpCode(200)
-  parseTranscript(@Body() body: ParseTranscriptDto) {
-    return this.tools.parseTranscript(body.text, body.format);
+  @TextWork()
+  @ApiOkResponse({ type: ParsedTranscriptDto, description: 'At most 5,000 cues; `truncated` says when there were more' })
+  @ApiBadRequestResponse({ description: 'text missing, not a string, or longer than 1,000,000 characters' })
+  @ApiUnprocessableEntityResponse({ description: '`{ message, line }` naming the first line the parser cannot accept' })
+  parseTranscript(@Body() body: ParseTranscriptDto): ParsedTranscriptDto {
+    return this.textTools.parseTranscript(body.text, body.format);
   }
 }

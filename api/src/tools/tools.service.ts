@@ -1,8 +1,7 @@
 import { BadRequestException, Injectable } from '@nestjs/common';
-import { extractMeasurements, fitLimits, identifySpline, parseSplinePitch, parseTranscript, splineBasicDimensions, toNanometres, UnitError } from '../engine';
+import { fitLimits, identifySpline, parseSplinePitch, splineBasicDimensions, toNanometres, UnitError } from '../engine';
 import { FitQueryDto } from './dto/fit-query.dto';
 import { SplineDimensionsQueryDto, SplineIdentifyQueryDto } from './dto/spline-query.dto';
-import { ParseTranscriptDto } from './dto/text-input.dto';
 
 @Injectable()
 export class ToolsService {
@@ -35,15 +34,6 @@ export class ToolsService {
       unit: query.unit,
       resolutionNm: query.resolution === undefined ? undefined : lengthField('resolution', query.resolution, query.unit),
     });
-  }
-
-  extractMeasurements(text: string) {
-    return { measurements: extractMeasurements(text) };
-  }
-
-  parseTranscript(text: string, format: ParseTranscriptDto['format']) {
-    const { format: detected, cues } = parseTranscript(text, format);
-    return { format: detected, cues: cues.map(({ startMs, endMs, text: cueText }) => ({ startMs, endMs, text: cueText })) };
   }
 }
 
