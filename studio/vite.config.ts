@@ -2,11 +2,14 @@
 import react from '@vitejs/plugin-react';
 import { fileURLToPath } from 'node:url';
 import { defineConfig } from 'vite';
+import { compression } from 'vite-plugin-compression2';
 
 const apiTarget = process.env.FITWRIGHT_API_URL ?? `http://127.0.0.1:${process.env.PORT ?? 3000}`;
 
 export default defineConfig({
-  plugins: [react()],
+  // Brotli and gzip copies of every text asset over 1 kB, made once at build time and served by the API
+  // (app.setup.ts) to browsers that accept them.
+  plugins: [react(), compression({ algorithms: ['brotliCompress', 'gzip'], threshold: 1024 })],
   resolve: { alias: { '@': fileURLToPath(new URL('./src', import.meta.url)) } },
   server: {
     port: 5173,

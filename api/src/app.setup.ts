@@ -2,7 +2,9 @@ import { ValidationPipe } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { NestExpressApplication } from '@nestjs/platform-express';
 import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
+import compression from 'compression';
 import cookieParser from 'cookie-parser';
+import expressStaticGzip from 'express-static-gzip';
 import type { NextFunction, Request, Response } from 'express';
 import { existsSync } from 'node:fs';
 import { join } from 'node:path';
@@ -38,6 +40,9 @@ export function configureApp(app: NestExpressApplication): void {
     }),
   );
   app.use(cookieParser());
+  // JSON answers over 1 kB are compressed (a 3,000-cue transcript is ~10× smaller); files already
+  // compressed at build time pass through untouched.
+  app.use(compression({ threshold: 1024 }));
   // Pasted transcripts run to 2 MB (JSON-escaped, a little more); Express's default JSON limit is 100 kB.
   app.useBodyParser('json', { limit: '5mb' });
   app.useGlobalPipes(
@@ -67,7 +72,21 @@ export function configureApp(app: NestExpressApplication): void {
 
 /** Serves the built single-page studio; any non-API GET that is not a file gets index.html. */
 function serveStudio(app: NestExpressApplication, dist: string): void {
-  app.useStaticAssets(dist, { index: false, maxAge: '1h', immutable: false });
+  // The build writes .br and .gz beside each asset (vite.config.ts); the smallest the browser accepts is sent.
+  // Names under assets/ carry a content hash, so they never change and may be cached for a year.
+  app.use(
+    expressStaticGzip(dist, {
+      index: false,
+      enableBrotli: true,
+      orderPreference: ['br', 'gzip'],
+      serveStatic: {
+        setHeaders: (response, path) => {
+          const hashed = path.startsWith(join(dist, 'assets'));
+          response.setHeader('Cache-Control', hashed ? 'public, max-age=31536000, immutable' : 'public, max-age=3600');
+        },
+      },
+    }),
+  );
   const indexHtml = join(dist, 'index.html');
   app.use((request: Request, response: Response, next: NextFunction) => {
     const isPageRequest = request.method === 'GET' && !request.path.startsWith('/api');

@@ -58,3 +58,24 @@ test('the served studio is a production build of React', async () => {
     assert.doesNotMatch(source, /jsxDEV/, `${url} is a development build`);
   }
 });
+
+test('scripts are sent precompressed and cached for good; JSON answers are compressed', async () => {
+  const html = await (await fetch(baseUrl)).text();
+  const [, main] = /<script[^>]+src="([^"]+)"/.exec(html);
+  const url = new URL(main, baseUrl);
+  for (const [accepted, expected] of [['br, gzip', 'br'], ['gzip', 'gzip'], ['identity', null]]) {
+    const response = await fetch(url, { headers: { 'Accept-Encoding': accepted } });
+    assert.equal(response.status, 200);
+    assert.equal(response.headers.get('content-encoding'), expected, `asked for ${accepted}`);
+    assert.match(response.headers.get('content-type'), /javascript/);
+    assert.match(response.headers.get('cache-control'), /max-age=31536000.*immutable/);
+  }
+  // The page itself is never cached for long: a new build must reach readers at once.
+  assert.equal((await fetch(baseUrl)).headers.get('cache-control'), 'no-cache');
+
+  // The API's OpenAPI document is a large JSON answer (hundreds of kB).
+  const contract = await fetch(`${baseUrl}/api/docs/openapi.json`, { headers: { 'Accept-Encoding': 'gzip' } });
+  assert.equal(contract.status, 200);
+  assert.equal(contract.headers.get('content-encoding'), 'gzip');
+  assert.ok((await contract.json()).paths, 'the compressed answer reads back as the document');
+});
