@@ -14,6 +14,7 @@ import { tokenFrom, waitForMail } from '../support/mail-inbox';
  */
 
 const ROOT = resolve(__dirname, '../../..');
+const EXIT_WITH_PARENT = join(ROOT, 'local-services/exit-with-parent.js');
 /** The API whose dist/ is run: this checkout's, or another build's (FAULTS_API_DIR) to compare. */
 const API_DIR = process.env.FAULTS_API_DIR ?? join(ROOT, 'api');
 
@@ -98,12 +99,16 @@ class Service {
   spawn(): void {
     if (this.running) throw new Error(`${this.name} is already running`);
     const log = openSync(join(faultsEnv.logs, `${this.name}.log`), 'a');
-    const child = spawn(this.command, this.args, {
+    // A Node child gets an IPC channel and exits when it closes (local-services/exit-with-parent.js), so an
+    // interrupted run leaves no API or fake behind to answer the next run in its place.
+    const isNode = this.command === 'node';
+    const child = spawn(this.command, isNode ? ['--require', EXIT_WITH_PARENT, ...this.args] : this.args, {
       cwd: this.options.cwd ?? ROOT,
       env: this.options.env ?? process.env,
-      stdio: ['ignore', log, log],
+      stdio: isNode ? ['ignore', log, log, 'ipc'] : ['ignore', log, log],
     });
     closeSync(log);
+    child.channel?.unref();
     this.child = child;
     this.exited = new Promise((done) => child.once('exit', () => done()));
   }
