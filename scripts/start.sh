@@ -4,7 +4,8 @@
 source "$(dirname "$0")/lib.sh"
 fw_profile_env dev
 
-ensure_debian_packages mariadbd=mariadb-server redis-server=redis-server ffmpeg=ffmpeg ffprobe=ffmpeg
+# espeak-ng narrates the generated demo footage (without it the demo video is silent).
+ensure_debian_packages mariadbd=mariadb-server redis-server=redis-server ffmpeg=ffmpeg ffprobe=ffmpeg espeak-ng=espeak-ng
 ensure_npm_dependencies
 trap 'stop_services' EXIT
 trap 'say "stopping"; exit 130' INT TERM

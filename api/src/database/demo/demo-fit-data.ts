@@ -57,7 +57,7 @@ const DEMO_PARTS: CreatePartDto[] = [
     features: [{ name: 'bearing bore', kind: 'diameter', role: 'hole', nominal: '15', toleranceClass: 'H7', unit: 'mm' }],
   },
   {
-    partNumber: 'OM-E90',
+    partNumber: 'OM-TR-090',
     maker: 'Ostler Motor Works',
     title: 'Traction motor, 90 kW',
     category: 'other',
@@ -121,7 +121,7 @@ export async function loadDemoFitData(app: INestApplicationContext, { workshopId
     notes: 'Motor, in-house coupler, pilot bearing and the original gearbox input shaft.',
   });
   const placements: [string, string][] = [
-    ['OM-E90', 'motor'],
+    ['OM-TR-090', 'motor'],
     ['HL-2107', 'coupler'],
     ['KB-6202-P', 'pilot bearing'],
     ['OM-G5-IN', 'gearbox input'],
@@ -148,7 +148,7 @@ export async function loadDemoFitData(app: INestApplicationContext, { workshopId
     kind: 'bore_shaft',
     name: 'coupler on motor shaft',
     featureAId: feature('HL-2107', 'motor bore'),
-    featureBId: feature('OM-E90', 'output shaft'),
+    featureBId: feature('OM-TR-090', 'output shaft'),
   });
   await assemblies.addInterface(workshopId, stack.id, creatorId, {
     kind: 'length_window',
@@ -168,7 +168,7 @@ export async function loadDemoFitData(app: INestApplicationContext, { workshopId
   await measurements.create(workshopId, creatorId, { featureId: feature('KB-6202-P', 'bearing bore'), quantity: 'diameter', value: '15.008', ...boreGauge });
   await measurements.create(workshopId, creatorId, { featureId: feature('HL-2107', 'motor bore'), quantity: 'diameter', value: '24.012', ...boreGauge });
   const motorShaft = await measurements.create(workshopId, creatorId, {
-    featureId: feature('OM-E90', 'output shaft'),
+    featureId: feature('OM-TR-090', 'output shaft'),
     quantity: 'diameter',
     value: '0.9453',
     ...micrometer,
