@@ -30,36 +30,42 @@ export const VERDICT_LOOK: Record<ChecklistVerdict, { label: string; explanation
   no_fit: { label: 'Does not fit', explanation: 'At least one required check does not fit.' },
 };
 
-/** A small shape per state: ring (open), half-filled (bench), filled with a tick (confirmed), crossed square (no fit), slashed ring (retired). */
+/** Outline of a double-ended plug gauge (go pin left, handle, no-go pin right) in a 16 × 16 box. */
+const GAUGE = 'M1 6.5H5V4.5H11V7H15V9H11V11.5H5V9.5H1Z';
+/** The same gauge drawn smaller about the box's centre, for glyphs that frame it. */
+const SMALL_GAUGE = 'translate(8 8) scale(0.62) translate(-8 -8)';
+
+/**
+ * A glyph per state, drawn from the gauge a machinist proves a fit with: an empty gauge (not proven yet),
+ * the gauge resting on the bench (passes by the numbers), the gauge in a solid tile (proven on the vehicle),
+ * the gauge under the ISO 7010 prohibition ring (no-go), a dashed ghost of it (retired). Each shape differs,
+ * so colour is never the only sign, and the state's words always stand beside it.
+ */
 export function StateIcon({ state, size = 16 }: { state: FitCheckState; size?: number }) {
   const colour = STATE_LOOK[state].colour;
   return (
     <svg width={size} height={size} viewBox="0 0 16 16" aria-hidden="true" focusable="false" data-icon={state}>
-      {state === 'open' && <circle cx="8" cy="8" r="6" fill="none" stroke={colour} strokeWidth="2" />}
+      {state === 'open' && <path d={GAUGE} fill="none" stroke={colour} strokeWidth="1.5" strokeLinejoin="round" />}
       {state === 'bench_pass' && (
         <>
-          <circle cx="8" cy="8" r="6" fill="none" stroke={colour} strokeWidth="2" />
-          <path d="M8 2a6 6 0 0 0 0 12z" fill={colour} />
+          <path d={GAUGE} transform="translate(0 -1.5)" fill={colour} />
+          <path d="M0.5 14H15.5" stroke={colour} strokeWidth="2" strokeLinecap="round" />
         </>
       )}
       {state === 'confirmed' && (
         <>
-          <circle cx="8" cy="8" r="7" fill={colour} />
-          <path d="M4.5 8.2l2.3 2.3 4.7-4.8" fill="none" stroke="#fff" strokeWidth="2" strokeLinecap="round" strokeLinejoin="round" />
+          <rect x="0.5" y="0.5" width="15" height="15" rx="3" fill={colour} />
+          <path d={GAUGE} transform={SMALL_GAUGE} fill="#fff" />
         </>
       )}
       {state === 'no_fit' && (
         <>
-          <rect x="1.5" y="1.5" width="13" height="13" rx="1.5" fill={colour} />
-          <path d="M5 5l6 6M11 5l-6 6" stroke="#fff" strokeWidth="2" strokeLinecap="round" />
+          <path d={GAUGE} transform={SMALL_GAUGE} fill={colour} />
+          <circle cx="8" cy="8" r="6.75" fill="none" stroke={colour} strokeWidth="1.5" />
+          <path d="M3.2 3.2L12.8 12.8" stroke={colour} strokeWidth="1.75" />
         </>
       )}
-      {state === 'retired' && (
-        <>
-          <circle cx="8" cy="8" r="6" fill="none" stroke={colour} strokeWidth="1.5" strokeDasharray="2 2" />
-          <path d="M3.5 12.5l9-9" stroke={colour} strokeWidth="1.5" />
-        </>
-      )}
+      {state === 'retired' && <path d={GAUGE} fill="none" stroke={colour} strokeWidth="1.25" strokeDasharray="1.5 1.5" />}
     </svg>
   );
 }
