@@ -9,6 +9,7 @@ const PHASES: Record<UploadPhase, { label: string; color: string }> = {
   uploading: { label: 'Uploading', color: 'blue' },
   paused: { label: 'Paused', color: 'gray' },
   retrying: { label: 'Waiting to retry', color: 'orange' },
+  'waiting-for-storage': { label: 'Waiting for storage', color: 'orange' },
   completing: { label: 'Finishing', color: 'blue' },
   done: { label: 'Uploaded', color: 'patina' },
   failed: { label: 'Stopped', color: 'red' },
@@ -20,7 +21,7 @@ export function UploadProgress({ upload }: { upload: MultipartUpload }) {
   const snapshot = useSyncExternalStore(upload.subscribe, upload.getSnapshot);
   const percent = snapshot.totalBytes > 0 ? (snapshot.uploadedBytes / snapshot.totalBytes) * 100 : 0;
   const phase = PHASES[snapshot.phase];
-  const canPause = snapshot.phase === 'uploading' || snapshot.phase === 'retrying';
+  const canPause = snapshot.phase === 'uploading' || snapshot.phase === 'retrying' || snapshot.phase === 'waiting-for-storage';
   const canResume = snapshot.phase === 'paused';
   const canCancel = !['done', 'cancelled', 'completing'].includes(snapshot.phase);
 

@@ -1,5 +1,5 @@
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
-import { FatalUploadError, MultipartUpload, type UploadTransport } from './multipart-upload';
+import { FatalUploadError, MultipartUpload, PartsRejectedError, StorageUnavailableError, type UploadTransport } from './multipart-upload';
 
 const PART = 8;
 
@@ -19,6 +19,12 @@ interface FakeStorage extends UploadTransport {
   /** Parts whose PUT waits until released. */
   hold: Set<number>;
   release: () => void;
+  /** Storage stopped: part PUTs and completion answer as the real transport does then. */
+  down: boolean;
+  /** How often the upload asked whether storage is back. */
+  storageChecks: number;
+  /** Every recordPart call, in order (to prove no part is recorded twice). */
+  recordCalls: number[];
 }
 
 function fakeStorage(): FakeStorage {
@@ -32,6 +38,9 @@ function fakeStorage(): FakeStorage {
     failures: new Map(),
     hold: new Set(),
     release: () => waiting.splice(0).forEach((resume) => resume()),
+    down: false,
+    storageChecks: 0,
+    recordCalls: [],
     signParts: async (partNumbers) => ({
       urls: partNumbers.map((partNumber) => ({ partNumber, url: `https://storage.test/part/${partNumber}` })),
       expiresAt: new Date(Date.now() + 15 * 60_000).toISOString(),
@@ -42,6 +51,7 @@ function fakeStorage(): FakeStorage {
       onProgress(body.size / 2);
       if (storage.hold.has(partNumber)) await new Promise<void>((resume) => waiting.push(resume));
       if (signal.aborted) throw new DOMException('aborted', 'AbortError');
+      if (storage.down) throw new StorageUnavailableError('the connection to storage failed');
       const left = storage.failures.get(partNumber) ?? 0;
       if (left > 0) {
         storage.failures.set(partNumber, left - 1);
@@ -52,13 +62,19 @@ function fakeStorage(): FakeStorage {
       return `"etag-${partNumber}"`;
     },
     recordPart: async (partNumber, etag) => {
+      storage.recordCalls.push(partNumber);
       storage.recorded.set(partNumber, etag);
     },
     complete: async () => {
+      if (storage.down) throw new StorageUnavailableError('Storage is not answering right now.');
       storage.completed += 1;
     },
     abort: async () => {
       storage.aborted += 1;
+    },
+    storageAvailable: async () => {
+      storage.storageChecks += 1;
+      return !storage.down;
     },
   };
   return storage;
@@ -218,5 +234,122 @@ describe('MultipartUpload', () => {
     expect(snapshot.uploadedBytes).toBe(12);
     expect(snapshot.bytesPerSecond).toBeGreaterThan(0);
     expect(snapshot.secondsLeft).toBe(Math.ceil((32 - 12) / (snapshot.bytesPerSecond ?? 1)));
+  });
+
+  describe('when storage stops answering', () => {
+    const CHECK = 5_000;
+
+    it('waits for storage (no try counted), checks now and then, and carries on by itself without losing or doubling parts', async () => {
+      const storage = fakeStorage();
+      storage.hold.add(2);
+      const upload = new MultipartUpload(file(32), { footageId: 'f1', partSizeBytes: PART, partCount: 4, completedParts: [] }, storage, {
+        concurrency: 1,
+        maxConsecutiveFailures: 2,
+        storageCheckMs: CHECK,
+      });
+      upload.start();
+      await settle();
+      expect(storage.recordCalls).toEqual([1]);
+
+      storage.down = true;
+      storage.release();
+      await settle();
+      expect(upload.getSnapshot()).toMatchObject({ phase: 'waiting-for-storage', uploadedBytes: 8, retryInSeconds: null });
+      expect(upload.getSnapshot().error).toMatch(/Storage is not answering/);
+
+      // Far longer than maxConsecutiveFailures tries would last: still waiting, nothing sent meanwhile.
+      const putsWhileDown = storage.puts.length;
+      await vi.advanceTimersByTimeAsync(CHECK * 5);
+      expect(storage.storageChecks).toBe(5);
+      expect(storage.puts).toHaveLength(putsWhileDown);
+      expect(upload.getSnapshot().phase).toBe('waiting-for-storage');
+
+      storage.down = false;
+      storage.hold.clear();
+      await vi.advanceTimersByTimeAsync(CHECK);
+      expect(upload.getSnapshot()).toMatchObject({ phase: 'done', uploadedBytes: 32 });
+      // Each part recorded once; only the part cut off by the outage was sent twice; one completion.
+      expect(storage.recordCalls).toEqual([1, 2, 3, 4]);
+      expect(storage.puts).toEqual([1, 2, 2, 3, 4]);
+      expect(storage.completed).toBe(1);
+    });
+
+    it('a completion refused with 503 waits for storage, then completes once', async () => {
+      const storage = fakeStorage();
+      storage.down = true;
+      const upload = new MultipartUpload(file(8), { footageId: 'f1', partSizeBytes: PART, partCount: 1, completedParts: [1] }, storage, {
+        storageCheckMs: CHECK,
+      });
+      upload.start();
+      await settle();
+      expect(upload.getSnapshot().phase).toBe('waiting-for-storage');
+      expect(storage.completed).toBe(0);
+      storage.down = false;
+      await vi.advanceTimersByTimeAsync(CHECK);
+      expect(upload.getSnapshot().phase).toBe('done');
+      expect(storage.completed).toBe(1);
+      expect(storage.puts).toEqual([]);
+    });
+
+    it('keeps an ETag the API could not take and records it later, without sending the part again', async () => {
+      const storage = fakeStorage();
+      const record = storage.recordPart;
+      let refusals = 1;
+      storage.recordPart = async (partNumber, etag) => {
+        if (refusals-- > 0) throw new StorageUnavailableError('Storage is not answering right now.');
+        await record(partNumber, etag);
+      };
+      const upload = new MultipartUpload(file(8), { footageId: 'f1', partSizeBytes: PART, partCount: 1, completedParts: [] }, storage, {
+        storageCheckMs: CHECK,
+      });
+      upload.start();
+      await settle();
+      // Storage holds the bytes: they count as sent while the record waits.
+      expect(upload.getSnapshot()).toMatchObject({ phase: 'waiting-for-storage', uploadedBytes: 8 });
+      await vi.advanceTimersByTimeAsync(CHECK);
+      expect(upload.getSnapshot().phase).toBe('done');
+      expect(storage.puts).toEqual([1]);
+      expect(storage.recorded.get(1)).toBe('"etag-1"');
+    });
+
+    it('stops checking when paused, and resumes by hand', async () => {
+      const storage = fakeStorage();
+      storage.down = true;
+      const upload = new MultipartUpload(file(8), { footageId: 'f1', partSizeBytes: PART, partCount: 1, completedParts: [] }, storage, {
+        storageCheckMs: CHECK,
+      });
+      upload.start();
+      await settle();
+      upload.pause();
+      await vi.advanceTimersByTimeAsync(CHECK * 3);
+      expect(storage.storageChecks).toBe(0);
+      expect(upload.getSnapshot().phase).toBe('paused');
+      storage.down = false;
+      upload.resume();
+      await settle();
+      expect(upload.getSnapshot().phase).toBe('done');
+    });
+  });
+
+  it('sends again the parts storage does not hold as recorded (422 on completion), then completes', async () => {
+    const storage = fakeStorage();
+    let refusedOnce = false;
+    storage.complete = async () => {
+      if (!refusedOnce) {
+        refusedOnce = true;
+        throw new PartsRejectedError([2], 'Storage does not hold part 2 as recorded');
+      }
+      storage.completed += 1;
+    };
+    const upload = new MultipartUpload(file(16), { footageId: 'f1', partSizeBytes: PART, partCount: 2, completedParts: [1, 2] }, storage, {
+      retryDelayMs: 100,
+    });
+    upload.start();
+    await settle();
+    expect(upload.getSnapshot()).toMatchObject({ phase: 'retrying', uploadedBytes: 8 });
+    await vi.advanceTimersByTimeAsync(100);
+    expect(storage.puts).toEqual([2]);
+    expect(upload.getSnapshot().phase).toBe('done');
+    expect(storage.completed).toBe(1);
   });
 });

@@ -17,6 +17,8 @@ export interface UploadTransport {
   recordPart(partNumber: number, etag: string): Promise<void>;
   complete(): Promise<void>;
   abort(): Promise<void>;
+  /** Whether storage answers again (the API's health check); asked while the upload waits for it. */
+  storageAvailable(): Promise<boolean>;
 }
 
 export interface UploadPlan {
@@ -32,6 +34,8 @@ export type UploadPhase =
   | 'paused'
   /** The browser is offline, or parts keep failing: waiting before the next try. */
   | 'retrying'
+  /** Storage does not answer: checking now and then, and carrying on by itself when it does. */
+  | 'waiting-for-storage'
   | 'completing'
   | 'done'
   | 'failed'
@@ -60,11 +64,29 @@ export interface UploadOptions {
   /** First retry delay; doubles each failure, up to `maxRetryDelayMs`. */
   retryDelayMs?: number;
   maxRetryDelayMs?: number;
+  /** How often to ask whether storage is back while waiting for it. */
+  storageCheckMs?: number;
   now?: () => number;
 }
 
 /** A failure the upload must not retry (the footage is gone, the upload finished elsewhere). */
 export class FatalUploadError extends Error {}
+
+/** Storage is down (the API answered 503, or a part could not reach storage while health says so). */
+export class StorageUnavailableError extends Error {}
+
+/** Storage does not hold these parts as recorded (the API forgot them): they are sent again. */
+export class PartsRejectedError extends Error {
+  constructor(
+    readonly partNumbers: number[],
+    message: string,
+  ) {
+    super(message);
+  }
+}
+
+const WAITING_FOR_STORAGE =
+  'Storage is not answering. Finished parts are kept; the upload carries on by itself when storage is back.';
 
 const SPEED_WINDOW_MS = 5_000;
 /** Re-sign a part URL when it has less than this left. */
@@ -77,6 +99,8 @@ export class MultipartUpload {
   private readonly inFlight = new Map<number, { loaded: number; controller: AbortController }>();
   /** Parts storage has, whose ETag is being recorded with the API. */
   private readonly recording = new Set<number>();
+  /** Parts storage has whose ETag the API has not taken yet: recorded again, never sent again. */
+  private readonly unrecorded = new Map<number, string>();
   private readonly signed = new Map<number, { url: string; expiresAt: number }>();
   private readonly listeners = new Set<() => void>();
   private readonly samples: { at: number; bytes: number }[] = [];
@@ -98,6 +122,7 @@ export class MultipartUpload {
       maxConsecutiveFailures: options.maxConsecutiveFailures ?? 8,
       retryDelayMs: options.retryDelayMs ?? 1_000,
       maxRetryDelayMs: options.maxRetryDelayMs ?? 30_000,
+      storageCheckMs: options.storageCheckMs ?? 5_000,
       now: options.now ?? (() => Date.now()),
     };
     for (const partNumber of plan.completedParts) this.done.add(partNumber);
@@ -165,13 +190,20 @@ export class MultipartUpload {
   private pending(): number[] {
     const parts: number[] = [];
     for (let number = 1; number <= this.plan.partCount; number += 1) {
-      if (!this.done.has(number) && !this.inFlight.has(number) && !this.recording.has(number)) parts.push(number);
+      if (!this.done.has(number) && !this.inFlight.has(number) && !this.recording.has(number) && !this.unrecorded.has(number)) {
+        parts.push(number);
+      }
     }
     return parts;
   }
 
   private pump(): void {
     if (this.phase !== 'uploading') return;
+    for (const [partNumber, etag] of [...this.unrecorded]) {
+      this.unrecorded.delete(partNumber);
+      this.recording.add(partNumber);
+      void this.record(partNumber, etag);
+    }
     const waiting = this.pending();
     if (waiting.length === 0 && this.inFlight.size === 0 && this.recording.size === 0) {
       void this.finish();
@@ -237,7 +269,9 @@ export class MultipartUpload {
       this.done.add(partNumber);
       this.consecutiveFailures = 0;
     } catch (error) {
-      // Unrecorded, the part is sent again later; a pause or cancel meanwhile needs no report.
+      // Storage has the bytes: keep the ETag and record it later rather than send the part again.
+      if (!(error instanceof FatalUploadError)) this.unrecorded.set(partNumber, etag);
+      // A pause or cancel meanwhile needs no report.
       if (this.phase === 'uploading') this.fail(error);
       return;
     } finally {
@@ -253,6 +287,10 @@ export class MultipartUpload {
       this.error = error.message;
       this.abortInFlight();
       this.changed();
+      return;
+    }
+    if (error instanceof StorageUnavailableError) {
+      this.waitForStorage();
       return;
     }
     this.consecutiveFailures += 1;
@@ -281,6 +319,36 @@ export class MultipartUpload {
     this.changed();
   }
 
+  /**
+   * Storage is down: stop sending (no try counts as a failure, however long it lasts), ask now and
+   * then whether it is back, and carry on by itself when it is. Pause and cancel still work.
+   */
+  private waitForStorage(): void {
+    this.abortInFlight();
+    this.signed.clear();
+    this.clearRetry();
+    this.phase = 'waiting-for-storage';
+    this.error = WAITING_FOR_STORAGE;
+    const check = () => {
+      this.retryTimer = setTimeout(() => {
+        this.retryTimer = undefined;
+        if (this.phase !== 'waiting-for-storage') return;
+        this.transport.storageAvailable().then(
+          (available) => {
+            if (this.phase !== 'waiting-for-storage') return;
+            if (available) this.start();
+            else check();
+          },
+          () => {
+            if (this.phase === 'waiting-for-storage') check();
+          },
+        );
+      }, this.options.storageCheckMs);
+    };
+    check();
+    this.changed();
+  }
+
   private async finish(): Promise<void> {
     if (this.phase !== 'uploading') return;
     this.phase = 'completing';
@@ -289,6 +357,17 @@ export class MultipartUpload {
       await this.transport.complete();
       this.phase = 'done';
     } catch (error) {
+      if (error instanceof StorageUnavailableError) {
+        this.waitForStorage();
+        return;
+      }
+      if (error instanceof PartsRejectedError && error.partNumbers.length > 0) {
+        // The API forgot parts storage does not hold as recorded: send exactly those again.
+        for (const partNumber of error.partNumbers) this.done.delete(partNumber);
+        this.phase = 'uploading';
+        this.fail(error);
+        return;
+      }
       this.phase = error instanceof FatalUploadError ? 'failed' : 'paused';
       this.error = `Finishing the upload failed (${messageOf(error)}).${this.phase === 'paused' ? ' Press resume to try again.' : ''}`;
     }
@@ -312,7 +391,7 @@ export class MultipartUpload {
       const start = (partNumber - 1) * this.plan.partSizeBytes;
       bytes += Math.min(this.plan.partSizeBytes, this.file.size - start);
     }
-    for (const partNumber of this.recording) {
+    for (const partNumber of [...this.recording, ...this.unrecorded.keys()]) {
       const start = (partNumber - 1) * this.plan.partSizeBytes;
       bytes += Math.min(this.plan.partSizeBytes, this.file.size - start);
     }

@@ -1,11 +1,57 @@
 import { ApiError, apiRequest } from '@/lib/api-client';
 import type { Footage, UploadState } from '../api/types';
-import { FatalUploadError, type SignedPart, type UploadTransport } from './multipart-upload';
+import {
+  FatalUploadError,
+  PartsRejectedError,
+  type SignedPart,
+  StorageUnavailableError,
+  type UploadTransport,
+} from './multipart-upload';
 
-/** 404 (the footage was deleted) and 409 (the upload finished or was cancelled elsewhere) will not get better by retrying. */
-function fatalOr(error: unknown): unknown {
-  if (error instanceof ApiError && (error.status === 404 || error.status === 409)) return new FatalUploadError(error.message);
+/**
+ * 404 (the footage was deleted) and 409 (the upload finished or was cancelled elsewhere) will not get
+ * better by retrying; 503 means storage is down (wait for it); 422 on completion names parts storage
+ * does not hold as recorded (send them again).
+ */
+function classify(error: unknown): unknown {
+  if (!(error instanceof ApiError)) return error;
+  if (error.status === 404 || error.status === 409) return new FatalUploadError(error.message);
+  if (error.status === 503) return new StorageUnavailableError(error.message);
+  const invalidParts = (error.body as { invalidParts?: unknown } | null)?.invalidParts;
+  if (error.status === 422 && Array.isArray(invalidParts)) {
+    return new PartsRejectedError(invalidParts.filter((part): part is number => Number.isInteger(part)), error.message);
+  }
   return error;
+}
+
+/** The browser got no answer from storage at all (refused, reset, DNS), as opposed to an HTTP error status. */
+class PartConnectionError extends Error {}
+
+/** What the API's health check says of storage; false when the API cannot be asked either. */
+export async function storageAvailable(): Promise<boolean> {
+  try {
+    const report = await apiRequest<{ checks?: { storage?: string } }>('/health', { acceptStatuses: [503] });
+    return report.checks?.storage === 'up';
+  } catch {
+    return false;
+  }
+}
+
+/** A part PUT that could not reach storage: when health says storage is down, wait for it instead of counting tries. */
+async function putPartOrWaitForStorage(
+  url: string,
+  body: Blob,
+  onProgress: (sentBytes: number) => void,
+  signal: AbortSignal,
+): Promise<string> {
+  try {
+    return await putPart(url, body, onProgress, signal);
+  } catch (error) {
+    if (error instanceof PartConnectionError && !signal.aborted && !(await storageAvailable())) {
+      throw new StorageUnavailableError(error.message);
+    }
+    throw error;
+  }
 }
 
 /**
@@ -23,7 +69,7 @@ export function putPart(url: string, body: Blob, onProgress: (sentBytes: number)
       else if (request.status >= 200 && request.status < 300) reject(new Error('storage did not expose the ETag header (check its CORS rules)'));
       else reject(new Error(`storage answered ${request.status}`));
     };
-    request.onerror = () => reject(new Error('the connection to storage failed'));
+    request.onerror = () => reject(new PartConnectionError('the connection to storage failed'));
     request.ontimeout = () => reject(new Error('storage did not answer in time'));
     request.onabort = () => reject(new DOMException('aborted', 'AbortError'));
     signal.addEventListener('abort', () => request.abort(), { once: true });
@@ -36,16 +82,16 @@ export function uploadTransport(workshopId: string, footageId: string): UploadTr
   return {
     signParts: (partNumbers) =>
       apiRequest<{ urls: SignedPart[]; expiresAt: string }>(`${base}/part-urls`, { method: 'POST', body: { partNumbers } }).catch(
-        (error: unknown) => Promise.reject(fatalOr(error)),
+        (error: unknown) => Promise.reject(classify(error)),
       ),
-    putPart,
+    putPart: putPartOrWaitForStorage,
     recordPart: async (partNumber, etag) => {
       await apiRequest(`${base}/parts/${partNumber}`, { method: 'PUT', body: { etag } }).catch((error: unknown) =>
-        Promise.reject(fatalOr(error)),
+        Promise.reject(classify(error)),
       );
     },
     complete: async () => {
-      await apiRequest<Footage>(`${base}/complete`, { method: 'POST' }).catch((error: unknown) => Promise.reject(fatalOr(error)));
+      await apiRequest<Footage>(`${base}/complete`, { method: 'POST' }).catch((error: unknown) => Promise.reject(classify(error)));
     },
     abort: async () => {
       await apiRequest<void>(base, { method: 'DELETE' }).catch((error: unknown) => {
@@ -53,6 +99,7 @@ export function uploadTransport(workshopId: string, footageId: string): UploadTr
         if (!(error instanceof ApiError && error.status === 404)) throw error;
       });
     },
+    storageAvailable,
   };
 }
 
