@@ -1,5 +1,5 @@
 import { type ChildProcess, execFileSync, spawn } from 'node:child_process';
-import { closeSync, existsSync, mkdirSync, openSync } from 'node:fs';
+import { closeSync, existsSync, mkdirSync, openSync, readFileSync } from 'node:fs';
 import { createConnection } from 'node:net';
 import { join, resolve } from 'node:path';
 import request from 'supertest';
@@ -282,7 +282,21 @@ export class FaultApiProcess {
   }
 
   async start(): Promise<void> {
+    const log = join(faultsEnv.logs, `api-${this.entry}.log`);
+    const readyLinesBefore = this.readyLines(log);
     this.service.spawn();
+    if (this.entry === 'worker') {
+      // dist/worker.js serves no HTTP: it is ready when it logs that it works the queues.
+      await waitUntil(
+        'the worker to start',
+        () => {
+          if (!this.service.running) throw new Error(`the worker exited; see ${log}`);
+          return this.readyLines(log) > readyLinesBefore;
+        },
+        60_000,
+        200,
+      );
+    }
     if (this.entry === 'main') {
       await waitUntil(
         'the API to answer /api/health',
@@ -294,6 +308,10 @@ export class FaultApiProcess {
         200,
       );
     }
+  }
+
+  private readyLines(log: string): number {
+    return existsSync(log) ? readFileSync(log, 'utf8').split('queue worker running').length - 1 : 0;
   }
 
   kill(signal: NodeJS.Signals): void {
