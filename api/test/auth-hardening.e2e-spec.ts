@@ -160,6 +160,13 @@ describe('auth hardening (real MariaDB, Redis and mail fake)', () => {
       expect((await attempt(account.email, account.password)).status).toBe(200);
     });
 
+    it('documents the pause in the OpenAPI document', async () => {
+      const document = (await request(app.getHttpServer()).get('/api/docs/openapi.json').expect(200)).body;
+      const tooMany = document.paths['/api/auth/login'].post.responses['429'];
+      expect(tooMany.description).toMatch(/sign_in_paused/);
+      expect(tooMany.headers['Retry-After']).toBeDefined();
+    });
+
     it('counts simultaneous attempts too: a parallel burst of 12 gets at most five password checks', async () => {
       const email = uniqueEmail('burst');
       const browsers = await Promise.all(Array.from({ length: 12 }, () => browserAgent(app)));

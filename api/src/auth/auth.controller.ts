@@ -70,6 +70,12 @@ export class AuthController {
   @HttpCode(HttpStatus.OK)
   @ApiOkResponse({ type: MeResponseDto, description: 'Signed in; the session cookie is set' })
   @ApiUnauthorizedResponse({ description: 'The e-mail address or password is incorrect (one answer for both)' })
+  @ApiTooManyRequestsResponse({
+    description:
+      'Too many attempts from this client address a minute, or (code `sign_in_paused`) too many failed sign-ins for ' +
+      'this e-mail address: after five, each failure pauses it twice as long (30 s up to 15 min), known address or not',
+    headers: { 'Retry-After': { description: 'Seconds until this address may try again', schema: { type: 'integer' } } },
+  })
   async login(
     @Body() dto: LoginDto,
     @Req() request: Request,
@@ -112,7 +118,10 @@ export class AuthController {
   @RateLimited()
   @Post('password/forgot')
   @HttpCode(HttpStatus.ACCEPTED)
-  @ApiAcceptedResponse({ type: MessageDto, description: 'Same answer whether or not the address has an account' })
+  @ApiAcceptedResponse({
+    type: MessageDto,
+    description: 'Same answer, after the same work, whether or not the address has an account: a job looks it up and mails a link',
+  })
   async forgotPassword(@Body() dto: ForgotPasswordDto): Promise<MessageDto> {
     await this.auth.forgotPassword(dto.email);
     return { message: 'If an account uses this address, a link to choose a new password is on its way.' };
