@@ -15,7 +15,7 @@ export class ToolsService {
       teeth: query.teeth,
       pitch: parseSplinePitch(query.pitch),
       pressureAngle: query.pressureAngle,
-      root: query.root,
+      root: query.root ?? (query.pressureAngle === 30 ? 'flat' : 'fillet'),
       fit: query.fit,
     });
   }

@@ -27,9 +27,13 @@ export class SplineDimensionsQueryDto {
   @IsIn([30, 37.5, 45], { message: 'pressureAngle must be 30, 37.5 or 45' })
   pressureAngle: 30 | 37.5 | 45 = 30;
 
-  @ApiPropertyOptional({ enum: ['flat', 'fillet'], default: 'flat', description: '37.5° and 45° splines have fillet roots only' })
+  @ApiPropertyOptional({
+    enum: ['flat', 'fillet'],
+    description: 'Default: flat for 30°, fillet for 37.5° and 45° (which have fillet roots only)',
+  })
+  @IsOptional()
   @IsIn(['flat', 'fillet'], { message: 'root must be flat or fillet' })
-  root: 'flat' | 'fillet' = 'flat';
+  root?: 'flat' | 'fillet';
 
   @ApiPropertyOptional({ enum: ['side', 'major'], default: 'side', description: 'major: ANSI B92.1 30° flat-root major-diameter fit' })
   @IsIn(['side', 'major'], { message: 'fit must be side or major' })
