@@ -1,16 +1,23 @@
 import { ValidationPipe } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
+import { Reflector } from '@nestjs/core';
 import { NestExpressApplication } from '@nestjs/platform-express';
 import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
 import compression from 'compression';
 import cookieParser from 'cookie-parser';
 import expressStaticGzip from 'express-static-gzip';
+import type { IncomingMessage } from 'node:http';
 import type { NextFunction, Request, Response } from 'express';
 import { existsSync } from 'node:fs';
 import { join } from 'node:path';
 import helmet from 'helmet';
 import { AppConfig } from './config/app-config';
 import { AllExceptionsFilter } from './common/filters/all-exceptions.filter';
+import { JSON_TOO_DEEP } from './common/filters/request-errors';
+import { jsonNestingExceeds } from './common/http/json-depth';
+import { NoStoreInterceptor } from './common/interceptors/no-store.interceptor';
+import { RejectControlCharactersPipe } from './common/pipes/control-characters';
+import { ObjectBodyPipe } from './common/pipes/object-body.pipe';
 import { validationException } from './common/pipes/validation-errors';
 
 /** Everything main.ts and the e2e tests share, so tests exercise the app as it is served. */
@@ -44,8 +51,10 @@ export function configureApp(app: NestExpressApplication): void {
   // compressed at build time pass through untouched.
   app.use(compression({ threshold: 1024 }));
   // Pasted transcripts run to 2 MB (JSON-escaped, a little more); Express's default JSON limit is 100 kB.
-  app.useBodyParser('json', { limit: '5mb' });
+  app.useBodyParser('json', { limit: '5mb', verify: refuseDeepJson });
   app.useGlobalPipes(
+    new ObjectBodyPipe(),
+    new RejectControlCharactersPipe(),
     new ValidationPipe({
       whitelist: true,
       forbidNonWhitelisted: true,
@@ -55,6 +64,7 @@ export function configureApp(app: NestExpressApplication): void {
     }),
   );
   app.useGlobalFilters(new AllExceptionsFilter());
+  app.useGlobalInterceptors(new NoStoreInterceptor(app.get(Reflector)));
 
   const document = SwaggerModule.createDocument(
     app,
@@ -68,6 +78,15 @@ export function configureApp(app: NestExpressApplication): void {
 
   const studioDist = config.get('studioDist', { infer: true });
   if (studioDist && existsSync(join(studioDist, 'index.html'))) serveStudio(app, studioDist);
+}
+
+/** No request of ours nests deeper than a few levels; a hostile one is refused before parsing and validation recurse into it. */
+const MAX_JSON_DEPTH = 32;
+
+function refuseDeepJson(_request: IncomingMessage, _response: unknown, body: Buffer): void {
+  if (jsonNestingExceeds(body, MAX_JSON_DEPTH)) {
+    throw Object.assign(new Error(`The request body nests deeper than ${MAX_JSON_DEPTH} levels`), { status: 400, type: JSON_TOO_DEEP });
+  }
 }
 
 /** Serves the built single-page studio; any non-API GET that is not a file gets index.html. */

@@ -145,7 +145,9 @@ export class AssembliesService {
       .where({ id: In(ids) })
       .getMany();
     if (features.length !== ids.length) {
-      throw new BadRequestException('Each feature must belong to a part placed in this assembly');
+      const missing = features.some((feature) => feature.id === ids[0]) ? 'featureBId' : 'featureAId';
+      const sentence = 'Each feature must belong to a part placed in this assembly';
+      throw new BadRequestException({ message: sentence, errors: { [missing]: sentence } });
     }
     const wanted = FEATURE_KIND_FOR_INTERFACE[input.kind];
     const wrong = features.find((feature) => feature.kind !== wanted);

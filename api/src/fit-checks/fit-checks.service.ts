@@ -23,6 +23,7 @@ import { FitCheckEvent } from './entities/fit-check-event.entity';
 import { FitCheckEvidence } from './entities/fit-check-evidence.entity';
 import { FitCheck, type CheckKind } from './entities/fit-check.entity';
 import { FIT_CHECK_CHANGED, type FitCheckChangedEvent } from './fit-checks.events';
+import { referenceNotFound } from '../common/http/field-errors';
 
 /** A phone photo of the test fit. */
 export const EVIDENCE_PHOTO_MAX_BYTES = 15 * 1024 * 1024;
@@ -268,7 +269,7 @@ export class FitChecksService {
       input.kind === 'mark'
         ? await this.marks.existsBy({ id: given, workshopId })
         : await this.measurements.existsBy({ id: given, workshopId });
-    if (!found) throw new NotFoundException(input.kind === 'mark' ? 'Mark not found' : 'Measurement not found');
+    if (!found) throw input.kind === 'mark' ? referenceNotFound('markId', 'Mark') : referenceNotFound('measurementId', 'Measurement');
     // The same mark or reading counts once per check (a check-evidence mark is attached when it is made).
     const already = await this.evidence.findOneBy(input.kind === 'mark' ? { fitCheckId: check.id, markId: given } : { fitCheckId: check.id, measurementId: given });
     if (already) return already;

@@ -14,6 +14,7 @@ import { User } from '../users/entities/user.entity';
 import { Workshop } from '../workshops/entities/workshop.entity';
 import type { CreateFitReportDto, UpdateFitReportDto } from './dto/fit-report.dto';
 import { FitReport, type FitReportStatus } from './entities/fit-report.entity';
+import { referenceNotFound } from '../common/http/field-errors';
 
 export const FIT_REPORT_PHOTO_MAX_BYTES = 15 * 1024 * 1024;
 const MAX_PHOTOS = 6;
@@ -98,7 +99,7 @@ export class FitReportsService {
     if (!report) throw new NotFoundException('Fit report not found');
     if (input.fitCheckId !== undefined) {
       if (input.fitCheckId !== null && !(await this.checks.existsBy({ id: input.fitCheckId, workshopId }))) {
-        throw new NotFoundException('Fit check not found');
+        throw referenceNotFound('fitCheckId', 'Fit check');
       }
       report.fitCheckId = input.fitCheckId;
       // Tying a fresh report to a check is starting to verify it.

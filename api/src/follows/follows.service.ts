@@ -44,7 +44,9 @@ export class FollowsService {
   /** Following twice gives back the first follow; `created` says which happened. */
   async follow(userId: string, kind: FollowTargetKind, targetId: string) {
     const target = await this.target(kind, targetId);
-    if (!target || !(await this.mayFollow(userId, target))) throw new NotFoundException(NOTHING_TO_FOLLOW);
+    if (!target || !(await this.mayFollow(userId, target))) {
+      throw new NotFoundException({ message: NOTHING_TO_FOLLOW, errors: { targetId: NOTHING_TO_FOLLOW }, code: 'reference_not_found' });
+    }
     const existing = await this.follows.findOneBy({ userId, targetKind: kind, targetId });
     if (existing) return { follow: (await this.describe([existing]))[0], created: false };
     try {

@@ -13,6 +13,7 @@ import { MarkSuggestion, SuggestionStatus } from './entities/mark-suggestion.ent
 import { resolutionOfDigits } from './spoken-reading';
 import { GuideStep } from '../guides/entities/guide-step.entity';
 import { Guide } from '../guides/entities/guide.entity';
+import { referenceNotFound } from '../common/http/field-errors';
 
 type LinkField = keyof Required<MarkLinksDto>;
 
@@ -229,16 +230,16 @@ export class MarksService {
         );
       }
     }
-    if (mark.partId && !(await this.parts.existsBy({ id: mark.partId, workshopId }))) throw new NotFoundException('Part not found');
+    if (mark.partId && !(await this.parts.existsBy({ id: mark.partId, workshopId }))) throw referenceNotFound('partId', 'Part');
     if (mark.measurementId && !(await this.measurementRows.existsBy({ id: mark.measurementId, workshopId }))) {
-      throw new NotFoundException('Measurement not found');
+      throw referenceNotFound('measurementId', 'Measurement');
     }
     if (mark.fitCheckId && !(await this.fitChecks.existsBy({ id: mark.fitCheckId, workshopId }))) {
-      throw new NotFoundException('Fit check not found');
+      throw referenceNotFound('fitCheckId', 'Fit check');
     }
     if (mark.guideStepId) {
       const step = await this.guideSteps.findOneBy({ id: mark.guideStepId });
-      if (!step || !(await this.guides.existsBy({ id: step.guideId, workshopId }))) throw new NotFoundException('Guide step not found');
+      if (!step || !(await this.guides.existsBy({ id: step.guideId, workshopId }))) throw referenceNotFound('guideStepId', 'Guide step');
     }
   }
 }

@@ -2,6 +2,7 @@ import { BadRequestException, Inject, Injectable, NotFoundException } from '@nes
 import { EventEmitter2 } from '@nestjs/event-emitter';
 import { InjectRepository } from '@nestjs/typeorm';
 import { DataSource, Repository } from 'typeorm';
+import { referenceNotFound } from '../common/http/field-errors';
 import { EngineError } from '../engine/engine-error';
 import { toNanometres } from '../engine/units';
 import { CreateMeasurementDto, ListMeasurementsQueryDto } from './dto/measurement.dto';
@@ -32,6 +33,7 @@ export class MeasurementsService {
       throw new BadRequestException('Give exactly one subject: featureId (a part feature) or interfaceId (an interface)');
     }
     const subject = await this.describeSubject(workshopId, input.featureId ?? null, input.interfaceId ?? null);
+    await this.checkFootageMoment(workshopId, input.footageId, input.footageTimeMs);
     const valueNm = this.nanometres(input.value, input.unit, 'value');
     const resolutionNm = this.nanometres(input.resolution, input.unit, 'resolution');
     if (resolutionNm <= 0) throw new BadRequestException('resolution must be greater than zero');
@@ -89,7 +91,7 @@ export class MeasurementsService {
          WHERE f.id = ? AND p.workshop_id = ?`,
         [featureId, workshopId],
       );
-      if (!row) throw new NotFoundException('Part feature not found');
+      if (!row) throw referenceNotFound('featureId', 'Part feature');
       return `${row.name} on ${row.part_number}`;
     }
     const [row] = await this.dataSource.query<{ name: string }[]>(
@@ -97,8 +99,24 @@ export class MeasurementsService {
        WHERE i.id = ? AND a.workshop_id = ?`,
       [interfaceId, workshopId],
     );
-    if (!row) throw new NotFoundException('Interface not found');
+    if (!row) throw referenceNotFound('interfaceId', 'Interface');
     return row.name;
+  }
+
+  /** The footage must be this workshop's, and the moment inside it (when its length is known). */
+  private async checkFootageMoment(workshopId: string, footageId: string | undefined, timeMs: number | undefined): Promise<void> {
+    if (!footageId) {
+      if (timeMs !== undefined) throw fieldError('footageTimeMs', 'footageTimeMs needs footageId: say which footage shows the reading');
+      return;
+    }
+    const [footage] = await this.dataSource.query<{ duration_ms: number | null }[]>(
+      'SELECT duration_ms FROM footage WHERE id = ? AND workshop_id = ?',
+      [footageId, workshopId],
+    );
+    if (!footage) throw referenceNotFound('footageId', 'Footage');
+    if (timeMs !== undefined && footage.duration_ms !== null && timeMs > footage.duration_ms) {
+      throw fieldError('footageTimeMs', `footageTimeMs ${timeMs} is past the end of the footage (${footage.duration_ms} ms)`);
+    }
   }
 
   private nanometres(value: string, unit: CreateMeasurementDto['unit'], field: string): number {
@@ -113,4 +131,8 @@ export class MeasurementsService {
   private announce(event: MeasurementChangedEvent): Promise<unknown> {
     return this.events.emitAsync(MEASUREMENT_CHANGED, event);
   }
+}
+
+function fieldError(field: string, sentence: string): BadRequestException {
+  return new BadRequestException({ message: sentence, errors: { [field]: sentence } });
 }

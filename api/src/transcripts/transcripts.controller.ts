@@ -111,7 +111,7 @@ export class TranscriptsController {
   }
 
   @Get('footage/:footageId/transcript/webvtt')
-  @Header('Cache-Control', 'private, no-cache')
+  @Header('Cache-Control', 'no-store')
   @ApiProduces('text/vtt')
   @ApiOkResponse({ description: 'The transcript as a WebVTT file, for a `<track>` element or a download' })
   async exportWebVtt(

@@ -1,8 +1,9 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
-import { Transform, Type } from 'class-transformer';
+import { Transform } from 'class-transformer';
 import { IsInt, IsOptional, IsString, Max, MaxLength, Min } from 'class-validator';
 import { AdminWorkshopView } from '../../workshops/dto/workshop-views.dto';
 import { SessionUserDto } from '../../users/dto/session-user.dto';
+import { NumberFromText } from '../../common/decorators/number-from-text.decorator';
 
 export class AdminSearchDto {
   @ApiPropertyOptional({ description: 'Part of a name, e-mail address or web address' })
@@ -14,7 +15,7 @@ export class AdminSearchDto {
 
   @ApiPropertyOptional({ minimum: 1, default: 1 })
   @IsOptional()
-  @Type(() => Number)
+  @NumberFromText()
   @IsInt({ message: 'Page must be a whole number' })
   @Min(1, { message: 'Page must be 1 or more' })
   @Max(10_000)

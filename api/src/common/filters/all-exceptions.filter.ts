@@ -3,13 +3,7 @@ import type { Response } from 'express';
 import { EngineError } from '../../engine/engine-error';
 import { databaseUnavailableBody } from './database-unavailable';
 import { queueUnavailableBody } from './queue-unavailable';
-
-interface ErrorBody {
-  statusCode: number;
-  message: string | string[];
-  error?: string;
-  [detail: string]: unknown;
-}
+import { bodyParserErrorBody, databaseErrorBody, type ErrorBody } from './request-errors';
 
 /** Shapes every error as JSON `{ statusCode, message, ... }`; unexpected errors are logged, never leaked. */
 @Catch()
@@ -21,6 +15,9 @@ export class AllExceptionsFilter implements ExceptionFilter {
     const body = this.toBody(exception);
     if (body.statusCode >= 500) {
       this.logger.error(exception instanceof Error ? (exception.stack ?? exception.message) : String(exception));
+    } else if (databaseErrorBody(exception)) {
+      // A service let the database find a bad reference or value: answered 4xx, but the check belongs in the service.
+      this.logger.warn(`database refused input: ${exception instanceof Error ? exception.message : String(exception)}`);
     }
     response.status(body.statusCode).json(body);
   }
@@ -39,6 +36,11 @@ export class AllExceptionsFilter implements ExceptionFilter {
       if (exception.line !== undefined) body.line = exception.line;
       return body;
     }
-    return databaseUnavailableBody(exception) ?? queueUnavailableBody(exception) ?? { statusCode: HttpStatus.INTERNAL_SERVER_ERROR, message: 'Internal server error' };
+    return (
+      bodyParserErrorBody(exception) ??
+      databaseUnavailableBody(exception) ??
+      queueUnavailableBody(exception) ??
+      databaseErrorBody(exception) ?? { statusCode: HttpStatus.INTERNAL_SERVER_ERROR, message: 'Internal server error' }
+    );
   }
 }

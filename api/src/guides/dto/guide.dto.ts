@@ -10,11 +10,13 @@ import {
   IsString,
   IsUUID,
   Length,
+  Max,
   MaxLength,
   Min,
   ValidateIf,
   ValidateNested,
 } from 'class-validator';
+import { MAX_FOOTAGE_MS } from '../../common/http/limits';
 import { CAUTION_LEVELS, SAFETY_TOPICS, type CautionLevel, type SafetyTopic } from '../../engine/safety-topics';
 
 /** Rich text arrives as Tiptap HTML; the server keeps only the allowed tags (see rich-text.ts). */
@@ -107,17 +109,17 @@ export class StepFieldsDto {
   @ApiPropertyOptional({ nullable: true, example: 42_000, description: 'The step’s moment in the footage, ms' })
   @IsOptional()
   @ValidateIf((_, value) => value !== null)
-  @Type(() => Number)
   @IsInt()
   @Min(0)
+  @Max(MAX_FOOTAGE_MS, { message: '$property must be at most 86400000 (24 hours, in ms)' })
   startMs?: number | null;
 
   @ApiPropertyOptional({ nullable: true, description: 'End of the step’s span, ms (after startMs)' })
   @IsOptional()
   @ValidateIf((_, value) => value !== null)
-  @Type(() => Number)
   @IsInt()
   @Min(0)
+  @Max(MAX_FOOTAGE_MS, { message: '$property must be at most 86400000 (24 hours, in ms)' })
   endMs?: number | null;
 
   @ApiPropertyOptional({ type: StepCautionDto, nullable: true })

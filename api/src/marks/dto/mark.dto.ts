@@ -1,6 +1,6 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
-import { Type } from 'class-transformer';
-import { IsIn, IsInt, IsOptional, IsString, IsUUID, Matches, MaxLength, Min, ValidateIf } from 'class-validator';
+import { IsIn, IsInt, IsOptional, IsString, IsUUID, Matches, Max, MaxLength, Min, ValidateIf } from 'class-validator';
+import { MAX_FOOTAGE_MS } from '../../common/http/limits';
 import { QUANTITIES, INSTRUMENT_KINDS, type InstrumentKind, type Quantity } from '../../measurements/entities/measurement.entity';
 import { MARK_KINDS, type MarkKind } from '../entities/mark.entity';
 import { SUGGESTION_STATUSES, type SuggestionStatus } from '../entities/mark-suggestion.entity';
@@ -34,17 +34,17 @@ export class MarkLinksDto {
 
 export class CreateMarkDto extends MarkLinksDto {
   @ApiProperty({ example: 95_000, description: 'Time in the footage, ms' })
-  @Type(() => Number)
   @IsInt()
   @Min(0)
+  @Max(MAX_FOOTAGE_MS, { message: '$property must be at most 86400000 (24 hours, in ms)' })
   startMs!: number;
 
   @ApiPropertyOptional({ example: 101_500, nullable: true, description: 'End of a span, ms (after startMs)' })
   @IsOptional()
   @ValidateIf((_, value) => value !== null)
-  @Type(() => Number)
   @IsInt()
   @Min(0)
+  @Max(MAX_FOOTAGE_MS, { message: '$property must be at most 86400000 (24 hours, in ms)' })
   endMs?: number | null;
 
   @ApiProperty({ enum: MARK_KINDS })
@@ -61,17 +61,17 @@ export class CreateMarkDto extends MarkLinksDto {
 export class UpdateMarkDto extends MarkLinksDto {
   @ApiPropertyOptional()
   @IsOptional()
-  @Type(() => Number)
   @IsInt()
   @Min(0)
+  @Max(MAX_FOOTAGE_MS, { message: '$property must be at most 86400000 (24 hours, in ms)' })
   startMs?: number;
 
   @ApiPropertyOptional({ nullable: true })
   @IsOptional()
   @ValidateIf((_, value) => value !== null)
-  @Type(() => Number)
   @IsInt()
   @Min(0)
+  @Max(MAX_FOOTAGE_MS, { message: '$property must be at most 86400000 (24 hours, in ms)' })
   endMs?: number | null;
 
   @ApiPropertyOptional({ enum: MARK_KINDS })

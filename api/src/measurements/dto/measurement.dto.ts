@@ -1,5 +1,4 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
-import { Type } from 'class-transformer';
 import {
   IsDateString,
   IsIn,
@@ -13,6 +12,7 @@ import {
   MaxLength,
   Min,
 } from 'class-validator';
+import { MAX_FOOTAGE_MS } from '../../common/http/limits';
 import { LENGTH_UNITS, type LengthUnit } from '../../engine/units';
 import { INSTRUMENT_KINDS, QUANTITIES, type InstrumentKind, type Quantity } from '../entities/measurement.entity';
 
@@ -62,8 +62,7 @@ export class CreateMeasurementDto {
 
   @ApiPropertyOptional({ example: 20.5 })
   @IsOptional()
-  @Type(() => Number)
-  @IsNumber()
+  @IsNumber({ allowNaN: false, allowInfinity: false })
   @Min(-60)
   @Max(200)
   temperatureC?: number;
@@ -80,9 +79,9 @@ export class CreateMeasurementDto {
 
   @ApiPropertyOptional({ example: 95000, description: 'Time in that footage, ms' })
   @IsOptional()
-  @Type(() => Number)
   @IsInt()
   @Min(0)
+  @Max(MAX_FOOTAGE_MS, { message: '$property must be at most 86400000 (24 hours, in ms)' })
   footageTimeMs?: number;
 
   @ApiPropertyOptional()

@@ -20,6 +20,7 @@ import {
 import { LENGTH_UNITS, type LengthUnit } from '../../engine/units';
 import { FEATURE_KINDS, type FeatureKind } from '../entities/part-feature.entity';
 import { PART_CATEGORIES, PART_SOURCES, type PartCategory, type PartSource } from '../entities/part.entity';
+import { NumberFromText } from '../../common/decorators/number-from-text.decorator';
 
 /** A length written in the feature's unit, e.g. "0.669" with unit "in". Parsed exactly on the server. */
 const DECIMAL = /^\s*(\d+(\.\d*)?|\.\d+)(\s+\d+\/\d+)?\s*$|^\s*\d+\/\d+\s*$/;
@@ -59,20 +60,23 @@ export class FeatureInputDto {
 
   @ApiPropertyOptional({ example: 16, description: 'ANSI B92.1 diametral pitch P (the 16 of 16/32)' })
   @IsOptional()
-  @IsNumber()
+  @IsNumber({ allowNaN: false, allowInfinity: false })
   @IsPositive()
+  @Max(1000)
   diametralPitch?: number;
 
   @ApiPropertyOptional({ example: 32, description: 'stub pitch (the 32 of 16/32)' })
   @IsOptional()
-  @IsNumber()
+  @IsNumber({ allowNaN: false, allowInfinity: false })
   @IsPositive()
+  @Max(1000)
   stubPitch?: number;
 
   @ApiPropertyOptional({ example: 1.25, description: 'ISO 4156 module, mm' })
   @IsOptional()
-  @IsNumber()
+  @IsNumber({ allowNaN: false, allowInfinity: false })
   @IsPositive()
+  @Max(1000)
   module?: number;
 
   @ApiPropertyOptional({ example: '1.375' })
@@ -199,8 +203,9 @@ export class ListPartsQueryDto {
 
   @ApiPropertyOptional({ example: 21, description: 'only parts with a spline of this tooth count' })
   @IsOptional()
-  @Type(() => Number)
+  @NumberFromText()
   @IsInt()
   @Min(1)
+  @Max(200)
   splineTeeth?: number;
 }

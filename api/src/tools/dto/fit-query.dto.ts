@@ -1,10 +1,10 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
-import { Type } from 'class-transformer';
 import { IsIn, IsNumber, IsOptional, IsPositive, Matches } from 'class-validator';
+import { NumberFromText } from '../../common/decorators/number-from-text.decorator';
 
 export class FitQueryDto {
   @ApiProperty({ example: 25, description: 'Nominal size, in `unit`' })
-  @Type(() => Number)
+  @NumberFromText()
   @IsNumber({ allowNaN: false, allowInfinity: false }, { message: 'size must be a number' })
   @IsPositive({ message: 'size must be greater than zero' })
   size!: number;
