@@ -277,10 +277,21 @@ describe('extractMeasurements', () => {
         sliceCount += 1;
         slice = slices.next();
       }
-      expect(slice.value).toEqual(extractMeasurements(text));
-      expect(slice.value).toHaveLength(2_000);
+      expect(slice.value.measurements).toEqual(extractMeasurements(text));
+      expect(slice.value).toMatchObject({ total: 2_000, measurements: expect.any(Array) });
+      expect(slice.value.measurements).toHaveLength(2_000);
       // About 80,000 characters and 16,000 tokens: several slices, each a few thousand characters or a thousand tokens.
       expect(sliceCount).toBeGreaterThan(text.length / 4_096);
+    });
+
+    it('builds at most `limit` measurements and counts the rest', () => {
+      const text = `${BENCH_TALK}\n`.repeat(30);
+      const all = extractMeasurements(text);
+      const slices = extractMeasurementsInSlices(text, { limit: 25 });
+      let slice = slices.next();
+      while (!slice.done) slice = slices.next();
+      expect(slice.value.total).toBe(all.length);
+      expect(slice.value.measurements).toEqual(all.slice(0, 25));
     });
   });
 

@@ -38,6 +38,13 @@ export interface SpokenMeasurement {
   millimetres: number;
 }
 
+export interface ExtractedMeasurements {
+  /** In text order; at most the limit asked for. */
+  measurements: SpokenMeasurement[];
+  /** How many measurements the text holds (counted past the limit too). */
+  total: number;
+}
+
 export interface PartNumberMention {
   /** The part number as it was given to `findPartNumbers`. */
   partNumber: string;
@@ -410,8 +417,9 @@ class MeasurementScanner {
    * Each start position reads a bounded number of tokens ahead (number words are capped, units are
    * one or three words), and a hit moves past its phrase, so the scan is linear in the token count.
    */
-  *scan(): Generator<void, SpokenMeasurement[], void> {
+  *scan(limit: number): Generator<void, ExtractedMeasurements, void> {
     const found: SpokenMeasurement[] = [];
+    let total = 0;
     let sliceEnd = SLICE_TOKENS;
     for (let index = 0; index < this.tokens.length; ) {
       if (index >= sliceEnd) {
@@ -424,8 +432,12 @@ class MeasurementScanner {
         index += 1;
         continue;
       }
+      total += 1;
       const start = this.tokens[index].start;
       const end = this.tokens[measured.next - 1].end;
+      index = measured.next;
+      // Past the limit a hit is only counted: the exact arithmetic is the costly part.
+      if (found.length >= limit) continue;
       const value = times(measured.quantity, measured.scale.size);
       found.push({
         phrase: this.text.slice(start, end),
@@ -435,9 +447,8 @@ class MeasurementScanner {
         unit: measured.scale.unit,
         millimetres: toRoundedNumber(times(value, MILLIMETRES_PER_UNIT[measured.scale.unit]), 6),
       });
-      index = measured.next;
     }
-    return found;
+    return { measurements: found, total };
   }
 
   private measurementAt(index: number): Measured | null {
@@ -733,16 +744,19 @@ class MeasurementScanner {
  * counts only when a unit follows. Bare "in" counts only after a decimal or a fraction.
  */
 export function extractMeasurements(text: string): SpokenMeasurement[] {
-  return runToEnd(extractMeasurementsInSlices(text));
+  return runToEnd(extractMeasurementsInSlices(text)).measurements;
 }
 
 /**
  * `extractMeasurements` cut into slices of a few milliseconds: each `next()` does one slice and the
  * last returns the measurements, so a server can let other requests run between slices.
  */
-export function* extractMeasurementsInSlices(text: string): Generator<void, SpokenMeasurement[], void> {
+export function* extractMeasurementsInSlices(
+  text: string,
+  options: { limit?: number } = {},
+): Generator<void, ExtractedMeasurements, void> {
   const tokens = yield* tokenizeForMeasurements(text);
-  return yield* new MeasurementScanner(text, tokens).scan();
+  return yield* new MeasurementScanner(text, tokens).scan(options.limit ?? Number.POSITIVE_INFINITY);
 }
 
 /* ---------------------------------------------------------------- part numbers */
