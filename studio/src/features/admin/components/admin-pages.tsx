@@ -8,8 +8,8 @@ import { notifyError } from '@/lib/notify';
 import { useSession } from '@/lib/session';
 import { useSetUserDisabled, useSetWorkshopDisabled } from '../api/mutations';
 import { adminQueries } from '../api/queries';
+import { formatDate } from '@/lib/dates';
 
-const dateFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium' });
 
 function AdminFrame({ children }: { children: ReactNode }) {
   const navigate = useNavigate();
@@ -160,7 +160,7 @@ export function AdminUsersPage() {
             </Group>
           </Table.Td>
           <Table.Td>
-            <Text size="sm">{dateFormat.format(new Date(user.createdAt))}</Text>
+            <Text size="sm">{formatDate(user.createdAt)}</Text>
           </Table.Td>
           <Table.Td>
             <Group justify="flex-end">

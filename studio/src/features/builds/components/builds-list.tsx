@@ -6,6 +6,7 @@ import { paths } from '@/config/paths';
 import { buildQueries } from '../api/queries';
 import { BuildCreateForm } from './build-create-form';
 import { BUILD_STATUS_LABELS } from './build-labels';
+import { formatDate } from '@/lib/dates';
 
 export function BuildsList({ workshopId }: { workshopId: string }) {
   const builds = useQuery(buildQueries.list(workshopId));
@@ -46,7 +47,7 @@ export function BuildsList({ workshopId }: { workshopId: string }) {
                   <Table.Td>
                     <Badge variant="light">{BUILD_STATUS_LABELS[build.status]}</Badge>
                   </Table.Td>
-                  <Table.Td>{new Date(build.updatedAt).toLocaleDateString()}</Table.Td>
+                  <Table.Td>{formatDate(build.updatedAt)}</Table.Td>
                 </Table.Tr>
               ))}
             </Table.Tbody>

@@ -10,6 +10,7 @@ import { ACTION_LABELS } from './transition-modal';
 import { WhatIfPanel } from './what-if-panel';
 import { useAddPhotoEvidence } from '../api/mutations';
 import { notifyError } from '@/lib/notify';
+import { formatDate } from '@/lib/dates';
 
 const KIND_LABELS: Record<FitCheck['kind'], string> = {
   spline_match: 'Computed: spline match',
@@ -131,7 +132,7 @@ export function CheckCard(props: CheckCardProps) {
                   {item.note && ` — ${item.note}`}
                   <Text span size="xs" c="dimmed">
                     {' '}
-                    (attached {new Date(item.createdAt).toLocaleDateString()})
+                    (attached {formatDate(item.createdAt)})
                   </Text>
                 </List.Item>
               ))}

@@ -11,6 +11,7 @@ import type { ReadingChoice } from './evidence-form';
 import { HistoryDrawer } from './history-drawer';
 import { ManualCheckForm } from './manual-check-form';
 import { TransitionModal, type TransitionRequest } from './transition-modal';
+import { formatDate } from '@/lib/dates';
 
 const DEVIATION_UNITS = [
   { value: 'um' as const, label: 'µm' },
@@ -28,7 +29,7 @@ function subjectNames(assembly: ChecklistAssembly): Map<string, string> {
 }
 
 function readingLabel(reading: Reading): string {
-  return `${reading.shown} · ${reading.instrument.kind.replace(/_/g, ' ')} · ${new Date(reading.takenAt).toLocaleDateString()}`;
+  return `${reading.shown} · ${reading.instrument.kind.replace(/_/g, ' ')} · ${formatDate(reading.takenAt)}`;
 }
 
 /** Readings worth attaching to a check: those of its own interface's parts first, or any in the assembly for a manual check. */

@@ -2,6 +2,7 @@ import { Alert, Drawer, Skeleton, Stack, Text, Timeline } from '@mantine/core';
 import { useQuery } from '@tanstack/react-query';
 import { fitCheckQueries, type FitCheck } from '../api/queries';
 import { StateIcon, STATE_LOOK } from '@/components/check-state';
+import { formatDateTime } from '@/lib/dates';
 
 /** Every state a check has been in, who or what moved it, and why. */
 export function HistoryDrawer({ workshopId, check, onClose }: { workshopId: string; check: FitCheck | null; onClose: () => void }) {
@@ -23,7 +24,7 @@ function HistoryList({ workshopId, checkId }: { workshopId: string; checkId: str
           <Stack gap={2}>
             <Text size="sm">{event.reason}</Text>
             <Text size="xs" c="dimmed">
-              {new Date(event.at).toLocaleString()} · {event.actorId ? 'by a member' : 'by the fit engine'}
+              {formatDateTime(event.at)} · {event.actorId ? 'by a member' : 'by the fit engine'}
               {event.from && event.from !== event.to ? ` · was ${STATE_LOOK[event.from].label}` : ''}
             </Text>
           </Stack>

@@ -4,7 +4,8 @@ import { Link } from 'react-router-dom';
 import { CheckStateBadge } from '@/components/check-state';
 import { paths } from '@/config/paths';
 import { fitReportQueries, type FitReport } from '../api/queries';
-import { formatDate, OutcomeLabel, STATUS_FOR_REPORTER } from './report-words';
+import { OutcomeLabel, STATUS_FOR_REPORTER } from './report-words';
+import { formatDate } from '@/lib/dates';
 
 /** The account page's list of the fit reports I sent, with how each workshop answered. */
 export function MyFitReports() {

@@ -6,8 +6,9 @@ import { notifyDone, notifyError } from '@/lib/notify';
 import { useUpdateFitReport } from '../api/mutations';
 import { FIT_REPORT_LIMITS, FIT_REPORT_STATUSES, type FitReport, type FitReportChanges, type FitReportStatus } from '../api/queries';
 import { ReportPhotos } from './report-photos';
-import { formatDate, OutcomeLabel, STATUS_WORDS } from './report-words';
+import { OutcomeLabel, STATUS_WORDS } from './report-words';
 import { TieCheckForm } from './tie-check-form';
+import { formatDate } from '@/lib/dates';
 
 function Detail({ label, children }: { label: string; children: string }) {
   return (

@@ -46,8 +46,3 @@ export function OutcomeLabel({ outcome }: { outcome: FitReportOutcome }) {
   );
 }
 
-const dateFormat = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric' });
-
-export function formatDate(iso: string): string {
-  return dateFormat.format(new Date(iso));
-}

@@ -6,6 +6,7 @@ import { renderWithProviders } from '@/testing/render';
 import type { FitReport, FitReportChanges } from '../api/queries';
 import { testReport } from './test-reports';
 import { WorkshopFitReports } from './workshop-fit-reports';
+import { formatDate } from '@/lib/dates';
 
 vi.mock('@/lib/notify', () => ({ notifyError: vi.fn(), notifyDone: vi.fn() }));
 
@@ -103,7 +104,7 @@ describe('WorkshopFitReports', () => {
     const first = screen.getAllByTestId('fit-report')[0];
     expect(within(first).getByTestId('report-outcome').textContent).toBe('It fit');
     expect(within(first).getByTestId('report-origin').textContent).toBe(
-      'From Morgan Tull · 4 Mar 2026 · Fitting the motor-to-gearbox coupler · build Motor-to-gearbox coupler',
+      `From Morgan Tull · ${formatDate('2026-03-04T10:00:00.000Z')} · Fitting the motor-to-gearbox coupler · build Motor-to-gearbox coupler`,
     );
     expect(within(first).getByRole('link', { name: 'Fitting the motor-to-gearbox coupler' }).getAttribute('href')).toBe(
       '/guides/harrow-lane-garage/motor-to-gearbox-coupler',

@@ -3,6 +3,7 @@ import type { CheckEvidence, ChecklistVerdict, PublishedChecklist } from '../api
 import { CheckStateBadge } from '@/components/check-state';
 import classes from './guide-view.module.css';
 import { formatClock } from '@/lib/clock';
+import { formatDate } from '@/lib/dates';
 
 const VERDICT_WORDS: Record<ChecklistVerdict, { label: string; explanation: string }> = {
   open: { label: 'Not proven yet', explanation: 'Some required checks are still open.' },
@@ -13,7 +14,6 @@ const VERDICT_WORDS: Record<ChecklistVerdict, { label: string; explanation: stri
 
 const EVIDENCE_WORDS: Record<CheckEvidence['kind'], string> = { mark: 'Video', measurement: 'Measurement', photo: 'Photo' };
 
-const dateFormat = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric' });
 
 export interface ChecklistPanelProps {
   checklist: PublishedChecklist;
@@ -64,7 +64,7 @@ export function ChecklistPanel({ checklist, onSeek }: ChecklistPanelProps) {
                   )}
                   {check.confirmedAt && (
                     <Text size="xs" c="dimmed">
-                      Confirmed {dateFormat.format(new Date(check.confirmedAt))}
+                      Confirmed {formatDate(check.confirmedAt)}
                     </Text>
                   )}
                 </div>

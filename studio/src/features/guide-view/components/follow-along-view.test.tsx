@@ -4,6 +4,7 @@ import { stubApi } from '@/testing/api-stub';
 import { renderWithProviders } from '@/testing/render';
 import { FollowAlongView } from './follow-along-view';
 import { testGuide } from './test-guide';
+import { formatDate } from '@/lib/dates';
 
 const GUIDE_PATH = /^\/guides\/harrow-lane-garage\/motor-to-gearbox-coupler$/;
 
@@ -28,7 +29,7 @@ describe('FollowAlongView', () => {
     const requests = stubApi([{ path: GUIDE_PATH, body: testGuide() }]);
     renderGuide();
     expect(await screen.findByRole('heading', { level: 1, name: 'Fitting the motor-to-gearbox coupler' })).toBeTruthy();
-    expect(screen.getByTestId('guide-revision').textContent).toBe('Revision 3 · published 2 March 2026 · Longer driveshaft');
+    expect(screen.getByTestId('guide-revision').textContent).toBe(`Revision 3 · published ${formatDate('2026-03-02T10:00:00.000Z')} · Longer driveshaft`);
     expect(screen.getAllByTestId('caution')[0].getAttribute('data-level')).toBe('DANGER');
     const video = screen.getByTestId('guide-video') as HTMLVideoElement;
     expect(video.getAttribute('src')).toBe('/api/guides/harrow-lane-garage/motor-to-gearbox-coupler/video');

@@ -18,8 +18,8 @@ import { PartsPanel, SuppliesPanel } from './parts-panel';
 import { currentStepId } from './playback';
 import { StepList } from './step-list';
 import { TranscriptPanel } from './transcript-panel';
+import { formatDate } from '@/lib/dates';
 
-const longDate = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'long', year: 'numeric' });
 
 /** The tab's title names the guide while it is open (and on the printout's header line). */
 function useGuideTitle(title: string) {
@@ -63,7 +63,7 @@ export function GuideDocument({ data, followSlot, reportSlot }: { data: Publishe
               {guide.vehicle ? ` · ${guide.vehicle}` : ''}
             </Text>
             <Text size="sm" data-testid="guide-revision">
-              Revision {revision.number} · published {longDate.format(new Date(revision.publishedAt))}
+              Revision {revision.number} · published {formatDate(revision.publishedAt)}
               {revision.note ? ` · ${revision.note}` : ''}
             </Text>
             {/* An API from before follows sends no targets: then there is nothing to offer. */}

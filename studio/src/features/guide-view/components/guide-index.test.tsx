@@ -3,6 +3,7 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import { stubApi } from '@/testing/api-stub';
 import { renderWithProviders } from '@/testing/render';
 import { GuideIndex } from './guide-index';
+import { formatDate } from '@/lib/dates';
 
 const CARD = {
   workshop: { name: 'Harrow Lane Garage', slug: 'harrow-lane-garage' },
@@ -27,7 +28,7 @@ describe('GuideIndex', () => {
     expect(link.getAttribute('href')).toBe('/guides/harrow-lane-garage/motor-to-gearbox-coupler');
     expect(within(card).getByText('Harrow Lane Garage')).toBeTruthy();
     expect(within(card).getByText('Build: Motor-to-gearbox coupler')).toBeTruthy();
-    expect(within(card).getByText('Revision 2 · 2 Mar 2026 · 5 steps')).toBeTruthy();
+    expect(within(card).getByText(`Revision 2 · ${formatDate('2026-03-02T10:00:00.000Z')} · 5 steps`)).toBeTruthy();
   });
 
   it('asks the API with the search once typing pauses', async () => {

@@ -7,8 +7,8 @@ import { paths } from '@/config/paths';
 import { guideViewQueries } from '../api/queries';
 import type { PublishedGuideSummary } from '../api/types';
 import classes from './guide-view.module.css';
+import { formatDate } from '@/lib/dates';
 
-const shortDate = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric' });
 
 function GuideCard({ guide }: { guide: PublishedGuideSummary }) {
   const to = paths.publicGuide.to(guide.workshop.slug, guide.slug);
@@ -39,7 +39,7 @@ function GuideCard({ guide }: { guide: PublishedGuideSummary }) {
           Build: {guide.buildTitle}
         </Text>
         <Text size="xs" c="dimmed">
-          Revision {guide.revision} · {shortDate.format(new Date(guide.publishedAt))} · {guide.stepCount}{' '}
+          Revision {guide.revision} · {formatDate(guide.publishedAt)} · {guide.stepCount}{' '}
           {guide.stepCount === 1 ? 'step' : 'steps'}
         </Text>
       </Stack>

@@ -8,7 +8,8 @@ import { paths } from '@/config/paths';
 import { splitApiErrors } from '@/lib/form-errors';
 import { useCreateGuide } from '../api/mutations';
 import { guideQueries } from '../api/queries';
-import { dateTimeFormat, GuideStatusBadges } from './guide-status';
+import { GuideStatusBadges } from './guide-status';
+import { formatDateTime } from '@/lib/dates';
 
 /** A build's guides on its page: where each stands, and a new one by its title. */
 export function BuildGuides({ workshopId, buildId }: { workshopId: string; buildId: string }) {
@@ -100,7 +101,7 @@ export function BuildGuides({ workshopId, buildId }: { workshopId: string; build
                     )}
                   </Table.Td>
                   <Table.Td>
-                    <Text size="sm">{dateTimeFormat.format(new Date(guide.updatedAt))}</Text>
+                    <Text size="sm">{formatDateTime(guide.updatedAt)}</Text>
                   </Table.Td>
                 </Table.Tr>
               ))}

@@ -1,8 +1,6 @@
 import { Badge, Group } from '@mantine/core';
 import type { Guide, PublishedRevision } from '../api/types';
 
-export const dateTimeFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
-
 /** One line for where a guide stands, in words (the badges' colours only help). */
 export function describeStatus(guide: { status: Guide['status']; publishedRevision: PublishedRevision | null }): string {
   if (guide.status === 'published' && guide.publishedRevision) return `Published — revision ${guide.publishedRevision.number}`;

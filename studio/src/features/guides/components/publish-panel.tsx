@@ -8,7 +8,8 @@ import { notifyDone, notifyError } from '@/lib/notify';
 import { usePublishRevision, useWithdrawGuide } from '../api/mutations';
 import { guideQueries } from '../api/queries';
 import type { Guide } from '../api/types';
-import { dateTimeFormat, describeStatus, GuideStatusBadges } from './guide-status';
+import { describeStatus, GuideStatusBadges } from './guide-status';
+import { formatDateTime } from '@/lib/dates';
 
 const NOTE_MAX = 500;
 
@@ -65,7 +66,7 @@ export function PublishPanel({ workshopId, guide }: { workshopId: string; guide:
           </Text>
           {lastRevision && (
             <Text size="sm" c="dimmed">
-              Revision {lastRevision.number} published {dateTimeFormat.format(new Date(lastRevision.publishedAt))}
+              Revision {lastRevision.number} published {formatDateTime(lastRevision.publishedAt)}
             </Text>
           )}
           {published && guide.hasUnpublishedChanges && (
@@ -150,7 +151,7 @@ export function PublishPanel({ workshopId, guide }: { workshopId: string; guide:
                     <Text span fw={600} size="sm">
                       Revision {revision.number}
                     </Text>{' '}
-                    · {dateTimeFormat.format(new Date(revision.publishedAt))}
+                    · {formatDateTime(revision.publishedAt)}
                     {revision.publishedBy && ` · ${revision.publishedBy.displayName}`}
                   </Text>
                   {revision.note && (

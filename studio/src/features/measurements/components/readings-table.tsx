@@ -3,6 +3,7 @@ import type { ReactNode } from 'react';
 import { formatLength, unitLabel, type LengthUnit } from '@/lib/units';
 import type { Measurement } from '../api/queries';
 import { INSTRUMENT_LABELS, QUANTITY_LABELS } from './measurement-labels';
+import { formatDate } from '@/lib/dates';
 
 export interface ReadingsTableProps {
   measurements: Measurement[];
@@ -57,7 +58,7 @@ export function ReadingsTable({ measurements, unit, renderActions }: ReadingsTab
                   </Text>
                 )}
               </Table.Td>
-              <Table.Td>{new Date(measurement.takenAt).toLocaleDateString()}</Table.Td>
+              <Table.Td>{formatDate(measurement.takenAt)}</Table.Td>
               {renderActions && <Table.Td>{renderActions(measurement)}</Table.Td>}
             </Table.Tr>
           ))}

@@ -6,8 +6,8 @@ import { paths } from '@/config/paths';
 import { useSession } from '@/lib/session';
 import { useAcceptInvitation } from '../api/mutations';
 import { workshopQueries } from '../api/queries';
+import { formatDate } from '@/lib/dates';
 
-const dateFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'long' });
 
 /**
  * The invitation link's page: says who invited whom to what; a signed-out visitor signs in or signs up
@@ -39,7 +39,7 @@ export function AcceptInvitationPage({ token }: { token: string | null }) {
         </Text>
         {invitation.status === 'accepted' && <Alert color="gray">This invitation has already been accepted.</Alert>}
         {invitation.status === 'expired' && (
-          <Alert color="yellow">This invitation expired on {dateFormat.format(new Date(invitation.expiresAt))}. Ask for a new one.</Alert>
+          <Alert color="yellow">This invitation expired on {formatDate(invitation.expiresAt)}. Ask for a new one.</Alert>
         )}
         {invitation.status === 'pending' && !user && (
           <Stack gap="xs">

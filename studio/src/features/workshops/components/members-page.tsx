@@ -18,12 +18,12 @@ import {
 import { workshopQueries, type Member, type MemberRole, type Workshop } from '../api/queries';
 import { WorkshopGate } from './workshop-gate';
 import { WorkshopHeader } from './workshop-header';
+import { formatDate } from '@/lib/dates';
 
 const ROLE_OPTIONS = [
   { value: 'editor', label: 'Editor' },
   { value: 'owner', label: 'Owner' },
 ];
-const dateFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium' });
 
 function MemberRow({ workshop, member, isMe, canManage }: { workshop: Workshop; member: Member; isMe: boolean; canManage: boolean }) {
   const changeRole = useChangeRole(workshop.id);
@@ -78,7 +78,7 @@ function MemberRow({ workshop, member, isMe, canManage }: { workshop: Workshop; 
         )}
       </Table.Td>
       <Table.Td visibleFrom="sm">
-        <Text size="sm">{dateFormat.format(new Date(member.joinedAt))}</Text>
+        <Text size="sm">{formatDate(member.joinedAt)}</Text>
       </Table.Td>
       <Table.Td>
         {canManage && !isMe && (
@@ -184,7 +184,7 @@ function PendingInvitations({ workshopId }: { workshopId: string }) {
                 {invitation.expired ? (
                   <Badge color="yellow">expired</Badge>
                 ) : (
-                  <Text size="sm">{dateFormat.format(new Date(invitation.expiresAt))}</Text>
+                  <Text size="sm">{formatDate(invitation.expiresAt)}</Text>
                 )}
               </Table.Td>
               <Table.Td>
