@@ -1,13 +1,13 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
-import { Type } from 'class-transformer';
 import { IsIn, IsInt, IsNumber, IsOptional, IsPositive, IsString, Max, MaxLength, Min, ValidateIf } from 'class-validator';
+import { NumberFromText } from '../../common/decorators/number-from-text.decorator';
 import { MAX_PITCH_TEXT_LENGTH, MAX_SPLINE_TEETH, MIN_SPLINE_TEETH } from '../../engine';
 
 const TEETH_MESSAGE = `teeth must be a whole number from ${MIN_SPLINE_TEETH} to ${MAX_SPLINE_TEETH}`;
 
 export class SplineDimensionsQueryDto {
   @ApiProperty({ example: 21, minimum: MIN_SPLINE_TEETH, maximum: MAX_SPLINE_TEETH })
-  @Type(() => Number)
+  @NumberFromText()
   @IsInt({ message: TEETH_MESSAGE })
   @Min(MIN_SPLINE_TEETH, { message: TEETH_MESSAGE })
   @Max(MAX_SPLINE_TEETH, { message: TEETH_MESSAGE })
@@ -23,7 +23,7 @@ export class SplineDimensionsQueryDto {
   pitch!: string;
 
   @ApiPropertyOptional({ enum: [30, 37.5, 45], default: 30, description: 'Pressure angle, degrees' })
-  @Type(() => Number)
+  @NumberFromText()
   @IsIn([30, 37.5, 45], { message: 'pressureAngle must be 30, 37.5 or 45' })
   pressureAngle: 30 | 37.5 | 45 = 30;
 
@@ -42,7 +42,7 @@ export class SplineDimensionsQueryDto {
 
 export class SplineIdentifyQueryDto {
   @ApiProperty({ example: 20, minimum: MIN_SPLINE_TEETH, maximum: MAX_SPLINE_TEETH })
-  @Type(() => Number)
+  @NumberFromText()
   @IsInt({ message: TEETH_MESSAGE })
   @Min(MIN_SPLINE_TEETH, { message: TEETH_MESSAGE })
   @Max(MAX_SPLINE_TEETH, { message: TEETH_MESSAGE })
@@ -50,14 +50,14 @@ export class SplineIdentifyQueryDto {
 
   @ApiPropertyOptional({ example: 26.67, description: "Measured major (outside) diameter of a shaft's spline, in `unit`; give this or minorDiameter" })
   @ValidateIf((query: SplineIdentifyQueryDto) => query.minorDiameter === undefined || query.majorDiameter !== undefined)
-  @Type(() => Number)
+  @NumberFromText()
   @IsNumber({ allowNaN: false, allowInfinity: false }, { message: 'majorDiameter must be a number (or give minorDiameter instead)' })
   @IsPositive({ message: 'majorDiameter must be greater than zero' })
   majorDiameter?: number;
 
   @ApiPropertyOptional({ example: 1.25, description: "Measured minor diameter (the bore) of a hub's spline, in `unit`" })
   @IsOptional()
-  @Type(() => Number)
+  @NumberFromText()
   @IsNumber({ allowNaN: false, allowInfinity: false }, { message: 'minorDiameter must be a number' })
   @IsPositive({ message: 'minorDiameter must be greater than zero' })
   minorDiameter?: number;
@@ -68,7 +68,7 @@ export class SplineIdentifyQueryDto {
 
   @ApiPropertyOptional({ example: 0.01, description: "The instrument's resolution in `unit`; default 0.01 mm or 0.001 in (a common caliper)" })
   @IsOptional()
-  @Type(() => Number)
+  @NumberFromText()
   @IsNumber({ allowNaN: false, allowInfinity: false }, { message: 'resolution must be a number' })
   @IsPositive({ message: 'resolution must be greater than zero' })
   resolution?: number;
