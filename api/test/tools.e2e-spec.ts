@@ -125,6 +125,23 @@ describe('public calculators (contract in DESIGN.md)', () => {
     });
   });
 
+  it('documents the text tools\' answers, caps and rate limit in OpenAPI', async () => {
+    const response = await request(app.getHttpServer()).get('/api/docs/openapi.json').expect(200);
+    const document = response.body as {
+      paths: Record<string, { post: { responses: Record<string, { content?: { 'application/json': { schema: { $ref: string } } } }> } }>;
+      components: { schemas: Record<string, { properties: Record<string, unknown>; required?: string[] }> };
+    };
+    for (const [path, schemaName] of [
+      ['/api/tools/measurements/extract', 'ExtractedMeasurementsDto'],
+      ['/api/tools/transcripts/parse', 'ParsedTranscriptDto'],
+    ]) {
+      const { responses } = document.paths[path].post;
+      expect(Object.keys(responses)).toEqual(expect.arrayContaining(['200', '400', '429']));
+      expect(responses['200'].content?.['application/json'].schema.$ref).toBe(`#/components/schemas/${schemaName}`);
+      expect(document.components.schemas[schemaName].required).toEqual(expect.arrayContaining(['total', 'truncated']));
+    }
+  });
+
   describe('rate limits per client address', () => {
     /** Its own Redis prefix, so the low limits and their blocks never touch other tests' counters. */
     const limitedEnv = (limits: Record<string, string>) => ({ ...limits, QUEUE_PREFIX: `fitwright-test-tools-limit-${process.pid}-${Date.now()}` });
