@@ -291,6 +291,15 @@ describe('auth hardening (real MariaDB, Redis and mail fake)', () => {
       await signIn(signedOutCsrf).expect(200);
     });
 
+    it('answers a refusal for a token that does not fit with one that does, so the studio can simply try again', async () => {
+      const account = await signUpAndSignIn(app);
+      const browser = await signInByHand(account.email, account.password);
+      const refused = await rename(browser.session, browser.anonymousCsrf, browser.ip, 'Refused').expect(403);
+      const replacement = cookieValue(setCookies(refused), 'fw_csrf')!;
+      expect(replacement).toBeDefined();
+      await rename(browser.session, replacement, browser.ip, 'Second try').expect(200);
+    });
+
     it('hands out a fitting token on GET /api/auth/me when the browser holds one that does not fit', async () => {
       const account = await signUpAndSignIn(app);
       const browser = await signInByHand(account.email, account.password);

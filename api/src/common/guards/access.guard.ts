@@ -74,6 +74,8 @@ export class AccessGuard implements CanActivate {
     const formNeedsCsrf = this.reflector.getAllAndOverride<boolean | undefined>(REQUIRE_CSRF, targets) === true;
     const carriesSession = this.cookies.readSessionToken(request) !== undefined;
     if (changesState && (carriesSession || rule !== 'public' || formNeedsCsrf) && !this.cookies.csrfMatches(request)) {
+      // A browser holding a token from another session (signed in or out elsewhere) gets one that fits, so trying again works.
+      this.cookies.ensureCsrf(request, response);
       throw new ForbiddenException({
         message: 'Your session’s security token is missing or out of date. Reload the page and try again.',
         code: ACCESS_CODES.csrf,
