@@ -67,9 +67,15 @@ describe('footage: direct-to-storage multipart uploads, media processing, playba
     });
 
     it('sanitises the file name and never uses it in the storage key', async () => {
+      // Control characters are refused in all text the API takes (common/pipes/control-characters.ts), file names included.
+      const withBell = await owner.agent
+        .post(`/api/workshops/${workshopId}/builds/${buildId}/footage`)
+        .send({ fileName: 'bad\u0007 name.mov', contentType: 'video/quicktime', sizeBytes: 1000 })
+        .expect(400);
+      expect(withBell.body.errors).toHaveProperty('fileName');
       const created = await owner.agent
         .post(`/api/workshops/${workshopId}/builds/${buildId}/footage`)
-        .send({ fileName: 'C:\\Users\\me\\..\\clips\\\u202Ebad\u0007 name?.mov', contentType: 'video/quicktime', sizeBytes: 1000 })
+        .send({ fileName: 'C:\\Users\\me\\..\\clips\\\u202Ebad name?.mov', contentType: 'video/quicktime', sizeBytes: 1000 })
         .expect(201);
       expect(created.body.footage.originalName).toBe('bad name_.mov');
       const [row] = await db.query('SELECT object_key FROM footage WHERE id = ?', [created.body.footage.id]);
