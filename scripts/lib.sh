@@ -184,3 +184,30 @@ use_test_services() {
   trap 'exit 130' INT TERM
   start_services >/dev/null
 }
+
+# npm run backup / restore: runs api/dist/database/backup/<cli> on the current profile with the
+# arguments given. Folders are taken relative to where npm run was called, not to api/. On the test
+# profile it waits for a running npm test (which resets the database). Starts MariaDB and the S3 fake
+# only if they are not running, and stops only what it started (at exit, so a caller may run more).
+run_backup_tool() {
+  local cli="$1" arg args=()
+  shift
+  for arg in "$@"; do
+    case "$arg" in
+      -*) args+=("$arg") ;;
+      *) args+=("$(cd "${INIT_CWD:-$PWD}" && realpath -m -- "$arg")") ;;
+    esac
+  done
+  ensure_npm_dependencies
+  if [ "$FW_PROFILE" = test ]; then
+    exec 9>"$FW_DATA/test-run.lock"
+    flock 9 || fail "could not take the test lock"
+  fi
+  trap 'stop_services' EXIT
+  trap 'exit 130' INT TERM
+  # On an empty instance this initialises MariaDB and creates the empty database and its user.
+  start_mariadb >/dev/null
+  start_node_service s3-fake "$S3_FAKE_PORT" local-services/s3/server.js
+  build_if_changed api "$ROOT/api/src" "$ROOT/api/tsconfig.json" "$ROOT/api/tsconfig.build.json" "$ROOT/package-lock.json"
+  (cd "$ROOT/api" && node "dist/database/backup/$cli" "${args[@]}")
+}

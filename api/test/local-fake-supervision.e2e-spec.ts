@@ -1,24 +1,14 @@
 import { type ChildProcess, spawn } from 'node:child_process';
 import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
-import { createConnection } from 'node:net';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { freePort } from './support/own-s3-fake';
+import { portAnswers } from './support/ports';
 
 jest.setTimeout(60_000);
 
 const LOCAL_SERVICES = resolve(__dirname, '../../local-services');
 
-function answers(port: number): Promise<boolean> {
-  return new Promise((done) => {
-    const socket = createConnection({ host: '127.0.0.1', port });
-    socket.once('connect', () => {
-      socket.destroy();
-      done(true);
-    });
-    socket.once('error', () => done(false));
-  });
-}
 
 async function waitFor(what: string, check: () => boolean | Promise<boolean>, timeoutMs = 15_000): Promise<void> {
   const deadline = Date.now() + timeoutMs;
@@ -61,7 +51,7 @@ describe('the local fakes supervisor (real S3 fake, own port)', () => {
     });
     supervisor.stdout?.on('data', (chunk: Buffer) => (log += chunk.toString()));
     supervisor.stderr?.on('data', (chunk: Buffer) => (log += chunk.toString()));
-    await waitFor('the supervised fake to answer', () => answers(port));
+    await waitFor('the supervised fake to answer', () => portAnswers(port));
   });
   afterEach(async () => {
     if (running(supervisor.pid ?? 0)) {
@@ -77,7 +67,7 @@ describe('the local fakes supervisor (real S3 fake, own port)', () => {
       const [dying] = fakePids().slice(-1);
       process.kill(dying, 'SIGKILL');
       await waitFor('a new fake process', () => fakePids().length > 0 && fakePids().slice(-1)[0] !== dying);
-      await waitFor('the restarted fake to answer', () => answers(port));
+      await waitFor('the restarted fake to answer', () => portAnswers(port));
       expect(log).toContain(`exited (signal SIGKILL); restarting in ${expectedDelay} ms`);
     }
     expect(fakePids()).toHaveLength(3);
@@ -88,7 +78,7 @@ describe('the local fakes supervisor (real S3 fake, own port)', () => {
     supervisor.kill('SIGTERM');
     expect(await exited).toBe(0);
     for (const pid of fakePids()) expect(running(pid)).toBe(false);
-    expect(await answers(port)).toBe(false);
+    expect(await portAnswers(port)).toBe(false);
     expect(log).toMatch(/\[supervise s3-fake\] stopped/u);
   });
 
@@ -98,6 +88,6 @@ describe('the local fakes supervisor (real S3 fake, own port)', () => {
     supervisor.kill('SIGKILL');
     await exited;
     await waitFor('the orphaned fake to end', () => !running(fake));
-    await waitFor('the port to close', async () => !(await answers(port)));
+    await waitFor('the port to close', async () => !(await portAnswers(port)));
   });
 });

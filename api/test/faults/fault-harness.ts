@@ -1,10 +1,10 @@
 import { type ChildProcess, execFileSync, spawn } from 'node:child_process';
 import { closeSync, existsSync, mkdirSync, openSync, readFileSync } from 'node:fs';
-import { createConnection } from 'node:net';
 import { join, resolve } from 'node:path';
 import request from 'supertest';
 import type { Agent } from '../support/accounts';
 import { tokenFrom, waitForMail } from '../support/mail-inbox';
+import { portAnswers } from '../support/ports';
 
 /**
  * Fault tests stop and start services on purpose, so they never touch a service someone else
@@ -56,16 +56,6 @@ export async function waitUntil(what: string, check: () => Promise<boolean> | bo
   throw new Error(`${what} did not happen within ${timeoutMs} ms`);
 }
 
-function portOpen(port: number): Promise<boolean> {
-  return new Promise((done) => {
-    const socket = createConnection({ host: '127.0.0.1', port });
-    socket.once('connect', () => {
-      socket.destroy();
-      done(true);
-    });
-    socket.once('error', () => done(false));
-  });
-}
 
 function quietly(command: string, args: string[]): boolean {
   try {
@@ -158,7 +148,7 @@ export class FaultMariaDb {
     if (this.ping()) {
       // Left over from an interrupted fault run (this profile's own socket): shut it down and start ours.
       quietly('mariadb-admin', ['--no-defaults', `--socket=${mariadbSocket}`, '-uroot', 'shutdown']);
-      await waitUntil('the leftover MariaDB to stop', async () => !(await portOpen(faultsEnv.dbPort)));
+      await waitUntil('the leftover MariaDB to stop', async () => !(await portAnswers(faultsEnv.dbPort)));
     }
     if (!existsSync(join(this.datadir, 'mysql'))) {
       mkdirSync(this.datadir, { recursive: true });
@@ -221,7 +211,7 @@ export class FaultRedis {
   async start(): Promise<void> {
     if (this.ping()) {
       quietly('redis-cli', ['-h', '127.0.0.1', '-p', String(faultsEnv.redisPort), 'shutdown']);
-      await waitUntil('the leftover Redis to stop', async () => !(await portOpen(faultsEnv.redisPort)));
+      await waitUntil('the leftover Redis to stop', async () => !(await portAnswers(faultsEnv.redisPort)));
     }
     mkdirSync(join(faultsEnv.data, 'redis'), { recursive: true });
     this.service.spawn();
@@ -246,11 +236,11 @@ export class FaultFakes {
 
   async start(): Promise<void> {
     for (const [service, port] of [[this.s3, faultsEnv.s3Port], [this.mail, faultsEnv.mailWebPort]] as const) {
-      if (await portOpen(port)) throw new Error(`port ${port} is taken: is another fault run going on?`);
+      if (await portAnswers(port)) throw new Error(`port ${port} is taken: is another fault run going on?`);
       service.spawn();
-      await waitUntil(`${service.name} to listen on ${port}`, () => portOpen(port), 20_000);
+      await waitUntil(`${service.name} to listen on ${port}`, () => portAnswers(port), 20_000);
     }
-    await waitUntil('the mail fake SMTP port', () => portOpen(faultsEnv.mailSmtpPort), 20_000);
+    await waitUntil('the mail fake SMTP port', () => portAnswers(faultsEnv.mailSmtpPort), 20_000);
   }
 
   async stop(): Promise<void> {

@@ -1,8 +1,9 @@
 import { type ChildProcess, spawn } from 'node:child_process';
 import { mkdtempSync, rmSync } from 'node:fs';
-import { createConnection, createServer } from 'node:net';
+import { createServer } from 'node:net';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
+import { portAnswers } from './ports';
 
 const S3_FAKE_SCRIPT = resolve(__dirname, '../../../local-services/s3/server.js');
 
@@ -19,16 +20,6 @@ export function freePort(): Promise<number> {
   });
 }
 
-function answers(port: number): Promise<boolean> {
-  return new Promise((done) => {
-    const socket = createConnection({ host: '127.0.0.1', port });
-    socket.once('connect', () => {
-      socket.destroy();
-      done(true);
-    });
-    socket.once('error', () => done(false));
-  });
-}
 
 async function waitFor(what: string, check: () => Promise<boolean>, timeoutMs = 15_000): Promise<void> {
   const deadline = Date.now() + timeoutMs;
@@ -75,7 +66,7 @@ export class OwnS3Fake {
     child.stdout?.on('data', (chunk: Buffer) => (this.output += chunk.toString()));
     child.stderr?.on('data', (chunk: Buffer) => (this.output += chunk.toString()));
     this.child = child;
-    await waitFor('the S3 fake did not start', async () => child.exitCode === null && (await answers(this.port)));
+    await waitFor('the S3 fake did not start', async () => child.exitCode === null && (await portAnswers(this.port)));
   }
 
   /** Stops the fake this test started (SIGKILL: storage gone without notice) and waits until the port is closed. */
@@ -88,7 +79,7 @@ export class OwnS3Fake {
       child.kill(signal);
       await exited;
     }
-    await waitFor('the S3 fake port stayed open', async () => !(await answers(this.port)));
+    await waitFor('the S3 fake port stayed open', async () => !(await portAnswers(this.port)));
   }
 
   async remove(): Promise<void> {

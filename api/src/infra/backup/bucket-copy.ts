@@ -16,9 +16,9 @@ import {
   S3ServiceException,
 } from '@aws-sdk/client-s3';
 import { Upload } from '@aws-sdk/lib-storage';
-import { AppConfig } from '../../config/app-config';
+import { createS3Client, StorageSettings } from '../storage/s3-client';
 
-export type StorageSettings = AppConfig['storage'];
+export type { StorageSettings };
 
 export interface CopiedObject {
   key: string;
@@ -37,15 +37,7 @@ export class BucketCopier {
   private readonly client: S3Client;
 
   constructor(private readonly storage: StorageSettings) {
-    this.client = new S3Client({
-      endpoint: storage.endpoint,
-      region: storage.region,
-      forcePathStyle: storage.forcePathStyle,
-      credentials: { accessKeyId: storage.accessKeyId, secretAccessKey: storage.secretAccessKey },
-      // As in StorageService: the SDK's default streaming checksums corrupt objects on the local fake.
-      requestChecksumCalculation: 'WHEN_REQUIRED',
-      responseChecksumValidation: 'WHEN_REQUIRED',
-    });
+    this.client = createS3Client(storage);
   }
 
   get bucket(): string {

@@ -16,11 +16,8 @@ import { getSignedUrl } from '@aws-sdk/s3-request-presigner';
 import { Inject, Injectable, Logger, OnModuleDestroy } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { AppConfig } from '../../config/app-config';
+import { createS3Client } from './s3-client';
 import { isStorageUnavailable, multipartRefusal, StorageUnavailableError } from './storage-errors';
-
-/** A dead or stopped store must fail a request in seconds, not hold it (and its caller) open. */
-const STORAGE_CONNECT_TIMEOUT_MS = 3_000;
-const STORAGE_REQUEST_TIMEOUT_MS = 30_000;
 
 /** The only place that talks to S3; services ask it for objects and presigned URLs. */
 @Injectable()
@@ -34,24 +31,8 @@ export class StorageService implements OnModuleDestroy {
   constructor(@Inject(ConfigService) config: ConfigService<AppConfig, true>) {
     const storage = config.get('storage', { infer: true });
     this.bucket = storage.bucket;
-    this.client = new S3Client({
-      endpoint: storage.endpoint,
-      region: storage.region,
-      forcePathStyle: storage.forcePathStyle,
-      credentials: { accessKeyId: storage.accessKeyId, secretAccessKey: storage.secretAccessKey },
-      // The SDK's default streaming checksums corrupt objects on the local S3 fake; real S3 accepts both.
-      requestChecksumCalculation: 'WHEN_REQUIRED',
-      responseChecksumValidation: 'WHEN_REQUIRED',
-      requestHandler: { connectionTimeout: STORAGE_CONNECT_TIMEOUT_MS, requestTimeout: STORAGE_REQUEST_TIMEOUT_MS },
-    });
-    this.publicClient = new S3Client({
-      endpoint: storage.publicEndpoint,
-      region: storage.region,
-      forcePathStyle: storage.forcePathStyle,
-      credentials: { accessKeyId: storage.accessKeyId, secretAccessKey: storage.secretAccessKey },
-      requestChecksumCalculation: 'WHEN_REQUIRED',
-      responseChecksumValidation: 'WHEN_REQUIRED',
-    });
+    this.client = createS3Client(storage, { timeouts: true });
+    this.publicClient = createS3Client(storage, { endpoint: storage.publicEndpoint });
   }
 
   /** Stores a small object held in memory (logos, photos); large media goes browser → storage directly. */
