@@ -163,7 +163,9 @@ test('a signed-out reader finds the guide, follows it beside the video, searches
   await card.getByRole('link', { name: title }).click();
   await page.waitForURL(`${baseUrl}/guides/${ids.workshopSlug}/${ids.guideSlug}`);
   await page.getByRole('heading', { level: 1, name: title }).waitFor();
-  assert.match(await page.getByTestId('guide-revision').textContent(), /^Revision 1 · published \d+ \w+ \d{4} · First edition$/);
+  // The date is written in the reader's locale (lib/dates.ts), so the journey asks the browser how it writes today.
+  const today = await page.evaluate(() => new Intl.DateTimeFormat(undefined, { dateStyle: 'medium' }).format(new Date()));
+  assert.equal(await page.getByTestId('guide-revision').textContent(), `Revision 1 · published ${today} · First edition`);
 
   // Safety at the top: most severe first, each header spelling out its signal word; the disclaimer always there.
   const levels = await page.getByTestId('cautions-block').getByTestId('caution').evaluateAll((panels) => panels.map((panel) => panel.dataset.level));
