@@ -13,7 +13,10 @@ export class AllExceptionsFilter implements ExceptionFilter {
   catch(exception: unknown, host: ArgumentsHost): void {
     const response = host.switchToHttp().getResponse<Response>();
     const body = this.toBody(exception);
-    if (body.statusCode >= 500) {
+    if (body.statusCode === HttpStatus.SERVICE_UNAVAILABLE) {
+      // A dependency is down: expected while it is, reported by health; one line each, not a stack trace.
+      this.logger.warn(`${String(body.code ?? 'unavailable')}: ${exception instanceof Error ? exception.message : String(exception)}`);
+    } else if (body.statusCode >= 500) {
       this.logger.error(exception instanceof Error ? (exception.stack ?? exception.message) : String(exception));
     } else if (databaseErrorBody(exception)) {
       // A service let the database find a bad reference or value: answered 4xx, but the check belongs in the service.
