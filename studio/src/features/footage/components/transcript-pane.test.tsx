@@ -1,6 +1,7 @@
 import { fireEvent, screen, waitFor } from '@testing-library/react';
-import { afterEach, describe, expect, it, vi } from 'vitest';
+import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { stubApi } from '@/testing/api-stub';
+import { fakeScrollLayout } from '@/testing/fake-scroll-layout';
 import { renderWithProviders } from '@/testing/render';
 import type { CueMatch, SearchResults, Transcript } from '../api/types';
 import { TranscriptPane } from './transcript-pane';
@@ -61,6 +62,71 @@ describe('TranscriptPane search', () => {
     expect(offsets).toEqual(['0', '10']);
     // Times past the hour read as hours: the last hit is at 2 h 50 min.
     expect(screen.getByText('2:50:00')).toBeTruthy();
+  }, 20_000);
+});
+
+// An invented three-hour session: 3,000 cues, one every 3.6 s.
+const LONG_TRANSCRIPT: Transcript = {
+  ...TRANSCRIPT,
+  cueCount: 3_000,
+  cues: Array.from({ length: 3_000 }, (_, index) => ({ index, startMs: index * 3_600, endMs: index * 3_600 + 3_000, text: `Long cue ${index}` })),
+};
+const BOX_HEIGHT = 300;
+
+function cueBox(): HTMLElement {
+  return screen.getByTestId('transcript-cues').parentElement as HTMLElement;
+}
+
+function drawnCues(): HTMLElement[] {
+  return [...screen.getByTestId('transcript-cues').querySelectorAll<HTMLElement>('button')];
+}
+
+/** How far below the top of the box the playing cue sits, in px. */
+function playingCueDepth(): number {
+  const row = screen.getByTestId('transcript-cues').querySelector('[data-active]')?.parentElement as HTMLElement;
+  const start = Number(/translateY\((-?[\d.]+)px\)/.exec(row.style.transform)?.[1]);
+  return start - cueBox().scrollTop;
+}
+
+describe('TranscriptPane cues', () => {
+  let layout: ReturnType<typeof fakeScrollLayout>;
+  beforeEach(() => {
+    layout = fakeScrollLayout({ boxHeight: BOX_HEIGHT, rowHeight: 40 });
+  });
+  afterEach(() => vi.restoreAllMocks());
+
+  function pane(currentMs: number, onSeek: (ms: number) => void = () => {}) {
+    return <TranscriptPane workshopId="w1" footageId="f1" transcript={LONG_TRANSCRIPT} currentMs={currentMs} transcriptMaxBytes={1_000_000} onSeek={onSeek} />;
+  }
+
+  it('draws only the cues in view of a 3,000-cue transcript, follows playback to the last cue, and lets the person scroll away', async () => {
+    const seeks: number[] = [];
+    const { rerender } = renderWithProviders(pane(0, (ms) => seeks.push(ms)));
+    expect(drawnCues().length).toBeGreaterThan(0);
+    // A 300 px box shows 8 rows of 40 px; with the rows kept above and below it stays far under 3,000.
+    expect(drawnCues().length).toBeLessThan(40);
+    expect(Number.parseFloat(screen.getByTestId('transcript-cues').style.height)).toBeGreaterThan(3_000 * 30);
+
+    // Playback reaches the end of the session: the box follows, so the last cue is drawn and playing.
+    rerender(pane(2_999 * 3_600 + 1_000, (ms) => seeks.push(ms)));
+    const last = await screen.findByRole('button', { name: /Long cue 2999/ });
+    expect(last.hasAttribute('data-active')).toBe(true);
+    expect(drawnCues().length).toBeLessThan(40);
+    fireEvent.click(last);
+    expect(seeks).toEqual([2_999 * 3_600]);
+
+    // The person scrolls to the start by hand: playback moving on no longer moves the box, until Back to now.
+    layout.scrollByHand(cueBox(), 0);
+    expect(await screen.findByRole('button', { name: /Long cue 0$/ })).toBeTruthy();
+    const moves = layout.moves.length;
+    rerender(pane(1_500 * 3_600 + 1_000));
+    await new Promise((resolve) => setTimeout(resolve, 50));
+    expect(layout.moves.length).toBe(moves);
+    expect(cueBox().scrollTop).toBe(0);
+    fireEvent.click(screen.getByRole('button', { name: 'Back to now' }));
+    expect(await screen.findByRole('button', { name: /Long cue 1500$/ })).toBeTruthy();
+    await waitFor(() => expect(playingCueDepth()).toBe(BOX_HEIGHT / 3));
+    expect(screen.queryByRole('button', { name: 'Back to now' })).toBeNull();
   }, 20_000);
 });
 

@@ -1,9 +1,10 @@
-import { Anchor, Button, Group, Loader, Paper, ScrollArea, Stack, Text, TextInput, Title, UnstyledButton } from '@mantine/core';
+import { Anchor, Button, Group, Loader, Paper, Stack, Text, TextInput, Title, UnstyledButton } from '@mantine/core';
 import { useDebouncedValue, useDisclosure } from '@mantine/hooks';
 import { useInfiniteQuery } from '@tanstack/react-query';
-import { useState } from 'react';
+import { memo, useState } from 'react';
 import { BackToNow } from '@/components/back-to-now';
-import { useFollowPlayback } from '@/lib/use-follow-playback';
+import { useFollowingList } from '@/lib/use-follow-playback';
+import { useStableHandler } from '@/lib/use-stable-handler';
 import { downloadUrl, transcriptQueries } from '../api/queries';
 import type { Cue, Transcript } from '../api/types';
 import { formatClock } from '@/lib/clock';
@@ -14,6 +15,9 @@ import classes from './transcript-pane.module.css';
 
 const FORMAT_NAMES = { webvtt: 'WebVTT', srt: 'SubRip', timestamped: 'timestamped lines' } as const;
 
+/** A guess at one cue's height (one line of small text, its padding and the gap); each drawn row is measured. */
+const CUE_ROW_ESTIMATE_PX = 32;
+
 export interface TranscriptPaneProps {
   workshopId: string;
   footageId: string;
@@ -23,17 +27,28 @@ export interface TranscriptPaneProps {
   onSeek: (ms: number) => void;
 }
 
+const NO_CUES: Cue[] = [];
+
 /** The cue playing now, if any (cues are in time order). */
 export function activeCueIndex(cues: Cue[], ms: number): number {
+  const row = activeCueRow(cues, ms);
+  return row === -1 ? -1 : cues[row].index;
+}
+
+/** Where the cue playing now sits in `cues`, or -1. */
+function activeCueRow(cues: Cue[], ms: number): number {
   let found = -1;
-  for (const cue of cues) {
-    if (cue.startMs > ms) break;
-    if (cue.endMs > ms) found = cue.index;
+  for (let row = 0; row < cues.length; row += 1) {
+    if (cues[row].startMs > ms) break;
+    if (cues[row].endMs > ms) found = row;
   }
   return found;
 }
 
-/** The transcript beside the player: cues that follow playback, search that jumps the player, attach and replace. */
+/**
+ * The transcript beside the player: cues that follow playback, search that jumps the player, attach and replace.
+ * Only the cues in view are drawn, so a three-hour transcript costs what a short one does.
+ */
 export function TranscriptPane({ workshopId, footageId, transcript, currentMs, transcriptMaxBytes, onSeek }: TranscriptPaneProps) {
   const [attaching, { open, close }] = useDisclosure(false);
   const [query, setQuery] = useState('');
@@ -44,8 +59,18 @@ export function TranscriptPane({ workshopId, footageId, transcript, currentMs, t
   });
   const hits = search.data?.pages.flatMap((page) => page.results) ?? [];
   const firstPage = search.data?.pages[0];
-  const { following, box, currentRow, resume } = useFollowPlayback<HTMLDivElement>('third');
-  const active = transcript ? activeCueIndex(transcript.cues, currentMs) : -1;
+  const cues = transcript?.cues ?? NO_CUES;
+  const showingCues = transcript !== null && debounced === '';
+  const active = activeCueRow(cues, currentMs);
+  const seek = useStableHandler(onSeek);
+  const { following, box, rows, resume } = useFollowingList<HTMLDivElement>({
+    count: cues.length,
+    currentIndex: showingCues ? active : -1,
+    estimateRowHeight: CUE_ROW_ESTIMATE_PX,
+    place: 'third',
+    // The same box shows search results while there is a search.
+    enabled: showingCues,
+  });
 
   return (
     <Paper withBorder p="md" h="100%">
@@ -84,7 +109,7 @@ export function TranscriptPane({ workshopId, footageId, transcript, currentMs, t
             rightSection={search.isFetching ? <Loader size="xs" /> : null}
           />
         )}
-        {transcript && debounced === '' && !following && (
+        {showingCues && !following && (
           <Group justify="flex-end">
             <BackToNow onClick={resume} />
           </Group>
@@ -94,7 +119,7 @@ export function TranscriptPane({ workshopId, footageId, transcript, currentMs, t
             {search.error.message}
           </Text>
         )}
-        <ScrollArea viewportRef={box} style={{ flex: 1 }} mah={520} type="auto">
+        <div ref={box} className={classes.scroller}>
           {!transcript && (
             <Text size="sm" c="dimmed">
               Attach the transcript of this video to follow along, search it, and show captions in the player.
@@ -124,27 +149,22 @@ export function TranscriptPane({ workshopId, footageId, transcript, currentMs, t
               />
             </Stack>
           )}
-          {transcript && debounced === '' && (
-            <Stack gap={2}>
-              {transcript.cues.map((cue) => (
-                <UnstyledButton
-                  key={cue.index}
-                  className={classes.cue}
-                  data-active={cue.index === active || undefined}
-                  ref={cue.index === active ? currentRow : undefined}
-                  onClick={() => onSeek(cue.startMs)}
+          {showingCues && (
+            <div className={classes.cueList} style={{ height: rows.getTotalSize() }} data-testid="transcript-cues">
+              {rows.getVirtualItems().map((row) => (
+                <div
+                  key={row.key}
+                  data-index={row.index}
+                  ref={rows.measureElement}
+                  className={classes.cueRow}
+                  style={{ transform: `translateY(${row.start}px)` }}
                 >
-                  <Text span size="xs" c="dimmed" className={classes.time}>
-                    {formatClock(cue.startMs)}
-                  </Text>
-                  <Text span size="sm" style={{ whiteSpace: 'pre-line' }}>
-                    {cue.text}
-                  </Text>
-                </UnstyledButton>
+                  <CueRow cue={cues[row.index]} active={row.index === active} onSeek={seek} />
+                </div>
               ))}
-            </Stack>
+            </div>
           )}
-        </ScrollArea>
+        </div>
       </Stack>
       <TranscriptAttach
         workshopId={workshopId}
@@ -157,3 +177,23 @@ export function TranscriptPane({ workshopId, footageId, transcript, currentMs, t
     </Paper>
   );
 }
+
+interface CueRowProps {
+  cue: Cue;
+  active: boolean;
+  onSeek: (ms: number) => void;
+}
+
+/** One cue; memoised, so a time update draws again only the cue that starts or stops playing. */
+const CueRow = memo(function CueRow({ cue, active, onSeek }: CueRowProps) {
+  return (
+    <UnstyledButton className={classes.cue} data-active={active || undefined} onClick={() => onSeek(cue.startMs)}>
+      <Text span size="xs" c="dimmed" className={classes.time}>
+        {formatClock(cue.startMs)}
+      </Text>
+      <Text span size="sm" style={{ whiteSpace: 'pre-line' }}>
+        {cue.text}
+      </Text>
+    </UnstyledButton>
+  );
+});

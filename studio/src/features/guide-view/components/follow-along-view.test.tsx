@@ -1,6 +1,7 @@
 import { fireEvent, screen, within } from '@testing-library/react';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { stubApi } from '@/testing/api-stub';
+import { fakeScrollLayout } from '@/testing/fake-scroll-layout';
 import { renderWithProviders } from '@/testing/render';
 import { FollowAlongView } from './follow-along-view';
 import { testGuide } from './test-guide';
@@ -22,6 +23,8 @@ describe('FollowAlongView', () => {
   beforeEach(() => {
     // jsdom has no media playback.
     vi.spyOn(HTMLMediaElement.prototype, 'play').mockResolvedValue(undefined);
+    // The transcript draws only the cues in its box, so the box needs a height.
+    fakeScrollLayout({ boxHeight: 300, rowHeight: 40 });
   });
   afterEach(() => vi.restoreAllMocks());
 
