@@ -1,10 +1,17 @@
 import { fireEvent, screen, waitFor } from '@testing-library/react';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import { formatClock } from '@/lib/clock';
 import { stubApi } from '@/testing/api-stub';
 import { fakeScrollLayout } from '@/testing/fake-scroll-layout';
 import { renderWithProviders } from '@/testing/render';
 import type { CueMatch, SearchResults, Transcript } from '../api/types';
 import { TranscriptPane } from './transcript-pane';
+
+// Each drawn cue formats its time once: counting the calls counts the cues drawn.
+vi.mock('@/lib/clock', async (importOriginal) => {
+  const clock = await importOriginal<typeof import('@/lib/clock')>();
+  return { ...clock, formatClock: vi.fn(clock.formatClock) };
+});
 
 // Invented test transcript: one cue a minute for three hours, every tenth one about the spline.
 const CUES = Array.from({ length: 180 }, (_, index) => ({
@@ -128,6 +135,18 @@ describe('TranscriptPane cues', () => {
     await waitFor(() => expect(playingCueDepth()).toBe(BOX_HEIGHT / 3));
     expect(screen.queryByRole('button', { name: 'Back to now' })).toBeNull();
   }, 20_000);
+
+  it('draws again only the cue that stops playing and the one that starts as the video plays on', async () => {
+    const { rerender } = renderWithProviders(pane(1_000));
+    expect(await screen.findByRole('button', { name: /Long cue 0$/ })).toBeTruthy();
+    vi.mocked(formatClock).mockClear();
+    // A new onSeek each time, as the player page passes: the rows still do not draw again for it.
+    rerender(pane(2_000, () => {}));
+    expect(formatClock).not.toHaveBeenCalled();
+    rerender(pane(3_700, () => {}));
+    expect(vi.mocked(formatClock).mock.calls.map(([ms]) => ms).sort((a, b) => a - b)).toEqual([0, 3_600]);
+    expect(screen.getByRole('button', { name: /Long cue 1$/ }).hasAttribute('data-active')).toBe(true);
+  });
 });
 
 function withLimit(url: URL, limit: number): URL {

@@ -1,9 +1,16 @@
 import { fireEvent, screen, waitFor } from '@testing-library/react';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import { formatClock } from '@/lib/clock';
 import { fakeScrollLayout } from '@/testing/fake-scroll-layout';
 import { renderWithProviders } from '@/testing/render';
 import type { Cue } from '../api/types';
 import { TranscriptPanel } from './transcript-panel';
+
+// Each drawn cue formats its time once: counting the calls counts the cues drawn.
+vi.mock('@/lib/clock', async (importOriginal) => {
+  const clock = await importOriginal<typeof import('@/lib/clock')>();
+  return { ...clock, formatClock: vi.fn(clock.formatClock) };
+});
 
 // Invented cues, one every ten seconds.
 const CUES: Cue[] = Array.from({ length: 40 }, (_, index) => ({ startMs: index * 10_000, endMs: index * 10_000 + 9_000, text: `Cue ${index}` }));
@@ -87,5 +94,19 @@ describe('TranscriptPanel following playback', () => {
     layout.scrollByHand(cueBox(), 0);
     expect(await screen.findByRole('button', { name: /Long cue 0$/ })).toBeTruthy();
     expect(screen.queryByRole('button', { name: /Long cue 2999/ })).toBeNull();
+  });
+
+  it('draws again only the cue that stops playing and the one that starts as the video plays on', async () => {
+    const { rerender } = renderWithProviders(<TranscriptPanel cues={CUES} currentMs={200_000} onSeek={() => {}} />);
+    await waitFor(() => expect(playingCueDepth()).toBe(BOX_HEIGHT / 3));
+    // Let the list settle (the scroll's last frames) before counting.
+    await new Promise((resolve) => setTimeout(resolve, 100));
+    vi.mocked(formatClock).mockClear();
+    // A new function each time, as a player passes: the rows still do not draw again for it.
+    rerender(<TranscriptPanel cues={CUES} currentMs={205_000} onSeek={() => {}} />);
+    expect(formatClock).not.toHaveBeenCalled();
+    rerender(<TranscriptPanel cues={CUES} currentMs={210_000} onSeek={() => {}} />);
+    expect(vi.mocked(formatClock).mock.calls.map(([ms]) => ms).sort()).toEqual([200_000, 210_000]);
+    expect(screen.getByRole('button', { current: 'time' }).textContent).toContain('Cue 21');
   });
 });
