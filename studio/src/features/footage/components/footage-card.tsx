@@ -30,7 +30,7 @@ function PosterArea({ footage, uploadingHere }: { footage: Footage; uploadingHer
                 ? 'Checking the video and making a poster frame…'
                 : uploadingHere
                   ? 'Uploading: progress above'
-                  : 'Upload not finished'}
+                  : 'Upload interrupted'}
           </Text>
         </Box>
       )}
@@ -42,7 +42,7 @@ function PosterArea({ footage, uploadingHere }: { footage: Footage; uploadingHer
 export function FootageCard({ footage, uploadingHere, onResume }: FootageCardProps) {
   const deleteFootage = useDeleteFootage(footage.workshopId);
   const playerPath = paths.footage.to(footage.workshopId, footage.id);
-  const interrupted = footage.state === 'uploading' && !uploadingHere && footage.upload;
+  const interrupted = footage.state === 'uploading' && !uploadingHere && footage.upload !== null;
 
   const handleDelete = () =>
     deleteFootage.mutate(footage.id, { onError: (error) => notifyError('The footage could not be deleted', error) });
@@ -74,7 +74,7 @@ export function FootageCard({ footage, uploadingHere, onResume }: FootageCardPro
               {footage.title}
             </Text>
           )}
-          <FootageStateBadge state={footage.state} />
+          <FootageStateBadge state={footage.state} interrupted={interrupted} />
         </Group>
         <Text size="xs" c="dimmed">
           {formatBytes(footage.sizeBytes)}
@@ -98,7 +98,7 @@ export function FootageCard({ footage, uploadingHere, onResume }: FootageCardPro
             <FileButton onChange={(file) => file && onResume(footage, file)}>
               {(props) => (
                 <Button size="xs" {...props}>
-                  Choose the file to resume
+                  Resume: choose the file
                 </Button>
               )}
             </FileButton>

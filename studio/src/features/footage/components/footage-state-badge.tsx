@@ -8,10 +8,14 @@ const LABELS: Record<FootageState, { label: string; color: string }> = {
   failed: { label: 'Failed', color: 'red' },
 };
 
-export function FootageStateBadge({ state }: { state: FootageState }) {
-  const { label, color } = LABELS[state];
+/**
+ * `interrupted`: the footage is still `uploading` on the server but no tab is sending it (the page was
+ * reloaded or closed), so "Uploading" would be untrue; the card offers to resume instead.
+ */
+export function FootageStateBadge({ state, interrupted = false }: { state: FootageState; interrupted?: boolean }) {
+  const { label, color } = interrupted && state === 'uploading' ? { label: 'Interrupted', color: 'orange' } : LABELS[state];
   return (
-    <Badge color={color} variant="light" data-testid="footage-state" data-state={state}>
+    <Badge color={color} variant="light" data-testid="footage-state" data-state={state} data-interrupted={interrupted || undefined}>
       {label}
     </Badge>
   );

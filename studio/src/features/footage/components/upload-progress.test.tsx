@@ -39,3 +39,33 @@ describe('UploadProgress while storage is down', () => {
     expect(screen.getByText('Uploaded').textContent).toBe('Uploaded');
   });
 });
+
+describe('UploadProgress at 100 %', () => {
+  it('says "Finishing", not "Measuring speed", once every byte is sent and the upload is being completed', async () => {
+    const transport: UploadTransport = {
+      signParts: async (partNumbers) => ({
+        urls: partNumbers.map((partNumber) => ({ partNumber, url: `https://storage.test/${partNumber}` })),
+        expiresAt: new Date(Date.now() + 60 * 60_000).toISOString(),
+      }),
+      // The last part's bytes are all sent and storage has not answered yet: 100 %, not complete.
+      putPart: (_url, blob, onProgress) => {
+        onProgress(blob.size);
+        return new Promise<string>(() => undefined);
+      },
+      recordPart: async () => undefined,
+      complete: async () => undefined,
+      abort: async () => undefined,
+      storageAvailable: async () => true,
+    };
+    const file = new File([new Uint8Array(16)], 'coupler.mp4', { type: 'video/mp4' });
+    const upload = new MultipartUpload(file, { footageId: 'f2', partSizeBytes: 8, partCount: 2, completedParts: [1] }, transport);
+    renderWithProviders(<UploadProgress upload={upload} />);
+    upload.start();
+
+    await waitFor(() => expect(screen.getByTestId('upload-bytes').textContent).toMatch(/100 %$/));
+    expect(screen.getByTestId('upload-speed').textContent).toBe('Finishing…');
+    expect(screen.queryByText('Measuring speed…')).toBeNull();
+    expect(screen.getByText('Finishing').textContent).toBe('Finishing');
+    upload.pause();
+  });
+});

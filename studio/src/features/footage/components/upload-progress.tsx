@@ -20,7 +20,11 @@ const PHASES: Record<UploadPhase, { label: string; color: string }> = {
 export function UploadProgress({ upload }: { upload: MultipartUpload }) {
   const snapshot = useSyncExternalStore(upload.subscribe, upload.getSnapshot);
   const percent = snapshot.totalBytes > 0 ? (snapshot.uploadedBytes / snapshot.totalBytes) * 100 : 0;
-  const phase = PHASES[snapshot.phase];
+  // Every byte sent but the upload not yet complete (last ETags being recorded, then completion): say so,
+  // rather than "Uploading" with a speed that can no longer be measured.
+  const finishing =
+    snapshot.phase === 'completing' || (snapshot.phase === 'uploading' && snapshot.totalBytes > 0 && snapshot.uploadedBytes >= snapshot.totalBytes);
+  const phase = finishing ? PHASES.completing : PHASES[snapshot.phase];
   const canPause = snapshot.phase === 'uploading' || snapshot.phase === 'retrying' || snapshot.phase === 'waiting-for-storage';
   const canResume = snapshot.phase === 'paused';
   const canCancel = !['done', 'cancelled', 'completing'].includes(snapshot.phase);
@@ -42,7 +46,7 @@ export function UploadProgress({ upload }: { upload: MultipartUpload }) {
         </Group>
         <Progress
           value={percent}
-          animated={snapshot.phase === 'uploading'}
+          animated={snapshot.phase === 'uploading' || finishing}
           color={phase.color}
           aria-label={`Upload of ${snapshot.fileName}`}
           aria-valuenow={Math.floor(percent)}
@@ -52,11 +56,13 @@ export function UploadProgress({ upload }: { upload: MultipartUpload }) {
             {formatBytes(snapshot.uploadedBytes)} of {formatBytes(snapshot.totalBytes)} · {Math.floor(percent)} %
           </Text>
           <Text size="sm" c="dimmed" data-testid="upload-speed">
-            {snapshot.bytesPerSecond !== null && snapshot.secondsLeft !== null
-              ? `${formatSpeed(snapshot.bytesPerSecond)} · ${formatTimeLeft(snapshot.secondsLeft)}`
-              : snapshot.phase === 'uploading'
-                ? 'Measuring speed…'
-                : ''}
+            {finishing
+              ? 'Finishing…'
+              : snapshot.bytesPerSecond !== null && snapshot.secondsLeft !== null
+                ? `${formatSpeed(snapshot.bytesPerSecond)} · ${formatTimeLeft(snapshot.secondsLeft)}`
+                : snapshot.phase === 'uploading'
+                  ? 'Measuring speed…'
+                  : ''}
           </Text>
         </Group>
         {snapshot.phase === 'paused' && !snapshot.error && (
