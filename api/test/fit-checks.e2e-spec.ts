@@ -229,6 +229,15 @@ describe('fit data and the verified-fit checklist (real MariaDB)', () => {
     expect(response.body.sharePercent).toBeCloseTo(52.21, 2);
   });
 
+  it('refuses a what-if that leaves the shaft no positive size, naming the field', async () => {
+    const assembly = await creator.agent.get(`${base}/assemblies/${assemblyId}`).expect(200);
+    const pilotInterface = assembly.body.interfaces.find((item: { name: string }) => item.name === 'pilot');
+    // The shaft's mean is 14.98854 mm (above): 15 mm smaller leaves less than nothing.
+    const refused = await creator.agent.get(`${base}/interfaces/${pilotInterface.id}/what-if`).query({ delta: '-15', unit: 'mm' }).expect(400);
+    expect(refused.body.message).toMatch(/^delta must leave a shaft size greater than 0; the shaft measures 14\.98854 mm/);
+    await creator.agent.get(`${base}/interfaces/${pilotInterface.id}/what-if`).query({ delta: '-14.98', unit: 'mm' }).expect(200);
+  });
+
   it('hides a workshop’s fit data from non-members', async () => {
     await outsider.agent.get(`${base}/parts`).expect(404);
     await outsider.agent.get(`${base}/assemblies/${assemblyId}/checklist`).expect(404);

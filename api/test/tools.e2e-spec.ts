@@ -45,7 +45,14 @@ describe('public calculators (contract in DESIGN.md)', () => {
 
     it('refuses a size outside the tables', async () => {
       const response = await request(app.getHttpServer()).get('/api/tools/fits?size=600&unit=mm&hole=H7&shaft=g6').expect(400);
-      expect(response.body.message).toMatch(/500/);
+      expect(response.body.message).toBe('size must be greater than 0 mm and at most 500 mm (the ISO 286 tables); got 600 mm');
+    });
+
+    it('names the field and the rule for a size that is not positive and a class the tables lack', async () => {
+      const zero = await request(app.getHttpServer()).get('/api/tools/fits?size=0&unit=mm&hole=H7&shaft=g6').expect(400);
+      expect(zero.body.message).toEqual(['size must be greater than 0 mm and at most 500 mm']);
+      const early = await request(app.getHttpServer()).get('/api/tools/fits?size=20&unit=mm&hole=H7&shaft=t6').expect(400);
+      expect(early.body.message).toMatch(/^shaft: t6 is not defined at 20 mm/);
     });
 
     it('names each malformed field', async () => {

@@ -266,6 +266,20 @@ describe('errors', () => {
     );
   });
 
+  // ISO 286-1 tabulates nominal sizes over 0 up to 500 mm; the refusal names the field and that rule.
+  it('names the field and the rule when it refuses a size', () => {
+    expect(() => fitLimits({ sizeMm: 600, hole: 'H7', shaft: 'g6' })).toThrow(
+      'size must be greater than 0 mm and at most 500 mm (the ISO 286 tables); got 600 mm',
+    );
+  });
+
+  it('starts a refused class with the field it came from', () => {
+    expect(() => fitLimits({ sizeMm: 25, hole: 'Q7', shaft: 'g6' })).toThrow(/^hole: "Q7"/);
+    // t/T start above 24 mm (ISO 286-1 Table 2), so t6 at 20 mm is the shaft's fault.
+    expect(() => fitLimits({ sizeMm: 20, hole: 'H7', shaft: 't6' })).toThrow(/^shaft: t6 is not defined at 20 mm/);
+    expect(() => fitLimits({ sizeMm: 25, hole: 'g6', shaft: 'g6' })).toThrow(/^hole must be a hole class written in capitals/);
+  });
+
   it.each([
     [20, 't6'], // t/T start above 24 mm (ISO 286-1 Table 2)
     [10, 'V7'], // v/V start above 14 mm

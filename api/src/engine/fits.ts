@@ -136,16 +136,16 @@ export function fitLimits(
   options: FitOptions = {},
 ): FitLimits {
   assertNominalSize(input.sizeMm);
-  const holeClass = parseToleranceClass(input.hole);
-  const shaftClass = parseToleranceClass(input.shaft);
+  const holeClass = inField('hole', () => parseToleranceClass(input.hole));
+  const shaftClass = inField('shaft', () => parseToleranceClass(input.shaft));
   if (holeClass.feature !== 'hole') {
-    throw new FitError(`hole class must be written in capitals, such as H7; got "${input.hole}"`, 'FIT_UNKNOWN_CLASS');
+    throw new FitError(`hole must be a hole class written in capitals, such as H7; got "${input.hole}"`, 'FIT_UNKNOWN_CLASS');
   }
   if (shaftClass.feature !== 'shaft') {
-    throw new FitError(`shaft class must be written in lower case, such as g6; got "${input.shaft}"`, 'FIT_UNKNOWN_CLASS');
+    throw new FitError(`shaft must be a shaft class written in lower case, such as g6; got "${input.shaft}"`, 'FIT_UNKNOWN_CLASS');
   }
-  const hole = holeZoneNm(input.sizeMm, holeClass, options);
-  const shaft = shaftZoneNm(input.sizeMm, shaftClass, options);
+  const hole = inField('hole', () => holeZoneNm(input.sizeMm, holeClass, options));
+  const shaft = inField('shaft', () => shaftZoneNm(input.sizeMm, shaftClass, options));
   const clearance = { max: nmToUm(hole.upper - shaft.lower), min: nmToUm(hole.lower - shaft.upper) };
   return {
     hole: { upper: nmToUm(hole.upper), lower: nmToUm(hole.lower) },
@@ -154,6 +154,18 @@ export function fitLimits(
     kind: classifyFit(clearance),
     convention: fitConvention(options),
   };
+}
+
+/** Runs one field's step, so a refusal starts with the field it is about ("shaft: t6 is not defined at 20 mm: …"). */
+function inField<T>(field: 'hole' | 'shaft', step: () => T): T {
+  try {
+    return step();
+  } catch (error) {
+    if (error instanceof FitError && !error.message.startsWith(`${field} `)) {
+      throw new FitError(`${field}: ${error.message}`, error.code as FitErrorCode);
+    }
+    throw error;
+  }
 }
 
 /**
@@ -228,7 +240,7 @@ function assertGrade(grade: number, text: string, gradeText = String(grade)): vo
 function assertNominalSize(sizeMm: number): void {
   if (typeof sizeMm !== 'number' || !Number.isFinite(sizeMm) || sizeMm <= 0 || sizeMm > MAX_NOMINAL_SIZE_MM) {
     throw new FitError(
-      `nominal size ${String(sizeMm)} mm is outside the ISO 286 tables supported here (over 0 up to ${MAX_NOMINAL_SIZE_MM} mm)`,
+      `size must be greater than 0 mm and at most ${MAX_NOMINAL_SIZE_MM} mm (the ISO 286 tables); got ${String(sizeMm)} mm`,
       'FIT_SIZE_OUT_OF_RANGE',
     );
   }

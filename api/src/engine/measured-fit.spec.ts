@@ -89,6 +89,16 @@ describe('whatIf', () => {
     expect(whatIf({ clearanceNm: -5_000, deltaNm: 1_000 }).sharePercent).toBeNull();
   });
 
+  it('refuses a change that leaves a shaft size that is not positive (a size is greater than 0: common practice)', () => {
+    // A 25 mm shaft made 25 mm smaller is 0 mm: no shaft; 24.999 mm smaller still leaves 1 µm.
+    const shaftNm = toNanometres('25', 'mm');
+    expect(() => whatIf({ clearanceNm: 20_000, deltaNm: -shaftNm, shaftNm })).toThrow(
+      'delta must leave a shaft size greater than 0; the shaft measures 25 mm and the change is -25 mm',
+    );
+    expect(() => whatIf({ clearanceNm: 20_000, deltaNm: -shaftNm - 1_000, shaftNm })).toThrow(MeasuredFitError);
+    expect(whatIf({ clearanceNm: 20_000, deltaNm: -shaftNm + 1_000, shaftNm }).remainingClearanceNm).toBe(20_000 + shaftNm - 1_000);
+  });
+
   it('rejects fractional nanometres', () => {
     expect(() => whatIf({ clearanceNm: 0.5, deltaNm: 1 })).toThrow(MeasuredFitError);
   });

@@ -79,10 +79,16 @@ export function measuredClearance(input: { bore: MeasuredDiameter; shaft: Measur
  * What a part `deltaNm` larger does to a clearance of `clearanceNm`, e.g. a part 0.0004 in larger
  * takes 2.5 % of a 0.016 in clearance. A negative delta (a smaller part) gives clearance back.
  */
-export function whatIf(input: { clearanceNm: Nanometres; deltaNm: Nanometres }): WhatIf {
+export function whatIf(input: { clearanceNm: Nanometres; deltaNm: Nanometres; shaftNm?: Nanometres }): WhatIf {
   assertWholeNanometres(input.clearanceNm, 'clearanceNm');
   assertWholeNanometres(input.deltaNm, 'deltaNm');
-  const { clearanceNm, deltaNm } = input;
+  const { clearanceNm, deltaNm, shaftNm } = input;
+  // A shaft made smaller by its own size or more is no part at all: refuse it rather than answer.
+  if (shaftNm !== undefined && shaftNm + deltaNm <= 0) {
+    throw new MeasuredFitError(
+      `delta must leave a shaft size greater than 0; the shaft measures ${fromNanometres(shaftNm, 'mm')} mm and the change is ${fromNanometres(deltaNm, 'mm')} mm`,
+    );
+  }
   const remainingClearanceNm = clearanceNm - deltaNm;
   return {
     clearanceNm,

@@ -1,7 +1,7 @@
 import { BadRequestException, ConflictException, Inject, Injectable, Logger, NotFoundException } from '@nestjs/common';
 import { EventEmitter2, OnEvent } from '@nestjs/event-emitter';
 import { InjectRepository } from '@nestjs/typeorm';
-import { In, Repository } from 'typeorm';
+import { EntityManager, In, Repository } from 'typeorm';
 import { AssemblyInterface } from '../assemblies/entities/assembly-interface.entity';
 import { newId } from '../common/database/columns';
 import { requireImage, type UploadedFileLike } from '../common/uploads/image-file';
@@ -239,26 +239,51 @@ export class FitChecksService {
     return check;
   }
 
+  /**
+   * A change by hand. It is applied only if the check is still in the state it was read in (a
+   * conditional UPDATE in the transaction that writes the history), so two identical requests at
+   * once (a double click) record and announce one change; the other answers 409 with the state now.
+   */
   async transition(workshopId: string, checkId: string, actorId: string, input: TransitionDto): Promise<FitCheck> {
     const check = await this.checkOf(workshopId, checkId);
+    if (input.from !== undefined && input.from !== check.state) throw this.stateConflict(check, input.to);
     const evidenceCount = await this.evidence.countBy({ fitCheckId: check.id });
     const verdict = canTransition(
       { state: check.state, required: check.required, evidenceCount, derived: check.interfaceId !== null, outcome: check.outcome },
       input.to,
     );
-    if (!verdict.allowed) throw new ConflictException(verdict.message);
+    if (!verdict.allowed) throw new ConflictException({ message: verdict.message, code: check.state === input.to ? 'already_in_state' : 'transition_refused', state: check.state });
 
     const from = check.state;
     // Re-opening a derived check hands it back to the engine's verdict.
     const target: FitCheckState =
       input.to === 'open' && check.interfaceId !== null && check.outcome ? stateForOutcome(check.outcome) : input.to;
-    check.state = target;
-    check.reason = input.reason;
-    check.confirmedBy = target === 'confirmed' ? actorId : null;
-    check.confirmedAt = target === 'confirmed' ? new Date() : null;
-    await this.checks.save(check);
-    await this.record(check, from, target, input.reason, actorId);
-    return check;
+    const change = {
+      state: target,
+      reason: input.reason,
+      confirmedBy: target === 'confirmed' ? actorId : null,
+      confirmedAt: target === 'confirmed' ? new Date() : null,
+    };
+    const history = await this.checks.manager.transaction(async (manager) => {
+      const claimed = await manager.update(FitCheck, { id: check.id, state: from }, change);
+      if (!claimed.affected) return null;
+      return this.saveHistory(manager, check.id, from, target, input.reason, actorId);
+    });
+    if (!history) throw this.stateConflict(await this.checkOf(workshopId, checkId), input.to);
+    const changed = await this.checkOf(workshopId, checkId);
+    await this.announce(changed, history);
+    return changed;
+  }
+
+  /** Someone (or the same double click) changed the check since it was read. */
+  private stateConflict(current: FitCheck, wanted: FitCheckState): ConflictException {
+    return current.state === wanted
+      ? new ConflictException({ message: `The check is already ${wanted}.`, code: 'already_in_state', state: current.state })
+      : new ConflictException({
+          message: `The check changed meanwhile: it is ${current.state} now. Look again before changing it.`,
+          code: 'state_changed',
+          state: current.state,
+        });
   }
 
   async addEvidence(workshopId: string, checkId: string, actorId: string, input: AddEvidenceDto): Promise<FitCheckEvidence> {
@@ -334,13 +359,36 @@ export class FitChecksService {
       if (error instanceof EngineError) throw new BadRequestException(`delta: ${error.message}`);
       throw error;
     }
-    return whatIf({ clearanceNm, deltaNm });
+    const shaft = verdict.detail.shaft as { meanNm?: unknown } | null | undefined;
+    const shaftNm = typeof shaft?.meanNm === 'number' ? shaft.meanNm : undefined;
+    try {
+      return whatIf({ clearanceNm, deltaNm, shaftNm });
+    } catch (error) {
+      if (error instanceof EngineError) throw new BadRequestException(error.message);
+      throw error;
+    }
   }
 
   // ---- helpers ----
 
   private async record(check: FitCheck, from: FitCheckState | null, to: FitCheckState, reason: string, actorId: string | null) {
-    const history = await this.events.save(this.events.create({ fitCheckId: check.id, fromState: from, toState: to, reason: reason.slice(0, 500), actorId }));
+    await this.announce(check, await this.saveHistory(this.events.manager, check.id, from, to, reason, actorId));
+  }
+
+  private saveHistory(
+    manager: EntityManager,
+    fitCheckId: string,
+    from: FitCheckState | null,
+    to: FitCheckState,
+    reason: string,
+    actorId: string | null,
+  ): Promise<FitCheckEvent> {
+    return manager.save(FitCheckEvent, manager.create(FitCheckEvent, { fitCheckId, fromState: from, toState: to, reason: reason.slice(0, 500), actorId }));
+  }
+
+  /** Tells the rest of the app (fit news) about a stored change; a row that changed nothing is history only. */
+  private async announce(check: FitCheck, history: FitCheckEvent): Promise<void> {
+    const { fromState: from, toState: to } = history;
     if (from === to) return;
     const event: FitCheckChangedEvent = {
       eventId: history.id,
@@ -350,8 +398,8 @@ export class FitChecksService {
       title: check.title,
       from,
       to,
-      reason,
-      actorId,
+      reason: history.reason,
+      actorId: history.actorId,
     };
     this.logger.log(`check ${check.id} ${from ?? 'new'} → ${to}`);
     await this.emitter.emitAsync(FIT_CHECK_CHANGED, event);

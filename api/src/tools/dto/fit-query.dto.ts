@@ -6,7 +6,7 @@ export class FitQueryDto {
   @ApiProperty({ example: 25, description: 'Nominal size, in `unit`' })
   @NumberFromText()
   @IsNumber({ allowNaN: false, allowInfinity: false }, { message: 'size must be a number' })
-  @IsPositive({ message: 'size must be greater than zero' })
+  @IsPositive({ message: 'size must be greater than 0 mm and at most 500 mm' })
   size!: number;
 
   @ApiProperty({ enum: ['mm', 'in'], default: 'mm' })

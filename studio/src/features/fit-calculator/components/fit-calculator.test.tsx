@@ -73,7 +73,37 @@ describe('FitCalculator', () => {
     renderWithProviders(<FitCalculator />, { route: '/tools/fit-calculator' });
     fireEvent.change(screen.getByRole('combobox', { name: 'Hole class' }), { target: { value: 'h7' } });
     fireEvent.click(screen.getByRole('button', { name: 'Calculate' }));
-    expect(await screen.findByText('A hole class is written in capitals, e.g. H7')).toBeTruthy();
+    expect(await screen.findByText('Hole class must be capital letters and an IT grade, such as H7')).toBeTruthy();
     expect(requests).toHaveLength(0);
   });
+
+  it('takes the old answer away when the next question is invalid, and names the size rule', async () => {
+    const requests = stubApi([
+      {
+        path: /^\/tools\/fits\?/,
+        // ISO 286-2, 18–30 mm: H7 +21/0, g6 −7/−20 µm.
+        body: {
+          hole: { upper: 21, lower: 0 },
+          shaft: { upper: -7, lower: -20 },
+          clearance: { max: 41, min: 7 },
+          kind: 'clearance',
+          convention: { jsRounding: 'none', description: 'js/JS = ±IT/2 exactly, as in the current ISO 286-2 tables' },
+        },
+      },
+    ]);
+    renderWithProviders(<FitCalculator />, { route: '/tools/fit-calculator?size=25&unit=mm&hole=H7&shaft=g6' });
+    expect(await screen.findByTestId('fit-result')).toBeTruthy();
+    const size = screen.getByRole('textbox', { name: 'Nominal size' });
+    for (const [typed, message] of [
+      ['0', 'Nominal size must be greater than 0 mm and at most 500 mm'],
+      ['600', 'Nominal size must be greater than 0 mm and at most 500 mm'],
+      ['-3', 'Nominal size must be a number such as 25 or 0.984, greater than 0 mm and at most 500 mm'],
+    ]) {
+      fireEvent.change(size, { target: { value: typed } });
+      fireEvent.click(screen.getByRole('button', { name: 'Calculate' }));
+      expect(await screen.findByText(message)).toBeTruthy();
+      expect(screen.queryByTestId('fit-result')).toBeNull();
+    }
+    expect(requests).toHaveLength(1);
+  }, 30_000);
 });

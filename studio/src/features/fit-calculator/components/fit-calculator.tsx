@@ -41,6 +41,27 @@ function queryFromParams(params: URLSearchParams): FitQuery | null {
   return size && hole && shaft ? { size, unit, hole, shaft, ...rounding } : null;
 }
 
+// ISO 286 tabulates nominal sizes over 0 up to 500 mm; 500 mm = 19.685 in (to the 0.001 in below).
+const SIZE_RULE = { mm: 'greater than 0 mm and at most 500 mm', in: 'greater than 0 in and at most 19.685 in (500 mm)' };
+const MAX_SIZE = { mm: 500, in: 500 / 25.4 };
+
+/** The checks the API makes too, so a plain slip is named before a request; each names the field and its rule. */
+function localCheck(query: FitQuery): Partial<Record<keyof FitQuery, string>> {
+  const errors: Partial<Record<keyof FitQuery, string>> = {};
+  if (!/^\s*(\d+(\.\d*)?|\.\d+)\s*$/.test(query.size)) {
+    errors.size = `${LABELS.size} must be a number such as 25 or 0.984, ${SIZE_RULE[query.unit]}`;
+  } else if (Number(query.size) <= 0 || Number(query.size) > MAX_SIZE[query.unit]) {
+    errors.size = `${LABELS.size} must be ${SIZE_RULE[query.unit]}`;
+  }
+  if (!/^[A-Z]{1,2}\d{1,2}$/.test(query.hole.trim())) {
+    errors.hole = `${LABELS.hole} must be capital letters and an IT grade, such as H7`;
+  }
+  if (!/^[a-z]{1,2}\d{1,2}$/.test(query.shaft.trim())) {
+    errors.shaft = `${LABELS.shaft} must be lower-case letters and an IT grade, such as g6`;
+  }
+  return errors;
+}
+
 /**
  * ISO 286 limits and fits for anyone, signed in or not. The question lives in the address, so a
  * result can be shared as a link.
@@ -56,12 +77,13 @@ export function FitCalculator() {
   const errorOf = (field: keyof FitQuery) => localErrors[field] ?? (apiErrors.fields as Partial<Record<string, string>>)[field];
 
   const handleSubmit = (next: FitQuery) => {
-    const errors: Partial<Record<keyof FitQuery, string>> = {};
-    if (!/^\s*(\d+(\.\d*)?|\.\d+)\s*$/.test(next.size) || Number(next.size) <= 0) errors.size = 'Write a size such as 25 or 0.984';
-    if (!/^[A-Z]{1,2}\d{1,2}$/.test(next.hole.trim())) errors.hole = 'A hole class is written in capitals, e.g. H7';
-    if (!/^[a-z]{1,2}\d{1,2}$/.test(next.shaft.trim())) errors.shaft = 'A shaft class is written in lower case, e.g. g6';
+    const errors = localCheck(next);
     setLocalErrors(errors);
-    if (Object.keys(errors).length > 0) return;
+    if (Object.keys(errors).length > 0) {
+      // The answer on screen belongs to the previous question: take it away with that question.
+      setParams({});
+      return;
+    }
     setParams({
       size: next.size.trim(),
       unit: next.unit,

@@ -23,7 +23,9 @@ export function WhatIfPanel({ workshopId, interfaceId, defaultUnit }: { workshop
 
   const handleSubmit = () => {
     if (!DECIMAL.test(delta)) {
-      setInputError('Write a size change such as 0.0004, or -0.01 for a smaller part');
+      setInputError('The size change must be a number such as 0.0004, or -0.01 for a smaller shaft');
+      // The answer shown belongs to the previous change: take it away with that change.
+      setAsked(null);
       return;
     }
     setAsked({ delta: delta.trim(), unit });
@@ -71,7 +73,8 @@ export function WhatIfPanel({ workshopId, interfaceId, defaultUnit }: { workshop
       </form>
       {answer.isError && (
         <Alert color="orange" title="No answer yet">
-          {answer.error.message}
+          {/* The API names its field by its wire name; here the field is the size change. */}
+          {answer.error.message.replace(/^delta\b/, 'The size change')}
         </Alert>
       )}
       {result && asked && (
