@@ -1,5 +1,5 @@
 import { Body, Controller, Get, Inject, Param, ParseUUIDPipe, Post, Query, Redirect, UploadedFile } from '@nestjs/common';
-import { ApiTags } from '@nestjs/swagger';
+import { ApiConflictResponse, ApiTags } from '@nestjs/swagger';
 import { WorkshopEditor } from '../common/decorators/access.decorator';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import type { SessionUser } from '../common/types/access-context';
@@ -36,6 +36,10 @@ export class FitChecksController {
   }
 
   @Post('checks/:checkId/transitions')
+  @ApiConflictResponse({
+    description:
+      'Refused, nothing stored: `already_in_state` (a repeat, e.g. a double click; `state` is the state now), `state_changed` (not in `from` any more) or `transition_refused` (the rules forbid it)',
+  })
   async transition(
     @Param('workshopId', ParseUUIDPipe) workshopId: string,
     @Param('checkId', ParseUUIDPipe) checkId: string,

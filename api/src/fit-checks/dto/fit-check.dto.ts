@@ -24,6 +24,14 @@ export class TransitionDto {
   @IsString()
   @Length(1, 500)
   reason!: string;
+
+  @ApiPropertyOptional({
+    enum: FIT_CHECK_STATES,
+    description: 'The state the caller saw and expects to leave; if the check is no longer in it, 409 and nothing changes',
+  })
+  @IsOptional()
+  @IsIn(FIT_CHECK_STATES)
+  from?: FitCheckState;
 }
 
 export class AddEvidenceDto {

@@ -10,9 +10,10 @@ function useRefreshChecks() {
 export function useTransitionCheck(workshopId: string) {
   const refresh = useRefreshChecks();
   return useMutation({
-    mutationFn: ({ checkId, to, reason }: { checkId: string; to: FitCheckState; reason: string }) =>
-      apiRequest<FitCheck>(`/workshops/${workshopId}/checks/${checkId}/transitions`, { method: 'POST', body: { to, reason } }),
-    onSuccess: refresh,
+    mutationFn: ({ checkId, to, reason, from }: { checkId: string; to: FitCheckState; reason: string; from: FitCheckState }) =>
+      apiRequest<FitCheck>(`/workshops/${workshopId}/checks/${checkId}/transitions`, { method: 'POST', body: { to, reason, from } }),
+    // A refusal (409: already in that state, or changed meanwhile) means the list on screen is stale too.
+    onSettled: refresh,
   });
 }
 

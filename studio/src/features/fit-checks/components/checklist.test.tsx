@@ -1,5 +1,5 @@
 import { Notifications } from '@mantine/notifications';
-import { fireEvent, screen, within } from '@testing-library/react';
+import { fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { stubApi } from '@/testing/api-stub';
 import { renderWithProviders } from '@/testing/render';
@@ -192,7 +192,32 @@ describe('Checklist', () => {
     fireEvent.change(within(dialog).getByRole('textbox', { name: /Reason/ }), { target: { value: 'Bolted up; turns by hand.' } });
     fireEvent.click(within(dialog).getByRole('button', { name: 'Confirm' }));
     expect(await screen.findByText('Attach evidence (a measurement, a mark or a photo) before confirming.')).toBeTruthy();
-    expect(requests.find((request) => request.method === 'POST')?.body).toEqual({ to: 'confirmed', reason: 'Bolted up; turns by hand.' });
+    expect(requests.find((request) => request.method === 'POST')?.body).toEqual({ to: 'confirmed', reason: 'Bolted up; turns by hand.', from: 'open' });
+  });
+
+  it('sends a double-clicked Confirm once, and keeps the button disabled while it is on its way', async () => {
+    const requests = show();
+    // Hold the API's answer until the test lets it go, so the request is visibly in flight.
+    let answer = () => {};
+    const answered = new Promise<void>((resolve) => (answer = resolve));
+    const fetchSpy = vi.mocked(globalThis.fetch);
+    const stubbed = fetchSpy.getMockImplementation()!;
+    fetchSpy.mockImplementation(async (input, init) => {
+      if (init?.method === 'POST') await answered;
+      return stubbed(input, init);
+    });
+    await screen.findByTestId('checklist-verdict');
+    fireEvent.click(within(screen.getAllByTestId('check-card')[2]).getByRole('button', { name: 'Confirm…' }));
+    const dialog = await screen.findByRole('dialog');
+    fireEvent.change(within(dialog).getByRole('textbox', { name: /Reason/ }), { target: { value: 'Bolted up; turns by hand.' } });
+    const button = within(dialog).getByRole('button', { name: 'Confirm' });
+    fireEvent.click(button);
+    fireEvent.click(button);
+    await waitFor(() => expect(button.hasAttribute('disabled')).toBe(true));
+    fireEvent.click(button);
+    answer();
+    expect(await screen.findByText('Attach evidence (a measurement, a mark or a photo) before confirming.')).toBeTruthy();
+    expect(requests.filter((request) => request.method === 'POST')).toHaveLength(1);
   });
 
   it('asks for a reason before changing a state', async () => {

@@ -1,5 +1,5 @@
 import { Button, Group, Modal, Stack, Text, Textarea } from '@mantine/core';
-import { useState } from 'react';
+import { useRef, useState } from 'react';
 import { notifyDone, notifyError } from '@/lib/notify';
 import { useTransitionCheck } from '../api/mutations';
 import type { FitCheck, FitCheckState } from '../api/queries';
@@ -36,6 +36,8 @@ export function TransitionModal({ workshopId, request, onClose }: { workshopId: 
   const transition = useTransitionCheck(workshopId);
   const [reason, setReason] = useState('');
   const [missing, setMissing] = useState(false);
+  // Set before the request leaves, so a second click in the same frame (before `isPending` renders) sends nothing.
+  const inFlight = useRef(false);
   const action = request ? ACTION[request.to] : undefined;
 
   const handleClose = () => {
@@ -45,14 +47,19 @@ export function TransitionModal({ workshopId, request, onClose }: { workshopId: 
   };
 
   const handleSubmit = () => {
-    if (!request) return;
+    if (!request || inFlight.current) return;
     if (!reason.trim()) {
       setMissing(true);
       return;
     }
+    inFlight.current = true;
     transition.mutate(
-      { checkId: request.check.id, to: request.to, reason: reason.trim() },
+      // `from` is the state this person saw: if the check moved on meanwhile, the API refuses rather than repeats.
+      { checkId: request.check.id, to: request.to, reason: reason.trim(), from: request.check.state },
       {
+        onSettled: () => {
+          inFlight.current = false;
+        },
         onSuccess: (check) => {
           notifyDone(`"${check.title}" is now: ${STATE_LOOK[check.state].label}.`);
           handleClose();
@@ -94,7 +101,7 @@ export function TransitionModal({ workshopId, request, onClose }: { workshopId: 
               <Button variant="default" onClick={handleClose}>
                 Cancel
               </Button>
-              <Button type="submit" loading={transition.isPending} color={request.to === 'no_fit' ? 'red' : undefined}>
+              <Button type="submit" loading={transition.isPending} disabled={transition.isPending} color={request.to === 'no_fit' ? 'red' : undefined}>
                 {action.button}
               </Button>
             </Group>
