@@ -119,9 +119,9 @@ describe('fit reports (real MariaDB, S3 fake, mail fake)', () => {
     const mail = await waitForMail(reporter.email, { subject: 'Fit confirmed: Follower combination fits', excluding: before });
     expect(mail.text).toContain('You get this because you sent a fit report that this check verifies.');
     expect(mail.text).toContain('Evidence: a reading of 15.010 mm.');
-    // No guide shows this assembly, so the link goes to the reporter's own reports; no unsubscribe (nothing is followed).
+    // No guide shows this assembly, so the link goes to the reporter's own reports; the mail still carries its way out.
     expect(linkFrom(mail, '/account').pathname).toBe('/account');
-    expect(mail.headers?.['list-unsubscribe']).toBeUndefined();
+    expect(mail.headers?.['list-unsubscribe']).toMatch(/^<http.*\/api\/follows\/unsubscribe\?token=[\w-]+>$/);
 
     const verified = await owner.agent.patch(`${base}/fit-reports/${reportId}`).send({ status: 'verified' }).expect(200);
     expect(verified.body.status).toBe('verified');

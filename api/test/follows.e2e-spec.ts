@@ -128,9 +128,13 @@ describe('follows and fit-news e-mails (real MariaDB, Redis, mail fake)', () => 
       .type('form')
       .send('List-Unsubscribe=One-Click')
       .expect(200);
-    expect(first.body).toEqual({ status: 'unfollowed', label: 'Test stack' });
+    expect(first.body).toMatchObject({ status: 'unfollowed', stopped: 'follow', label: 'Test stack' });
+    // The workshop follow would still bring news of this assembly: the page names it.
+    expect(first.body.stillFollowing.map((follow: { targetKind: string; label: string }) => [follow.targetKind, follow.label])).toEqual([
+      ['workshop', 'Follow Test Shop'],
+    ]);
     const second = await anonymous.post('/api/follows/unsubscribe').send({ token }).expect(200);
-    expect(second.body).toEqual({ status: 'already', label: 'Test stack' });
+    expect(second.body).toMatchObject({ status: 'already', label: 'Test stack' });
     await anonymous.post('/api/follows/unsubscribe').send({ token: 'x'.repeat(43) }).expect(404);
     const mine = await viewer.agent.get('/api/follows').expect(200);
     expect(mine.body.map((follow: { targetKind: string }) => follow.targetKind)).toEqual(['workshop']);

@@ -12,19 +12,28 @@ export interface FitNews {
   buildTitle: string;
   /** The guide's checklist, or the reporter's account page when no published guide shows the assembly. */
   link: { label: string; url: string };
-  because: FollowReason | { kind: 'report' };
+  because: FollowReason | ReportReason;
+  /** Every fit-news mail carries a way out, whatever brought it. */
+  unsubscribe: UnsubscribeLinks;
 }
 
 export interface FollowReason {
   kind: 'follow';
   label: string;
-  /** The studio page that unfollows (for people). */
-  unsubscribePageUrl: string;
-  /** The API address that unfollows in one POST (for mail clients, RFC 8058). */
-  oneClickUnsubscribeUrl: string;
 }
 
-/** The e-mail a follower gets when a fit is confirmed or fails. */
+export interface ReportReason {
+  kind: 'report';
+}
+
+export interface UnsubscribeLinks {
+  /** The studio page that stops this mail and lists what else would still bring it (for people). */
+  pageUrl: string;
+  /** The API address that stops it in one POST (for mail clients, RFC 8058). */
+  oneClickUrl: string;
+}
+
+/** The e-mail a follower (or the person whose fit report the check verifies) gets when a fit is confirmed or fails. */
 export function fitNewsMail(news: FitNews): OutgoingMail {
   const outcome = news.news === 'confirmed' ? 'confirmed it fits, test-fitted on the vehicle' : 'found that it does not fit';
   return composeMail(
@@ -35,12 +44,10 @@ export function fitNewsMail(news: FitNews): OutgoingMail {
       ...(news.reason ? [`Their note: ${news.reason}`] : []),
       ...(news.evidence.length ? [`Evidence: ${news.evidence.join('; ')}.`] : []),
       news.because.kind === 'follow'
-        ? `You get this because you follow ${news.because.label}. To stop, open ${news.because.unsubscribePageUrl}`
-        : 'You get this because you sent a fit report that this check verifies.',
+        ? `You get this because you follow ${news.because.label}. To stop, open ${news.unsubscribe.pageUrl}`
+        : `You get this because you sent a fit report that this check verifies. To stop news about your report, open ${news.unsubscribe.pageUrl}`,
     ],
     news.link,
-    news.because.kind === 'follow'
-      ? { 'List-Unsubscribe': `<${news.because.oneClickUnsubscribeUrl}>`, 'List-Unsubscribe-Post': 'List-Unsubscribe=One-Click' }
-      : undefined,
+    { 'List-Unsubscribe': `<${news.unsubscribe.oneClickUrl}>`, 'List-Unsubscribe-Post': 'List-Unsubscribe=One-Click' },
   );
 }

@@ -76,9 +76,14 @@ export class FitNewsService {
 
     // Who hears, and why: reporters whose claim this check verifies, then followers through their closest follow.
     // Followers only hear of assemblies a published guide shows; a reporter's report was tied to the check on purpose.
-    const reasons = new Map<string, Follow | 'report'>();
-    const reports = await this.reports.find({ where: { fitCheckId: event.fitCheckId, status: Not('declined') }, select: { reporterId: true } });
-    for (const report of reports) reasons.set(report.reporterId, 'report');
+    // A reporter who stopped a report's news from an e-mail hears no more through it.
+    const reasons = new Map<string, Follow | FitReport>();
+    const reports = await this.reports.find({
+      where: { fitCheckId: event.fitCheckId, status: Not('declined'), fitNewsStoppedAt: IsNull() },
+      select: { id: true, reporterId: true },
+      order: { createdAt: 'ASC' },
+    });
+    for (const report of reports) if (!reasons.has(report.reporterId)) reasons.set(report.reporterId, report);
     if (guide) {
       const follows = await this.follows.find({ where: CLOSEST_FIRST.map((kind) => ({ targetKind: kind, targetId: targets[kind].id })) });
       for (const kind of CLOSEST_FIRST) {
@@ -97,14 +102,17 @@ export class FitNewsService {
     let queued = 0;
     for (const user of recipients) {
       const reason = reasons.get(user.id)!;
+      const follow = reason instanceof Follow ? reason : null;
       const token = newSecretToken();
       try {
         await this.deliveries.insert(
           this.deliveries.create({
             fitCheckEventId: event.eventId,
             userId: user.id,
-            followId: reason === 'report' ? null : reason.id,
-            followLabel: reason === 'report' ? 'your fit report' : targets[reason.targetKind].label,
+            assemblyId: assembly.id,
+            followId: follow?.id ?? null,
+            fitReportId: follow ? null : reason.id,
+            followLabel: follow ? targets[follow.targetKind].label : 'your fit report',
             tokenHash: hashSecretToken(token),
           }),
         );
@@ -123,15 +131,11 @@ export class FitNewsService {
           assemblyName: assembly.name,
           buildTitle: build.title,
           link,
-          because:
-            reason === 'report'
-              ? { kind: 'report' }
-              : {
-                  kind: 'follow',
-                  label: targets[reason.targetKind].label,
-                  unsubscribePageUrl: `${this.appOrigin}/unsubscribe?token=${token}`,
-                  oneClickUnsubscribeUrl: `${this.appOrigin}/api/follows/unsubscribe?token=${token}`,
-                },
+          because: follow ? { kind: 'follow', label: targets[follow.targetKind].label } : { kind: 'report' },
+          unsubscribe: {
+            pageUrl: `${this.appOrigin}/unsubscribe?token=${token}`,
+            oneClickUrl: `${this.appOrigin}/api/follows/unsubscribe?token=${token}`,
+          },
         }),
       );
       queued += 1;

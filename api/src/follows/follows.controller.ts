@@ -1,10 +1,10 @@
 import { BadRequestException, Body, Controller, Delete, Get, HttpCode, Inject, Param, ParseUUIDPipe, Post, Query, Res } from '@nestjs/common';
-import { ApiNoContentResponse, ApiNotFoundResponse, ApiTags } from '@nestjs/swagger';
+import { ApiNoContentResponse, ApiNotFoundResponse, ApiOkResponse, ApiTags } from '@nestjs/swagger';
 import type { Response } from 'express';
 import { Public, SignedIn } from '../common/decorators/access.decorator';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import type { SessionUser } from '../common/types/access-context';
-import { CreateFollowDto, UnsubscribeBodyDto, UnsubscribeQueryDto } from './dto/follow.dto';
+import { CreateFollowDto, UnsubscribeBodyDto, UnsubscribeQueryDto, UnsubscribeResultDto } from './dto/follow.dto';
 import { FollowsService } from './follows.service';
 
 /** What a signed-in person follows, and the e-mailed one-click way out. */
@@ -32,10 +32,12 @@ export class FollowsController {
   @Post('unsubscribe')
   @Public()
   @HttpCode(200)
+  @ApiOkResponse({ type: UnsubscribeResultDto })
+  @ApiNotFoundResponse({ description: 'Unknown token, or a followId this link cannot stop' })
   unsubscribe(@Query() query: UnsubscribeQueryDto, @Body() body: UnsubscribeBodyDto) {
     const token = query.token ?? body?.token;
     if (!token) throw new BadRequestException('The unsubscribe link is missing its token.');
-    return this.follows.unsubscribe(token);
+    return this.follows.unsubscribe(token, body?.followId);
   }
 
   @Delete(':followId')

@@ -5,6 +5,7 @@ import { Assembly } from '../assemblies/entities/assembly.entity';
 import { Build } from '../builds/entities/build.entity';
 import { isDuplicateKey } from '../common/database/errors';
 import { hashSecretToken } from '../common/secret-token';
+import { FitReport } from '../fit-reports/entities/fit-report.entity';
 import { Guide } from '../guides/entities/guide.entity';
 import { WorkshopMember } from '../workshops/entities/workshop-member.entity';
 import { Workshop } from '../workshops/entities/workshop.entity';
@@ -29,6 +30,7 @@ export class FollowsService {
   constructor(
     @InjectRepository(Follow) private readonly follows: Repository<Follow>,
     @InjectRepository(FitNewsDelivery) private readonly deliveries: Repository<FitNewsDelivery>,
+    @InjectRepository(FitReport) private readonly reports: Repository<FitReport>,
     @InjectRepository(Workshop) private readonly workshops: Repository<Workshop>,
     @InjectRepository(Build) private readonly builds: Repository<Build>,
     @InjectRepository(Assembly) private readonly assemblies: Repository<Assembly>,
@@ -65,13 +67,62 @@ export class FollowsService {
     await this.follows.remove(follow);
   }
 
-  /** The e-mail's unsubscribe link: ends the follow that sent it. Using it twice is harmless. */
-  async unsubscribe(token: string) {
+  /**
+   * The e-mail's unsubscribe link: ends what sent that mail (the follow, or the news of the person's fit
+   * report) and names the person's other follows that would still bring news of the same assembly (its
+   * build, its workshop), so the page can offer to stop those too. Using it twice is harmless.
+   * With `alsoStopFollowId`, the same link stops one of those other follows instead.
+   */
+  async unsubscribe(token: string, alsoStopFollowId?: string) {
     const delivery = await this.deliveries.findOneBy({ tokenHash: hashSecretToken(token) });
     if (!delivery) throw new NotFoundException('This unsubscribe link is not known. Manage what you follow on your account page.');
-    if (!delivery.followId) return { status: 'already' as const, label: delivery.followLabel };
-    await this.follows.delete({ id: delivery.followId });
-    return { status: 'unfollowed' as const, label: delivery.followLabel };
+    if (alsoStopFollowId !== undefined) {
+      const covering = await this.followsCovering(delivery);
+      if (!covering.some((follow) => follow.id === alsoStopFollowId)) {
+        const message = 'That follow is already stopped, or this link cannot stop it';
+        throw new NotFoundException({ message, errors: { followId: message }, code: 'reference_not_found' });
+      }
+      await this.follows.delete({ id: alsoStopFollowId, userId: delivery.userId });
+      return this.unsubscribeOutcome(delivery, 'unfollowed');
+    }
+    if (delivery.fitReportId) return this.unsubscribeOutcome(delivery, await this.stopReportNews(delivery.userId, delivery.fitReportId));
+    if (!delivery.followId) return this.unsubscribeOutcome(delivery, 'already');
+    const removed = await this.follows.delete({ id: delivery.followId, userId: delivery.userId });
+    return this.unsubscribeOutcome(delivery, removed.affected ? 'unfollowed' : 'already');
+  }
+
+  /** Stops the news of the person's reports tied to the same check as this one (each would bring the same mail). */
+  private async stopReportNews(reporterId: string, reportId: string): Promise<'unfollowed' | 'already'> {
+    const report = await this.reports.findOneBy({ id: reportId, reporterId });
+    if (!report?.fitCheckId) return 'already';
+    const stopped = await this.reports.update(
+      { reporterId, fitCheckId: report.fitCheckId, fitNewsStoppedAt: IsNull() },
+      { fitNewsStoppedAt: new Date() },
+    );
+    return stopped.affected ? 'unfollowed' : 'already';
+  }
+
+  private async unsubscribeOutcome(delivery: FitNewsDelivery, status: 'unfollowed' | 'already') {
+    return {
+      status,
+      stopped: delivery.fitReportId ? ('report' as const) : ('follow' as const),
+      label: delivery.followLabel,
+      stillFollowing: await this.describe(await this.followsCovering(delivery)),
+    };
+  }
+
+  /** The person's follows that bring news of the delivery's assembly: the assembly, its build, its workshop. */
+  private async followsCovering(delivery: FitNewsDelivery): Promise<Follow[]> {
+    const assembly = await this.assemblies.findOneBy({ id: delivery.assemblyId });
+    if (!assembly) return [];
+    const targets: { targetKind: FollowTargetKind; targetId: string }[] = [
+      { targetKind: 'assembly', targetId: assembly.id },
+      { targetKind: 'build', targetId: assembly.buildId },
+      { targetKind: 'workshop', targetId: assembly.workshopId },
+    ];
+    const follows = await this.follows.find({ where: targets.map((target) => ({ ...target, userId: delivery.userId })) });
+    // Closest first, as the fan-out chooses which follow a mail names.
+    return targets.flatMap((target) => follows.filter((follow) => follow.targetKind === target.targetKind));
   }
 
   /** The workshop, build or assembly, named, or null when there is no such thing. */

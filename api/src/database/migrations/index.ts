@@ -7,6 +7,7 @@ import { MarkEvidence1764900000001 } from './1764900000001-mark-evidence';
 import { Guides1765000000000 } from './1765000000000-guides';
 import { Follows1765100000000 } from './1765100000000-follows';
 import { FitReports1765200000000 } from './1765200000000-fit-reports';
+import { FitNewsUnsubscribe1765310000000 } from './1765310000000-fit-news-unsubscribe';
 
 /** Every migration, oldest first. Listed explicitly so the same list works from src (tests) and dist. */
 // eslint-disable-next-line @typescript-eslint/no-unsafe-function-type
@@ -19,4 +20,5 @@ export const migrations: MixedList<Function> = [
   Guides1765000000000,
   Follows1765100000000,
   FitReports1765200000000,
+  FitNewsUnsubscribe1765310000000,
 ];

@@ -56,6 +56,10 @@ export class FitReport {
   @Column({ name: 'fit_check_id', type: 'char', length: 36, nullable: true })
   fitCheckId!: string | null;
 
+  /** Set when the reporter stopped this report's fit news from an e-mail's unsubscribe link. */
+  @Column({ name: 'fit_news_stopped_at', type: 'datetime', precision: 3, nullable: true })
+  fitNewsStoppedAt!: Date | null;
+
   @CreatedAtColumn()
   createdAt!: Date;
 

@@ -22,8 +22,39 @@ export class UnsubscribeQueryDto {
 }
 
 export class UnsubscribeBodyDto extends UnsubscribeQueryDto {
+  @ApiPropertyOptional({
+    description: 'Stop this other follow instead: one of the `stillFollowing` the first answer listed (same token, no sign-in)',
+  })
+  @IsOptional()
+  @IsUUID()
+  followId?: string;
+
   @ApiPropertyOptional({ description: 'Sent by mail clients on one-click unsubscribe; ignored' })
   @IsOptional()
   @IsString()
   'List-Unsubscribe'?: string;
+}
+
+export class UnsubscribedFollowDto {
+  @ApiProperty() id!: string;
+  @ApiProperty({ enum: FOLLOW_TARGET_KINDS }) targetKind!: FollowTargetKind;
+  @ApiProperty() targetId!: string;
+  @ApiProperty() label!: string;
+  @ApiProperty({ example: { name: 'Harrow Lane Garage', slug: 'harrow-lane' } }) workshop!: { name: string; slug: string };
+  @ApiProperty() createdAt!: string;
+}
+
+/** What the unsubscribe link did, and what would still bring news of the same assembly. */
+export class UnsubscribeResultDto {
+  @ApiProperty({ enum: ['unfollowed', 'already'], description: '`already` when the link had been used before' })
+  status!: 'unfollowed' | 'already';
+
+  @ApiProperty({ enum: ['follow', 'report'], description: 'What the e-mail came through: a follow, or the person\'s fit report' })
+  stopped!: 'follow' | 'report';
+
+  @ApiProperty({ description: 'What the e-mail named: the followed workshop, build or assembly, or "your fit report"' })
+  label!: string;
+
+  @ApiProperty({ type: [UnsubscribedFollowDto], description: 'The person\'s other follows that still bring news of the same assembly (closest first)' })
+  stillFollowing!: UnsubscribedFollowDto[];
 }

@@ -29,7 +29,9 @@ export function useUnfollow() {
 export function useUnsubscribe() {
   const refresh = useRefreshFollows();
   return useMutation({
-    mutationFn: (token: string) => apiRequest<UnsubscribeResult>('/follows/unsubscribe', { method: 'POST', body: { token } }),
+    // With a followId: stop one of the other follows the first answer listed, with the same link.
+    mutationFn: ({ token, followId }: { token: string; followId?: string }) =>
+      apiRequest<UnsubscribeResult>('/follows/unsubscribe', { method: 'POST', body: followId ? { token, followId } : { token } }),
     // The person may be signed in in this browser: their list of follows changed too.
     onSuccess: () => void refresh(),
   });

@@ -29,7 +29,11 @@ export interface FollowTargets {
 /** POST /follows/unsubscribe: the e-mailed link, for anyone. */
 export interface UnsubscribeResult {
   status: 'unfollowed' | 'already';
+  /** What the e-mail came through: a follow, or the person's own fit report. */
+  stopped: 'follow' | 'report';
   label: string;
+  /** The person's other follows that would still bring news of the same assembly, closest first. */
+  stillFollowing: Follow[];
 }
 
 export const followQueries = {

@@ -1,14 +1,16 @@
-import { Alert, Anchor, Button, Loader, Paper, Stack, Text, Title } from '@mantine/core';
-import { useEffect, useRef } from 'react';
+import { Alert, Anchor, Button, Group, Loader, Paper, Stack, Text, Title } from '@mantine/core';
+import { useEffect, useRef, useState } from 'react';
 import { Link } from 'react-router-dom';
 import { paths } from '@/config/paths';
 import { ApiError } from '@/lib/api-client';
 import { useSession } from '@/lib/session';
 import { useUnsubscribe } from '../api/mutations';
+import type { UnsubscribeResult } from '../api/queries';
+import { KIND_IN_WORDS } from './follow-words';
 
 /**
  * The page behind every fit-news e-mail's "stop" link: it sends the link's token once, as soon as it
- * opens (a ref keeps React's development double-render from sending it twice), signed in or not.
+ * opens, says what stopped and lists what would still bring the same news (a ref keeps React's development double-render from sending it twice), signed in or not.
  */
 export function UnsubscribeView({ token }: { token: string | null }) {
   const unsubscribe = useUnsubscribe();
@@ -17,7 +19,7 @@ export function UnsubscribeView({ token }: { token: string | null }) {
   useEffect(() => {
     if (!token || sent.current) return;
     sent.current = true;
-    mutate(token);
+    mutate({ token });
   }, [token, mutate]);
 
   return (
@@ -27,6 +29,55 @@ export function UnsubscribeView({ token }: { token: string | null }) {
         <Outcome token={token} unsubscribe={unsubscribe} />
       </Stack>
     </Paper>
+  );
+}
+
+/**
+ * The person's other follows that would still bring news of the same assembly (its build, its
+ * workshop), each with a one-click stop that uses the same link: the page never claims more than it stopped.
+ */
+function StillFollowing({ token, first }: { token: string; first: UnsubscribeResult }) {
+  const alsoStop = useUnsubscribe();
+  const [stopping, setStopping] = useState<string | null>(null);
+  const { stillFollowing } = alsoStop.data ?? first;
+  const stoppedSome = alsoStop.isSuccess;
+
+  if (stillFollowing.length === 0) {
+    return (
+      <Text size="sm" data-testid="still-following-none">
+        {stoppedSome ? 'Those are stopped too. ' : ''}Nothing else you follow brings news of this.
+      </Text>
+    );
+  }
+  return (
+    <Stack gap="xs" w="100%" data-testid="still-following">
+      <Text size="sm">You still follow these, and they bring news of the same thing. Stop them too?</Text>
+      {stillFollowing.map((follow) => (
+        <Group key={follow.id} justify="space-between" wrap="nowrap">
+          <Text size="sm">
+            {KIND_IN_WORDS[follow.targetKind]}: {follow.label}
+            {follow.targetKind !== 'workshop' && follow.workshop.name ? ` (${follow.workshop.name})` : ''}
+          </Text>
+          <Button
+            size="xs"
+            variant="default"
+            loading={alsoStop.isPending && stopping === follow.id}
+            disabled={alsoStop.isPending}
+            onClick={() => {
+              setStopping(follow.id);
+              alsoStop.mutate({ token, followId: follow.id });
+            }}
+          >
+            Stop {follow.label}
+          </Button>
+        </Group>
+      ))}
+      {alsoStop.isError && (
+        <Alert color="red" role="alert">
+          {alsoStop.error.message}
+        </Alert>
+      )}
+    </Stack>
   );
 }
 
@@ -56,7 +107,7 @@ function Outcome({ token, unsubscribe }: { token: string | null; unsubscribe: Re
             : unsubscribe.error.message}
         </Alert>
         {!unknown && (
-          <Button variant="default" onClick={() => unsubscribe.mutate(token)}>
+          <Button variant="default" onClick={() => unsubscribe.mutate({ token })}>
             Try again
           </Button>
         )}
@@ -70,9 +121,10 @@ function Outcome({ token, unsubscribe }: { token: string | null; unsubscribe: Re
       <Stack gap="sm" align="flex-start">
         <Alert color="patina" role="status" title={status === 'already' ? 'Already stopped' : 'Stopped'} w="100%" data-testid="unsubscribe-outcome">
           {status === 'already'
-            ? `You had already stopped fit news about ${label}. We will not send you more.`
+            ? `You had already stopped fit news about ${label}. We will not send you more through it.`
             : `You will no longer get fit news about ${label}.`}
         </Alert>
+        <StillFollowing token={token} first={unsubscribe.data} />
         {manage}
         <Anchor component={Link} to={paths.guideIndex} size="sm">
           Browse published guides
