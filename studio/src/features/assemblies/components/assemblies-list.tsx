@@ -6,6 +6,7 @@ import { useState } from 'react';
 import { Link, useNavigate } from 'react-router-dom';
 import { paths } from '@/config/paths';
 import { splitApiErrors } from '@/lib/form-errors';
+import { useWorkshopReadOnly } from '@/lib/workshop-access';
 import { useCreateAssembly } from '../api/mutations';
 import { assemblyQueries } from '../api/queries';
 
@@ -16,6 +17,7 @@ export function AssembliesList({ workshopId, buildId }: { workshopId: string; bu
   const [creating, createForm] = useDisclosure(false);
   const [general, setGeneral] = useState<string[]>([]);
   const navigate = useNavigate();
+  const readOnly = useWorkshopReadOnly();
   const form = useForm({
     initialValues: { name: '', notes: '' },
     validate: { name: (value) => (value.trim() ? null : 'Name the combination, e.g. "21-tooth coupler with the long shaft"') },
@@ -44,7 +46,7 @@ export function AssembliesList({ workshopId, buildId }: { workshopId: string; bu
           <Button component={Link} to={paths.parts.to(workshopId)} variant="default">
             Parts of this workshop
           </Button>
-          {!creating && <Button onClick={createForm.open}>New assembly</Button>}
+          {!creating && !readOnly && <Button onClick={createForm.open}>New assembly</Button>}
         </Group>
       </Group>
       {creating && (

@@ -7,17 +7,19 @@ import { buildQueries } from '../api/queries';
 import { BuildCreateForm } from './build-create-form';
 import { BUILD_STATUS_LABELS } from './build-labels';
 import { formatDate } from '@/lib/dates';
+import { useWorkshopReadOnly } from '@/lib/workshop-access';
 
 export function BuildsList({ workshopId }: { workshopId: string }) {
   const builds = useQuery(buildQueries.list(workshopId));
   const [creating, { open, close }] = useDisclosure(false);
   const navigate = useNavigate();
+  const readOnly = useWorkshopReadOnly();
 
   return (
     <Stack>
       <Group justify="space-between">
         <Title order={3}>Builds</Title>
-        <Button onClick={open}>New build</Button>
+        {!readOnly && <Button onClick={open}>New build</Button>}
       </Group>
       {builds.isPending && <Skeleton height={120} />}
       {builds.isError && <Alert color="red" title="Builds could not be loaded">{builds.error.message}</Alert>}

@@ -1,6 +1,7 @@
 import { Alert, Group, SimpleGrid, Skeleton, Stack, Text, Title } from '@mantine/core';
 import { useQuery } from '@tanstack/react-query';
 import { notifyError } from '@/lib/notify';
+import { useWorkshopReadOnly } from '@/lib/workshop-access';
 import { footageQueries } from '../api/queries';
 import type { Footage } from '../api/types';
 import { useFootageUploads } from '../hooks/use-footage-uploads';
@@ -14,6 +15,7 @@ export function BuildFootage({ workshopId, buildId }: { workshopId: string; buil
   const list = useQuery(footageQueries.list(workshopId, buildId));
   const { uploads, upload, resume } = useFootageUploads(workshopId, buildId);
   const activeHere = new Set(uploads.map((item) => item.plan.footageId));
+  const readOnly = useWorkshopReadOnly();
 
   const handleFiles = (files: File[]) => {
     for (const file of files) {
@@ -31,7 +33,7 @@ export function BuildFootage({ workshopId, buildId }: { workshopId: string; buil
         <Title order={3}>Footage</Title>
         <WorkshopTranscriptSearch workshopId={workshopId} />
       </Group>
-      <FootageDropzone workshopId={workshopId} onFiles={handleFiles} />
+      {!readOnly && <FootageDropzone workshopId={workshopId} onFiles={handleFiles} />}
       {uploads.length > 0 && (
         <Stack gap="xs" aria-label="Uploads in progress">
           {uploads.map((item) => (

@@ -3,6 +3,7 @@ import { Link } from 'react-router-dom';
 import { ConfirmButton } from '@/components/confirm-button';
 import { paths } from '@/config/paths';
 import { notifyError } from '@/lib/notify';
+import { useWorkshopReadOnly } from '@/lib/workshop-access';
 import { useDeleteFootage } from '../api/mutations';
 import type { Footage } from '../api/types';
 import { FootageStateBadge } from './footage-state-badge';
@@ -42,6 +43,7 @@ function PosterArea({ footage, uploadingHere }: { footage: Footage; uploadingHer
 export function FootageCard({ footage, uploadingHere, onResume }: FootageCardProps) {
   const deleteFootage = useDeleteFootage(footage.workshopId);
   const playerPath = paths.footage.to(footage.workshopId, footage.id);
+  const readOnly = useWorkshopReadOnly();
   const interrupted = footage.state === 'uploading' && !uploadingHere && footage.upload !== null;
 
   const handleDelete = () =>
@@ -87,7 +89,7 @@ export function FootageCard({ footage, uploadingHere, onResume }: FootageCardPro
             {footage.failureReason}
           </Text>
         )}
-        {interrupted && footage.upload && (
+        {interrupted && !readOnly && footage.upload && (
           <Stack gap={4}>
             <Progress value={(footage.upload.uploadedBytes / footage.sizeBytes) * 100} color="gray" size="sm" />
             <Text size="sm">
@@ -104,7 +106,7 @@ export function FootageCard({ footage, uploadingHere, onResume }: FootageCardPro
             </FileButton>
           </Stack>
         )}
-        {!uploadingHere && (
+        {!uploadingHere && !readOnly && (
           <Group gap="xs" justify="flex-end">
             <ConfirmButton
               size="xs"

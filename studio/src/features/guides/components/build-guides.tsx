@@ -6,6 +6,7 @@ import { useState } from 'react';
 import { Link, useNavigate } from 'react-router-dom';
 import { paths } from '@/config/paths';
 import { splitApiErrors } from '@/lib/form-errors';
+import { useWorkshopReadOnly } from '@/lib/workshop-access';
 import { useCreateGuide } from '../api/mutations';
 import { guideQueries } from '../api/queries';
 import { GuideStatusBadges } from './guide-status';
@@ -18,6 +19,7 @@ export function BuildGuides({ workshopId, buildId }: { workshopId: string; build
   const [creating, createForm] = useDisclosure(false);
   const [general, setGeneral] = useState<string[]>([]);
   const navigate = useNavigate();
+  const readOnly = useWorkshopReadOnly();
   const form = useForm({
     initialValues: { title: '' },
     validate: { title: (value) => (value.trim() ? null : 'Name the guide, e.g. "Fitting the motor-to-gearbox coupler"') },
@@ -42,7 +44,7 @@ export function BuildGuides({ workshopId, buildId }: { workshopId: string; build
     <Stack gap="sm" data-testid="build-guides">
       <Group justify="space-between">
         <Title order={3}>Guides</Title>
-        {!creating && <Button onClick={createForm.open}>New guide</Button>}
+        {!creating && !readOnly && <Button onClick={createForm.open}>New guide</Button>}
       </Group>
       {creating && (
         <Card withBorder>

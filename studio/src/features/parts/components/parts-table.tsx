@@ -4,6 +4,7 @@ import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { Link, useNavigate } from 'react-router-dom';
 import { paths } from '@/config/paths';
+import { useWorkshopReadOnly } from '@/lib/workshop-access';
 import { useCreatePart } from '../api/mutations';
 import { FEATURE_KINDS, PART_CATEGORIES, partQueries, type FeatureKind, type PartCategory, type PartFilters } from '../api/queries';
 import { PartForm } from './part-form';
@@ -25,12 +26,13 @@ export function PartsTable({ workshopId }: { workshopId: string }) {
   const [creating, { open, close }] = useDisclosure(false);
   const createPart = useCreatePart(workshopId);
   const navigate = useNavigate();
+  const readOnly = useWorkshopReadOnly();
 
   return (
     <Stack>
       <Group justify="space-between">
         <Title order={3}>Parts</Title>
-        <Button onClick={open}>New part</Button>
+        {!readOnly && <Button onClick={open}>New part</Button>}
       </Group>
       <Group align="flex-end" gap="sm" wrap="wrap" role="search" aria-label="Filter parts">
         <TextInput

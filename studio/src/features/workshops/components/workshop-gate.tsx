@@ -4,6 +4,7 @@ import type { ReactNode } from 'react';
 import { ErrorView } from '@/components/error-view';
 import { PageLoader } from '@/components/page-loader';
 import { ApiError } from '@/lib/api-client';
+import { isWorkshopReadOnly, WorkshopAccessProvider } from '@/lib/workshop-access';
 import { workshopQueries, type Workshop } from '../api/queries';
 
 /**
@@ -24,13 +25,18 @@ export function WorkshopGate({ workshopId, children }: { workshopId: string; chi
     );
   }
   return (
-    <>
+    <WorkshopAccessProvider readOnly={isWorkshopReadOnly(workshop.data)}>
+      {workshop.data.role === 'admin' && (
+        <Alert color="blue" mb="md" title="Reading as a site administrator">
+          You are not a member of this workshop, so you can read it but not change it.
+        </Alert>
+      )}
       {workshop.data.disabled && (
         <Alert color="yellow" mb="md" title="This workshop is disabled">
           The site administrators have disabled this workshop. You can read it, but nothing can be changed.
         </Alert>
       )}
       {children(workshop.data)}
-    </>
+    </WorkshopAccessProvider>
   );
 }
