@@ -195,6 +195,12 @@ describe('fit data and the verified-fit checklist (real MariaDB)', () => {
 
     const history = await creator.agent.get(`${base}/checks/${pilot.id}/history`).expect(200);
     expect(history.body.map((event: { to: string }) => event.to)).toEqual(['bench_pass', 'confirmed', 'open']);
+    // Members read who moved a check by name: all three moves came from the creator's own reading, confirmation and part change.
+    expect(history.body.map((event: { actorId: string | null; actorName: string | null }) => [event.actorId, event.actorName])).toEqual([
+      [creator.id, 'Quinn Marsh'],
+      [creator.id, 'Quinn Marsh'],
+      [creator.id, 'Quinn Marsh'],
+    ]);
   });
 
   it('never confirms a spline pair whose tooth counts differ', async () => {

@@ -38,13 +38,15 @@ export function toFitCheckResponse(check: FitCheck, evidence: FitCheckEvidence[]
   };
 }
 
-export function toFitCheckEventResponse(event: FitCheckEvent) {
+/** `actorName`: the member's display name; only members (and site admins) read this history, never the public page. */
+export function toFitCheckEventResponse(event: FitCheckEvent, actorNames: ReadonlyMap<string, string> = new Map()) {
   return {
     id: event.id,
     from: event.fromState,
     to: event.toState,
     reason: event.reason,
     actorId: event.actorId,
+    actorName: event.actorId ? (actorNames.get(event.actorId) ?? null) : null,
     at: event.createdAt.toISOString(),
   };
 }

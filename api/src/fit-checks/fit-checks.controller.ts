@@ -84,7 +84,8 @@ export class FitChecksController {
 
   @Get('checks/:checkId/history')
   async history(@Param('workshopId', ParseUUIDPipe) workshopId: string, @Param('checkId', ParseUUIDPipe) checkId: string) {
-    return (await this.fitChecks.history(workshopId, checkId)).map(toFitCheckEventResponse);
+    const { events, actorNames } = await this.fitChecks.history(workshopId, checkId);
+    return events.map((event) => toFitCheckEventResponse(event, actorNames));
   }
 
   @Get('interfaces/:interfaceId/what-if')

@@ -10,6 +10,7 @@ import { Assembly } from '../assemblies/entities/assembly.entity';
 import { canTransition, rollUpChecklist, stateAfterOutcome, stateForOutcome, type FitCheckState } from '../engine/checklist';
 import { EngineError } from '../engine/engine-error';
 import { evaluateInterface, type InterfaceInput, type InterfaceVerdict, type Reading } from '../engine/interface-evaluation';
+import { UsersService } from '../users/users.service';
 import { whatIf } from '../engine/measured-fit';
 import { toNanometres, type LengthUnit } from '../engine/units';
 import { Mark } from '../marks/entities/mark.entity';
@@ -59,6 +60,7 @@ export class FitChecksService {
     @InjectRepository(Mark) private readonly marks: Repository<Mark>,
     @Inject(EventEmitter2) private readonly emitter: EventEmitter2,
     @Inject(StorageService) private readonly storage: StorageService,
+    @Inject(UsersService) private readonly users: UsersService,
   ) {}
 
   // ---- re-evaluation ----
@@ -336,9 +338,12 @@ export class FitChecksService {
     return this.storage.presignedGetUrl(item.photoKey, 300);
   }
 
-  async history(workshopId: string, checkId: string): Promise<FitCheckEvent[]> {
+  /** Every state change of a check, oldest first, with the display names of the members who made them. */
+  async history(workshopId: string, checkId: string): Promise<{ events: FitCheckEvent[]; actorNames: Map<string, string> }> {
     const check = await this.checkOf(workshopId, checkId);
-    return this.events.find({ where: { fitCheckId: check.id }, order: { createdAt: 'ASC' } });
+    const events = await this.events.find({ where: { fitCheckId: check.id }, order: { createdAt: 'ASC' } });
+    const actorNames = await this.users.displayNames(events.flatMap((event) => (event.actorId ? [event.actorId] : [])));
+    return { events, actorNames };
   }
 
   /** What a shaft `delta` larger (or smaller, if negative) does to the measured clearance of a bore/shaft interface. */

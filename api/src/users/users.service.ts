@@ -1,6 +1,6 @@
 import { Injectable, NotFoundException } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
-import { Repository } from 'typeorm';
+import { In, Repository } from 'typeorm';
 import { normalizeEmail } from './email-address';
 import { User } from './entities/user.entity';
 import type { UpdateProfileDto } from './dto/update-profile.dto';
@@ -21,6 +21,14 @@ export class UsersService {
 
   findByEmail(email: string): Promise<User | null> {
     return this.users.findOneBy({ email: normalizeEmail(email) });
+  }
+
+  /** Display names by user id, for lists that say who did what; ids of deleted users are simply absent. */
+  async displayNames(ids: readonly string[]): Promise<Map<string, string>> {
+    const unique = [...new Set(ids)];
+    if (unique.length === 0) return new Map();
+    const users = await this.users.find({ where: { id: In(unique) }, select: { id: true, displayName: true } });
+    return new Map(users.map((user) => [user.id, user.displayName]));
   }
 
   async getById(id: string): Promise<User> {

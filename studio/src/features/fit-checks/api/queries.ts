@@ -48,6 +48,8 @@ export interface FitCheckEvent {
   to: FitCheckState;
   reason: string;
   actorId: string | null;
+  /** The member's display name (members read the history; the public page never shows it); null for the fit engine. */
+  actorName: string | null;
   at: string;
 }
 

@@ -1,6 +1,6 @@
 import { Alert, Drawer, Skeleton, Stack, Text, Timeline } from '@mantine/core';
 import { useQuery } from '@tanstack/react-query';
-import { fitCheckQueries, type FitCheck } from '../api/queries';
+import { fitCheckQueries, type FitCheck, type FitCheckEvent } from '../api/queries';
 import { StateIcon, STATE_LOOK } from '@/components/check-state';
 import { formatDateTime } from '@/lib/dates';
 
@@ -11,6 +11,12 @@ export function HistoryDrawer({ workshopId, check, onClose }: { workshopId: stri
       {check && <HistoryList workshopId={workshopId} checkId={check.id} />}
     </Drawer>
   );
+}
+
+/** Who moved the check: the member by name, a member whose account is gone, or the fit engine on its own. */
+function actorWords(event: FitCheckEvent): string {
+  if (!event.actorId) return 'by the fit engine';
+  return event.actorName ? `by ${event.actorName}` : 'by a former member';
 }
 
 function HistoryList({ workshopId, checkId }: { workshopId: string; checkId: string }) {
@@ -24,7 +30,7 @@ function HistoryList({ workshopId, checkId }: { workshopId: string; checkId: str
           <Stack gap={2}>
             <Text size="sm">{event.reason}</Text>
             <Text size="xs" c="dimmed">
-              {formatDateTime(event.at)} · {event.actorId ? 'by a member' : 'by the fit engine'}
+              {formatDateTime(event.at)} · {actorWords(event)}
               {event.from && event.from !== event.to ? ` · was ${STATE_LOOK[event.from].label}` : ''}
             </Text>
           </Stack>
