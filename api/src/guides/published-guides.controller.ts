@@ -1,9 +1,32 @@
-import { Controller, Get, Header, Inject, Param, Query, Redirect, Res } from '@nestjs/common';
-import { ApiNotFoundResponse, ApiOkResponse, ApiProduces, ApiTags } from '@nestjs/swagger';
-import type { Response } from 'express';
+import { applyDecorators, Controller, Get, Header, Inject, Param, Query, Redirect, Req, Res } from '@nestjs/common';
+import { ApiHeader, ApiNotFoundResponse, ApiOkResponse, ApiProduces, ApiResponse, ApiTags } from '@nestjs/swagger';
+import type { Request, Response } from 'express';
 import { Public } from '../common/decorators/access.decorator';
+import { unlessNotModified } from '../common/http/entity-tag';
 import { PublicGuidesQueryDto } from './dto/guide.dto';
 import { PublishedGuidesService } from './published-guides.service';
+
+/**
+ * Shared caches may keep a public guide answer briefly and serve it a while longer while they ask again
+ * with If-None-Match (RFC 5861), which costs one indexed query. The answers are the same for everyone,
+ * signed in or not (following is done elsewhere), so the policy stands for signed-in readers too.
+ */
+export const PUBLIC_GUIDE_CACHE = 'public, max-age=30, stale-while-revalidate=300';
+
+function ConditionalPublicRead(what: string) {
+  return applyDecorators(
+    Header('Cache-Control', PUBLIC_GUIDE_CACHE),
+    ApiHeader({ name: 'If-None-Match', required: false, description: `An ETag of ${what} from an earlier answer` }),
+    ApiOkResponse({
+      description: what,
+      headers: {
+        ETag: { description: 'Strong tag of the published revision and the live checklist it shows', schema: { type: 'string' } },
+        'Cache-Control': { description: PUBLIC_GUIDE_CACHE, schema: { type: 'string' } },
+      },
+    }),
+    ApiResponse({ status: 304, description: 'Unchanged since the ETag given in If-None-Match; no body' }),
+  );
+}
 
 /** Published guides, for anyone: the index, the follow-along content and the guide's media. */
 @ApiTags('guides (public)')
@@ -13,15 +36,26 @@ export class PublishedGuidesController {
   constructor(@Inject(PublishedGuidesService) private readonly published: PublishedGuidesService) {}
 
   @Get()
-  @ApiOkResponse({ description: 'Published guides, newest first (at most 50)' })
-  index(@Query() query: PublicGuidesQueryDto) {
-    return this.published.index(query.q);
+  @ConditionalPublicRead('Published guides, newest first (at most 50)')
+  index(@Query() query: PublicGuidesQueryDto, @Req() request: Request, @Res({ passthrough: true }) response: Response) {
+    return unlessNotModified(request, response, () => this.published.indexTag(), () => this.published.index(query.q));
   }
 
   @Get(':workshopSlug/:guideSlug')
+  @ConditionalPublicRead('The follow-along content: the published revision with the live verified-fit checklist')
   @ApiNotFoundResponse({ description: 'No such guide, or it is not published' })
-  read(@Param('workshopSlug') workshopSlug: string, @Param('guideSlug') guideSlug: string) {
-    return this.published.read(workshopSlug, guideSlug);
+  read(
+    @Param('workshopSlug') workshopSlug: string,
+    @Param('guideSlug') guideSlug: string,
+    @Req() request: Request,
+    @Res({ passthrough: true }) response: Response,
+  ) {
+    return unlessNotModified(
+      request,
+      response,
+      () => this.published.readTag(workshopSlug, guideSlug),
+      () => this.published.read(workshopSlug, guideSlug),
+    );
   }
 
   /** Redirects to a short-lived storage link (seekable with HTTP Range), so a <video> can point here. */

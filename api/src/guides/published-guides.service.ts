@@ -5,6 +5,7 @@ import { AssembliesService } from '../assemblies/assemblies.service';
 import { Build } from '../builds/entities/build.entity';
 import { detectSafetyTopics, GUIDE_DISCLAIMER, SAFETY_TOPICS, standardCautions } from '../engine/safety-topics';
 import { formatLength } from '../engine/units';
+import { entityTagOf } from '../common/http/entity-tag';
 import { Footage } from '../footage/entities/footage.entity';
 import { FitChecksService } from '../fit-checks/fit-checks.service';
 import { StorageService } from '../infra/storage/storage.service';
@@ -18,9 +19,12 @@ import { GuideRevision } from './entities/guide-revision.entity';
 import { Guide } from './entities/guide.entity';
 import { plainText, type GuideContent, type GuideMarkContent } from './guide-content';
 import { publicGuidePath } from './guide.mapper';
+import { PUBLISHED_GUIDE_VERSION_SQL, PUBLISHED_INDEX_VERSION_SQL } from './published-guide-versions';
 
 const MEDIA_URL_TTL_SECONDS = 60 * 60;
 const INDEX_LIMIT = 50;
+/** Part of every tag: change it when the answers' shape changes, so no cache keeps the old shape. */
+const ANSWER_SHAPE = 'public-guides-1';
 
 interface PublishedGuide {
   workshop: Workshop;
@@ -51,6 +55,18 @@ export class PublishedGuidesService {
     private readonly transcriptsService: TranscriptsService,
     private readonly storage: StorageService,
   ) {}
+
+  /** The index's entity tag, from one aggregate over the published guides (the same for every search). */
+  async indexTag(): Promise<string> {
+    const [row] = await this.guides.query<Record<string, unknown>[]>(PUBLISHED_INDEX_VERSION_SQL);
+    return entityTagOf([ANSWER_SHAPE, 'index', row]);
+  }
+
+  /** The follow-along read's entity tag, from one indexed query; null when the guide is not published. */
+  async readTag(workshopSlug: string, guideSlug: string): Promise<string | null> {
+    const [row] = await this.guides.query<Record<string, unknown>[]>(PUBLISHED_GUIDE_VERSION_SQL, [guideSlug, workshopSlug]);
+    return row ? entityTagOf([ANSWER_SHAPE, 'read', row]) : null;
+  }
 
   async index(query?: string) {
     const builder = this.guides

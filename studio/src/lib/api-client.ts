@@ -37,6 +37,8 @@ export interface RequestOptions {
   signal?: AbortSignal;
   /** Some routes answer a non-2xx status with a useful body (the health route's 503). */
   acceptStatuses?: number[];
+  /** The browser cache's mode for this request (`fetch`'s `cache`); default: as the answer's headers say. */
+  cache?: RequestCache;
 }
 
 /** The double-submit CSRF token: the API sets the readable `fw_csrf` cookie; we echo it in a header. */
@@ -100,6 +102,7 @@ export async function apiRequest<T>(path: string, options: RequestOptions = {}):
       body: options.body === undefined ? undefined : isForm ? (options.body as FormData) : JSON.stringify(options.body),
       credentials: 'include',
       signal: options.signal,
+      cache: options.cache,
     });
   } catch (error) {
     if (error instanceof DOMException && error.name === 'AbortError') throw error;

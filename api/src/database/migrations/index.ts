@@ -8,6 +8,7 @@ import { Guides1765000000000 } from './1765000000000-guides';
 import { Follows1765100000000 } from './1765100000000-follows';
 import { FitReports1765200000000 } from './1765200000000-fit-reports';
 import { FitNewsUnsubscribe1765310000000 } from './1765310000000-fit-news-unsubscribe';
+import { PublishedGuidesIndex1765320000000 } from './1765320000000-published-guides-index';
 
 /** Every migration, oldest first. Listed explicitly so the same list works from src (tests) and dist. */
 // eslint-disable-next-line @typescript-eslint/no-unsafe-function-type
@@ -21,4 +22,5 @@ export const migrations: MixedList<Function> = [
   Follows1765100000000,
   FitReports1765200000000,
   FitNewsUnsubscribe1765310000000,
+  PublishedGuidesIndex1765320000000,
 ];

@@ -9,6 +9,7 @@ import type { SafetyTopic } from '../../engine/safety-topics';
 @Entity('guides')
 @Index(['workshopId', 'slug'], { unique: true })
 @Index(['buildId'])
+@Index(['publishedRevisionId', 'workshopId', 'buildId'])
 export class Guide {
   @PrimaryColumn({ type: 'char', length: 36 })
   id: string = newId();
