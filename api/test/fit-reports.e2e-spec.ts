@@ -56,11 +56,17 @@ describe('fit reports (real MariaDB, S3 fake, mail fake)', () => {
     expect(JSON.stringify(missing.body)).toMatch(/parts/);
     await reporter.agent.post(`/api/guides/${workshopSlug}/unpublished-guide/fit-reports`).send({ outcome: 'fit', parts: 'x' }).expect(404);
 
+    const ownerInboxBefore = await inboxSnapshot(owner.email);
     const created = await reporter.agent
       .post(reportPath)
       .send({ outcome: 'fit', parts: '  RT-1 coupler on a 5-speed input shaft  ', vehicle: '1986 compact pickup', notes: 'Slid on by hand.' })
       .expect(201);
     reportId = created.body.id;
+    // The workshop hears of it by e-mail (queued as a mail job), with a link to its Fit reports page.
+    const told = await waitForMail(owner.email, { subject: 'New fit report on “Reported guide”: it fit', excluding: ownerInboxBefore });
+    expect(told.text).toContain('Parts: RT-1 coupler on a 5-speed input shaft');
+    expect(told.text).not.toContain(reporter.email);
+    expect(linkFrom(told, `${base.replace('/api', '')}/fit-reports`).pathname).toBe(`${base.replace('/api', '')}/fit-reports`);
     expect(created.body).toMatchObject({
       outcome: 'fit',
       parts: 'RT-1 coupler on a 5-speed input shaft',

@@ -1,4 +1,5 @@
-import { BadRequestException, HttpException, HttpStatus, Injectable, NotFoundException } from '@nestjs/common';
+import { BadRequestException, HttpException, HttpStatus, Inject, Injectable, Logger, NotFoundException } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
 import { InjectRepository } from '@nestjs/typeorm';
 import { In, IsNull, MoreThan, Not, Repository } from 'typeorm';
 import { Assembly } from '../assemblies/entities/assembly.entity';
@@ -15,6 +16,10 @@ import { Workshop } from '../workshops/entities/workshop.entity';
 import type { CreateFitReportDto, UpdateFitReportDto } from './dto/fit-report.dto';
 import { FitReport, type FitReportStatus } from './entities/fit-report.entity';
 import { referenceNotFound } from '../common/http/field-errors';
+import type { AppConfig } from '../config/app-config';
+import { MailQueueService } from '../infra/mail/mail-queue.service';
+import { MembersService } from '../workshops/members.service';
+import { fitReportArrivedMail } from './fit-report-mails';
 
 export const FIT_REPORT_PHOTO_MAX_BYTES = 15 * 1024 * 1024;
 const MAX_PHOTOS = 6;
@@ -32,6 +37,9 @@ type Viewer = { kind: 'reporter' } | { kind: 'workshop'; workshopId: string };
  */
 @Injectable()
 export class FitReportsService {
+  private readonly logger = new Logger(FitReportsService.name);
+  private readonly appOrigin: string;
+
   constructor(
     @InjectRepository(FitReport) private readonly reports: Repository<FitReport>,
     @InjectRepository(Guide) private readonly guides: Repository<Guide>,
@@ -41,7 +49,12 @@ export class FitReportsService {
     @InjectRepository(Assembly) private readonly assemblies: Repository<Assembly>,
     @InjectRepository(User) private readonly users: Repository<User>,
     private readonly storage: StorageService,
-  ) {}
+    @Inject(MembersService) private readonly members: MembersService,
+    @Inject(MailQueueService) private readonly mail: MailQueueService,
+    config: ConfigService<AppConfig, true>,
+  ) {
+    this.appOrigin = config.get('appOrigin', { infer: true });
+  }
 
   async create(reporterId: string, workshopSlug: string, guideSlug: string, input: CreateFitReportDto) {
     const workshop = await this.workshops.findOneBy({ slug: workshopSlug, disabledAt: IsNull() });
@@ -67,7 +80,35 @@ export class FitReportsService {
         fitCheckId: null,
       }),
     );
+    await this.tellWorkshop(workshop, guide, report);
     return (await this.describe([report], { kind: 'reporter' }))[0];
+  }
+
+  /**
+   * One e-mail per owner and editor, each queued as a mail job (the mail processor sends it). The report is
+   * stored already: a queue that cannot take the mails is logged, not turned into a failed report.
+   */
+  private async tellWorkshop(workshop: Workshop, guide: Guide, report: FitReport): Promise<void> {
+    try {
+      const reporter = await this.users.findOneBy({ id: report.reporterId });
+      const recipients = (await this.members.list(workshop.id)).filter((member) => member.role === 'owner' || member.role === 'editor');
+      for (const member of recipients) {
+        await this.mail.enqueue(
+          fitReportArrivedMail({
+            to: member.email,
+            workshopName: workshop.name,
+            guideTitle: guide.title,
+            reporterName: reporter?.displayName ?? 'A reader',
+            outcome: report.outcome,
+            parts: report.parts,
+            vehicle: report.vehicle,
+            reviewUrl: `${this.appOrigin}/workshops/${workshop.id}/fit-reports`,
+          }),
+        );
+      }
+    } catch (error) {
+      this.logger.warn(`fit report ${report.id}: the workshop's e-mails could not be queued: ${error instanceof Error ? error.message : String(error)}`);
+    }
   }
 
   /** Stores a photo (PNG, JPEG or WebP, checked by content) with the reporter's own report. */

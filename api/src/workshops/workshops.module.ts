@@ -16,6 +16,6 @@ import { WorkshopsService } from './workshops.service';
   imports: [TypeOrmModule.forFeature([Workshop, WorkshopMember, Invitation]), UsersModule],
   controllers: [WorkshopsController, MembersController, WorkshopInvitationsController, InvitationsController],
   providers: [WorkshopsService, MembersService, InvitationsService, MembershipService],
-  exports: [MembershipService, WorkshopsService, TypeOrmModule],
+  exports: [MembershipService, WorkshopsService, MembersService, TypeOrmModule],
 })
 export class WorkshopsModule {}
