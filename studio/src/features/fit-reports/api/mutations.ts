@@ -26,6 +26,8 @@ export function useUpdateFitReport(workshopId: string) {
       // Show the answer at once (tying moves a new report on), then read the list again for counts.
       queryClient.setQueryData(listKey, (reports) => reports?.map((report) => (report.id === updated.id ? updated : report)));
       await queryClient.invalidateQueries({ queryKey: listKey });
+      // The workshop header counts new reports; it belongs to the workshops feature, so its key is named literally.
+      await queryClient.invalidateQueries({ queryKey: ['workshops', 'detail', workshopId, 'new-fit-reports'] });
     },
   });
 }

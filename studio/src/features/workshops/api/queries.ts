@@ -54,6 +54,13 @@ export const workshopQueries = {
       queryKey: [...workshopQueries.all(), 'detail', workshopId] as const,
       queryFn: ({ signal }) => apiRequest<Workshop>(`/workshops/${workshopId}`, { signal }),
     }),
+  /** How many fit reports wait for a first look (status `new`), for the badge on the Fit reports tab. */
+  newFitReportCount: (workshopId: string) =>
+    queryOptions({
+      queryKey: [...workshopQueries.all(), 'detail', workshopId, 'new-fit-reports'] as const,
+      queryFn: ({ signal }) => apiRequest<unknown[]>(`/workshops/${workshopId}/fit-reports`, { signal, query: { status: 'new' } }),
+      select: (reports) => reports.length,
+    }),
   members: (workshopId: string) =>
     queryOptions({
       queryKey: [...workshopQueries.all(), 'detail', workshopId, 'members'] as const,

@@ -1,7 +1,8 @@
 import { Avatar, Badge, Group, Stack, Tabs, Text, Title } from '@mantine/core';
+import { useQuery } from '@tanstack/react-query';
 import { useLocation, useNavigate } from 'react-router-dom';
 import { paths } from '@/config/paths';
-import type { Workshop } from '../api/queries';
+import { workshopQueries, type Workshop } from '../api/queries';
 
 const ROLE_LABELS = { owner: 'Owner', editor: 'Editor', admin: 'Site admin (read only)' } as const;
 
@@ -9,6 +10,8 @@ const ROLE_LABELS = { owner: 'Owner', editor: 'Editor', admin: 'Site admin (read
 export function WorkshopHeader({ workshop }: { workshop: Workshop }) {
   const navigate = useNavigate();
   const location = useLocation();
+  const newReports = useQuery(workshopQueries.newFitReportCount(workshop.id));
+  const newReportCount = newReports.data ?? 0;
   const tabs = [
     { value: paths.workshop.to(workshop.id), label: 'Overview' },
     { value: paths.builds.to(workshop.id), label: 'Builds' },
@@ -41,7 +44,17 @@ export function WorkshopHeader({ workshop }: { workshop: Workshop }) {
       <Tabs value={active} onChange={(value) => value && navigate(value)} aria-label="Workshop pages">
         <Tabs.List>
           {tabs.map((tab) => (
-            <Tabs.Tab key={tab.value} value={tab.value}>
+            <Tabs.Tab
+              key={tab.value}
+              value={tab.value}
+              rightSection={
+                tab.value === paths.workshopFitReports.to(workshop.id) && newReportCount > 0 ? (
+                  <Badge size="sm" circle={newReportCount < 10} variant="filled" color="orange" data-testid="new-fit-report-count" aria-label={`${newReportCount} new`}>
+                    {newReportCount}
+                  </Badge>
+                ) : undefined
+              }
+            >
               {tab.label}
             </Tabs.Tab>
           ))}
