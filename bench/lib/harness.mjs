@@ -18,12 +18,12 @@ function freePort() {
   });
 }
 
-/** Starts `node api/dist/main.js` on a spare port; resolves when /api/health answers. */
-export async function startApi() {
+/** Starts `node api/dist/main.js` on a spare port (`env` adds settings of its own); resolves when /api/health answers. */
+export async function startApi(env = {}) {
   const port = await freePort();
   const child = spawn(process.execPath, ['dist/main.js'], {
     cwd: `${root}api`,
-    env: { ...process.env, PORT: String(port), APP_ORIGIN: `http://localhost:${port}`, STUDIO_DIST: '' },
+    env: { ...process.env, PORT: String(port), APP_ORIGIN: `http://localhost:${port}`, STUDIO_DIST: '', ...env },
     stdio: ['ignore', 'ignore', 'inherit'],
   });
   const baseUrl = `http://127.0.0.1:${port}`;
