@@ -1,15 +1,12 @@
-import { useId } from 'react';
 import { formatReadableLength, unitLabel } from '@/lib/units';
-import { DiagramPatterns, patternIds } from './diagram-patterns';
 import { lengthWindowGeometry, type LengthWindowInput, type Span } from './length-window-geometry';
+import { DiagramFrame } from './diagram-frame';
 
 export interface LengthWindowDiagramProps extends LengthWindowInput {
   title?: string;
 }
 
 const INK = '#1f2328';
-/** Below this width the 11–12 px labels would shrink past reading. */
-const MIN_WIDTH = 480;
 const SHORT = '#a61b1b';
 
 /**
@@ -18,10 +15,6 @@ const SHORT = '#a61b1b';
  * and the margin the creator asked for is shaded at the part's ends.
  */
 export function LengthWindowDiagram(props: LengthWindowDiagramProps) {
-  const id = useId();
-  const ids = patternIds(`lw${id}`);
-  const titleId = `${ids.hatch}-title`;
-  const descId = `${ids.hatch}-desc`;
   const geometry = lengthWindowGeometry(props);
   const { plot, partRow, installedRow } = geometry;
   const show = (nanometres: number) => formatReadableLength(nanometres, props.unit);
@@ -30,19 +23,9 @@ export function LengthWindowDiagram(props: LengthWindowDiagramProps) {
   const bracketY = partRow.y + partRow.height + 26;
 
   return (
-    // On a narrow screen the picture keeps a readable size and scrolls sideways instead of shrinking its labels away.
-    <div style={{ overflowX: 'auto', maxWidth: '100%' }}>
-      <svg
-        viewBox={`0 0 ${geometry.width} ${geometry.height}`}
-        width="100%"
-        style={{ maxWidth: geometry.width, minWidth: MIN_WIDTH, display: 'block', fontFamily: 'inherit' }}
-        role="img"
-        aria-labelledby={`${titleId} ${descId}`}
-        data-testid="length-window-diagram"
-      >
-        <title id={titleId}>{props.title ?? 'Length window'}</title>
-        <desc id={descId}>{describe(props)}</desc>
-        <DiagramPatterns ids={ids} />
+    <DiagramFrame idPrefix="lw" width={geometry.width} height={geometry.height} title={props.title ?? 'Length window'} description={describe(props)} testId="length-window-diagram">
+      {(ids) => (
+        <>
 
         {/* row names */}
         <RowName y={partRow.y + partRow.height / 2} x={plot.x - 10} lines={['Part', 'plunge range']} />
@@ -130,8 +113,9 @@ export function LengthWindowDiagram(props: LengthWindowDiagramProps) {
             ⟷ travel left at that end
           </text>
         </g>
-      </svg>
-    </div>
+        </>
+      )}
+    </DiagramFrame>
   );
 }
 

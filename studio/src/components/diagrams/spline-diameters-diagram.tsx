@@ -1,6 +1,5 @@
-import { useId } from 'react';
-import { DiagramPatterns, patternIds } from './diagram-patterns';
 import { splineDiametersGeometry, type SplineDiameterName } from './spline-diameters-geometry';
+import { DiagramFrame } from './diagram-frame';
 
 export interface SplineDiametersDiagramProps {
   /** e.g. "21T 16/32 DP 30° flat root side fit (ANSI B92.1)". */
@@ -10,35 +9,20 @@ export interface SplineDiametersDiagramProps {
 }
 
 const INK = '#1f2328';
-/** Below this width the labels would shrink past reading. */
-const MIN_WIDTH = 480;
 
 /**
  * The key diameters of an involute spline: the hub's teeth (internal) and the shaft's tooth
  * (external) side on, with a line and a label for each diameter. Heights to scale, widths schematic.
  */
 export function SplineDiametersDiagram(props: SplineDiametersDiagramProps) {
-  const id = useId();
-  const ids = patternIds(`sd${id}`);
-  const titleId = `${ids.hatch}-title`;
-  const descId = `${ids.hatch}-desc`;
   const geometry = splineDiametersGeometry(props);
   const { plot } = geometry;
   const labelX = plot.x + plot.width + 16;
 
   return (
-    <div style={{ overflowX: 'auto', maxWidth: '100%' }}>
-      <svg
-        viewBox={`0 0 ${geometry.width} ${geometry.height}`}
-        width="100%"
-        style={{ maxWidth: geometry.width, minWidth: MIN_WIDTH, display: 'block', fontFamily: 'inherit' }}
-        role="img"
-        aria-labelledby={`${titleId} ${descId}`}
-        data-testid="spline-diameters-diagram"
-      >
-        <title id={titleId}>Key diameters of {props.designation}</title>
-        <desc id={descId}>{describe(props)}</desc>
-        <DiagramPatterns ids={ids} />
+    <DiagramFrame idPrefix="sd" width={geometry.width} height={geometry.height} title={`Key diameters of ${props.designation}`} description={describe(props)} testId="spline-diameters-diagram">
+      {(ids) => (
+        <>
 
         {geometry.hubTeeth.map((points, index) => (
           <polygon key={`hub${index}`} data-testid="hub-tooth" points={points} fill={`url(#${ids.dots})`} stroke={INK} strokeWidth={1.5} />
@@ -66,8 +50,9 @@ export function SplineDiametersDiagram(props: SplineDiametersDiagramProps) {
         <text x={plot.x} y={plot.y - 8} fontSize={11} fill="#5c6470">
           Hub (dotted) over shaft (hatched); heights to scale, widths schematic
         </text>
-      </svg>
-    </div>
+        </>
+      )}
+    </DiagramFrame>
   );
 }
 

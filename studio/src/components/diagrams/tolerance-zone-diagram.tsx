@@ -1,7 +1,8 @@
-import { useId, type ReactNode } from 'react';
-import { DiagramPatterns, patternIds } from './diagram-patterns';
+import type { ReactNode } from 'react';
 import { DEVIATION_UNIT_LABEL, formatDeviation, formatSpan } from './deviation-format';
 import { toleranceZoneGeometry, TOLERANCE_LAYOUT, type DeviationUnit, type Rect, type ZoneUm } from './tolerance-zone-geometry';
+import { DiagramFrame } from './diagram-frame';
+import type { PatternIds } from './diagram-patterns';
 
 export interface ToleranceZoneDiagramProps {
   /** The nominal size the zero line stands for, as people write it: "25 mm", "0.6690 in". */
@@ -18,8 +19,6 @@ export interface ToleranceZoneDiagramProps {
 }
 
 const INK = '#1f2328';
-/** Below this width the 11–12 px labels would shrink past reading. */
-const MIN_WIDTH = 480;
 const MUTED = '#4b535d';
 /** A white outline behind text keeps a label readable where it crosses a line or a pattern. */
 const HALO = { stroke: '#ffffff', strokeWidth: 6, paintOrder: 'stroke', strokeLinejoin: 'round' } as const;
@@ -30,10 +29,6 @@ const HALO = { stroke: '#ffffff', strokeWidth: 6, paintOrder: 'stroke', strokeLi
  * gap (clearance), overlap (interference possible) or sit apart the other way round.
  */
 export function ToleranceZoneDiagram(props: ToleranceZoneDiagramProps) {
-  const id = useId();
-  const ids = patternIds(`tz${id}`);
-  const titleId = `${ids.hatch}-title`;
-  const descId = `${ids.hatch}-desc`;
   const geometry = toleranceZoneGeometry(props);
   const { plot } = geometry;
   const { margin } = TOLERANCE_LAYOUT;
@@ -43,19 +38,9 @@ export function ToleranceZoneDiagram(props: ToleranceZoneDiagramProps) {
   const shaftName = `Shaft${props.shaftClass ? ` ${props.shaftClass}` : ''}`;
 
   return (
-    // On a narrow screen the picture keeps a readable size and scrolls sideways instead of shrinking its labels away.
-    <div style={{ overflowX: 'auto', maxWidth: '100%' }}>
-      <svg
-        viewBox={`0 0 ${geometry.width} ${geometry.height}`}
-        width="100%"
-        style={{ maxWidth: geometry.width, minWidth: MIN_WIDTH, display: 'block', fontFamily: 'inherit' }}
-        role="img"
-        aria-labelledby={`${titleId} ${descId}`}
-        data-testid="tolerance-zone-diagram"
-      >
-        <title id={titleId}>{title}</title>
-        <desc id={descId}>{description}</desc>
-        <DiagramPatterns ids={ids} />
+    <DiagramFrame idPrefix="tz" width={geometry.width} height={geometry.height} title={title} description={description} testId="tolerance-zone-diagram">
+      {(ids) => (
+        <>
 
         {/* axis */}
         <line x1={plot.x} y1={plot.y} x2={plot.x} y2={plot.y + plot.height} stroke={INK} />
@@ -151,8 +136,9 @@ export function ToleranceZoneDiagram(props: ToleranceZoneDiagramProps) {
           shaftName={shaftName}
           overlap={geometry.overlap !== null}
         />
-      </svg>
-    </div>
+        </>
+      )}
+    </DiagramFrame>
   );
 }
 
@@ -199,7 +185,7 @@ function Legend({
 }: {
   x: number;
   y: number;
-  ids: ReturnType<typeof patternIds>;
+  ids: PatternIds;
   props: ToleranceZoneDiagramProps;
   holeName: string;
   shaftName: string;
