@@ -2,7 +2,7 @@ import { type ChildProcess, execFileSync, spawn } from 'node:child_process';
 import { closeSync, existsSync, mkdirSync, openSync, readFileSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import request from 'supertest';
-import type { Agent } from '../support/accounts';
+import { type Agent, echoingCsrf } from '../support/accounts';
 import { tokenFrom, waitForMail } from '../support/mail-inbox';
 import { portAnswers } from '../support/ports';
 
@@ -344,30 +344,9 @@ export async function health(): Promise<HealthAnswer> {
   return { status: response.status, body: (await response.json()) as HealthAnswer['body'], elapsedMs: Date.now() - started };
 }
 
-function cookieValue(setCookie: string[] | string | undefined, name: string): string | undefined {
-  const list = Array.isArray(setCookie) ? setCookie : setCookie ? [setCookie] : [];
-  for (const cookie of list) {
-    const [pair] = cookie.split(';');
-    const [key, ...rest] = pair.split('=');
-    if (key.trim() === name) return decodeURIComponent(rest.join('='));
-  }
-  return undefined;
-}
-
 /** A browser-like agent against the API process: keeps cookies and echoes the CSRF cookie in X-CSRF-Token. */
 export async function browserAgentFor(baseUrl = apiUrl): Promise<Agent> {
-  const agent = request.agent(baseUrl);
-  // As the studio does: echo the cookie's current value (it may change at sign-in).
-  let csrf: string | undefined;
-  agent.on('response', (response: request.Response) => {
-    csrf = cookieValue(response.headers['set-cookie'], 'fw_csrf') || csrf;
-  });
-  agent.use((outgoing: request.Test) => {
-    if (csrf) outgoing.set('X-CSRF-Token', csrf);
-  });
-  await agent.get('/api/auth/me').expect(200);
-  if (!csrf) throw new Error('GET /api/auth/me did not set the fw_csrf cookie');
-  return agent;
+  return echoingCsrf(request.agent(baseUrl));
 }
 
 /** Registers, follows the verification mail from the faults profile's own mail fake, signs in. */

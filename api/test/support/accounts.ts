@@ -49,14 +49,12 @@ function cookieValue(setCookie: string[] | string | undefined, name: string): st
 }
 
 /**
- * A browser-like agent with no session yet: it has fetched `GET /api/auth/me` once, holds the
- * `fw_csrf` cookie and, as the studio does, echoes the cookie's current value in `X-CSRF-Token` on every
- * request (the token changes at sign-in and sign-out). A test may still `.set()` its own header on one request.
+ * Makes `agent` act as the studio does: it fetches `GET /api/auth/me` once (getting the `fw_csrf`
+ * cookie) and echoes the cookie's current value in `X-CSRF-Token` on every request (the token changes
+ * at sign-in and sign-out). A test may still `.set()` its own header on one request.
  */
-export async function browserAgent(app: INestApplication, clientIp = uniqueClientIp()): Promise<Agent> {
-  const agent = request.agent(app.getHttpServer());
+export async function echoingCsrf(agent: Agent): Promise<Agent> {
   let csrf: string | undefined;
-  agent.set('X-Forwarded-For', clientIp);
   agent.on('response', (response: request.Response) => {
     csrf = cookieValue(response.headers['set-cookie'], 'fw_csrf') || csrf;
   });
@@ -66,6 +64,11 @@ export async function browserAgent(app: INestApplication, clientIp = uniqueClien
   await agent.get('/api/auth/me').expect(200);
   if (!csrf) throw new Error('GET /api/auth/me did not set the fw_csrf cookie');
   return agent;
+}
+
+/** A browser-like agent with no session yet, from its own client address, echoing the CSRF cookie. */
+export async function browserAgent(app: INestApplication, clientIp = uniqueClientIp()): Promise<Agent> {
+  return echoingCsrf(request.agent(app.getHttpServer()).set('X-Forwarded-For', clientIp));
 }
 
 /** Signs in on a fresh browser agent (or the one given) and returns it. */
