@@ -7,13 +7,17 @@ fw_profile_env() {
   local profile="$1" offset
   case "$profile" in
     dev) offset=0 ;;
-    test) offset=10 ;;
+    # FW_TEST_SLOT=1..9 gives a test profile of its own (ports and data apart), so several people working in one
+    # tree can run e2e tests side by side; npm test and CI use the plain test profile.
+    test) offset=$((FW_TEST_SLOT ? 30 + FW_TEST_SLOT : 10)) ;;
     # npm run test:faults: its own MariaDB, Redis, fakes and API processes, which the fault tests stop on purpose.
     faults) offset=20 ;;
     *) echo "unknown profile $profile" >&2; return 1 ;;
   esac
   export FW_PROFILE="$profile"
-  export FW_DATA="${FW_DATA:-$ROOT/.data/$profile}"
+  local folder="$profile"
+  if [ "$profile" = test ] && [ -n "${FW_TEST_SLOT:-}" ]; then folder="test-slot$FW_TEST_SLOT"; fi
+  export FW_DATA="${FW_DATA:-$ROOT/.data/$folder}"
   export FW_RUN="$FW_DATA/run" FW_LOGS="$FW_DATA/logs"
 
   export NODE_ENV="${NODE_ENV:-$([ "$profile" = test ] && echo test || echo development)}"

@@ -156,9 +156,15 @@ build_if_changed() {
   if [ -f "$stamp" ] && [ -z "$(find "$@" -newer "$stamp" -type f -print -quit 2>/dev/null)" ]; then
     return 0
   fi
-  say "building $workspace"
-  (cd "$ROOT" && npm run build -w "$workspace" --silent)
-  touch "$stamp"
+  # One build at a time across profiles: two runs writing one dist folder would mix their outputs.
+  mkdir -p "$ROOT/.data"
+  (
+    flock 8
+    if [ -f "$stamp" ] && [ -z "$(find "$@" -newer "$stamp" -type f -print -quit 2>/dev/null)" ]; then exit 0; fi
+    say "building $workspace"
+    (cd "$ROOT" && npm run build -w "$workspace" --silent)
+    touch "$stamp"
+  ) 8>"$ROOT/.data/build.lock"
 }
 
 # The studio's build script sets NODE_ENV=production itself: the profiles export development or test for
