@@ -9,7 +9,7 @@ fw_profile_env() {
     dev) offset=0 ;;
     # FW_TEST_SLOT=1..9 gives a test profile of its own (ports and data apart), so several people working in one
     # tree can run e2e tests side by side; npm test and CI use the plain test profile.
-    test) offset=$((FW_TEST_SLOT ? 30 + FW_TEST_SLOT : 10)) ;;
+    test) offset=$((${FW_TEST_SLOT:-0} ? 30 + ${FW_TEST_SLOT:-0} : 10)) ;;
     # npm run test:faults: its own MariaDB, Redis, fakes and API processes, which the fault tests stop on purpose.
     faults) offset=20 ;;
     *) echo "unknown profile $profile" >&2; return 1 ;;
