@@ -34,6 +34,7 @@ step() {
 step "lint" npx eslint --max-warnings=0 .
 step "typecheck api" npm run typecheck -w api --silent
 step "typecheck studio" npm run typecheck -w studio --silent
+step "API contract is current (npm run contract rewrites it)" node scripts/contract.mjs --check
 step "dependency audit: its own tests" node --test scripts/audit.test.mjs
 step "dependency audit (npm audit; continues when the advisory service does not answer)" node scripts/audit.mjs
 step "api tests (unit + e2e on real services)" npm test -w api --silent

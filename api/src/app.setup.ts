@@ -2,7 +2,7 @@ import { ValidationPipe } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { Reflector } from '@nestjs/core';
 import { NestExpressApplication } from '@nestjs/platform-express';
-import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
+import { SwaggerModule } from '@nestjs/swagger';
 import compression from 'compression';
 import cookieParser from 'cookie-parser';
 import expressStaticGzip from 'express-static-gzip';
@@ -19,6 +19,7 @@ import { NoStoreInterceptor } from './common/interceptors/no-store.interceptor';
 import { RejectControlCharactersPipe } from './common/pipes/control-characters';
 import { ObjectBodyPipe } from './common/pipes/object-body.pipe';
 import { validationException } from './common/pipes/validation-errors';
+import { buildOpenApiDocument } from './openapi/openapi-document';
 
 /** Everything main.ts and the e2e tests share, so tests exercise the app as it is served. */
 export function configureApp(app: NestExpressApplication): void {
@@ -66,15 +67,7 @@ export function configureApp(app: NestExpressApplication): void {
   app.useGlobalFilters(new AllExceptionsFilter());
   app.useGlobalInterceptors(new NoStoreInterceptor(app.get(Reflector)));
 
-  const document = SwaggerModule.createDocument(
-    app,
-    new DocumentBuilder()
-      .setTitle('Fitwright API')
-      .setDescription('Verified-fit build guides from workshop footage')
-      .setVersion('1')
-      .build(),
-  );
-  SwaggerModule.setup('api/docs', app, document, { jsonDocumentUrl: 'api/docs/openapi.json' });
+  SwaggerModule.setup('api/docs', app, buildOpenApiDocument(app), { jsonDocumentUrl: 'api/docs/openapi.json' });
 
   const studioDist = config.get('studioDist', { infer: true });
   if (studioDist && existsSync(join(studioDist, 'index.html'))) serveStudio(app, studioDist);

@@ -1,0 +1,6085 @@
+/* Generated from api/openapi.json by `npm run contract` (openapi-typescript). Do not edit: change the API and regenerate. */
+export interface paths {
+    "/api/health": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["HealthController_check"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/auth/me": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["AuthController_me"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/auth/register": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["AuthController_register"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/auth/login": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["AuthController_login"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/auth/logout": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["AuthController_logout"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/auth/verify-email": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["AuthController_verifyEmail"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/auth/verify-email/resend": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["AuthController_resendVerification"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/auth/password/forgot": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["AuthController_forgotPassword"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/auth/password/reset": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["AuthController_resetPassword"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/auth/password/change": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["AuthController_changePassword"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/auth/email/change": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["AuthController_changeEmail"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/auth/email/confirm": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["AuthController_confirmEmail"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/users/me": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch: operations["UsersController_updateProfile"];
+        trace?: never;
+    };
+    "/api/workshops": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["WorkshopsController_listMine"];
+        put?: never;
+        post: operations["WorkshopsController_create"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["WorkshopsController_get"];
+        put?: never;
+        post?: never;
+        delete: operations["WorkshopsController_remove"];
+        options?: never;
+        head?: never;
+        patch: operations["WorkshopsController_update"];
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/logo": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put: operations["WorkshopsController_setLogo"];
+        post?: never;
+        delete: operations["WorkshopsController_removeLogo"];
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/members": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["MembersController_list"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/members/{userId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post?: never;
+        delete: operations["MembersController_remove"];
+        options?: never;
+        head?: never;
+        patch: operations["MembersController_changeRole"];
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/transfer-ownership": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["MembersController_transfer"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/leave": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["MembersController_leave"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/invitations": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["WorkshopInvitationsController_list"];
+        put?: never;
+        post: operations["WorkshopInvitationsController_invite"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/invitations/{invitationId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post?: never;
+        delete: operations["WorkshopInvitationsController_revoke"];
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/invitations/lookup": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["InvitationsController_preview"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/invitations/accept": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["InvitationsController_accept"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/admin/users": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["AdminController_listUsers"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/admin/users/{userId}/disable": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["AdminController_disableUser"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/admin/users/{userId}/enable": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["AdminController_enableUser"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/admin/workshops": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["AdminController_listWorkshops"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/admin/workshops/{workshopId}/disable": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["AdminController_disableWorkshop"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/admin/workshops/{workshopId}/enable": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["AdminController_enableWorkshop"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/tools/fits": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["ToolsController_fits"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/tools/splines": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** Basic dimensions of an involute spline (ANSI B92.1 inch, ISO 4156 / ANSI B92.2M metric) */
+        get: operations["ToolsController_splines"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/tools/splines/identify": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** Candidate spline designations for a tooth count and a measured major or minor diameter */
+        get: operations["ToolsController_identifySpline"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/tools/measurements/extract": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["ToolsController_extractMeasurements"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/tools/transcripts/parse": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["ToolsController_parseTranscript"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/builds": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["BuildsController_list"];
+        put?: never;
+        post: operations["BuildsController_create"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/builds/{buildId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["BuildsController_get"];
+        put?: never;
+        post?: never;
+        delete: operations["BuildsController_remove"];
+        options?: never;
+        head?: never;
+        patch: operations["BuildsController_update"];
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/parts": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["PartsController_list"];
+        put?: never;
+        post: operations["PartsController_create"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/parts/{partId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["PartsController_get"];
+        put?: never;
+        post?: never;
+        delete: operations["PartsController_remove"];
+        options?: never;
+        head?: never;
+        patch: operations["PartsController_update"];
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/parts/{partId}/photos": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["PartsController_addPhoto"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/parts/{partId}/photos/{photoId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["PartsController_photo"];
+        put?: never;
+        post?: never;
+        delete: operations["PartsController_removePhoto"];
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/parts/{partId}/features": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["PartsController_addFeature"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/parts/{partId}/features/{featureId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post?: never;
+        delete: operations["PartsController_removeFeature"];
+        options?: never;
+        head?: never;
+        patch: operations["PartsController_updateFeature"];
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/measurements": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["MeasurementsController_list"];
+        put?: never;
+        post: operations["MeasurementsController_create"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/measurements/{measurementId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post?: never;
+        delete: operations["MeasurementsController_remove"];
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/assemblies/{assemblyId}/checklist": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["FitChecksController_checklist"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/assemblies/{assemblyId}/checks": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["FitChecksController_createManual"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/checks/{checkId}/transitions": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["FitChecksController_transition"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/checks/{checkId}/evidence": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["FitChecksController_addEvidence"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/checks/{checkId}/photos": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["FitChecksController_addPhotoEvidence"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/checks/{checkId}/evidence/{evidenceId}/photo": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["FitChecksController_evidencePhoto"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/checks/{checkId}/history": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["FitChecksController_history"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/interfaces/{interfaceId}/what-if": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["FitChecksController_whatIf"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/builds/{buildId}/assemblies": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["AssembliesController_list"];
+        put?: never;
+        post: operations["AssembliesController_create"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/assemblies/{assemblyId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["AssembliesController_detail"];
+        put?: never;
+        post?: never;
+        delete: operations["AssembliesController_remove"];
+        options?: never;
+        head?: never;
+        patch: operations["AssembliesController_update"];
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/assemblies/{assemblyId}/parts/{partId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put: operations["AssembliesController_placePart"];
+        post?: never;
+        delete: operations["AssembliesController_removePart"];
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/assemblies/{assemblyId}/interfaces": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["AssembliesController_addInterface"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/assemblies/{assemblyId}/interfaces/{interfaceId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post?: never;
+        delete: operations["AssembliesController_removeInterface"];
+        options?: never;
+        head?: never;
+        patch: operations["AssembliesController_updateInterface"];
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/footage-limits": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["FootageController_limits"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/builds/{buildId}/footage": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["FootageController_list"];
+        put?: never;
+        post: operations["FootageController_create"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/footage/{footageId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["FootageController_get"];
+        put?: never;
+        post?: never;
+        delete: operations["FootageController_remove"];
+        options?: never;
+        head?: never;
+        patch: operations["FootageController_rename"];
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/footage/{footageId}/playback": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["FootageController_playback"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/footage/{footageId}/upload": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["FootageController_uploadState"];
+        put?: never;
+        post?: never;
+        delete: operations["FootageController_abort"];
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/footage/{footageId}/upload/part-urls": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["FootageController_signPartUrls"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/footage/{footageId}/upload/parts/{partNumber}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put: operations["FootageController_recordPart"];
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/footage/{footageId}/upload/complete": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["FootageController_complete"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/footage/{footageId}/transcript": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["TranscriptsController_read"];
+        put: operations["TranscriptsController_attach"];
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/footage/{footageId}/transcript/file": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["TranscriptsController_attachFile"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/footage/{footageId}/transcript/revisions": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["TranscriptsController_revisions"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/footage/{footageId}/transcript/webvtt": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["TranscriptsController_exportWebVtt"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/footage/{footageId}/transcript/search": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["TranscriptsController_searchFootage"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/transcripts/search": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["TranscriptsController_searchWorkshop"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/footage/{footageId}/marks": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["MarksController_list"];
+        put?: never;
+        post: operations["MarksController_create"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/footage/{footageId}/marks/{markId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post?: never;
+        delete: operations["MarksController_remove"];
+        options?: never;
+        head?: never;
+        patch: operations["MarksController_update"];
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/footage/{footageId}/mark-suggestions": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["MarksController_suggestions"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/footage/{footageId}/mark-suggestions/{suggestionId}/accept": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["MarksController_accept"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/footage/{footageId}/mark-suggestions/{suggestionId}/dismiss": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["MarksController_dismiss"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/builds/{buildId}/guides": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["GuidesController_list"];
+        put?: never;
+        post: operations["GuidesController_create"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/guide-steps": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["GuidesController_stepChoices"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/guides/{guideId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["GuidesController_get"];
+        put?: never;
+        post?: never;
+        delete: operations["GuidesController_remove"];
+        options?: never;
+        head?: never;
+        patch: operations["GuidesController_update"];
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/guides/{guideId}/steps": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["GuidesController_addStep"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/guides/{guideId}/steps/order": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put: operations["GuidesController_reorderSteps"];
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/guides/{guideId}/steps/{stepId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post?: never;
+        delete: operations["GuidesController_removeStep"];
+        options?: never;
+        head?: never;
+        patch: operations["GuidesController_updateStep"];
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/guides/{guideId}/revisions": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["GuidesController_revisions"];
+        put?: never;
+        post: operations["GuidesController_publish"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/guides/{guideId}/publication": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post?: never;
+        delete: operations["GuidesController_withdraw"];
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/guides": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["PublishedGuidesController_index"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/guides/{workshopSlug}/{guideSlug}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["PublishedGuidesController_read"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/guides/{workshopSlug}/{guideSlug}/video": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["PublishedGuidesController_video"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/guides/{workshopSlug}/{guideSlug}/poster": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["PublishedGuidesController_poster"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/guides/{workshopSlug}/{guideSlug}/captions.vtt": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["PublishedGuidesController_captions"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/follows": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["FollowsController_list"];
+        put?: never;
+        post: operations["FollowsController_follow"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/follows/unsubscribe": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["FollowsController_unsubscribe"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/follows/{followId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post?: never;
+        delete: operations["FollowsController_unfollow"];
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/guides/{workshopSlug}/{guideSlug}/fit-reports": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["FitReportsController_create"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/fit-reports": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["FitReportsController_mine"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/fit-reports/{reportId}/photos": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["FitReportsController_addPhoto"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/fit-reports/{reportId}/photos/{photoId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["FitReportsController_photo"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/fit-reports": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["WorkshopFitReportsController_list"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/fit-reports/{reportId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch: operations["WorkshopFitReportsController_update"];
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/fit-reports/{reportId}/photos/{photoId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["WorkshopFitReportsController_photo"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+}
+export type webhooks = Record<string, never>;
+export interface components {
+    schemas: {
+        HealthChecksDto: {
+            /** @enum {string} */
+            database: "up" | "down";
+            /** @enum {string} */
+            storage: "up" | "down";
+            /** @enum {string} */
+            mail: "up" | "down";
+            /** @enum {string} */
+            queue: "up" | "down";
+        };
+        HealthReportDto: {
+            /** @example 503 */
+            statusCode?: number;
+            /** @example Down: mail */
+            message?: string;
+            /** @enum {string} */
+            status: "ok" | "down";
+            checks: components["schemas"]["HealthChecksDto"];
+        };
+        SessionUserDto: {
+            /** Format: uuid */
+            id: string;
+            /** @example rowan@harrow-lane.example */
+            email: string;
+            /** @example Rowan Avery */
+            displayName: string;
+            isAdmin: boolean;
+            /** @enum {string} */
+            preferredUnits: "metric" | "inch";
+            emailVerified: boolean;
+        };
+        MeResponseDto: {
+            /** @description null when signed out */
+            user: components["schemas"]["SessionUserDto"] | null;
+        };
+        RegisterDto: {
+            /** @example rowan@harrow-lane.example */
+            email: string;
+            password: string;
+            /** @example Rowan Avery */
+            displayName: string;
+        };
+        MessageDto: {
+            /** @example Check your inbox for a link to confirm your e-mail address. */
+            message: string;
+        };
+        LoginDto: {
+            /** @example rowan@harrow-lane.example */
+            email: string;
+            password: string;
+        };
+        EmailTokenDto: {
+            /** @description The token from the e-mailed link */
+            token: string;
+        };
+        ForgotPasswordDto: {
+            /** @example rowan@harrow-lane.example */
+            email: string;
+        };
+        ResetPasswordDto: {
+            /** @description The token from the e-mailed link */
+            token: string;
+            password: string;
+        };
+        ChangePasswordDto: {
+            currentPassword: string;
+            newPassword: string;
+        };
+        ChangeEmailDto: {
+            /** @example rowan.avery@harrow-lane.example */
+            newEmail: string;
+            /** @description The current password, to confirm it is you */
+            password: string;
+        };
+        UpdateProfileDto: {
+            /** @example Rowan Avery */
+            displayName?: string;
+            /**
+             * @description How lengths are shown: millimetres or inches
+             * @enum {string}
+             */
+            preferredUnits?: "metric" | "inch";
+        };
+        CreateWorkshopDto: {
+            /** @example Harrow Lane Garage */
+            name: string;
+            /**
+             * @description The workshop in web addresses
+             * @example harrow-lane-garage
+             */
+            slug: string;
+            /** @example Electric conversions of compact pickups */
+            description?: string;
+        };
+        WorkshopView: {
+            /** Format: uuid */
+            id: string;
+            /** @example harrow-lane-garage */
+            slug: string;
+            /** @example Harrow Lane Garage */
+            name: string;
+            description: string;
+            /** @description A time-limited link to the logo image */
+            logoUrl: string | null;
+            /** @description Disabled by a site admin: readable, not changeable */
+            disabled: boolean;
+            /**
+             * @description The caller's role
+             * @enum {string|null}
+             */
+            role: "owner" | "editor" | "admin" | null;
+            createdAt: string;
+        };
+        UpdateWorkshopDto: {
+            name?: string;
+            /** @description Changing it changes the workshop’s web addresses */
+            slug?: string;
+            description?: string;
+        };
+        DeleteWorkshopDto: {
+            /** @description The workshop’s name, typed again: deleting cannot be undone */
+            confirmName: string;
+        };
+        MemberView: {
+            /** Format: uuid */
+            userId: string;
+            displayName: string;
+            email: string;
+            /** @enum {string} */
+            role: "owner" | "editor";
+            joinedAt: string;
+        };
+        ChangeRoleDto: {
+            /** @enum {string} */
+            role: "owner" | "editor";
+        };
+        TransferOwnershipDto: {
+            /**
+             * Format: uuid
+             * @description The member who becomes owner; you become an editor
+             */
+            userId: string;
+        };
+        InvitationView: {
+            /** Format: uuid */
+            id: string;
+            email: string;
+            /** @enum {string} */
+            role: "owner" | "editor";
+            expiresAt: string;
+            expired: boolean;
+            invitedBy: string | null;
+            createdAt: string;
+        };
+        CreateInvitationDto: {
+            /** @example sam@harrow-lane.example */
+            email: string;
+            /**
+             * @example editor
+             * @enum {string}
+             */
+            role: "owner" | "editor";
+        };
+        InvitationPreview: {
+            workshop: Record<string, never>;
+            email: string;
+            /** @enum {string} */
+            role: "owner" | "editor";
+            invitedBy: string | null;
+            expiresAt: string;
+            /** @enum {string} */
+            status: "pending" | "accepted" | "expired";
+        };
+        InvitationTokenDto: {
+            /** @description The token from the invitation link */
+            token: string;
+        };
+        AcceptedInvitation: {
+            /** Format: uuid */
+            workshopId: string;
+            /** @enum {string} */
+            role: "owner" | "editor";
+        };
+        AdminUserDto: {
+            /** Format: uuid */
+            id: string;
+            /** @example rowan@harrow-lane.example */
+            email: string;
+            /** @example Rowan Avery */
+            displayName: string;
+            isAdmin: boolean;
+            /** @enum {string} */
+            preferredUnits: "metric" | "inch";
+            emailVerified: boolean;
+            disabled: boolean;
+            createdAt: string;
+        };
+        AdminUserPageDto: {
+            items: components["schemas"]["AdminUserDto"][];
+            total: number;
+            page: number;
+            pageSize: number;
+        };
+        AdminWorkshopView: {
+            /** Format: uuid */
+            id: string;
+            slug: string;
+            name: string;
+            disabled: boolean;
+            memberCount: number;
+            owners: string[];
+            createdAt: string;
+        };
+        AdminWorkshopPageDto: {
+            items: components["schemas"]["AdminWorkshopView"][];
+            total: number;
+            page: number;
+            pageSize: number;
+        };
+        ConvertedLengthDto: {
+            /** @example 34.925 */
+            value: number;
+            /** @enum {string} */
+            unit: "in" | "mm";
+        };
+        SplineLengthDto: {
+            /**
+             * @description In the designation's own unit
+             * @example 1.375
+             */
+            value: number;
+            /** @enum {string} */
+            unit: "in" | "mm";
+            /** @description The same length in the other unit (1 in = 25.4 mm exactly) */
+            converted: components["schemas"]["ConvertedLengthDto"];
+        };
+        SplineDimensionSetDto: {
+            /** @description D = N/P (ANSI B92.1) or m·z (ISO 4156) */
+            pitchDiameter: components["schemas"]["SplineLengthDto"];
+            /** @description Db = D cos(pressure angle) */
+            baseDiameter: components["schemas"]["SplineLengthDto"];
+            /** @description π/P or π·m */
+            circularPitch: components["schemas"]["SplineLengthDto"];
+            basicSpaceWidth: components["schemas"]["SplineLengthDto"];
+            basicToothThickness: components["schemas"]["SplineLengthDto"];
+            internalMajorDiameter: components["schemas"]["SplineLengthDto"];
+            externalMajorDiameter: components["schemas"]["SplineLengthDto"];
+            internalMinorDiameter: components["schemas"]["SplineLengthDto"];
+            externalMinorDiameter: components["schemas"]["SplineLengthDto"];
+            internalFormDiameter: components["schemas"]["SplineLengthDto"];
+            externalFormDiameter: components["schemas"]["SplineLengthDto"];
+            /** @description Radial form clearance cF */
+            formClearance: components["schemas"]["SplineLengthDto"];
+        };
+        SplineDimensionsDto: {
+            /** @example 21T 16/32 DP 30° flat root side fit (ANSI B92.1) */
+            designation: string;
+            /** @enum {string} */
+            standard: "ANSI B92.1" | "ISO 4156 / ANSI B92.2M";
+            /** @example 21 */
+            teeth: number;
+            /** @example 16/32 */
+            pitch: string;
+            /** @enum {number} */
+            pressureAngle: 30 | 37.5 | 45;
+            /** @enum {string} */
+            root: "flat" | "fillet";
+            /** @enum {string} */
+            fit: "side" | "major";
+            /** @enum {string} */
+            unit: "in" | "mm";
+            dimensions: components["schemas"]["SplineDimensionSetDto"];
+            /** @description The formulas used and what is simplified */
+            notes: string[];
+        };
+        MeasuredDto: {
+            /** @example 26.67 */
+            value: number;
+            /** @enum {string} */
+            unit: "in" | "mm";
+            /** @example 0.01 */
+            resolution: number;
+        };
+        DeviationDto: {
+            /**
+             * @description Reading − basic diameter
+             * @example -0.42
+             */
+            value: number;
+            /** @enum {string} */
+            unit: "in" | "mm";
+        };
+        SplineCandidateDto: {
+            /** @example 20T 20/40 DP 30° flat root side fit (ANSI B92.1) */
+            designation: string;
+            /** @enum {string} */
+            standard: "ANSI B92.1" | "ISO 4156 / ANSI B92.2M";
+            /** @example 20/40 */
+            pitch: string;
+            /** @enum {number} */
+            pressureAngle: 30 | 37.5 | 45;
+            /** @enum {string} */
+            root: "flat" | "fillet";
+            /** @description Other forms with the same basic diameter */
+            alsoFits: string[];
+            basicDiameter: components["schemas"]["SplineLengthDto"];
+            deviation: components["schemas"]["DeviationDto"];
+            /** @description Whether the reading lies inside the window of the `rule` */
+            explainsReading: boolean;
+        };
+        SplineIdentificationDto: {
+            /** @example 20 */
+            teeth: number;
+            /** @enum {string} */
+            feature: "major" | "minor";
+            measured: components["schemas"]["MeasuredDto"];
+            /** @description Best first, by the size of the deviation */
+            candidates: components["schemas"]["SplineCandidateDto"][];
+            /** @description Warnings such as the inch/metric swap */
+            pitfalls: string[];
+            /** @description How explainsReading is decided */
+            rule: string;
+        };
+        ExtractMeasurementsDto: {
+            /** @example That leaves fifteen thousandths of an inch. */
+            text: string;
+        };
+        SpokenMeasurementDto: {
+            /**
+             * @description text.slice(start, end)
+             * @example fifteen thousandths of an inch
+             */
+            phrase: string;
+            /**
+             * @description Character offset of the first character
+             * @example 20
+             */
+            start: number;
+            /**
+             * @description Character offset just past the last character
+             * @example 50
+             */
+            end: number;
+            /**
+             * @description The amount in `unit` (thou, mil and tenths are reported in inches)
+             * @example 0.015
+             */
+            value: number;
+            /** @enum {string} */
+            unit: "mm" | "um" | "in";
+            /**
+             * @description The same length in millimetres (1 in = 25.4 mm exactly)
+             * @example 0.381
+             */
+            millimetres: number;
+        };
+        ExtractedMeasurementsDto: {
+            /** @description In text order; at most 1000 */
+            measurements: components["schemas"]["SpokenMeasurementDto"][];
+            /**
+             * @description How many measurements the text holds
+             * @example 1
+             */
+            total: number;
+            /**
+             * @description True when `measurements` stops short of `total`
+             * @example false
+             */
+            truncated: boolean;
+        };
+        ParseTranscriptDto: {
+            /**
+             * @example WEBVTT
+             *
+             *     00:00:01.000 --> 00:00:04.000
+             *     Hello
+             */
+            text: string;
+            /**
+             * @default auto
+             * @enum {string}
+             */
+            format: "auto" | "webvtt" | "srt" | "timestamped";
+        };
+        ParsedCueDto: {
+            /** @example 1000 */
+            startMs: number;
+            /** @example 4000 */
+            endMs: number;
+            /** @example Hello */
+            text: string;
+        };
+        ParsedTranscriptDto: {
+            /** @enum {string} */
+            format: "webvtt" | "srt" | "timestamped";
+            /** @description In file order; at most 5000 */
+            cues: components["schemas"]["ParsedCueDto"][];
+            /**
+             * @description How many cues the transcript holds
+             * @example 1
+             */
+            total: number;
+            /**
+             * @description True when `cues` stops short of `total`
+             * @example false
+             */
+            truncated: boolean;
+        };
+        CreateBuildDto: {
+            /** @example Motor-to-gearbox coupler */
+            title: string;
+            /** @example 1980s compact pickup, electric conversion */
+            vehicle?: string;
+            /** @example Couple the motor shaft to the original gearbox input without re-machining. */
+            goal?: string;
+            /** @enum {string} */
+            status?: "planning" | "in_progress" | "verified" | "archived";
+        };
+        UpdateBuildDto: {
+            /** @example Motor-to-gearbox coupler */
+            title?: string;
+            /** @example 1980s compact pickup, electric conversion */
+            vehicle?: string;
+            /** @example Couple the motor shaft to the original gearbox input without re-machining. */
+            goal?: string;
+            /** @enum {string} */
+            status?: "planning" | "in_progress" | "verified" | "archived";
+        };
+        FeatureInputDto: {
+            /** @example input spline */
+            name: string;
+            /** @enum {string} */
+            kind: "spline" | "diameter" | "length" | "free";
+            /**
+             * @description Unit of every length of this feature
+             * @default mm
+             * @enum {string}
+             */
+            unit: "mm" | "um" | "in" | "thou" | "tenths";
+            /** @example 21 */
+            teeth?: number;
+            /** @enum {string} */
+            gender?: "internal" | "external";
+            /**
+             * @description ANSI B92.1 diametral pitch P (the 16 of 16/32)
+             * @example 16
+             */
+            diametralPitch?: number;
+            /**
+             * @description stub pitch (the 32 of 16/32)
+             * @example 32
+             */
+            stubPitch?: number;
+            /**
+             * @description ISO 4156 module, mm
+             * @example 1.25
+             */
+            module?: number;
+            /** @example 1.375 */
+            majorDiameter?: string;
+            /** @enum {string} */
+            role?: "hole" | "shaft";
+            /** @example 15 */
+            nominal?: string;
+            /**
+             * @description ISO 286 tolerance class
+             * @example H7
+             */
+            toleranceClass?: string;
+            /**
+             * @description largest allowed size, when given instead of a class
+             * @example 15.018
+             */
+            max?: string;
+            /** @example 15.000 */
+            min?: string;
+            /**
+             * @description overall length
+             * @example 540
+             */
+            length?: string;
+            /**
+             * @description fully compressed length of a plunging shaft
+             * @example 520
+             */
+            compressed?: string;
+            /**
+             * @description fully extended length of a plunging shaft
+             * @example 565
+             */
+            extended?: string;
+            /** @example M10 x 1.25 */
+            value?: string;
+            /** @example N·m */
+            freeUnit?: string;
+        };
+        CreatePartDto: {
+            /** @example HL-2107 */
+            partNumber: string;
+            /** @example Brackwater Driveline */
+            maker?: string;
+            /** @example 27-tooth motor coupler */
+            title: string;
+            /** @enum {string} */
+            category: "coupler" | "shaft" | "joint" | "bearing" | "bore" | "plate" | "boot" | "seal" | "fastener" | "other";
+            /**
+             * @default new
+             * @enum {string}
+             */
+            source: "new" | "remanufactured" | "used" | "original_equipment";
+            notes?: string;
+            features?: components["schemas"]["FeatureInputDto"][];
+        };
+        UpdatePartDto: {
+            /** @example HL-2107 */
+            partNumber?: string;
+            /** @example Brackwater Driveline */
+            maker?: string;
+            /** @example 27-tooth motor coupler */
+            title?: string;
+            /** @enum {string} */
+            category?: "coupler" | "shaft" | "joint" | "bearing" | "bore" | "plate" | "boot" | "seal" | "fastener" | "other";
+            /**
+             * @default new
+             * @enum {string}
+             */
+            source: "new" | "remanufactured" | "used" | "original_equipment";
+            notes?: string;
+        };
+        UpdateFeatureDto: {
+            /** @example input spline */
+            name?: string;
+            /** @enum {string} */
+            kind?: "spline" | "diameter" | "length" | "free";
+            /**
+             * @description Unit of every length of this feature
+             * @default mm
+             * @enum {string}
+             */
+            unit: "mm" | "um" | "in" | "thou" | "tenths";
+            /** @example 21 */
+            teeth?: number;
+            /** @enum {string} */
+            gender?: "internal" | "external";
+            /**
+             * @description ANSI B92.1 diametral pitch P (the 16 of 16/32)
+             * @example 16
+             */
+            diametralPitch?: number;
+            /**
+             * @description stub pitch (the 32 of 16/32)
+             * @example 32
+             */
+            stubPitch?: number;
+            /**
+             * @description ISO 4156 module, mm
+             * @example 1.25
+             */
+            module?: number;
+            /** @example 1.375 */
+            majorDiameter?: string;
+            /** @enum {string} */
+            role?: "hole" | "shaft";
+            /** @example 15 */
+            nominal?: string;
+            /**
+             * @description ISO 286 tolerance class
+             * @example H7
+             */
+            toleranceClass?: string;
+            /**
+             * @description largest allowed size, when given instead of a class
+             * @example 15.018
+             */
+            max?: string;
+            /** @example 15.000 */
+            min?: string;
+            /**
+             * @description overall length
+             * @example 540
+             */
+            length?: string;
+            /**
+             * @description fully compressed length of a plunging shaft
+             * @example 520
+             */
+            compressed?: string;
+            /**
+             * @description fully extended length of a plunging shaft
+             * @example 565
+             */
+            extended?: string;
+            /** @example M10 x 1.25 */
+            value?: string;
+            /** @example N·m */
+            freeUnit?: string;
+        };
+        CreateMeasurementDto: {
+            /** @description The part feature measured (give this or interfaceId) */
+            featureId?: string;
+            /** @description The interface measured, e.g. a clearance between two parts */
+            interfaceId?: string;
+            /** @enum {string} */
+            quantity: "diameter" | "length" | "clearance" | "runout" | "other";
+            /**
+             * @description The reading exactly as taken, in `unit`
+             * @example 0.6692
+             */
+            value: string;
+            /** @enum {string} */
+            unit: "mm" | "um" | "in" | "thou" | "tenths";
+            /** @enum {string} */
+            instrumentKind: "outside_micrometer" | "inside_micrometer" | "bore_gauge" | "caliper" | "dial_indicator" | "feeler_gauge" | "tape" | "other";
+            /**
+             * @description The instrument's smallest step, in `unit`
+             * @example 0.0001
+             */
+            resolution: string;
+            /** @example 2026-09-14 */
+            calibratedOn?: string;
+            /** @example 0–1 in outside micrometer, ratchet stop */
+            instrumentNote?: string;
+            /** @example 20.5 */
+            temperatureC?: number;
+            /** @description When it was taken (defaults to now) */
+            takenAt?: string;
+            /** @description The footage that shows the reading */
+            footageId?: string;
+            /**
+             * @description Time in that footage, ms
+             * @example 95000
+             */
+            footageTimeMs?: number;
+            note?: string;
+        };
+        CreateManualCheckDto: {
+            /** @example Test-fitted on the vehicle: coupler engages fully */
+            title: string;
+            /** @default true */
+            required: boolean;
+        };
+        TransitionDto: {
+            /** @enum {string} */
+            to: "open" | "bench_pass" | "confirmed" | "no_fit" | "retired";
+            /** @example Test-fitted with the motor bolted up; turns by hand with no bind. */
+            reason: string;
+            /**
+             * @description The state the caller saw and expects to leave; if the check is no longer in it, 409 and nothing changes
+             * @enum {string}
+             */
+            from?: "open" | "bench_pass" | "confirmed" | "no_fit" | "retired";
+        };
+        AddEvidenceDto: {
+            /**
+             * @description Photos come through the photos route
+             * @enum {string}
+             */
+            kind: "measurement" | "mark";
+            /** @description For kind `measurement` */
+            measurementId?: string;
+            /** @description For kind `mark`: a moment in this workshop's footage that shows the fit */
+            markId?: string;
+            note?: string;
+        };
+        CreateAssemblyDto: {
+            /** @example 21-tooth coupler with the long driveshaft */
+            name: string;
+            notes?: string;
+        };
+        UpdateAssemblyDto: {
+            /** @example 21-tooth coupler with the long driveshaft */
+            name?: string;
+            notes?: string;
+        };
+        PlacePartDto: {
+            /** @example input side */
+            position: string;
+            /** @example 1 */
+            sortOrder?: number;
+        };
+        CreateInterfaceDto: {
+            /** @enum {string} */
+            kind: "spline" | "bore_shaft" | "length_window";
+            /** @example coupler to gearbox input */
+            name: string;
+            /** @description spline: one spline; bore_shaft: the hole or the shaft; length_window: the length feature */
+            featureAId: string;
+            /** @description spline: the mating spline; bore_shaft: the other diameter */
+            featureBId?: string;
+            /**
+             * @description Unit of installedMin, installedMax and margin
+             * @default mm
+             * @enum {string}
+             */
+            unit: "mm" | "um" | "in" | "thou" | "tenths";
+            /**
+             * @description length_window: shortest installed length
+             * @example 530
+             */
+            installedMin?: string;
+            /**
+             * @description length_window: longest installed length
+             * @example 555
+             */
+            installedMax?: string;
+            /**
+             * @description length_window: travel that must remain each way; bore_shaft: the least clearance you accept
+             * @example 5
+             */
+            margin?: string;
+        };
+        UpdateInterfaceDto: {
+            /** @enum {string} */
+            kind?: "spline" | "bore_shaft" | "length_window";
+            /** @example coupler to gearbox input */
+            name?: string;
+            /** @description spline: one spline; bore_shaft: the hole or the shaft; length_window: the length feature */
+            featureAId?: string;
+            /** @description spline: the mating spline; bore_shaft: the other diameter */
+            featureBId?: string;
+            /**
+             * @description Unit of installedMin, installedMax and margin
+             * @default mm
+             * @enum {string}
+             */
+            unit: "mm" | "um" | "in" | "thou" | "tenths";
+            /**
+             * @description length_window: shortest installed length
+             * @example 530
+             */
+            installedMin?: string;
+            /**
+             * @description length_window: longest installed length
+             * @example 555
+             */
+            installedMax?: string;
+            /**
+             * @description length_window: travel that must remain each way; bore_shaft: the least clearance you accept
+             * @example 5
+             */
+            margin?: string;
+        };
+        FootageTypeDto: {
+            /** @example mp4 */
+            extension: string;
+            /**
+             * @example [
+             *       "video/mp4"
+             *     ]
+             */
+            mimeTypes: string[];
+        };
+        FootageLimitsDto: {
+            /** @example 20000000000 */
+            maxBytes: number;
+            types: components["schemas"]["FootageTypeDto"][];
+            /** @description Largest transcript file or pasted text, in bytes */
+            transcriptMaxBytes: number;
+            transcriptMaxCues: number;
+        };
+        UploadProgressDto: {
+            partCount: number;
+            completedPartCount: number;
+            uploadedBytes: number;
+        };
+        TranscriptSummaryDto: {
+            revision: number;
+            cueCount: number;
+        };
+        FootageResponseDto: {
+            id: string;
+            workshopId: string;
+            buildId: string;
+            title: string;
+            originalName: string;
+            contentType: string;
+            sizeBytes: number;
+            /** @enum {string} */
+            state: "uploading" | "processing" | "ready" | "failed";
+            /** @description Why processing failed, in words for the creator */
+            failureReason: string | null;
+            durationMs: number | null;
+            width: number | null;
+            height: number | null;
+            frameRate: number | null;
+            container: string | null;
+            videoCodec: string | null;
+            audioCodec: string | null;
+            /** @description Short-lived link to the poster frame */
+            posterUrl: string | null;
+            /** @description Only while uploading */
+            upload: components["schemas"]["UploadProgressDto"] | null;
+            /** @description The active transcript, if any */
+            transcript: components["schemas"]["TranscriptSummaryDto"] | null;
+            createdAt: string;
+            updatedAt: string;
+        };
+        CreateFootageDto: {
+            /**
+             * @description The file name as the browser gives it; sanitised before it is stored
+             * @example coupler-spline-check.mp4
+             */
+            fileName: string;
+            /**
+             * @description The browser's MIME type for the file (may be empty when it does not know)
+             * @example video/mp4
+             */
+            contentType: string;
+            /**
+             * @description File size in bytes
+             * @example 734003200
+             */
+            sizeBytes: number;
+            /**
+             * @description Defaults to the file name without its extension
+             * @example Coupler spline check
+             */
+            title?: string;
+        };
+        UploadedPartDto: {
+            partNumber: number;
+            etag: string;
+        };
+        UploadStateDto: {
+            /** @description Bytes in every part but the last */
+            partSizeBytes: number;
+            partCount: number;
+            sizeBytes: number;
+            /** @description The file name the upload was started with (sanitised) */
+            fileName: string;
+            /** @description Parts storage has confirmed, in part order */
+            completedParts: components["schemas"]["UploadedPartDto"][];
+        };
+        CreateFootageResponseDto: {
+            footage: components["schemas"]["FootageResponseDto"];
+            upload: components["schemas"]["UploadStateDto"];
+        };
+        UpdateFootageDto: {
+            /** @example Coupler spline check */
+            title: string;
+        };
+        PlaybackResponseDto: {
+            /** @description Presigned GET URL; supports HTTP Range requests for seeking */
+            url: string;
+            expiresAt: string;
+            contentType: string;
+        };
+        PartUrlsRequestDto: {
+            /**
+             * @description Part numbers to sign (1-based), at most 100 per request
+             * @example [
+             *       1,
+             *       2,
+             *       3,
+             *       4
+             *     ]
+             */
+            partNumbers: string[];
+        };
+        PartUrlDto: {
+            partNumber: number;
+            /** @description Presigned PUT URL; send the part bytes as the body, no credentials */
+            url: string;
+        };
+        PartUrlsResponseDto: {
+            expiresAt: string;
+            urls: components["schemas"]["PartUrlDto"][];
+        };
+        RecordPartDto: {
+            /**
+             * @description The ETag header storage answered the part upload with: a part's MD5 in hex, quoted or bare
+             * @example "9b2cf535f27731c974343645a3985328"
+             */
+            etag: string;
+        };
+        RecordPartResponseDto: {
+            partNumber: number;
+            completedPartCount: number;
+            partCount: number;
+        };
+        CueDto: {
+            /** @description Position in the transcript, from 0 */
+            index: number;
+            startMs: number;
+            endMs: number;
+            text: string;
+        };
+        TranscriptDto: {
+            id: string;
+            footageId: string;
+            revision: number;
+            /** @enum {string} */
+            format: "webvtt" | "srt" | "timestamped";
+            /** @description The attached file name; null when pasted */
+            sourceName: string | null;
+            cueCount: number;
+            isActive: boolean;
+            createdAt: string;
+            cues: components["schemas"]["CueDto"][];
+        };
+        AttachTranscriptDto: {
+            /**
+             * @description WebVTT, SubRip or timestamped lines ("[1:02] text"); at most 2 MB
+             * @example WEBVTT
+             *
+             *     00:00:01.000 --> 00:00:04.000
+             *     The spline counts twenty-one teeth.
+             */
+            text: string;
+            /**
+             * @default auto
+             * @enum {string}
+             */
+            format: "auto" | "webvtt" | "srt" | "timestamped";
+        };
+        TranscriptRevisionDto: {
+            id: string;
+            footageId: string;
+            revision: number;
+            /** @enum {string} */
+            format: "webvtt" | "srt" | "timestamped";
+            /** @description The attached file name; null when pasted */
+            sourceName: string | null;
+            cueCount: number;
+            isActive: boolean;
+            createdAt: string;
+        };
+        CueMatchDto: {
+            cueIndex: number;
+            startMs: number;
+            endMs: number;
+            text: string;
+        };
+        FootageSearchResponseDto: {
+            /** @description The words searched for */
+            terms: string[];
+            /** @description How many cues match in all; results holds at most `limit` of them */
+            total: number;
+            /** @description Where this page starts among all the hits */
+            offset: number;
+            /** @description Matching cues of the active transcript, in time order */
+            results: components["schemas"]["CueMatchDto"][];
+        };
+        WorkshopCueMatchDto: {
+            cueIndex: number;
+            startMs: number;
+            endMs: number;
+            text: string;
+            footageId: string;
+            footageTitle: string;
+            buildId: string;
+            buildTitle: string;
+        };
+        WorkshopSearchResponseDto: {
+            terms: string[];
+            /** @description How many cues match in all; results holds at most `limit` of them */
+            total: number;
+            /** @description Where this page starts among all the hits */
+            offset: number;
+            /** @description Matching cues of the workshop's active transcripts, best first */
+            results: components["schemas"]["WorkshopCueMatchDto"][];
+        };
+        CreateMarkDto: {
+            /** @description For kind `part` */
+            partId?: Record<string, never> | null;
+            /** @description For kind `measurement` */
+            measurementId?: Record<string, never> | null;
+            /** @description For kind `check_evidence` */
+            fitCheckId?: Record<string, never> | null;
+            /** @description For kind `step`: a step of one of the workshop’s guides */
+            guideStepId?: Record<string, never> | null;
+            /**
+             * @description Time in the footage, ms
+             * @example 95000
+             */
+            startMs: number;
+            /**
+             * @description End of a span, ms (after startMs)
+             * @example 101500
+             */
+            endMs?: Record<string, never> | null;
+            /** @enum {string} */
+            kind: "part" | "measurement" | "check_evidence" | "step" | "caution" | "note";
+            /**
+             * @default
+             * @example Coupler seats on the input shaft
+             */
+            label: string;
+        };
+        UpdateMarkDto: {
+            /** @description For kind `part` */
+            partId?: Record<string, never> | null;
+            /** @description For kind `measurement` */
+            measurementId?: Record<string, never> | null;
+            /** @description For kind `check_evidence` */
+            fitCheckId?: Record<string, never> | null;
+            /** @description For kind `step`: a step of one of the workshop’s guides */
+            guideStepId?: Record<string, never> | null;
+            startMs?: number;
+            endMs?: Record<string, never> | null;
+            /** @enum {string} */
+            kind?: "part" | "measurement" | "check_evidence" | "step" | "caution" | "note";
+            label?: string;
+        };
+        AcceptSuggestionDto: {
+            /** @description Measurement suggestions: the part feature measured (or interfaceId) */
+            featureId?: string;
+            /** @description Measurement suggestions: the interface measured (or featureId) */
+            interfaceId?: string;
+            /**
+             * @default other
+             * @enum {string}
+             */
+            quantity: "diameter" | "length" | "clearance" | "runout" | "other";
+            /**
+             * @default other
+             * @enum {string}
+             */
+            instrumentKind: "outside_micrometer" | "inside_micrometer" | "bore_gauge" | "caliper" | "dial_indicator" | "feeler_gauge" | "tape" | "other";
+            /**
+             * @description Defaults to one step of the last spoken digit, in the suggestion's unit
+             * @example 0.001
+             */
+            resolution?: string;
+            /** @description The mark's label (defaults to the spoken phrase) */
+            label?: string;
+        };
+        CreateGuideDto: {
+            /**
+             * @description HTML (sanitised)
+             * @example <p>How the 21-tooth coupler stack goes together.</p>
+             */
+            summary?: string;
+            /** @description The footage viewers follow (a footage of the same build) */
+            footageId?: Record<string, never> | null;
+            /** @description Its checklist and parts go in the guide (an assembly of the same build) */
+            assemblyId?: Record<string, never> | null;
+            safetyTopics?: ("lifting" | "rotating_parts" | "high_voltage" | "welding" | "pressing")[];
+            /**
+             * @example [
+             *       "Torque wrench, 20–100 N·m",
+             *       "Outside micrometer 25–50 mm"
+             *     ]
+             */
+            tools?: string[];
+            /**
+             * @example [
+             *       "Anti-seize compound",
+             *       "Medium-strength thread locker"
+             *     ]
+             */
+            consumables?: string[];
+            /** @example Fitting the 21-tooth coupler stack */
+            title: string;
+        };
+        UpdateGuideDto: {
+            /**
+             * @description HTML (sanitised)
+             * @example <p>How the 21-tooth coupler stack goes together.</p>
+             */
+            summary?: string;
+            /** @description The footage viewers follow (a footage of the same build) */
+            footageId?: Record<string, never> | null;
+            /** @description Its checklist and parts go in the guide (an assembly of the same build) */
+            assemblyId?: Record<string, never> | null;
+            safetyTopics?: ("lifting" | "rotating_parts" | "high_voltage" | "welding" | "pressing")[];
+            /**
+             * @example [
+             *       "Torque wrench, 20–100 N·m",
+             *       "Outside micrometer 25–50 mm"
+             *     ]
+             */
+            tools?: string[];
+            /**
+             * @example [
+             *       "Anti-seize compound",
+             *       "Medium-strength thread locker"
+             *     ]
+             */
+            consumables?: string[];
+            title?: string;
+        };
+        StepCautionDto: {
+            /**
+             * @description ANSI Z535 signal word
+             * @enum {string}
+             */
+            level: "DANGER" | "WARNING" | "CAUTION" | "NOTICE";
+            /** @example Support the truck on stands before going underneath. */
+            text: string;
+        };
+        CreateStepDto: {
+            /** @description HTML (sanitised) */
+            body?: string;
+            /** @description A footage of the guide’s build; defaults to the guide’s footage when a time is given */
+            footageId?: Record<string, never> | null;
+            /**
+             * @description The step’s moment in the footage, ms
+             * @example 42000
+             */
+            startMs?: Record<string, never> | null;
+            /** @description End of the step’s span, ms (after startMs) */
+            endMs?: Record<string, never> | null;
+            caution?: components["schemas"]["StepCautionDto"] | null;
+            /** @example Seat the coupler on the motor shaft */
+            title: string;
+        };
+        ReorderStepsDto: {
+            /** @description Every step of the guide exactly once, in the new order */
+            stepIds: string[];
+        };
+        UpdateStepDto: {
+            /** @description HTML (sanitised) */
+            body?: string;
+            /** @description A footage of the guide’s build; defaults to the guide’s footage when a time is given */
+            footageId?: Record<string, never> | null;
+            /**
+             * @description The step’s moment in the footage, ms
+             * @example 42000
+             */
+            startMs?: Record<string, never> | null;
+            /** @description End of the step’s span, ms (after startMs) */
+            endMs?: Record<string, never> | null;
+            caution?: components["schemas"]["StepCautionDto"] | null;
+            title?: string;
+        };
+        PublishRevisionDto: {
+            /** @example Added the runout reading to step 3. */
+            note?: string;
+        };
+        CreateFollowDto: {
+            /** @enum {string} */
+            targetKind: "workshop" | "build" | "assembly";
+            /** @description The id of the workshop, build or assembly (a published guide gives them as followTargets) */
+            targetId: string;
+        };
+        UnsubscribeBodyDto: {
+            token?: string;
+            /** @description Stop this other follow instead: one of the `stillFollowing` the first answer listed (same token, no sign-in) */
+            followId?: string;
+            /** @description Sent by mail clients on one-click unsubscribe; ignored */
+            "List-Unsubscribe"?: string;
+        };
+        UnsubscribedFollowDto: {
+            id: string;
+            /** @enum {string} */
+            targetKind: "workshop" | "build" | "assembly";
+            targetId: string;
+            label: string;
+            /**
+             * @example {
+             *       "name": "Harrow Lane Garage",
+             *       "slug": "harrow-lane"
+             *     }
+             */
+            workshop: Record<string, never>;
+            createdAt: string;
+        };
+        UnsubscribeResultDto: {
+            /**
+             * @description `already` when the link had been used before
+             * @enum {string}
+             */
+            status: "unfollowed" | "already";
+            /**
+             * @description What the e-mail came through: a follow, or the person's fit report
+             * @enum {string}
+             */
+            stopped: "follow" | "report";
+            /** @description What the e-mail named: the followed workshop, build or assembly, or "your fit report" */
+            label: string;
+            /** @description The person's other follows that still bring news of the same assembly (closest first) */
+            stillFollowing: components["schemas"]["UnsubscribedFollowDto"][];
+        };
+        CreateFitReportDto: {
+            /** @enum {string} */
+            outcome: "fit" | "no_fit";
+            /** @example HL-2107 coupler on the original 5-speed input shaft, BD adapter plate */
+            parts: string;
+            /** @example 1986 compact pickup, 4x2 */
+            vehicle?: string;
+            notes?: string;
+        };
+        UpdateFitReportDto: {
+            /** @enum {string} */
+            status?: "new" | "investigating" | "verified" | "declined";
+            /** @description Shown to the reporter */
+            creatorNote?: string;
+            /** @description A fit check of this workshop that verifies the claim; null unties it */
+            fitCheckId?: Record<string, never> | null;
+        };
+    };
+    responses: never;
+    parameters: never;
+    requestBodies: never;
+    headers: never;
+    pathItems: never;
+}
+export type $defs = Record<string, never>;
+export interface operations {
+    HealthController_check: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description Every service answered */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["HealthReportDto"];
+                };
+            };
+            /** @description At least one check is down */
+            503: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["HealthReportDto"];
+                };
+            };
+        };
+    };
+    AuthController_me: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["MeResponseDto"];
+                };
+            };
+            /** @description Too many attempts from this address; wait a minute */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    AuthController_register: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["RegisterDto"];
+            };
+        };
+        responses: {
+            /** @description Same answer whether or not the address had an account */
+            202: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["MessageDto"];
+                };
+            };
+            /** @description Too many attempts from this address; wait a minute */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    AuthController_login: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["LoginDto"];
+            };
+        };
+        responses: {
+            /** @description Signed in; the session cookie is set */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["MeResponseDto"];
+                };
+            };
+            /** @description The e-mail address or password is incorrect (one answer for both) */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description Too many attempts from this client address a minute, or (code `sign_in_paused`) too many failed sign-ins for this e-mail address: after five, each failure pauses it twice as long (30 s up to 15 min), known address or not */
+            429: {
+                headers: {
+                    /** @description Seconds until this address may try again */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    AuthController_logout: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description Signed out (also when there was no session) */
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description Too many attempts from this address; wait a minute */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    AuthController_verifyEmail: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["EmailTokenDto"];
+            };
+        };
+        responses: {
+            /** @description The address is confirmed */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["MeResponseDto"];
+                };
+            };
+            /** @description Too many attempts from this address; wait a minute */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    AuthController_resendVerification: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            202: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["MessageDto"];
+                };
+            };
+            /** @description Too many attempts from this address; wait a minute */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    AuthController_forgotPassword: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["ForgotPasswordDto"];
+            };
+        };
+        responses: {
+            /** @description Same answer, after the same work, whether or not the address has an account: a job looks it up and mails a link */
+            202: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["MessageDto"];
+                };
+            };
+            /** @description Too many attempts from this address; wait a minute */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    AuthController_resetPassword: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["ResetPasswordDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["MessageDto"];
+                };
+            };
+            /** @description Too many attempts from this address; wait a minute */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    AuthController_changePassword: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["ChangePasswordDto"];
+            };
+        };
+        responses: {
+            /** @description Changed; other browsers are signed out */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["MessageDto"];
+                };
+            };
+            /** @description Too many attempts from this address; wait a minute */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    AuthController_changeEmail: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["ChangeEmailDto"];
+            };
+        };
+        responses: {
+            /** @description A link was sent to the new address */
+            202: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["MessageDto"];
+                };
+            };
+            /** @description Too many attempts from this address; wait a minute */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    AuthController_confirmEmail: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["EmailTokenDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["MeResponseDto"];
+                };
+            };
+            /** @description Too many attempts from this address; wait a minute */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    UsersController_updateProfile: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["UpdateProfileDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["SessionUserDto"];
+                };
+            };
+        };
+    };
+    WorkshopsController_listMine: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The caller's workshops with the caller's role */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["WorkshopView"][];
+                };
+            };
+        };
+    };
+    WorkshopsController_create: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["CreateWorkshopDto"];
+            };
+        };
+        responses: {
+            /** @description Created; the caller is its owner */
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["WorkshopView"];
+                };
+            };
+        };
+    };
+    WorkshopsController_get: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["WorkshopView"];
+                };
+            };
+        };
+    };
+    WorkshopsController_remove: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["DeleteWorkshopDto"];
+            };
+        };
+        responses: {
+            /** @description Deleted with all its data and files */
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    WorkshopsController_update: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["UpdateWorkshopDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["WorkshopView"];
+                };
+            };
+        };
+    };
+    WorkshopsController_setLogo: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "multipart/form-data": {
+                    /** Format: binary */
+                    logo: string;
+                };
+            };
+        };
+        responses: {
+            /** @description PNG, JPEG or WebP, at most 2 MB */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["WorkshopView"];
+                };
+            };
+        };
+    };
+    WorkshopsController_removeLogo: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    MembersController_list: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["MemberView"][];
+                };
+            };
+        };
+    };
+    MembersController_remove: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                userId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    MembersController_changeRole: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                userId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["ChangeRoleDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["MemberView"];
+                };
+            };
+        };
+    };
+    MembersController_transfer: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["TransferOwnershipDto"];
+            };
+        };
+        responses: {
+            /** @description The chosen member is owner; the caller is an editor */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["MemberView"][];
+                };
+            };
+        };
+    };
+    MembersController_leave: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description Left the workshop (the last owner cannot) */
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    WorkshopInvitationsController_list: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description Invitations not yet accepted */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["InvitationView"][];
+                };
+            };
+        };
+    };
+    WorkshopInvitationsController_invite: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["CreateInvitationDto"];
+            };
+        };
+        responses: {
+            /** @description Invited; the link was e-mailed (valid 7 days) */
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["InvitationView"];
+                };
+            };
+        };
+    };
+    WorkshopInvitationsController_revoke: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                invitationId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    InvitationsController_preview: {
+        parameters: {
+            query: {
+                /** @description The token from the invitation link */
+                token: string;
+            };
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["InvitationPreview"];
+                };
+            };
+        };
+    };
+    InvitationsController_accept: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["InvitationTokenDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["AcceptedInvitation"];
+                };
+            };
+        };
+    };
+    AdminController_listUsers: {
+        parameters: {
+            query?: {
+                /** @description Part of a name, e-mail address or web address */
+                search?: string;
+                page?: number;
+            };
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["AdminUserPageDto"];
+                };
+            };
+        };
+    };
+    AdminController_disableUser: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                userId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description Cannot sign in any more; signed out everywhere */
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    AdminController_enableUser: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                userId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    AdminController_listWorkshops: {
+        parameters: {
+            query?: {
+                /** @description Part of a name, e-mail address or web address */
+                search?: string;
+                page?: number;
+            };
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["AdminWorkshopPageDto"];
+                };
+            };
+        };
+    };
+    AdminController_disableWorkshop: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description Members can still read it; nobody can change it */
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    AdminController_enableWorkshop: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    ToolsController_fits: {
+        parameters: {
+            query: {
+                /** @description Nominal size, in `unit` */
+                size: number;
+                unit: "mm" | "in";
+                /** @description Hole tolerance class: upper-case letter(s) and IT grade */
+                hole: string;
+                /** @description Shaft tolerance class: lower-case letter(s) and IT grade */
+                shaft: string;
+                /** @description js/JS: `none` gives ±IT/2 as the current ISO 286-2 tables do; `even` rounds odd IT7–IT11 down to even (older practice) */
+                jsRounding?: "none" | "even";
+            };
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description Too many calculator requests from this address; wait a minute */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    ToolsController_splines: {
+        parameters: {
+            query: {
+                teeth: number;
+                /** @description ANSI B92.1 diametral pitch written `16/32` or `20 DP`, or an ISO 4156 module written `m1.25` */
+                pitch: string;
+                /** @description Pressure angle, degrees */
+                pressureAngle?: 30 | 37.5 | 45;
+                /** @description Default: flat for 30°, fillet for 37.5° and 45° (which have fillet roots only) */
+                root?: "flat" | "fillet";
+                /** @description major: ANSI B92.1 30° flat-root major-diameter fit */
+                fit?: "side" | "major";
+            };
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["SplineDimensionsDto"];
+                };
+            };
+            /** @description A field the standards do not define, named in the message */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description Too many calculator requests from this address; wait a minute */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    ToolsController_identifySpline: {
+        parameters: {
+            query: {
+                teeth: number;
+                /** @description Measured major (outside) diameter of a shaft's spline, in `unit`; give this or minorDiameter */
+                majorDiameter?: number;
+                /** @description Measured minor diameter (the bore) of a hub's spline, in `unit` */
+                minorDiameter?: number;
+                /** @description Unit of the reading */
+                unit: "mm" | "in";
+                /** @description The instrument's resolution in `unit`; default 0.01 mm or 0.001 in (a common caliper) */
+                resolution?: number;
+            };
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["SplineIdentificationDto"];
+                };
+            };
+            /** @description Missing or impossible reading, unit or tooth count */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description Too many calculator requests from this address; wait a minute */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    ToolsController_extractMeasurements: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["ExtractMeasurementsDto"];
+            };
+        };
+        responses: {
+            /** @description At most 1,000 measurements; `truncated` says when there were more */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ExtractedMeasurementsDto"];
+                };
+            };
+            /** @description text missing, not a string, or longer than 200,000 characters */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description Too many calculator requests from this address; wait a minute */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    ToolsController_parseTranscript: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["ParseTranscriptDto"];
+            };
+        };
+        responses: {
+            /** @description At most 5,000 cues; `truncated` says when there were more */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ParsedTranscriptDto"];
+                };
+            };
+            /** @description text missing, not a string, or longer than 1,000,000 characters */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description `{ message, line }` naming the first line the parser cannot accept */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description Too many calculator requests from this address; wait a minute */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    BuildsController_list: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    BuildsController_create: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["CreateBuildDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    BuildsController_get: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                buildId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    BuildsController_remove: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                buildId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    BuildsController_update: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                buildId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["UpdateBuildDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    PartsController_list: {
+        parameters: {
+            query?: {
+                /** @description part number (spacing and dashes ignored), title or maker */
+                q?: string;
+                category?: "coupler" | "shaft" | "joint" | "bearing" | "bore" | "plate" | "boot" | "seal" | "fastener" | "other";
+                /** @description only parts that have a feature of this kind */
+                featureKind?: "spline" | "diameter" | "length" | "free";
+                /** @description only parts with a spline of this tooth count */
+                splineTeeth?: number;
+            };
+            header?: never;
+            path: {
+                workshopId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    PartsController_create: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["CreatePartDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    PartsController_get: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                partId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    PartsController_remove: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                partId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    PartsController_update: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                partId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["UpdatePartDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    PartsController_addPhoto: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                partId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "multipart/form-data": {
+                    /** Format: binary */
+                    photo: string;
+                };
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    PartsController_photo: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                partId: string;
+                photoId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    PartsController_removePhoto: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                partId: string;
+                photoId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    PartsController_addFeature: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                partId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["FeatureInputDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    PartsController_removeFeature: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                partId: string;
+                featureId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    PartsController_updateFeature: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                partId: string;
+                featureId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["UpdateFeatureDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    MeasurementsController_list: {
+        parameters: {
+            query?: {
+                featureId?: string;
+                interfaceId?: string;
+            };
+            header?: never;
+            path: {
+                workshopId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    MeasurementsController_create: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["CreateMeasurementDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    MeasurementsController_remove: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                measurementId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FitChecksController_checklist: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                assemblyId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FitChecksController_createManual: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                assemblyId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["CreateManualCheckDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FitChecksController_transition: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                checkId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["TransitionDto"];
+            };
+        };
+        responses: {
+            /** @description Refused, nothing stored: `already_in_state` (a repeat, e.g. a double click; `state` is the state now), `state_changed` (not in `from` any more) or `transition_refused` (the rules forbid it) */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FitChecksController_addEvidence: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                checkId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["AddEvidenceDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FitChecksController_addPhotoEvidence: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                checkId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "multipart/form-data": {
+                    /** Format: binary */
+                    photo: string;
+                };
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FitChecksController_evidencePhoto: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                checkId: string;
+                evidenceId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FitChecksController_history: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                checkId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FitChecksController_whatIf: {
+        parameters: {
+            query: {
+                /** @description How much larger the replacement shaft is (negative: smaller) */
+                delta: string;
+                unit: "mm" | "um" | "in" | "thou" | "tenths";
+            };
+            header?: never;
+            path: {
+                workshopId: string;
+                interfaceId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    AssembliesController_list: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                buildId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    AssembliesController_create: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                buildId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["CreateAssemblyDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    AssembliesController_detail: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                assemblyId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    AssembliesController_remove: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                assemblyId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    AssembliesController_update: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                assemblyId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["UpdateAssemblyDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    AssembliesController_placePart: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                assemblyId: string;
+                partId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["PlacePartDto"];
+            };
+        };
+        responses: {
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    AssembliesController_removePart: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                assemblyId: string;
+                partId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    AssembliesController_addInterface: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                assemblyId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["CreateInterfaceDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    AssembliesController_removeInterface: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                assemblyId: string;
+                interfaceId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    AssembliesController_updateInterface: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                assemblyId: string;
+                interfaceId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["UpdateInterfaceDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FootageController_limits: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description Accepted file types and sizes, for checks before any byte is sent */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["FootageLimitsDto"];
+                };
+            };
+        };
+    };
+    FootageController_list: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                buildId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["FootageResponseDto"][];
+                };
+            };
+        };
+    };
+    FootageController_create: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                buildId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["CreateFootageDto"];
+            };
+        };
+        responses: {
+            /** @description Footage in state "uploading" and its part plan */
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["CreateFootageResponseDto"];
+                };
+            };
+            /** @description Storage is not answering (`code: storage_unavailable`); try again */
+            503: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FootageController_get: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                footageId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["FootageResponseDto"];
+                };
+            };
+        };
+    };
+    FootageController_remove: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                footageId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description Deleted with its stored file, poster and transcripts */
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FootageController_rename: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                footageId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["UpdateFootageDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["FootageResponseDto"];
+                };
+            };
+        };
+    };
+    FootageController_playback: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                footageId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description A short-lived link to the video (HTTP Range works for seeking) */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["PlaybackResponseDto"];
+                };
+            };
+            /** @description The footage is not ready */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FootageController_uploadState: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                footageId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The part plan and the finished parts, to resume an upload */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UploadStateDto"];
+                };
+            };
+            /** @description The upload is already finished */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FootageController_abort: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                footageId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The multipart upload is cancelled and the footage deleted */
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FootageController_signPartUrls: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                footageId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["PartUrlsRequestDto"];
+            };
+        };
+        responses: {
+            /** @description Presigned PUT URLs, valid for 15 minutes */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["PartUrlsResponseDto"];
+                };
+            };
+        };
+    };
+    FootageController_recordPart: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                footageId: string;
+                partNumber: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["RecordPartDto"];
+            };
+        };
+        responses: {
+            /** @description The part is recorded as finished */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["RecordPartResponseDto"];
+                };
+            };
+            /** @description The part number is outside the plan, or the ETag is not one storage gives a part */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FootageController_complete: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                footageId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description Assembled; the footage is now processing */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["FootageResponseDto"];
+                };
+            };
+            /** @description Parts are missing (listed in `missingParts`), or storage no longer has the upload */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description Storage does not hold a recorded part as recorded (`invalidParts`); that record is dropped: upload the part again */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description Storage is not answering (`code: storage_unavailable`); the upload is kept, try again */
+            503: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    TranscriptsController_read: {
+        parameters: {
+            query?: {
+                /** @description A revision number; the active revision when absent */
+                revision?: number;
+            };
+            header?: never;
+            path: {
+                workshopId: string;
+                footageId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The active revision (or `?revision=N`) with its cues */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["TranscriptDto"];
+                };
+            };
+        };
+    };
+    TranscriptsController_attach: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                footageId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["AttachTranscriptDto"];
+            };
+        };
+        responses: {
+            /** @description Stored as the new active revision; earlier revisions are kept */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["TranscriptDto"];
+                };
+            };
+            /** @description `{ statusCode, message, line }` naming the first bad line */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    TranscriptsController_attachFile: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                footageId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "multipart/form-data": {
+                    /** Format: binary */
+                    file: string;
+                    /** @enum {string} */
+                    format?: "auto" | "webvtt" | "srt" | "timestamped";
+                };
+            };
+        };
+        responses: {
+            /** @description A .vtt, .srt or .txt file of at most 2 MB (UTF-8 or UTF-16 with BOM) */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["TranscriptDto"];
+                };
+            };
+            /** @description `{ statusCode, message, line }` naming the first bad line */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    TranscriptsController_revisions: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                footageId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description Newest first */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["TranscriptRevisionDto"][];
+                };
+            };
+        };
+    };
+    TranscriptsController_exportWebVtt: {
+        parameters: {
+            query?: {
+                /** @description A revision number; the active revision when absent */
+                revision?: number;
+                /** @description Ask the browser to save the file instead of showing it */
+                download?: boolean;
+            };
+            header?: never;
+            path: {
+                workshopId: string;
+                footageId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The transcript as a WebVTT file, for a `<track>` element or a download */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    TranscriptsController_searchFootage: {
+        parameters: {
+            query: {
+                /** @description Words to find; each must appear (words of three letters or more) */
+                q: string;
+                limit?: number;
+                /** @description How many hits to skip: the next page starts at offset + limit */
+                offset?: number;
+            };
+            header?: never;
+            path: {
+                workshopId: string;
+                footageId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["FootageSearchResponseDto"];
+                };
+            };
+        };
+    };
+    TranscriptsController_searchWorkshop: {
+        parameters: {
+            query: {
+                /** @description Words to find; each must appear (words of three letters or more) */
+                q: string;
+                limit?: number;
+                /** @description How many hits to skip: the next page starts at offset + limit */
+                offset?: number;
+            };
+            header?: never;
+            path: {
+                workshopId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["WorkshopSearchResponseDto"];
+                };
+            };
+        };
+    };
+    MarksController_list: {
+        parameters: {
+            query?: {
+                kind?: "part" | "measurement" | "check_evidence" | "step" | "caution" | "note";
+            };
+            header?: never;
+            path: {
+                workshopId: string;
+                footageId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    MarksController_create: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                footageId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["CreateMarkDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    MarksController_remove: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                footageId: string;
+                markId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    MarksController_update: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                footageId: string;
+                markId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["UpdateMarkDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    MarksController_suggestions: {
+        parameters: {
+            query?: {
+                status?: "pending" | "accepted" | "dismissed";
+            };
+            header?: never;
+            path: {
+                workshopId: string;
+                footageId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    MarksController_accept: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                footageId: string;
+                suggestionId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["AcceptSuggestionDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    MarksController_dismiss: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                footageId: string;
+                suggestionId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    GuidesController_list: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                buildId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    GuidesController_create: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                buildId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["CreateGuideDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    GuidesController_stepChoices: {
+        parameters: {
+            query?: {
+                /** @description Only steps anchored in this footage */
+                footageId?: string;
+            };
+            header?: never;
+            path: {
+                workshopId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    GuidesController_get: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                guideId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    GuidesController_remove: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                guideId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description Deleted with its steps and revisions */
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    GuidesController_update: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                guideId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["UpdateGuideDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    GuidesController_addStep: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                guideId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["CreateStepDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    GuidesController_reorderSteps: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                guideId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["ReorderStepsDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    GuidesController_removeStep: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                guideId: string;
+                stepId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    GuidesController_updateStep: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                guideId: string;
+                stepId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["UpdateStepDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    GuidesController_revisions: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                guideId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    GuidesController_publish: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                guideId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["PublishRevisionDto"];
+            };
+        };
+        responses: {
+            /** @description The guide has no steps yet */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    GuidesController_withdraw: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                guideId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description Withdrawn from public view; its revisions are kept */
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    PublishedGuidesController_index: {
+        parameters: {
+            query?: {
+                /** @description Words of the title, build or workshop */
+                q?: string;
+            };
+            header?: {
+                /** @description An ETag of Published guides, newest first (at most 50) from an earlier answer */
+                "If-None-Match"?: string;
+            };
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description Published guides, newest first (at most 50) */
+            200: {
+                headers: {
+                    /** @description Strong tag of the published revision and the live checklist it shows */
+                    ETag?: string;
+                    /** @description public, max-age=30, stale-while-revalidate=300 */
+                    "Cache-Control"?: string;
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description Unchanged since the ETag given in If-None-Match; no body */
+            304: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    PublishedGuidesController_read: {
+        parameters: {
+            query?: never;
+            header?: {
+                /** @description An ETag of The follow-along content: the published revision with the live verified-fit checklist from an earlier answer */
+                "If-None-Match"?: string;
+            };
+            path: {
+                workshopSlug: string;
+                guideSlug: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The follow-along content: the published revision with the live verified-fit checklist */
+            200: {
+                headers: {
+                    /** @description Strong tag of the published revision and the live checklist it shows */
+                    ETag?: string;
+                    /** @description public, max-age=30, stale-while-revalidate=300 */
+                    "Cache-Control"?: string;
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description Unchanged since the ETag given in If-None-Match; no body */
+            304: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description No such guide, or it is not published */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    PublishedGuidesController_video: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopSlug: string;
+                guideSlug: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    PublishedGuidesController_poster: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopSlug: string;
+                guideSlug: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    PublishedGuidesController_captions: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopSlug: string;
+                guideSlug: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FollowsController_list: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FollowsController_follow: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["CreateFollowDto"];
+            };
+        };
+        responses: {
+            /** @description The target is neither in a published guide nor in one of your workshops */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FollowsController_unsubscribe: {
+        parameters: {
+            query?: {
+                token?: string;
+            };
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["UnsubscribeBodyDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnsubscribeResultDto"];
+                };
+            };
+            /** @description Unknown token, or a followId this link cannot stop */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FollowsController_unfollow: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                followId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FitReportsController_create: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopSlug: string;
+                guideSlug: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["CreateFitReportDto"];
+            };
+        };
+        responses: {
+            /** @description More than 10 reports from this person in the last hour */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FitReportsController_mine: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FitReportsController_addPhoto: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                reportId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "multipart/form-data": {
+                    /** Format: binary */
+                    photo: string;
+                };
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FitReportsController_photo: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                reportId: string;
+                photoId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    WorkshopFitReportsController_list: {
+        parameters: {
+            query?: {
+                status?: "new" | "investigating" | "verified" | "declined";
+            };
+            header?: never;
+            path: {
+                workshopId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    WorkshopFitReportsController_update: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                reportId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["UpdateFitReportDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    WorkshopFitReportsController_photo: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                reportId: string;
+                photoId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+}
