@@ -32,6 +32,7 @@ step() {
 }
 
 step "lint" npx eslint --max-warnings=0 .
+step "lint walls: each shown to fire" node --test scripts/lint-rules.test.mjs
 step "typecheck api" npm run typecheck -w api --silent
 step "typecheck studio" npm run typecheck -w studio --silent
 step "API contract is current (npm run contract rewrites it)" node scripts/contract.mjs --check

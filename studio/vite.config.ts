@@ -10,7 +10,12 @@ export default defineConfig({
   // Brotli and gzip copies of every text asset over 1 kB, made once at build time and served by the API
   // (app.setup.ts) to browsers that accept them.
   plugins: [react(), compression({ algorithms: ['brotliCompress', 'gzip'], threshold: 1024 })],
-  resolve: { alias: { '@': fileURLToPath(new URL('./src', import.meta.url)) } },
+  resolve: {
+    alias: {
+      '@fitwright/engine': fileURLToPath(new URL('../api/src/engine/index.ts', import.meta.url)),
+      '@': fileURLToPath(new URL('./src', import.meta.url)),
+    },
+  },
   server: {
     port: 5173,
     strictPort: true,

@@ -3,7 +3,7 @@
  * engine module, imported rather than copied, so a reading shown in the studio is converted and
  * rounded exactly as the server does it. Never compute a fit verdict here: the API owns those.
  */
-import { formatLengthValue, unitLabel, type LengthUnit } from '../../../api/src/engine/units';
+import { formatLengthValue, unitLabel, type LengthUnit } from '@fitwright/engine';
 
 export {
   LENGTH_UNITS,
@@ -14,8 +14,8 @@ export {
   parseLength,
   toNanometres,
   unitLabel,
-} from '../../../api/src/engine/units';
-export type { LengthUnit, Nanometres } from '../../../api/src/engine/units';
+} from '@fitwright/engine';
+export type { LengthUnit, Nanometres } from '@fitwright/engine';
 
 /** The finest step worth showing when no instrument says otherwise: 0.0001 mm, 0.1 µm, 0.0001 in. */
 const DISPLAY_STEP_NM: Record<LengthUnit, number> = { mm: 100, um: 100, in: 2_540, thou: 254, tenths: 254 };
