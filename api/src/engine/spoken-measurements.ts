@@ -772,7 +772,7 @@ const MIN_PART_NUMBER_LENGTH = 3;
 class PartNumberMatcher {
   private readonly tokens: Token[];
 
-  constructor(private readonly text: string) {
+  constructor(text: string) {
     // Letters and digits split apart, so "hl2107" is two tokens with nothing between them.
     this.tokens = runToEnd(tokenize(text, 'part-number'));
   }
