@@ -1,90 +1,207 @@
-import { Group, Text } from '@mantine/core';
-import { useRef, type MouseEvent } from 'react';
+import { ActionIcon, Group, Text, Tooltip } from '@mantine/core';
+import { memo, useCallback, useEffect, useMemo, useRef, useState, type KeyboardEvent, type PointerEvent, type ReactNode } from 'react';
 import { MARK_KINDS, type Mark } from '../api/queries';
 import { formatClock } from '@/lib/clock';
+import { useStableHandler } from '@/lib/use-stable-handler';
 import { KindShape } from './kind-shape';
 import { KIND_LOOK } from './mark-kinds';
-import { placeMarks, timeAt } from './timeline-geometry';
+import {
+  centreView,
+  clusterMarks,
+  followPlayhead,
+  hitDensity,
+  panView,
+  positionOf,
+  timeAt,
+  viewOfCluster,
+  wholeView,
+  zoomView,
+  type MarkCluster,
+  type TimelineView,
+} from './timeline-geometry';
 
-const LANE_HEIGHT = 18;
 const MARKER = 12;
+const STRIP_HEIGHT = 30;
+const DENSITY_HEIGHT = 12;
+const MINIMAP_HEIGHT = 14;
+/** One density column every few pixels: fine enough to show where hits gather, few enough to draw cheaply. */
+const DENSITY_COLUMN_PX = 4;
+/** One wheel notch towards the screen (about 100 px of delta) zooms in by this factor. */
+const WHEEL_ZOOM_PER_100PX = 0.8;
+const KEY_ZOOM = 0.5;
+const KEY_PAN = 0.25;
 
 export interface MarksTimelineProps {
   marks: Mark[];
   durationMs: number;
   currentMs: number;
   onSeek: (ms: number) => void;
+  /** Start times of the transcript search hits, drawn as a density band over the strip. */
+  hitStartsMs?: readonly number[];
+  /** Lanes under the marks that follow the same zoom (e.g. the audio waveform), given the stretch in view. */
+  renderLanes?: (view: TimelineView) => ReactNode;
+  /** Shown above the pointer while it hovers the strip (e.g. a scrub preview frame), given the time under it. */
+  renderHoverPreview?: (atMs: number) => ReactNode;
 }
 
-/** The strip under the player: each mark as its kind's shape (spans as a bar), the playhead, a legend. */
-export function MarksTimeline({ marks, durationMs, currentMs, onSeek }: MarksTimelineProps) {
-  const strip = useRef<HTMLDivElement>(null);
-  const { placed, lanes } = placeMarks(marks, durationMs);
-  const byId = new Map(marks.map((mark) => [mark.id, mark]));
-  const height = lanes * LANE_HEIGHT + 8;
+/** A ref for the strip that keeps its width in px current as the layout changes (React 19 ref cleanup). */
+function useMeasuredStrip(): { strip: HTMLDivElement | null; width: number; ref: (node: HTMLDivElement | null) => () => void } {
+  const [strip, setStrip] = useState<HTMLDivElement | null>(null);
+  const [width, setWidth] = useState(0);
+  const ref = useCallback((node: HTMLDivElement | null) => {
+    setStrip(node);
+    if (!node) return () => {};
+    setWidth(node.clientWidth);
+    const observer = new ResizeObserver(() => setWidth(node.clientWidth));
+    observer.observe(node);
+    return () => observer.disconnect();
+  }, []);
+  return { strip, width, ref };
+}
 
-  const handleStripClick = (event: MouseEvent<HTMLDivElement>) => {
-    const box = strip.current?.getBoundingClientRect();
-    if (box) onSeek(timeAt(event.clientX - box.left, box.width, durationMs));
+/**
+ * The marking timeline: the whole footage at a glance with nearby marks gathered into numbered clusters (one row,
+ * never stacked lanes); zoom down to seconds with the wheel, the + and − keys or the buttons, pan with the arrow
+ * keys, a sideways wheel or the minimap below; search hits shown as a density band. Only what is in view is drawn,
+ * and a time update moves the playhead alone.
+ */
+export function MarksTimeline({ marks, durationMs, currentMs, onSeek, hitStartsMs, renderLanes, renderHoverPreview }: MarksTimelineProps) {
+  const { strip, width, ref: stripRef } = useMeasuredStrip();
+  const [view, setView] = useState<TimelineView>(() => wholeView(durationMs));
+  const [hoverMs, setHoverMs] = useState<number | null>(null);
+  // The view follows the playhead as it moves: adjusted while rendering, so no second pass paints a stale view.
+  const [followedMs, setFollowedMs] = useState(currentMs);
+  if (followedMs !== currentMs) {
+    setFollowedMs(currentMs);
+    const next = followPlayhead(view, followedMs, currentMs, durationMs);
+    if (next !== view) setView(next);
+  }
+
+  // React's wheel listener is passive; zooming must stop the page from scrolling, so listen natively.
+  useEffect(() => {
+    if (!strip) return undefined;
+    const handleWheel = (event: WheelEvent) => {
+      event.preventDefault();
+      const box = strip.getBoundingClientRect();
+      const sideways = Math.abs(event.deltaX) > Math.abs(event.deltaY) || event.shiftKey;
+      if (sideways) {
+        const delta = event.shiftKey && event.deltaX === 0 ? event.deltaY : event.deltaX;
+        setView((current) => panView(current, delta / Math.max(box.width, 1), durationMs));
+        return;
+      }
+      const anchor = box.width > 0 ? (event.clientX - box.left) / box.width : 0.5;
+      setView((current) => zoomView(current, WHEEL_ZOOM_PER_100PX ** (-event.deltaY / 100), anchor, durationMs));
+    };
+    strip.addEventListener('wheel', handleWheel, { passive: false });
+    return () => strip.removeEventListener('wheel', handleWheel);
+  }, [strip, durationMs]);
+
+  const clusters = useMemo(() => clusterMarks(marks, view, width), [marks, view, width]);
+  const byId = useMemo(() => new Map(marks.map((mark) => [mark.id, mark])), [marks]);
+  const density = useMemo(
+    () => (hitStartsMs && hitStartsMs.length > 0 ? hitDensity(hitStartsMs, view, Math.floor(width / DENSITY_COLUMN_PX)) : null),
+    [hitStartsMs, view, width],
+  );
+  const whole = view.startMs <= 0 && view.endMs >= durationMs;
+
+  // Zooming by key or button keeps the playhead where it is, if it is in view; otherwise the middle.
+  const zoomAroundPlayhead = (factor: number) =>
+    setView((current) => {
+      const anchor = positionOf(currentMs, current);
+      return zoomView(current, factor, anchor >= 0 && anchor <= 1 ? anchor : 0.5, durationMs);
+    });
+  const handleSeek = useStableHandler(onSeek);
+  const handleOpenCluster = useStableHandler((cluster: MarkCluster) => setView(viewOfCluster(cluster, durationMs)));
+
+  const handleKeyDown = (event: KeyboardEvent<HTMLDivElement>) => {
+    if (event.ctrlKey || event.metaKey || event.altKey) return;
+    const actions: Record<string, () => void> = {
+      '+': () => zoomAroundPlayhead(KEY_ZOOM),
+      '=': () => zoomAroundPlayhead(KEY_ZOOM),
+      '-': () => zoomAroundPlayhead(1 / KEY_ZOOM),
+      '0': () => setView(wholeView(durationMs)),
+      ArrowLeft: () => setView((current) => panView(current, -KEY_PAN, durationMs)),
+      ArrowRight: () => setView((current) => panView(current, KEY_PAN, durationMs)),
+    };
+    const action = actions[event.key];
+    if (!action) return;
+    event.preventDefault();
+    action();
   };
+
+  const handleStripClick = (event: PointerEvent<HTMLDivElement>) => {
+    const box = event.currentTarget.getBoundingClientRect();
+    onSeek(timeAt(event.clientX - box.left, box.width, view));
+  };
+  const handleHover = (event: PointerEvent<HTMLDivElement>) => {
+    if (!renderHoverPreview) return;
+    const box = event.currentTarget.getBoundingClientRect();
+    setHoverMs(timeAt(event.clientX - box.left, box.width, view));
+  };
+
+  const playheadAt = positionOf(currentMs, view);
 
   return (
     <div>
+      <Group justify="space-between" gap="xs" mb={4}>
+        <Text size="xs" c="dimmed" data-testid="timeline-range">
+          {whole ? `Whole footage, ${formatClock(durationMs)}` : `${formatClock(view.startMs, { tenths: true })} – ${formatClock(view.endMs, { tenths: true })}`}
+        </Text>
+        <Group gap={4}>
+          <Tooltip label="Zoom in (+)">
+            <ActionIcon size="sm" variant="default" aria-label="Zoom in" onClick={() => zoomAroundPlayhead(KEY_ZOOM)}>
+              +
+            </ActionIcon>
+          </Tooltip>
+          <Tooltip label="Zoom out (−)">
+            <ActionIcon size="sm" variant="default" aria-label="Zoom out" disabled={whole} onClick={() => zoomAroundPlayhead(1 / KEY_ZOOM)}>
+              −
+            </ActionIcon>
+          </Tooltip>
+          <Tooltip label="Whole footage (0)">
+            <ActionIcon size="sm" variant="default" aria-label="Show the whole footage" disabled={whole} onClick={() => setView(wholeView(durationMs))}>
+              ↔
+            </ActionIcon>
+          </Tooltip>
+        </Group>
+      </Group>
       <div
-        ref={strip}
+        ref={stripRef}
         onClick={handleStripClick}
+        onPointerMove={handleHover}
+        onPointerLeave={() => setHoverMs(null)}
+        onKeyDown={handleKeyDown}
+        tabIndex={0}
         data-testid="marks-timeline"
         role="group"
-        aria-label="Marks along the footage"
-        style={{ position: 'relative', height, background: 'var(--mantine-color-gray-1)', borderRadius: 6, cursor: 'pointer' }}
+        aria-label="Marks along the footage: wheel or + and − to zoom, arrow keys to move along"
+        style={{
+          position: 'relative',
+          height: STRIP_HEIGHT + (density ? DENSITY_HEIGHT : 0),
+          background: 'var(--mantine-color-gray-1)',
+          borderRadius: 6,
+          cursor: 'pointer',
+          overflow: 'hidden',
+          touchAction: 'pan-y',
+        }}
       >
-        <div
-          aria-hidden
-          style={{
-            position: 'absolute',
-            left: `${Math.min(100, (currentMs / durationMs) * 100)}%`,
-            top: 0,
-            bottom: 0,
-            width: 2,
-            background: 'var(--mantine-color-red-7)',
-          }}
-        />
-        {placed.map((item) => {
-          const mark = byId.get(item.id);
-          if (!mark) return null;
-          const look = KIND_LOOK[mark.kind];
-          const title = `${look.name} at ${formatClock(mark.startMs, { tenths: true })}${mark.label ? `: ${mark.label}` : ''}`;
-          return (
-            <button
-              key={mark.id}
-              type="button"
-              title={title}
-              aria-label={title}
-              data-kind={mark.kind}
-              onClick={(event) => {
-                event.stopPropagation();
-                onSeek(mark.startMs);
-              }}
-              style={{
-                position: 'absolute',
-                left: `calc(${item.x * 100}% - ${MARKER / 2}px)`,
-                top: 4 + item.lane * LANE_HEIGHT,
-                width: `calc(${item.width * 100}% + ${MARKER}px)`,
-                height: MARKER + 2,
-                padding: 0,
-                border: 0,
-                background: 'none',
-                display: 'flex',
-                alignItems: 'center',
-                cursor: 'pointer',
-              }}
-            >
-              <KindShape kind={mark.kind} size={MARKER} />
-              {item.width > 0 && <span aria-hidden style={{ flex: 1, height: 3, background: look.color, opacity: 0.6 }} />}
-            </button>
-          );
-        })}
+        {density && <DensityBand counts={density} />}
+        <MarkerLayer clusters={clusters} byId={byId} top={density ? DENSITY_HEIGHT : 0} onSeek={handleSeek} onOpenCluster={handleOpenCluster} />
+        {playheadAt >= 0 && playheadAt <= 1 && (
+          <div
+            aria-hidden
+            data-testid="timeline-playhead"
+            style={{ position: 'absolute', left: `${playheadAt * 100}%`, top: 0, bottom: 0, width: 2, background: 'var(--mantine-color-red-7)', pointerEvents: 'none' }}
+          />
+        )}
+        {hoverMs !== null && renderHoverPreview && (
+          <div style={{ position: 'absolute', left: `${positionOf(hoverMs, view) * 100}%`, bottom: '100%', transform: 'translateX(-50%)', pointerEvents: 'none', zIndex: 2 }}>
+            {renderHoverPreview(hoverMs)}
+          </div>
+        )}
       </div>
+      {renderLanes?.(view)}
+      <Minimap marks={marks} durationMs={durationMs} view={view} currentMs={currentMs} onCentre={(ms) => setView((current) => centreView(current, ms, durationMs))} />
       <Group gap="md" mt={4}>
         {MARK_KINDS.map((kind) => (
           <Group key={kind} gap={4}>
@@ -98,3 +215,186 @@ export function MarksTimeline({ marks, durationMs, currentMs, onSeek }: MarksTim
     </div>
   );
 }
+
+interface MarkerLayerProps {
+  clusters: MarkCluster[];
+  byId: Map<string, Mark>;
+  top: number;
+  onSeek: (ms: number) => void;
+  onOpenCluster: (cluster: MarkCluster) => void;
+}
+
+/** The markers in view; memoised so the playhead moving never draws them again. */
+const MarkerLayer = memo(function MarkerLayer({ clusters, byId, top, onSeek, onOpenCluster }: MarkerLayerProps) {
+  return (
+    <>
+      {clusters.map((cluster) => {
+        const first = byId.get(cluster.ids[0]);
+        if (!first) return null;
+        if (cluster.ids.length > 1) {
+          const title = `${cluster.ids.length} marks from ${formatClock(cluster.startMs, { tenths: true })} to ${formatClock(cluster.endMs, { tenths: true })}: zoom in`;
+          return (
+            <button
+              key={cluster.ids[0]}
+              type="button"
+              title={title}
+              aria-label={title}
+              data-testid="timeline-cluster"
+              onClick={(event) => {
+                event.stopPropagation();
+                onOpenCluster(cluster);
+              }}
+              style={{
+                position: 'absolute',
+                left: `calc(${cluster.x * 100}% - 9px)`,
+                top: top + 6,
+                minWidth: 18,
+                height: 18,
+                padding: '0 4px',
+                border: '1px solid var(--mantine-color-gray-6)',
+                borderRadius: 9,
+                background: 'var(--mantine-color-body)',
+                fontSize: 11,
+                lineHeight: '16px',
+                cursor: 'zoom-in',
+              }}
+            >
+              {cluster.ids.length}
+            </button>
+          );
+        }
+        const look = KIND_LOOK[first.kind];
+        const title = `${look.name} at ${formatClock(first.startMs, { tenths: true })}${first.label ? `: ${first.label}` : ''}`;
+        return (
+          <button
+            key={first.id}
+            type="button"
+            title={title}
+            aria-label={title}
+            data-kind={first.kind}
+            onClick={(event) => {
+              event.stopPropagation();
+              onSeek(first.startMs);
+            }}
+            style={{
+              position: 'absolute',
+              left: `calc(${cluster.x * 100}% - ${MARKER / 2}px)`,
+              top: top + 8,
+              width: `calc(${cluster.width * 100}% + ${MARKER}px)`,
+              height: MARKER + 2,
+              padding: 0,
+              border: 0,
+              background: 'none',
+              display: 'flex',
+              alignItems: 'center',
+              cursor: 'pointer',
+            }}
+          >
+            <KindShape kind={first.kind} size={MARKER} />
+            {cluster.width > 0 && <span aria-hidden style={{ flex: 1, height: 3, background: look.color, opacity: 0.6 }} />}
+          </button>
+        );
+      })}
+    </>
+  );
+});
+
+/** Where the search hits gather in view: one bar per column, as tall as its share of the busiest column. */
+const DensityBand = memo(function DensityBand({ counts }: { counts: number[] }) {
+  const busiest = Math.max(1, ...counts);
+  const total = counts.reduce((sum, count) => sum + count, 0);
+  return (
+    <svg
+      data-testid="hit-density"
+      role="img"
+      aria-label={`${total} search hits in view`}
+      width="100%"
+      height={DENSITY_HEIGHT}
+      viewBox={`0 0 ${counts.length} ${DENSITY_HEIGHT}`}
+      preserveAspectRatio="none"
+      style={{ position: 'absolute', left: 0, top: 0, display: 'block' }}
+    >
+      {counts.map((count, column) => {
+        if (count === 0) return null;
+        const height = Math.max(2, (count / busiest) * DENSITY_HEIGHT);
+        return <rect key={column} x={column} y={DENSITY_HEIGHT - height} width={1} height={height} fill="var(--mantine-color-yellow-6)" />;
+      })}
+    </svg>
+  );
+});
+
+interface MinimapProps {
+  marks: Mark[];
+  durationMs: number;
+  view: TimelineView;
+  currentMs: number;
+  onCentre: (ms: number) => void;
+}
+
+/** The whole footage in a thin bar with the stretch in view outlined; press or drag on it to move the view there. */
+function Minimap({ marks, durationMs, view, currentMs, onCentre }: MinimapProps) {
+  const whole = useMemo(() => wholeView(durationMs), [durationMs]);
+  const ticks = useMemo(() => clusterMarks(marks, whole, 1_000, 2), [marks, whole]);
+  const dragging = useRef(false);
+  const centreAt = (event: PointerEvent<HTMLDivElement>) => {
+    const box = event.currentTarget.getBoundingClientRect();
+    onCentre(timeAt(event.clientX - box.left, box.width, whole));
+  };
+  const left = positionOf(view.startMs, whole);
+  const right = positionOf(view.endMs, whole);
+  return (
+    <div
+      data-testid="timeline-minimap"
+      aria-hidden
+      onPointerDown={(event) => {
+        dragging.current = true;
+        event.currentTarget.setPointerCapture?.(event.pointerId);
+        centreAt(event);
+      }}
+      onPointerMove={(event) => dragging.current && centreAt(event)}
+      onPointerUp={() => {
+        dragging.current = false;
+      }}
+      style={{ position: 'relative', height: MINIMAP_HEIGHT, marginTop: 4, background: 'var(--mantine-color-gray-0)', borderRadius: 4, cursor: 'grab', touchAction: 'none' }}
+    >
+      <MinimapTicks ticks={ticks} />
+      <span
+        data-testid="timeline-minimap-view"
+        style={{
+          position: 'absolute',
+          left: `${left * 100}%`,
+          width: `max(${(right - left) * 100}%, 3px)`,
+          top: 0,
+          bottom: 0,
+          border: '2px solid var(--mantine-color-blue-6)',
+          borderRadius: 4,
+          boxSizing: 'border-box',
+        }}
+      />
+      <span
+        style={{
+          position: 'absolute',
+          left: `${Math.min(1, Math.max(0, positionOf(currentMs, whole))) * 100}%`,
+          top: 0,
+          bottom: 0,
+          width: 1,
+          background: 'var(--mantine-color-red-7)',
+        }}
+      />
+    </div>
+  );
+}
+
+/** A hairline per mark (or per few, where they crowd) across the whole footage; memoised apart from the moving view. */
+const MinimapTicks = memo(function MinimapTicks({ ticks }: { ticks: MarkCluster[] }) {
+  return (
+    <>
+      {ticks.map((tick) => (
+        <span
+          key={tick.ids[0]}
+          style={{ position: 'absolute', left: `${tick.x * 100}%`, top: 3, width: 1, height: MINIMAP_HEIGHT - 6, background: 'var(--mantine-color-gray-6)' }}
+        />
+      ))}
+    </>
+  );
+});

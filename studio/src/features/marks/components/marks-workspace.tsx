@@ -59,7 +59,13 @@ export function MarksWorkspace({ workshopId, footageId, player }: MarksWorkspace
   return (
     <Stack gap="md" mt="sm">
       {player.durationMs !== null && (
-        <MarksTimeline marks={marks.data ?? []} durationMs={player.durationMs} currentMs={player.currentMs} onSeek={player.seek} />
+        <MarksTimeline
+          key={player.durationMs}
+          marks={marks.data ?? []}
+          durationMs={player.durationMs}
+          currentMs={player.currentMs}
+          onSeek={player.seek}
+        />
       )}
       <Group gap="xs">
         <Button onClick={handlers.pin} data-testid="pin-mark">
