@@ -1,11 +1,19 @@
 import { Body, Controller, Delete, Get, HttpCode, Inject, Param, ParseUUIDPipe, Patch, Post, Put } from '@nestjs/common';
-import { ApiTags } from '@nestjs/swagger';
+import { ApiCreatedResponse, ApiNoContentResponse, ApiOkResponse, ApiTags } from '@nestjs/swagger';
 import { WorkshopEditor } from '../common/decorators/access.decorator';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import type { SessionUser } from '../common/types/access-context';
 import { AssembliesService } from './assemblies.service';
 import { toAssemblyResponse, toInterfaceResponse } from './assembly.mapper';
-import { CreateAssemblyDto, CreateInterfaceDto, PlacePartDto, UpdateAssemblyDto, UpdateInterfaceDto } from './dto/assembly.dto';
+import {
+  AssemblyResponseDto,
+  CreateAssemblyDto,
+  CreateInterfaceDto,
+  InterfaceResponseDto,
+  PlacePartDto,
+  UpdateAssemblyDto,
+  UpdateInterfaceDto,
+} from './dto/assembly.dto';
 
 @ApiTags('assemblies')
 @WorkshopEditor()
@@ -14,11 +22,13 @@ export class AssembliesController {
   constructor(@Inject(AssembliesService) private readonly assemblies: AssembliesService) {}
 
   @Get('builds/:buildId/assemblies')
+  @ApiOkResponse({ type: [AssemblyResponseDto] })
   async list(@Param('workshopId', ParseUUIDPipe) workshopId: string, @Param('buildId', ParseUUIDPipe) buildId: string) {
     return (await this.assemblies.list(workshopId, buildId)).map(toAssemblyResponse);
   }
 
   @Post('builds/:buildId/assemblies')
+  @ApiCreatedResponse({ type: AssemblyResponseDto })
   async create(
     @Param('workshopId', ParseUUIDPipe) workshopId: string,
     @Param('buildId', ParseUUIDPipe) buildId: string,
@@ -34,6 +44,7 @@ export class AssembliesController {
   }
 
   @Patch('assemblies/:assemblyId')
+  @ApiOkResponse({ type: AssemblyResponseDto })
   async update(
     @Param('workshopId', ParseUUIDPipe) workshopId: string,
     @Param('assemblyId', ParseUUIDPipe) assemblyId: string,
@@ -44,6 +55,7 @@ export class AssembliesController {
 
   @Delete('assemblies/:assemblyId')
   @HttpCode(204)
+  @ApiNoContentResponse()
   async remove(@Param('workshopId', ParseUUIDPipe) workshopId: string, @Param('assemblyId', ParseUUIDPipe) assemblyId: string) {
     await this.assemblies.remove(workshopId, assemblyId);
   }
@@ -51,6 +63,7 @@ export class AssembliesController {
   /** Places a part in the assembly (or moves it to another position). */
   @Put('assemblies/:assemblyId/parts/:partId')
   @HttpCode(204)
+  @ApiNoContentResponse()
   async placePart(
     @Param('workshopId', ParseUUIDPipe) workshopId: string,
     @Param('assemblyId', ParseUUIDPipe) assemblyId: string,
@@ -62,6 +75,7 @@ export class AssembliesController {
 
   @Delete('assemblies/:assemblyId/parts/:partId')
   @HttpCode(204)
+  @ApiNoContentResponse()
   async removePart(
     @Param('workshopId', ParseUUIDPipe) workshopId: string,
     @Param('assemblyId', ParseUUIDPipe) assemblyId: string,
@@ -71,6 +85,7 @@ export class AssembliesController {
   }
 
   @Post('assemblies/:assemblyId/interfaces')
+  @ApiCreatedResponse({ type: InterfaceResponseDto })
   async addInterface(
     @Param('workshopId', ParseUUIDPipe) workshopId: string,
     @Param('assemblyId', ParseUUIDPipe) assemblyId: string,
@@ -81,6 +96,7 @@ export class AssembliesController {
   }
 
   @Patch('assemblies/:assemblyId/interfaces/:interfaceId')
+  @ApiOkResponse({ type: InterfaceResponseDto })
   async updateInterface(
     @Param('workshopId', ParseUUIDPipe) workshopId: string,
     @Param('assemblyId', ParseUUIDPipe) assemblyId: string,
@@ -93,6 +109,7 @@ export class AssembliesController {
 
   @Delete('assemblies/:assemblyId/interfaces/:interfaceId')
   @HttpCode(204)
+  @ApiNoContentResponse()
   async removeInterface(
     @Param('workshopId', ParseUUIDPipe) workshopId: string,
     @Param('assemblyId', ParseUUIDPipe) assemblyId: string,

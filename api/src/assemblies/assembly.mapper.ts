@@ -1,11 +1,12 @@
 import { formatLengthValue, type LengthUnit } from '../engine/units';
 import { toPartResponse } from '../parts/part.mapper';
 import { Part } from '../parts/entities/part.entity';
+import type { AssemblyResponseDto, InterfaceResponseDto } from './dto/assembly.dto';
 import { AssemblyInterface } from './entities/assembly-interface.entity';
 import { AssemblyPart } from './entities/assembly-part.entity';
 import { Assembly } from './entities/assembly.entity';
 
-export function toAssemblyResponse(assembly: Assembly) {
+export function toAssemblyResponse(assembly: Assembly): AssemblyResponseDto {
   return {
     id: assembly.id,
     buildId: assembly.buildId,
@@ -16,7 +17,7 @@ export function toAssemblyResponse(assembly: Assembly) {
   };
 }
 
-export function toInterfaceResponse(assemblyInterface: AssemblyInterface, unit: LengthUnit = 'mm') {
+export function toInterfaceResponse(assemblyInterface: AssemblyInterface, unit: LengthUnit = 'mm'): InterfaceResponseDto {
   const show = (nm: number | null) => (nm === null ? null : formatLengthValue(nm, unit));
   return {
     id: assemblyInterface.id,

@@ -1,5 +1,5 @@
 import { Body, Controller, Delete, Get, HttpCode, Inject, Param, ParseUUIDPipe, Patch, Post } from '@nestjs/common';
-import { ApiTags } from '@nestjs/swagger';
+import { ApiCreatedResponse, ApiNoContentResponse, ApiOkResponse, ApiTags } from '@nestjs/swagger';
 import { WorkshopEditor } from '../common/decorators/access.decorator';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import type { SessionUser } from '../common/types/access-context';
@@ -14,11 +14,13 @@ export class BuildsController {
   constructor(@Inject(BuildsService) private readonly builds: BuildsService) {}
 
   @Get()
+  @ApiOkResponse({ type: [BuildResponseDto] })
   async list(@Param('workshopId', ParseUUIDPipe) workshopId: string): Promise<BuildResponseDto[]> {
     return (await this.builds.list(workshopId)).map(toBuildResponse);
   }
 
   @Post()
+  @ApiCreatedResponse({ type: BuildResponseDto })
   async create(
     @Param('workshopId', ParseUUIDPipe) workshopId: string,
     @CurrentUser() user: SessionUser,
@@ -28,6 +30,7 @@ export class BuildsController {
   }
 
   @Get(':buildId')
+  @ApiOkResponse({ type: BuildResponseDto })
   async get(
     @Param('workshopId', ParseUUIDPipe) workshopId: string,
     @Param('buildId', ParseUUIDPipe) buildId: string,
@@ -36,6 +39,7 @@ export class BuildsController {
   }
 
   @Patch(':buildId')
+  @ApiOkResponse({ type: BuildResponseDto })
   async update(
     @Param('workshopId', ParseUUIDPipe) workshopId: string,
     @Param('buildId', ParseUUIDPipe) buildId: string,
@@ -46,6 +50,7 @@ export class BuildsController {
 
   @Delete(':buildId')
   @HttpCode(204)
+  @ApiNoContentResponse({ description: 'Deleted with its assemblies, footage and guides' })
   async remove(
     @Param('workshopId', ParseUUIDPipe) workshopId: string,
     @Param('buildId', ParseUUIDPipe) buildId: string,

@@ -1,8 +1,9 @@
 import { summariseReadings } from '../engine/interface-evaluation';
 import { formatLength, formatLengthValue } from '../engine/units';
+import type { MeasurementResponseDto, MeasurementSummaryDto } from './dto/measurement.dto';
 import { Measurement } from './entities/measurement.entity';
 
-export function toMeasurementResponse(measurement: Measurement) {
+export function toMeasurementResponse(measurement: Measurement): MeasurementResponseDto {
   return {
     id: measurement.id,
     featureId: measurement.featureId,
@@ -30,7 +31,7 @@ export function toMeasurementResponse(measurement: Measurement) {
 }
 
 /** Several readings of one subject summarised: mean and spread, shown in the unit of the latest reading. */
-export function summariseMeasurements(measurements: Measurement[]) {
+export function summariseMeasurements(measurements: Measurement[]): MeasurementSummaryDto | null {
   if (measurements.length === 0) return null;
   const unit = measurements[measurements.length - 1].unit;
   const { meanNm, spreadNm, resolutionNm, count } = summariseReadings(

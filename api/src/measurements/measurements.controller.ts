@@ -1,9 +1,9 @@
 import { Body, Controller, Delete, Get, HttpCode, Inject, Param, ParseUUIDPipe, Post, Query } from '@nestjs/common';
-import { ApiTags } from '@nestjs/swagger';
+import { ApiCreatedResponse, ApiNoContentResponse, ApiOkResponse, ApiTags } from '@nestjs/swagger';
 import { WorkshopEditor } from '../common/decorators/access.decorator';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import type { SessionUser } from '../common/types/access-context';
-import { CreateMeasurementDto, ListMeasurementsQueryDto } from './dto/measurement.dto';
+import { CreateMeasurementDto, ListMeasurementsQueryDto, MeasurementListDto, MeasurementResponseDto } from './dto/measurement.dto';
 import { summariseMeasurements, toMeasurementResponse } from './measurement.mapper';
 import { MeasurementsService } from './measurements.service';
 
@@ -15,7 +15,8 @@ export class MeasurementsController {
 
   /** Readings of a subject, oldest first, with their summary (mean and spread). */
   @Get()
-  async list(@Param('workshopId', ParseUUIDPipe) workshopId: string, @Query() query: ListMeasurementsQueryDto) {
+  @ApiOkResponse({ type: MeasurementListDto })
+  async list(@Param('workshopId', ParseUUIDPipe) workshopId: string, @Query() query: ListMeasurementsQueryDto): Promise<MeasurementListDto> {
     const measurements = await this.measurements.list(workshopId, query);
     const oneSubject = Boolean(query.featureId || query.interfaceId);
     return {
@@ -25,21 +26,23 @@ export class MeasurementsController {
   }
 
   @Post()
+  @ApiCreatedResponse({ type: MeasurementResponseDto })
   async create(
     @Param('workshopId', ParseUUIDPipe) workshopId: string,
     @CurrentUser() user: SessionUser,
     @Body() body: CreateMeasurementDto,
-  ) {
+  ): Promise<MeasurementResponseDto> {
     return toMeasurementResponse(await this.measurements.create(workshopId, user.id, body));
   }
 
   @Delete(':measurementId')
   @HttpCode(204)
+  @ApiNoContentResponse()
   async remove(
     @Param('workshopId', ParseUUIDPipe) workshopId: string,
     @Param('measurementId', ParseUUIDPipe) measurementId: string,
     @CurrentUser() user: SessionUser,
-  ) {
+  ): Promise<void> {
     await this.measurements.remove(workshopId, user.id, measurementId);
   }
 }

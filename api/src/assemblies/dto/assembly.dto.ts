@@ -78,3 +78,27 @@ export class CreateInterfaceDto {
 }
 
 export class UpdateInterfaceDto extends PartialType(CreateInterfaceDto) {}
+
+export class AssemblyResponseDto {
+  @ApiProperty({ format: 'uuid' }) id!: string;
+  @ApiProperty({ format: 'uuid' }) buildId!: string;
+  @ApiProperty({ example: '21-tooth coupler with the long driveshaft' }) name!: string;
+  @ApiProperty({ example: '' }) notes!: string;
+  @ApiProperty({ format: 'date-time' }) createdAt!: string;
+  @ApiProperty({ format: 'date-time' }) updatedAt!: string;
+}
+
+export class InterfaceResponseDto {
+  @ApiProperty({ format: 'uuid' }) id!: string;
+  @ApiProperty({ enum: INTERFACE_KINDS }) kind!: InterfaceKind;
+  @ApiProperty({ example: 'Motor shaft into coupler' }) name!: string;
+  @ApiProperty({ format: 'uuid' }) featureAId!: string;
+  @ApiProperty({ type: String, format: 'uuid', nullable: true }) featureBId!: string | null;
+  @ApiProperty({ enum: LENGTH_UNITS, description: 'The unit lengths are shown in (feature A’s)' }) unit!: LengthUnit;
+  @ApiProperty({ type: Number, nullable: true }) installedMinNm!: number | null;
+  @ApiProperty({ type: Number, nullable: true }) installedMaxNm!: number | null;
+  @ApiProperty({ type: Number, nullable: true }) marginNm!: number | null;
+  @ApiProperty({ type: String, nullable: true, example: '412.0' }) installedMin!: string | null;
+  @ApiProperty({ type: String, nullable: true, example: '418.5' }) installedMax!: string | null;
+  @ApiProperty({ type: String, nullable: true, example: '3.0' }) margin!: string | null;
+}

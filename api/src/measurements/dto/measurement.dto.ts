@@ -102,3 +102,44 @@ export class ListMeasurementsQueryDto {
   @IsUUID()
   interfaceId?: string;
 }
+
+export class InstrumentResponseDto {
+  @ApiProperty({ enum: INSTRUMENT_KINDS }) kind!: InstrumentKind;
+  @ApiProperty({ example: 2540 }) resolutionNm!: number;
+  @ApiProperty({ example: '0.0001', description: 'The resolution in the reading’s unit' }) resolution!: string;
+  @ApiProperty({ type: String, nullable: true, example: '2026-03-02' }) calibratedOn!: string | null;
+  @ApiProperty({ example: '' }) note!: string;
+}
+
+export class MeasurementResponseDto {
+  @ApiProperty({ format: 'uuid' }) id!: string;
+  @ApiProperty({ type: String, format: 'uuid', nullable: true }) featureId!: string | null;
+  @ApiProperty({ type: String, format: 'uuid', nullable: true }) interfaceId!: string | null;
+  @ApiProperty({ enum: QUANTITIES }) quantity!: Quantity;
+  @ApiProperty({ example: '1.2505', description: 'As written by the person who took it' }) value!: string;
+  @ApiProperty({ enum: LENGTH_UNITS }) unit!: LengthUnit;
+  @ApiProperty({ example: 31_762_700, description: 'The reading in integer nanometres' }) valueNm!: number;
+  @ApiProperty({ example: '1.2505 in', description: 'In its unit, with as many decimals as the instrument resolves' }) shown!: string;
+  @ApiProperty({ type: InstrumentResponseDto }) instrument!: InstrumentResponseDto;
+  @ApiProperty({ type: Number, nullable: true, example: 21.5 }) temperatureC!: number | null;
+  @ApiProperty({ type: String, format: 'uuid', nullable: true, description: 'The member who took it' }) takenBy!: string | null;
+  @ApiProperty({ format: 'date-time' }) takenAt!: string;
+  @ApiProperty({ type: String, format: 'uuid', nullable: true }) footageId!: string | null;
+  @ApiProperty({ type: Number, nullable: true, description: 'The moment in the footage that shows the reading' }) footageTimeMs!: number | null;
+  @ApiProperty({ example: '' }) note!: string;
+}
+
+export class MeasurementSummaryDto {
+  @ApiProperty({ example: 3 }) count!: number;
+  @ApiProperty({ enum: LENGTH_UNITS, description: 'The unit of the latest reading' }) unit!: LengthUnit;
+  @ApiProperty() meanNm!: number;
+  @ApiProperty() spreadNm!: number;
+  @ApiProperty({ example: '1.2505 in' }) mean!: string;
+  @ApiProperty({ example: '0.0002 in' }) spread!: string;
+}
+
+export class MeasurementListDto {
+  @ApiProperty({ type: [MeasurementResponseDto], description: 'Oldest first' }) measurements!: MeasurementResponseDto[];
+  @ApiProperty({ type: MeasurementSummaryDto, nullable: true, description: 'Mean and spread when one subject (feature or interface) is asked for' })
+  summary!: MeasurementSummaryDto | null;
+}
