@@ -1,4 +1,4 @@
-import { applyDecorators, Controller, Get, Header, Inject, Param, Query, Redirect, Req, Res } from '@nestjs/common';
+import { applyDecorators, Controller, Get, Header, Inject, Param, ParseUUIDPipe, Query, Redirect, Req, Res } from '@nestjs/common';
 import { ApiHeader, ApiNotFoundResponse, ApiOkResponse, ApiProduces, ApiResponse, ApiTags } from '@nestjs/swagger';
 import type { Request, Response } from 'express';
 import { Public } from '../common/decorators/access.decorator';
@@ -69,6 +69,19 @@ export class PublishedGuidesController {
   @Redirect()
   async poster(@Param('workshopSlug') workshopSlug: string, @Param('guideSlug') guideSlug: string) {
     return { url: await this.published.posterUrl(workshopSlug, guideSlug), statusCode: 302 };
+  }
+
+  /** A photo in the live checklist's evidence: redirects to a short-lived storage link, so an <img> can point here. */
+  @Get(':workshopSlug/:guideSlug/evidence/:evidenceId/photo')
+  @ApiResponse({ status: 302, description: 'Redirects to a short-lived link to the photo' })
+  @ApiNotFoundResponse({ description: 'No such photo in the published guide’s live checklist' })
+  @Redirect()
+  async evidencePhoto(
+    @Param('workshopSlug') workshopSlug: string,
+    @Param('guideSlug') guideSlug: string,
+    @Param('evidenceId', ParseUUIDPipe) evidenceId: string,
+  ) {
+    return { url: await this.published.evidencePhotoUrl(workshopSlug, guideSlug, evidenceId), statusCode: 302 };
   }
 
   @Get(':workshopSlug/:guideSlug/captions.vtt')

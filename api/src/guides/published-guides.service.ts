@@ -24,7 +24,7 @@ import { PUBLISHED_GUIDE_VERSION_SQL, PUBLISHED_INDEX_VERSION_SQL } from './publ
 const MEDIA_URL_TTL_SECONDS = 60 * 60;
 const INDEX_LIMIT = 50;
 /** Part of every tag: change it when the answers' shape changes, so no cache keeps the old shape. */
-const ANSWER_SHAPE = 'public-guides-1';
+const ANSWER_SHAPE = 'public-guides-2';
 
 interface PublishedGuide {
   workshop: Workshop;
@@ -130,7 +130,7 @@ export class PublishedGuidesService {
     const footage = content.footageId ? await this.footage.findOneBy({ id: content.footageId, workshopId: workshop.id }) : null;
     const transcript = footage ? await this.transcripts.findOneBy({ footageId: footage.id, isActive: true }) : null;
     const basePath = `/api${publicGuidePath(workshop.slug, guide.slug)}`;
-    const checklist = content.assemblyId ? await this.checklist(workshop.id, content.assemblyId, footage?.id ?? null) : null;
+    const checklist = content.assemblyId ? await this.checklist(workshop.id, content.assemblyId, footage?.id ?? null, basePath) : null;
     const parts = content.assemblyId ? await this.parts(workshop.id, content.assemblyId) : [];
     return {
       workshop: { name: workshop.name, slug: workshop.slug },
@@ -194,6 +194,15 @@ export class PublishedGuidesService {
     return (await this.transcriptsService.exportWebVtt(footage.workshopId, footage.id)).body;
   }
 
+  /** A photo evidencing a live check of the guide's assembly (never a retired check's, nor another assembly's). */
+  async evidencePhotoUrl(workshopSlug: string, guideSlug: string, evidenceId: string): Promise<string> {
+    const { workshop, content } = await this.find(workshopSlug, guideSlug);
+    const { items } = content.assemblyId ? await this.fitChecks.checklist(workshop.id, content.assemblyId) : { items: [] };
+    const owner = items.find(({ check, evidence }) => check.state !== 'retired' && evidence.some((item) => item.id === evidenceId && item.kind === 'photo'));
+    if (!owner) throw new NotFoundException('Photo not found');
+    return this.fitChecks.evidencePhotoUrl(workshop.id, owner.check.id, evidenceId);
+  }
+
   private async find(workshopSlug: string, guideSlug: string): Promise<PublishedGuide> {
     const workshop = await this.workshops.findOneBy({ slug: workshopSlug, disabledAt: IsNull() });
     const guide = workshop ? await this.guides.findOneBy({ workshopId: workshop.id, slug: guideSlug }) : null;
@@ -227,7 +236,7 @@ export class PublishedGuidesService {
   }
 
   /** The live checklist with evidence a viewer can follow; evidence marks in the guide's footage seek the video. */
-  private async checklist(workshopId: string, assemblyId: string, footageId: string | null) {
+  private async checklist(workshopId: string, assemblyId: string, footageId: string | null, basePath: string) {
     const assembly = await this.assemblies.get(workshopId, assemblyId).catch(() => null);
     if (!assembly) return null;
     const { verdict, items } = await this.fitChecks.checklist(workshopId, assemblyId);
@@ -258,7 +267,8 @@ export class PublishedGuidesService {
             const label = reading ? `Reading ${formatLength(reading.valueNm, reading.unit, reading.instrumentResolutionNm)}` : 'Reading';
             return { kind: 'measurement' as const, label, startMs: reading && reading.footageId === footageId ? reading.footageTimeMs : null };
           }
-          return { kind: 'photo' as const, label: item.note || 'Photo', startMs: null };
+          // The photo's address on this guide's public path, which redirects to a short-lived storage link.
+          return { kind: 'photo' as const, label: item.note || 'Photo of the test fit', startMs: null, photoUrl: `${basePath}/evidence/${item.id}/photo` };
         }),
       }));
     const evidenceMarks = marks.filter((mark) => markIds.includes(mark.id) || (mark.fitCheckId !== null && checkIds.includes(mark.fitCheckId)));
