@@ -1,7 +1,7 @@
 import { NestExpressApplication } from '@nestjs/platform-express';
 import { createTestApp } from './create-test-app';
 import { ONE_PIXEL_PNG as PNG } from './support/images';
-import { signUpAndSignIn, TestAccount, uniqueSlug } from './support/accounts';
+import { browserAgent, signUpAndSignIn, TestAccount, uniqueSlug } from './support/accounts';
 
 jest.setTimeout(60_000);
 
@@ -65,5 +65,35 @@ describe('part photos and photo evidence (real MariaDB and S3 fake)', () => {
     await creator.agent.post(`${base}/checks/${check.id}/transitions`).send({ to: 'confirmed', reason: 'test fit photographed' }).expect(201);
     const checklist = await creator.agent.get(`${base}/assemblies/${assembly.id}/checklist`).expect(200);
     expect(checklist.body).toMatchObject({ verdict: 'confirmed', checks: [{ state: 'confirmed', evidence: [{ kind: 'photo' }] }] });
+  });
+
+  it('shows a published guide’s photo evidence to anyone, and nothing that is not in its live checklist', async () => {
+    const workshop = (await creator.agent.post('/api/workshops').send({ name: 'Photo Guides', slug: uniqueSlug('photo-guide') }).expect(201)).body;
+    const w = `/api/workshops/${workshop.id}`;
+    const build = (await creator.agent.post(`${w}/builds`).send({ title: 'Photo guide build' }).expect(201)).body;
+    const assembly = (await creator.agent.post(`${w}/builds/${build.id}/assemblies`).send({ name: 'stack' }).expect(201)).body;
+    const other = (await creator.agent.post(`${w}/builds/${build.id}/assemblies`).send({ name: 'another stack' }).expect(201)).body;
+    const check = (await creator.agent.post(`${w}/assemblies/${assembly.id}/checks`).send({ title: 'Seated on the shaft' }).expect(201)).body;
+    const otherCheck = (await creator.agent.post(`${w}/assemblies/${other.id}/checks`).send({ title: 'Elsewhere' }).expect(201)).body;
+    const photo = (await creator.agent.post(`${w}/checks/${check.id}/photos`).field('note', 'Seated').attach('photo', PNG, 'seated.png').expect(201)).body;
+    const elsewhere = (await creator.agent.post(`${w}/checks/${otherCheck.id}/photos`).attach('photo', PNG, 'other.png').expect(201)).body;
+    const guide = (await creator.agent.post(`${w}/builds/${build.id}/guides`).send({ assemblyId: assembly.id, title: 'Photo guide' }).expect(201)).body;
+    await creator.agent.post(`${w}/guides/${guide.id}/steps`).send({ title: 'Seat it' }).expect(201);
+    await creator.agent.post(`${w}/guides/${guide.id}/revisions`).send({ note: 'First' }).expect(201);
+
+    const reader = await browserAgent(app);
+    const publicPath = `/api/guides/${workshop.slug}/${guide.slug}`;
+    const read = await reader.get(publicPath).expect(200);
+    const [evidence] = read.body.checklist.checks[0].evidence as { kind: string; label: string; photoUrl: string }[];
+    expect(evidence).toEqual({ kind: 'photo', label: 'Seated', startMs: null, photoUrl: `${publicPath}/evidence/${photo.id}/photo` });
+    const redirect = await reader.get(evidence.photoUrl).expect(302);
+    const stored = await fetch(redirect.headers.location);
+    expect(Buffer.from(await stored.arrayBuffer()).equals(PNG)).toBe(true);
+
+    // Another assembly's photo, through this guide's path: not found, as is a photo of a retired check.
+    await reader.get(`${publicPath}/evidence/${elsewhere.id}/photo`).expect(404);
+    await creator.agent.post(`${w}/checks/${check.id}/transitions`).send({ to: 'retired', reason: 'superseded' }).expect(201);
+    await reader.get(evidence.photoUrl).expect(404);
+    await reader.get(`${publicPath}/evidence/not-a-uuid/photo`).expect(400);
   });
 });

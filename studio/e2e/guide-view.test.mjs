@@ -3,13 +3,11 @@
 // video (a step's time seeks the video and the step lights up), searches the transcript, prints it, and reads it
 // on a phone.
 import assert from 'node:assert/strict';
-import { execFileSync } from 'node:child_process';
-import { mkdirSync, mkdtempSync, readFileSync, rmSync, statSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { mkdirSync, rmSync } from 'node:fs';
 import { join } from 'node:path';
 import { after, before, test } from 'node:test';
 import { baseUrl, launchBrowser } from './browser.mjs';
-import { signUpThroughApi } from './support.mjs';
+import { makeClip, signUpThroughApi, uploadClip } from './support.mjs';
 
 const screenshots = new URL('./screenshots/', import.meta.url);
 mkdirSync(screenshots, { recursive: true });
@@ -35,43 +33,6 @@ The coupler slides onto the twenty-one tooth spline.
 00:00:09.500 --> 00:00:11.500
 Spigot bore reads fifteen thousandths over.
 `;
-
-/** A 12 s small test pattern made on the spot; never real footage. */
-function makeClip() {
-  const file = join(mkdtempSync(join(tmpdir(), 'fitwright-guide-view-')), 'coupler-test-fit.mp4');
-  execFileSync('ffmpeg', [
-    '-v', 'error', '-y',
-    '-f', 'lavfi', '-i', 'testsrc2=duration=12:size=640x360:rate=25',
-    '-c:v', 'libx264', '-preset', 'ultrafast', '-pix_fmt', 'yuv420p', '-movflags', '+faststart', file,
-  ]);
-  return file;
-}
-
-/** The studio's upload path, driven from the test: create, presigned part PUTs, record each ETag, complete. */
-async function uploadClip(api, workshopId, buildId, file) {
-  const bytes = readFileSync(file);
-  const created = await api.post(`/workshops/${workshopId}/builds/${buildId}/footage`, {
-    fileName: 'coupler-test-fit.mp4',
-    contentType: 'video/mp4',
-    sizeBytes: statSync(file).size,
-  });
-  const footageId = created.footage.id;
-  const { partSizeBytes, partCount } = created.upload;
-  const partNumbers = Array.from({ length: partCount }, (_, index) => index + 1);
-  const { urls } = await api.post(`/workshops/${workshopId}/footage/${footageId}/upload/part-urls`, { partNumbers });
-  for (const { partNumber, url } of urls) {
-    const put = await fetch(url, { method: 'PUT', body: bytes.subarray((partNumber - 1) * partSizeBytes, partNumber * partSizeBytes) });
-    assert.ok(put.ok, `storage answered ${put.status} to part ${partNumber}`);
-    await api.put(`/workshops/${workshopId}/footage/${footageId}/upload/parts/${partNumber}`, { etag: put.headers.get('etag') });
-  }
-  await api.post(`/workshops/${workshopId}/footage/${footageId}/upload/complete`);
-  for (let attempt = 0; ; attempt += 1) {
-    const footage = await api.get(`/workshops/${workshopId}/footage/${footageId}`);
-    if (footage.state === 'ready') return footageId;
-    assert.ok(footage.state === 'processing' && attempt < 150, `footage ${footage.state}: ${footage.failureReason}`);
-    await new Promise((resolve) => setTimeout(resolve, 200));
-  }
-}
 
 let browser;
 let clip;

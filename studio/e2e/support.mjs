@@ -1,6 +1,10 @@
 // What the browser journeys share: the mail fake's inbox, the API through a browser context, and
 // an account (with its workshop) made through the API where a journey is not about those screens.
 import assert from 'node:assert/strict';
+import { execFileSync } from 'node:child_process';
+import { mkdtempSync, readFileSync, statSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import { baseUrl } from './browser.mjs';
 
 export const inboxUrl = process.env.MAIL_INBOX_URL ?? 'http://127.0.0.1:1090';
@@ -102,4 +106,41 @@ export async function confirmCheckWithReading(api, { w, boreFeatureId, checkId }
   });
   await api.post(`${w}/checks/${checkId}/evidence`, { kind: 'measurement', measurementId: bore.id });
   await api.post(`${w}/checks/${checkId}/transitions`, { to: 'confirmed', reason: 'Test-fitted on the vehicle' });
+}
+
+/** A 12 s small test pattern made on the spot; never real footage. */
+export function makeClip() {
+  const file = join(mkdtempSync(join(tmpdir(), 'fitwright-guide-view-')), 'coupler-test-fit.mp4');
+  execFileSync('ffmpeg', [
+    '-v', 'error', '-y',
+    '-f', 'lavfi', '-i', 'testsrc2=duration=12:size=640x360:rate=25',
+    '-c:v', 'libx264', '-preset', 'ultrafast', '-pix_fmt', 'yuv420p', '-movflags', '+faststart', file,
+  ]);
+  return file;
+}
+
+/** The studio's upload path, driven from the test: create, presigned part PUTs, record each ETag, complete. */
+export async function uploadClip(api, workshopId, buildId, file) {
+  const bytes = readFileSync(file);
+  const created = await api.post(`/workshops/${workshopId}/builds/${buildId}/footage`, {
+    fileName: 'coupler-test-fit.mp4',
+    contentType: 'video/mp4',
+    sizeBytes: statSync(file).size,
+  });
+  const footageId = created.footage.id;
+  const { partSizeBytes, partCount } = created.upload;
+  const partNumbers = Array.from({ length: partCount }, (_, index) => index + 1);
+  const { urls } = await api.post(`/workshops/${workshopId}/footage/${footageId}/upload/part-urls`, { partNumbers });
+  for (const { partNumber, url } of urls) {
+    const put = await fetch(url, { method: 'PUT', body: bytes.subarray((partNumber - 1) * partSizeBytes, partNumber * partSizeBytes) });
+    assert.ok(put.ok, `storage answered ${put.status} to part ${partNumber}`);
+    await api.put(`/workshops/${workshopId}/footage/${footageId}/upload/parts/${partNumber}`, { etag: put.headers.get('etag') });
+  }
+  await api.post(`/workshops/${workshopId}/footage/${footageId}/upload/complete`);
+  for (let attempt = 0; ; attempt += 1) {
+    const footage = await api.get(`/workshops/${workshopId}/footage/${footageId}`);
+    if (footage.state === 'ready') return footageId;
+    assert.ok(footage.state === 'processing' && attempt < 150, `footage ${footage.state}: ${footage.failureReason}`);
+    await new Promise((resolve) => setTimeout(resolve, 200));
+  }
 }

@@ -54,6 +54,8 @@ export interface CheckEvidence {
   kind: 'mark' | 'measurement' | 'photo';
   label: string;
   startMs: number | null;
+  /** A photo's address on the guide's public path (it redirects to the image). */
+  photoUrl?: string;
 }
 
 export interface PublishedCheck {
@@ -90,6 +92,15 @@ export interface GuideFootage {
   videoUrl: string;
   posterUrl: string | null;
   captionsUrl: string | null;
+  /** The web renditions, null until made (absent from an API without the media pipeline). */
+  hlsUrl?: string | null;
+  mp4Url?: string | null;
+  /** WebVTT thumbnails track for scrub previews. */
+  thumbnailsUrl?: string | null;
+  waveformUrl?: string | null;
+  /** The picture as shown, after rotation. */
+  displayWidth?: number | null;
+  displayHeight?: number | null;
 }
 
 /** What a reader may follow from a guide (the follows contract): its workshop, its build, and the checklist's assembly. */

@@ -43,6 +43,40 @@ describe('cautions', () => {
     expect(screen.getByTestId('disclaimer').textContent).toMatch(/does not replace the vehicle manufacturer/);
   });
 
+  it('shows the most severe level in full and folds the others to their signal-word line, still before any step', () => {
+    renderWithProviders(<CautionsBlock guide={testGuide()} />);
+    const panels = screen.getAllByTestId('caution');
+    // In full: a region with its text in view.
+    expect(panels[0].tagName).toBe('SECTION');
+    expect(panels[0].textContent).toMatch(/DANGER/);
+    // Folded: a closed <details> whose summary names the level and where it comes from, the text inside.
+    const folded = panels.slice(1);
+    expect(folded.map((panel) => panel.tagName)).toEqual(['DETAILS', 'DETAILS']);
+    for (const panel of folded) {
+      expect((panel as HTMLDetailsElement).open).toBe(false);
+      expect(panel.querySelector('summary')?.textContent).toMatch(/^(WARNING|CAUTION)/);
+    }
+    expect(folded[1].querySelector('summary')?.textContent).toBe('CAUTIONStep 2: Slide the coupler on');
+    expect(screen.getByRole('list', { name: /More cautions/ })).toBeTruthy();
+  });
+
+  it('shows every caution of the most severe level in full', () => {
+    const guide = testGuide({
+      cautions: [
+        { level: 'WARNING', topic: 'lifting', text: 'Use stands.' },
+        { level: 'WARNING', topic: 'rotating_parts', text: 'Keep sleeves clear of the shaft.' },
+        { level: 'NOTICE', topic: 'pressing', text: 'Support the housing.' },
+      ],
+      steps: [],
+    });
+    renderWithProviders(<CautionsBlock guide={guide} />);
+    expect(screen.getAllByTestId('caution').map((panel) => `${panel.tagName} ${panel.getAttribute('data-level')}`)).toEqual([
+      'SECTION WARNING',
+      'SECTION WARNING',
+      'DETAILS NOTICE',
+    ]);
+  });
+
   it('gives NOTICE its own symbol rather than the safety alert triangle', () => {
     const guide = testGuide({ cautions: [{ level: 'NOTICE', topic: 'pressing', text: 'Support the housing.' }], steps: [] });
     renderWithProviders(<CautionsBlock guide={guide} />);

@@ -34,4 +34,17 @@ describe('ChecklistPanel', () => {
     expect(screen.queryByRole('button', { name: /Watch the evidence/ })).toBeNull();
     expect(screen.getByText('Video at 0:09: Slides on by hand')).toBeTruthy();
   });
+
+  it('shows a photo as a thumbnail that opens it full size', async () => {
+    const withPhoto = {
+      ...checklist,
+      checks: [{ ...checklist.checks[0], evidence: [{ kind: 'photo' as const, label: 'Seated on the shaft', startMs: null, photoUrl: '/api/guides/w/g/evidence/e1/photo' }] }],
+    };
+    renderWithProviders(<ChecklistPanel checklist={withPhoto} onSeek={() => {}} />);
+    const thumbnail = screen.getByRole('button', { name: 'Open the photo full size: Seated on the shaft' });
+    expect(thumbnail.querySelector('img')?.getAttribute('src')).toBe('/api/guides/w/g/evidence/e1/photo');
+    fireEvent.click(thumbnail);
+    const dialog = await screen.findByRole('dialog', { name: 'Seated on the shaft' });
+    expect(within(dialog).getByRole('img', { name: 'Seated on the shaft' }).getAttribute('src')).toBe('/api/guides/w/g/evidence/e1/photo');
+  });
 });

@@ -1,4 +1,5 @@
-import { Group, List, Paper, Stack, Text, Title, UnstyledButton } from '@mantine/core';
+import { Group, Image, List, Modal, Paper, Stack, Text, Title, UnstyledButton } from '@mantine/core';
+import { useState } from 'react';
 import type { CheckEvidence, ChecklistVerdict, PublishedChecklist } from '../api/types';
 import { CheckStateBadge } from '@/components/check-state';
 import classes from './guide-view.module.css';
@@ -14,6 +15,24 @@ const VERDICT_WORDS: Record<ChecklistVerdict, { label: string; explanation: stri
 
 const EVIDENCE_WORDS: Record<CheckEvidence['kind'], string> = { mark: 'Video', measurement: 'Measurement', photo: 'Photo' };
 
+
+/** A photo of the test fit: a thumbnail that opens the photo full size. */
+function EvidencePhoto({ url, label }: { url: string; label: string }) {
+  const [open, setOpen] = useState(false);
+  return (
+    <>
+      <UnstyledButton onClick={() => setOpen(true)} aria-label={`Open the photo full size: ${label}`} className={classes.photoThumb}>
+        <img src={url} alt="" loading="lazy" width={96} height={72} />
+        <Text span size="sm">
+          Photo: {label}
+        </Text>
+      </UnstyledButton>
+      <Modal opened={open} onClose={() => setOpen(false)} title={label} size="auto" centered>
+        <Image src={url} alt={label} className={classes.photoFull} />
+      </Modal>
+    </>
+  );
+}
 
 export interface ChecklistPanelProps {
   checklist: PublishedChecklist;
@@ -74,7 +93,9 @@ export function ChecklistPanel({ checklist, onSeek }: ChecklistPanelProps) {
                 <List size="sm" mt={4} spacing={2} aria-label={`Evidence for ${check.title}`}>
                   {check.evidence.map((evidence, index) => (
                     <List.Item key={`${evidence.kind}-${index}`}>
-                      {evidence.startMs !== null && onSeek ? (
+                      {evidence.photoUrl ? (
+                        <EvidencePhoto url={evidence.photoUrl} label={evidence.label} />
+                      ) : evidence.startMs !== null && onSeek ? (
                         <UnstyledButton
                           className={classes.evidenceLink}
                           onClick={() => evidence.startMs !== null && onSeek(evidence.startMs)}

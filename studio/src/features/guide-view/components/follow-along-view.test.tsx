@@ -54,6 +54,8 @@ describe('FollowAlongView', () => {
 
     playTo(video, 1);
     expect(steps[0].getAttribute('aria-current')).toBe('step');
+    // Under the video (shown on phones): the playing step's number and title.
+    expect(screen.getByTestId('now-playing').textContent).toBe('Step 1 of 3 · from 0:00Lift the cab');
     expect(within(steps[0]).getByText('Playing now')).toBeTruthy();
     expect(steps[1].getAttribute('aria-current')).toBeNull();
     expect(screen.getAllByTestId('transcript-cue')[0].getAttribute('aria-current')).toBe('time');

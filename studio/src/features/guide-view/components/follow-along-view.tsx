@@ -14,6 +14,7 @@ import './guide-print.css';
 import { GuideVideo } from './guide-video';
 import classes from './guide-view.module.css';
 import { MarksStrip } from './marks-strip';
+import { NowPlaying } from './now-playing';
 import { PartsPanel, SuppliesPanel } from './parts-panel';
 import { currentStepId } from './playback';
 import { StepList } from './step-list';
@@ -38,7 +39,11 @@ export type FollowSlot = (targets: GuideFollowTargets) => ReactNode;
 /** The route hands in what offers to send a fit report from this guide. */
 export type ReportSlot = (guide: { workshopSlug: string; guideSlug: string; guideTitle: string }) => ReactNode;
 
-/** A published guide laid out to follow along: safety first, the video with its steps beside it, then the proof and the parts. */
+/**
+ * A published guide laid out to follow along: compact safety first, the video on the first screen with its steps
+ * beside it (on a phone: the video stays at the top with the playing step under it), then the summary, the proof
+ * and the parts.
+ */
 export function GuideDocument({ data, followSlot, reportSlot }: { data: PublishedGuide; followSlot?: FollowSlot; reportSlot?: ReportSlot }) {
   const { guide, workshop, revision, footage } = data;
   const player = useGuidePlayer();
@@ -90,16 +95,10 @@ export function GuideDocument({ data, followSlot, reportSlot }: { data: Publishe
 
       <CautionsBlock guide={data} />
 
-      {guide.summary && (
-        <Typography>
-          {/* The server sanitises the summary (a short allow-list of tags) before it reaches any reader. */}
-          <div dangerouslySetInnerHTML={{ __html: guide.summary }} />
-        </Typography>
-      )}
-
       <div className={classes.followAlong} data-has-video={footage ? '' : undefined}>
         {footage && (
-          <div className={classes.areaVideo}>
+          // On a phone this area stays at the top while the page scrolls, with the playing step under the video.
+          <div className={classes.areaVideo} data-testid="guide-player">
             <GuideVideo
               footage={footage}
               videoRef={player.videoRef}
@@ -108,9 +107,12 @@ export function GuideDocument({ data, followSlot, reportSlot }: { data: Publishe
               onRetry={player.retry}
               events={player.videoEvents}
             />
-            {footage.durationMs !== null && (
-              <MarksStrip marks={data.marks} durationMs={footage.durationMs} currentMs={player.currentMs} onSeek={player.seek} />
-            )}
+            <NowPlaying step={data.steps.find((step) => step.id === playing) ?? null} stepCount={data.steps.length} />
+          </div>
+        )}
+        {footage && footage.durationMs !== null && (
+          <div className={classes.areaMarks}>
+            <MarksStrip marks={data.marks} durationMs={footage.durationMs} currentMs={player.currentMs} onSeek={player.seek} />
           </div>
         )}
         <div className={classes.areaSteps}>
@@ -122,6 +124,18 @@ export function GuideDocument({ data, followSlot, reportSlot }: { data: Publishe
           </div>
         )}
       </div>
+
+      {guide.summary && (
+        <section aria-labelledby="guide-summary-heading">
+          <Title order={2} size="h4" id="guide-summary-heading" className={classes.keepWithNext}>
+            About this guide
+          </Title>
+          <Typography>
+            {/* The server sanitises the summary (a short allow-list of tags) before it reaches any reader. */}
+            <div dangerouslySetInnerHTML={{ __html: guide.summary }} />
+          </Typography>
+        </section>
+      )}
 
       {data.checklist && <ChecklistPanel checklist={data.checklist} onSeek={seek} />}
       <div className={classes.reference}>

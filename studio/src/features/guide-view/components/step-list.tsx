@@ -50,8 +50,8 @@ export function StepList({ steps, marks, mainFootageId, currentStepId, onSeek }:
 
   return (
     <Paper withBorder p="md" component="section" aria-labelledby="guide-steps-heading" className={classes.stepsPanel} data-testid="guide-steps">
-      <Group justify="space-between" mb="sm">
-        <Title order={2} size="h4" id="guide-steps-heading">
+      <Group justify="space-between" mb="sm" className={classes.keepWithNext}>
+        <Title order={2} size="h4" id="guide-steps-heading" className={classes.keepWithNext}>
           Steps
         </Title>
         {!following && <BackToNow onClick={resume} />}
