@@ -1,6 +1,7 @@
 import { fireEvent, screen, waitFor, within } from '@testing-library/react';
-import { afterEach, describe, expect, it, vi } from 'vitest';
+import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { stubApi, type StubRoute } from '@/testing/api-stub';
+import { fakeScrollLayout } from '@/testing/fake-scroll-layout';
 import { renderWithProviders } from '@/testing/render';
 import type { Mark } from '../api/queries';
 import { emptyLinks, MarkForm, type MarkDraft } from './mark-form';
@@ -233,6 +234,8 @@ describe('MarkForm', () => {
 });
 
 describe('MarksList links', () => {
+  // The list draws only the rows in view: jsdom needs a box and row heights to have any.
+  beforeEach(() => fakeScrollLayout({ boxHeight: 360, rowHeight: 48 }));
   afterEach(() => vi.restoreAllMocks());
 
   const mark = (id: string, change: Partial<Mark>): Mark => ({
@@ -257,7 +260,7 @@ describe('MarksList links', () => {
       mark('k3', { kind: 'check_evidence', fitCheckId: 'c2', label: 'Bolted up' }),
       mark('k4', { kind: 'caution', label: 'Stands under the truck' }),
     ];
-    renderWithProviders(<MarksList workshopId="w1" footageId="f1" marks={marks} onSeek={() => {}} onEdit={() => {}} />);
+    renderWithProviders(<MarksList workshopId="w1" footageId="f1" marks={marks} currentMs={0} onSeek={() => {}} onEdit={() => {}} />);
     const rows = screen.getAllByTestId('mark-row');
     const linkOf = async (row: HTMLElement) => within(row).findByTestId('mark-link');
     expect((await linkOf(rows[0])).textContent).toBe('→ HL-2107');
@@ -279,7 +282,7 @@ describe('MarksList links', () => {
       ]),
     );
     const marks = [mark('k5', { kind: 'step', guideStepId: 's2' }), mark('k6', { kind: 'step', guideStepId: 's9' })];
-    renderWithProviders(<MarksList workshopId="w1" footageId="f1" marks={marks} onSeek={() => {}} onEdit={() => {}} />);
+    renderWithProviders(<MarksList workshopId="w1" footageId="f1" marks={marks} currentMs={0} onSeek={() => {}} onEdit={() => {}} />);
     const [linked, gone] = screen.getAllByTestId('mark-row');
     const link = await within(linked).findByTestId('mark-link');
     expect(link.textContent).toBe('→ Coupler install · 2. Seat the coupler');

@@ -1,32 +1,77 @@
 import { Button, Group, Paper, SegmentedControl, Stack, Text, Title, UnstyledButton } from '@mantine/core';
-import { useState } from 'react';
+import { memo, useMemo, useState } from 'react';
+import { BackToNow } from '@/components/back-to-now';
 import { ConfirmButton } from '@/components/confirm-button';
+import { formatClock } from '@/lib/clock';
 import { notifyError } from '@/lib/notify';
+import { useFollowingList } from '@/lib/use-follow-playback';
+import { useStableHandler } from '@/lib/use-stable-handler';
 import { useRemoveMark } from '../api/mutations';
 import { MARK_KINDS, type Mark, type MarkKind } from '../api/queries';
-import { formatClock } from '@/lib/clock';
 import { KindShape } from './kind-shape';
-import { MarkLink } from './mark-link';
 import { KIND_LOOK } from './mark-kinds';
+import { MarkLink } from './mark-link';
+import classes from './virtual-list.module.css';
+
+/** A first guess at a row's height; rows are measured once drawn (a label and a link make two lines). */
+const MARK_ROW_ESTIMATE_PX = 48;
 
 export interface MarksListProps {
   workshopId: string;
   footageId: string;
   marks: Mark[];
+  /** The playing moment: the last mark at or before it is highlighted and kept in view while following. */
+  currentMs: number;
   onSeek: (ms: number) => void;
   onEdit: (mark: Mark) => void;
 }
 
-/** The footage's marks in time order, filtered by kind; click a time to jump there. */
-export function MarksList({ workshopId, footageId, marks, onSeek, onEdit }: MarksListProps) {
+/** The index of the last row starting at or before `ms` (rows in time order), or -1. Binary search: hours of marks. */
+export function lastStartedAt(rows: readonly { startMs: number }[], ms: number): number {
+  let low = 0;
+  let high = rows.length - 1;
+  let found = -1;
+  while (low <= high) {
+    const middle = (low + high) >> 1;
+    if (rows[middle].startMs <= ms) {
+      found = middle;
+      low = middle + 1;
+    } else {
+      high = middle - 1;
+    }
+  }
+  return found;
+}
+
+/**
+ * The footage's marks in time order, filtered by kind; click a time to jump there. Only the rows in view are drawn;
+ * the list follows playback until the person scrolls it, and a time update draws again only the rows whose
+ * highlight changes.
+ */
+export function MarksList({ workshopId, footageId, marks, currentMs, onSeek, onEdit }: MarksListProps) {
   const [kind, setKind] = useState<MarkKind | 'all'>('all');
   const remove = useRemoveMark(workshopId, footageId);
-  const shown = kind === 'all' ? marks : marks.filter((mark) => mark.kind === kind);
+  const shown = useMemo(() => (kind === 'all' ? marks : marks.filter((mark) => mark.kind === kind)), [marks, kind]);
+  const active = lastStartedAt(shown, currentMs);
+  const seek = useStableHandler(onSeek);
+  const edit = useStableHandler(onEdit);
+  const removeMark = useStableHandler((mark: Mark) =>
+    remove.mutate(mark.id, { onError: (error) => notifyError('The mark was not removed', error) }),
+  );
+  const { following, box, rows, resume } = useFollowingList<HTMLDivElement>({
+    count: shown.length,
+    currentIndex: active,
+    estimateRowHeight: MARK_ROW_ESTIMATE_PX,
+    place: 'third',
+  });
 
   return (
     <Paper withBorder p="md">
       <Stack gap="sm">
-        <Title order={4}>Marks</Title>
+        <Group justify="space-between">
+          <Title order={4}>Marks</Title>
+          {!following && shown.length > 0 && <BackToNow onClick={resume} />}
+        </Group>
         <SegmentedControl
           size="xs"
           aria-label="Show marks of kind"
@@ -39,51 +84,81 @@ export function MarksList({ workshopId, footageId, marks, onSeek, onEdit }: Mark
             {marks.length === 0 ? 'No marks yet. Press M while the video plays, or use “Pin a mark”.' : 'No marks of this kind.'}
           </Text>
         )}
-        <Stack gap={4} data-testid="marks-list">
-          {shown.map((mark) => (
-            <Group key={mark.id} justify="space-between" wrap="nowrap" data-testid="mark-row">
-              <Group gap="xs" wrap="nowrap" align="flex-start" style={{ minWidth: 0 }}>
-                <UnstyledButton onClick={() => onSeek(mark.startMs)} aria-label={`Jump to ${formatClock(mark.startMs, { tenths: true })}`}>
-                  <Text size="sm" ff="monospace">
-                    {formatClock(mark.startMs, { tenths: true })}
-                  </Text>
-                </UnstyledButton>
-                <Group gap="xs" wrap="nowrap" h={22} style={{ flex: 'none' }}>
-                  <KindShape kind={mark.kind} />
-                  <Text size="sm" fw={500} style={{ whiteSpace: 'nowrap' }}>
-                    {KIND_LOOK[mark.kind].name}
-                  </Text>
-                </Group>
-                {/* The label as written, and under it what the mark links to. */}
-                <Stack gap={0} style={{ minWidth: 0 }}>
-                  {mark.label && (
-                    <Text size="sm" lineClamp={1}>
-                      {mark.label}
-                    </Text>
-                  )}
-                  <MarkLink workshopId={workshopId} footageId={footageId} mark={mark} />
-                </Stack>
-              </Group>
-              <Group gap={4} wrap="nowrap">
-                <Button size="compact-xs" variant="default" onClick={() => onEdit(mark)}>
-                  Edit
-                </Button>
-                <ConfirmButton
-                  size="compact-xs"
-                  variant="subtle"
-                  color="red"
-                  question="Remove this mark?"
-                  detail="What it links to (a part, a reading, a fit check, a step) stays."
-                  confirmLabel="Remove mark"
-                  onConfirm={() => remove.mutate(mark.id, { onError: (error) => notifyError('The mark was not removed', error) })}
+        {shown.length > 0 && (
+          <div ref={box} className={classes.scroller} data-testid="marks-list">
+            <div className={classes.spacer} style={{ height: rows.getTotalSize() }}>
+              {rows.getVirtualItems().map((row) => (
+                <div
+                  key={shown[row.index].id}
+                  data-index={row.index}
+                  ref={rows.measureElement}
+                  className={classes.row}
+                  style={{ transform: `translateY(${row.start}px)` }}
+                  data-active={row.index === active || undefined}
                 >
-                  Remove
-                </ConfirmButton>
-              </Group>
-            </Group>
-          ))}
-        </Stack>
+                  <MarkRow workshopId={workshopId} footageId={footageId} mark={shown[row.index]} onSeek={seek} onEdit={edit} onRemove={removeMark} />
+                </div>
+              ))}
+            </div>
+          </div>
+        )}
       </Stack>
     </Paper>
   );
 }
+
+interface MarkRowProps {
+  workshopId: string;
+  footageId: string;
+  mark: Mark;
+  onSeek: (ms: number) => void;
+  onEdit: (mark: Mark) => void;
+  onRemove: (mark: Mark) => void;
+}
+
+/** One mark; memoised, so the playing moment moving on does not draw it again. */
+const MarkRow = memo(function MarkRow({ workshopId, footageId, mark, onSeek, onEdit, onRemove }: MarkRowProps) {
+  const at = formatClock(mark.startMs, { tenths: true });
+  return (
+    <Group justify="space-between" wrap="nowrap" data-testid="mark-row">
+      <Group gap="xs" wrap="nowrap" align="flex-start" style={{ minWidth: 0 }}>
+        <UnstyledButton onClick={() => onSeek(mark.startMs)} aria-label={`Jump to ${at}`}>
+          <Text size="sm" ff="monospace">
+            {at}
+          </Text>
+        </UnstyledButton>
+        <Group gap="xs" wrap="nowrap" h={22} style={{ flex: 'none' }}>
+          <KindShape kind={mark.kind} />
+          <Text size="sm" fw={500} style={{ whiteSpace: 'nowrap' }}>
+            {KIND_LOOK[mark.kind].name}
+          </Text>
+        </Group>
+        {/* The label as written, and under it what the mark links to. */}
+        <Stack gap={0} style={{ minWidth: 0 }}>
+          {mark.label && (
+            <Text size="sm" lineClamp={1}>
+              {mark.label}
+            </Text>
+          )}
+          <MarkLink workshopId={workshopId} footageId={footageId} mark={mark} />
+        </Stack>
+      </Group>
+      <Group gap={4} wrap="nowrap">
+        <Button size="compact-xs" variant="default" onClick={() => onEdit(mark)}>
+          Edit
+        </Button>
+        <ConfirmButton
+          size="compact-xs"
+          variant="subtle"
+          color="red"
+          question="Remove this mark?"
+          detail="What it links to (a part, a reading, a fit check, a step) stays."
+          confirmLabel="Remove mark"
+          onConfirm={() => onRemove(mark)}
+        >
+          Remove
+        </ConfirmButton>
+      </Group>
+    </Group>
+  );
+});

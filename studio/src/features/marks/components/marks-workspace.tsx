@@ -2,7 +2,7 @@ import { Button, Group, Kbd, Modal, Stack, Table, Text } from '@mantine/core';
 import { useDisclosure } from '@mantine/hooks';
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
-import { markQueries, type MarkSuggestion } from '../api/queries';
+import { markQueries, type Mark, type MarkSuggestion } from '../api/queries';
 import { MARKING_SHORTCUTS, useMarkingShortcuts } from '../hooks/marking-shortcuts';
 import { formatClock } from '@/lib/clock';
 import { draftOf, emptyLinks, MarkForm, type MarkDraft, type SpokenReading } from './mark-form';
@@ -25,6 +25,9 @@ export interface MarksWorkspaceProps {
   footageId: string;
   player: MarkingPlayer;
 }
+
+/** One empty list, so memoised parts see the same array while the marks load. */
+const NO_MARKS: Mark[] = [];
 
 /** The measurement spoken in the cue playing at `atMs`, if the miner found one still waiting there. */
 export function spokenAt(suggestions: MarkSuggestion[], atMs: number): SpokenReading | null {
@@ -61,7 +64,7 @@ export function MarksWorkspace({ workshopId, footageId, player }: MarksWorkspace
       {player.durationMs !== null && (
         <MarksTimeline
           key={player.durationMs}
-          marks={marks.data ?? []}
+          marks={marks.data ?? NO_MARKS}
           durationMs={player.durationMs}
           currentMs={player.currentMs}
           onSeek={player.seek}
@@ -75,8 +78,15 @@ export function MarksWorkspace({ workshopId, footageId, player }: MarksWorkspace
           Keys <Kbd ml={6}>?</Kbd>
         </Button>
       </Group>
-      <MarksList workshopId={workshopId} footageId={footageId} marks={marks.data ?? []} onSeek={player.seek} onEdit={(mark) => setDraft(draftOf(mark))} />
-      <SuggestionsPanel workshopId={workshopId} footageId={footageId} onSeek={player.seek} />
+      <MarksList
+        workshopId={workshopId}
+        footageId={footageId}
+        marks={marks.data ?? NO_MARKS}
+        currentMs={player.currentMs}
+        onSeek={player.seek}
+        onEdit={(mark) => setDraft(draftOf(mark))}
+      />
+      <SuggestionsPanel workshopId={workshopId} footageId={footageId} currentMs={player.currentMs} onSeek={player.seek} />
       <MarkForm workshopId={workshopId} footageId={footageId} draft={draft} onClose={() => setDraft(null)} />
       <Modal opened={helpOpen} onClose={help.close} title="Marking keys">
         <Table>

@@ -1,41 +1,69 @@
 import { Badge, Button, Group, Modal, Paper, Select, Stack, Text, TextInput, Title } from '@mantine/core';
 import { useQuery } from '@tanstack/react-query';
-import { useState } from 'react';
+import { memo, useState } from 'react';
+import { BackToNow } from '@/components/back-to-now';
 import { notifyDone, notifyError } from '@/lib/notify';
+import { useFollowingList } from '@/lib/use-follow-playback';
+import { useStableHandler } from '@/lib/use-stable-handler';
 import { useAcceptSuggestion, useDismissSuggestion } from '../api/mutations';
 import { markQueries, type MarkSuggestion } from '../api/queries';
 import { formatClock } from '@/lib/clock';
 import { KindShape } from './kind-shape';
+import { lastStartedAt } from './marks-list';
 import { INSTRUMENT_CHOICES } from './reading-choices';
+import classes from './virtual-list.module.css';
 
+/** A first guess at a row's height; rows are measured once drawn. */
+const SUGGESTION_ROW_ESTIMATE_PX = 34;
 
 export interface SuggestionsPanelProps {
   workshopId: string;
   footageId: string;
+  /** The playing moment: the last suggestion at or before it is highlighted and kept in view while following. */
+  currentMs: number;
   onSeek: (ms: number) => void;
 }
 
-/** What the transcript miner found: accept to make the mark (and the reading), dismiss for good. */
-export function SuggestionsPanel({ workshopId, footageId, onSeek }: SuggestionsPanelProps) {
+/**
+ * What the transcript miner found: accept to make the mark (and the reading), dismiss for good. Only the rows in
+ * view are drawn, and the list follows playback until the person scrolls it.
+ */
+export function SuggestionsPanel({ workshopId, footageId, currentMs, onSeek }: SuggestionsPanelProps) {
   const suggestions = useQuery(markQueries.suggestions(workshopId, footageId));
   const accept = useAcceptSuggestion(workshopId, footageId);
   const dismiss = useDismissSuggestion(workshopId, footageId);
   const [reading, setReading] = useState<MarkSuggestion | null>(null);
+  const items = suggestions.data ?? NO_SUGGESTIONS;
+  const active = lastStartedAt(items, currentMs);
+  const acceptingId = accept.isPending ? (accept.variables?.id ?? null) : null;
 
-  const handleAccept = (suggestion: MarkSuggestion) => {
+  const seek = useStableHandler(onSeek);
+  const handleAccept = useStableHandler((suggestion: MarkSuggestion) => {
     if (suggestion.kind === 'measurement') {
       setReading(suggestion);
       return;
     }
     accept.mutate({ id: suggestion.id }, { onError: (error) => notifyError('The suggestion was not accepted', error) });
-  };
+  });
+  const handleDismiss = useStableHandler((suggestion: MarkSuggestion) =>
+    dismiss.mutate(suggestion.id, { onError: (error) => notifyError('The suggestion was not dismissed', error) }),
+  );
+  const { following, box, rows, resume } = useFollowingList<HTMLDivElement>({
+    count: items.length,
+    currentIndex: active,
+    estimateRowHeight: SUGGESTION_ROW_ESTIMATE_PX,
+    place: 'third',
+  });
 
   return (
     <Paper withBorder p="md">
       <Stack gap="sm">
         <Group justify="space-between">
           <Title order={4}>Suggested from the transcript</Title>
-          {suggestions.data && <Badge variant="default">{suggestions.data.length}</Badge>}
+          <Group gap="xs">
+            {!following && items.length > 0 && <BackToNow onClick={resume} />}
+            {suggestions.data && <Badge variant="default">{suggestions.data.length}</Badge>}
+          </Group>
         </Group>
         {suggestions.isError && (
           <Text size="sm" c="red">
@@ -47,39 +75,30 @@ export function SuggestionsPanel({ workshopId, footageId, onSeek }: SuggestionsP
             Nothing waiting. Spoken measurements and your parts’ numbers show up here a moment after a transcript is attached.
           </Text>
         )}
-        <Stack gap={6} data-testid="suggestions">
-          {suggestions.data?.map((suggestion) => (
-            <Group key={suggestion.id} justify="space-between" wrap="nowrap" data-testid="suggestion-row">
-              <Group gap="xs" wrap="nowrap">
-                <Button size="compact-xs" variant="subtle" ff="monospace" onClick={() => onSeek(suggestion.startMs)}>
-                  {formatClock(suggestion.startMs, { tenths: true })}
-                </Button>
-                <KindShape kind={suggestion.kind} />
-                <Text size="sm">
-                  “{suggestion.phrase}”
-                  {suggestion.kind === 'measurement' && (
-                    <Text span c="dimmed" size="sm">
-                      {' '}
-                      = {suggestion.value} {suggestion.unit}
-                    </Text>
-                  )}
-                </Text>
-              </Group>
-              <Group gap={4} wrap="nowrap">
-                <Button size="compact-xs" onClick={() => handleAccept(suggestion)} loading={accept.isPending && accept.variables?.id === suggestion.id}>
-                  Accept
-                </Button>
-                <Button
-                  size="compact-xs"
-                  variant="default"
-                  onClick={() => dismiss.mutate(suggestion.id, { onError: (error) => notifyError('The suggestion was not dismissed', error) })}
+        {items.length > 0 && (
+          <div ref={box} className={classes.scroller} data-testid="suggestions">
+            <div className={classes.spacer} style={{ height: rows.getTotalSize() }}>
+              {rows.getVirtualItems().map((row) => (
+                <div
+                  key={items[row.index].id}
+                  data-index={row.index}
+                  ref={rows.measureElement}
+                  className={classes.row}
+                  style={{ transform: `translateY(${row.start}px)` }}
+                  data-active={row.index === active || undefined}
                 >
-                  Dismiss
-                </Button>
-              </Group>
-            </Group>
-          ))}
-        </Stack>
+                  <SuggestionRow
+                    suggestion={items[row.index]}
+                    accepting={acceptingId === items[row.index].id}
+                    onSeek={seek}
+                    onAccept={handleAccept}
+                    onDismiss={handleDismiss}
+                  />
+                </div>
+              ))}
+            </div>
+          </div>
+        )}
       </Stack>
       <Modal opened={reading !== null} onClose={() => setReading(null)} title="Record the spoken reading">
         {reading && (
@@ -106,6 +125,47 @@ export function SuggestionsPanel({ workshopId, footageId, onSeek }: SuggestionsP
     </Paper>
   );
 }
+
+const NO_SUGGESTIONS: MarkSuggestion[] = [];
+
+interface SuggestionRowProps {
+  suggestion: MarkSuggestion;
+  accepting: boolean;
+  onSeek: (ms: number) => void;
+  onAccept: (suggestion: MarkSuggestion) => void;
+  onDismiss: (suggestion: MarkSuggestion) => void;
+}
+
+/** One suggestion; memoised, so the playing moment moving on does not draw it again. */
+const SuggestionRow = memo(function SuggestionRow({ suggestion, accepting, onSeek, onAccept, onDismiss }: SuggestionRowProps) {
+  return (
+    <Group justify="space-between" wrap="nowrap" data-testid="suggestion-row">
+      <Group gap="xs" wrap="nowrap">
+        <Button size="compact-xs" variant="subtle" ff="monospace" onClick={() => onSeek(suggestion.startMs)}>
+          {formatClock(suggestion.startMs, { tenths: true })}
+        </Button>
+        <KindShape kind={suggestion.kind} />
+        <Text size="sm">
+          “{suggestion.phrase}”
+          {suggestion.kind === 'measurement' && (
+            <Text span c="dimmed" size="sm">
+              {' '}
+              = {suggestion.value} {suggestion.unit}
+            </Text>
+          )}
+        </Text>
+      </Group>
+      <Group gap={4} wrap="nowrap">
+        <Button size="compact-xs" onClick={() => onAccept(suggestion)} loading={accepting}>
+          Accept
+        </Button>
+        <Button size="compact-xs" variant="default" onClick={() => onDismiss(suggestion)}>
+          Dismiss
+        </Button>
+      </Group>
+    </Group>
+  );
+});
 
 interface ReadingFieldsProps {
   workshopId: string;
