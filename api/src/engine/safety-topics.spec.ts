@@ -7,6 +7,16 @@ describe('detectSafetyTopics', () => {
     ['Raise the pickup at the front crossmember and slide the jack out.', ['lifting']],
     ['Spin it up slowly and watch the coupler for wobble.', ['rotating_parts']],
     ['Check the driveshaft angle once it is back in.', ['rotating_parts']],
+    // Widened after a guide about couplers and shafts raised no rotating-parts caution.
+    ['Slide the coupler onto the motor shaft and tighten the grub screw.', ['rotating_parts']],
+    ['The coupling takes up the misalignment between the two shafts.', ['rotating_parts']],
+    ['Mark the prop shaft flange before you drop it.', ['rotating_parts']],
+    ['Grease the universal joints on the driveshafts.', ['rotating_parts']],
+    ['Check the CV joint boots for splits.', ['rotating_parts']],
+    ['Fit the crankshaft pulley and the new drive belt.', ['rotating_parts']],
+    ['Bump the motor over to line up the splines.', ['rotating_parts']],
+    ['At 3,000 rpm the coupler should run true.', ['rotating_parts']],
+    ['The input shaft needs a new pilot bearing.', ['rotating_parts']],
     ['Disconnect the traction battery first; the pack sits at 400 V.', ['high_voltage']],
     ['The orange cables run under the bed to the inverter.', ['high_voltage']],
     ['Tack it in place, then MIG weld the gusset.', ['welding']],
@@ -21,6 +31,13 @@ describe('detectSafetyTopics', () => {
     'The 12 V accessory battery stays connected.', // 60 V DC is the usual hazardous-voltage line (common practice)
     'Lift the lid of the parts box and count the bolts.',
     'Note the part number and the spline count.',
+    // Decoys: the same words about things that do not turn under power.
+    'Keep the screwdriver shaft clean of grease.',
+    'Hook the trailer coupler over the tow ball.',
+    'Push the air hose coupling onto the line.',
+    'The coupling nut on the brake line is finger tight.',
+    'A shaft of sunlight fell across the bench.',
+    'The lift shaft in the old mill is boarded over.',
   ])('finds nothing in %j', (text) => {
     expect(detectSafetyTopics(text)).toEqual([]);
   });

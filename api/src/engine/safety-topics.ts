@@ -73,7 +73,16 @@ const TOPIC_PATTERNS: Record<SafetyTopic, RegExp[]> = {
     /\brotat(e|es|ed|ing|ion)\b/,
     /\bspin(s|ning)?( it)? up\b/,
     /\bspinning\b/,
-    /\b(drive ?shaft|prop(eller)? ?shaft|half ?shaft|flywheel)s?\b/,
+    // Shafts of a drive line, but not a screwdriver's shaft, a lift shaft or a shaft of light.
+    /(?<!\b(screwdriver|elevator|lift|mine|ventilation|air|arrow|golf|feather) )\b((drive|prop(eller)?|half|input|output|motor|main|lay|counter|pinion|axle|cam|crank|jack) ?)?shafts?\b(?! of (light|sunlight))/,
+    /\b(driveshaft|propshaft|halfshaft|layshaft|countershaft|camshaft|crankshaft)s?\b/,
+    // A coupler or coupling of a drive, not of a trailer, a hose or an air line.
+    /(?<!\b(trailer|hitch|hose|air|quick|quick-release|pipe|pneumatic|hydraulic|fuel|water|garden|tow|train|rail) )\bcoupl(er|ers|ing|ings)\b(?! (hose|nut|fitting)s?\b)/,
+    /\b(flywheel|flex ?plate|pulley|sprocket|impeller|rotor)s?\b/,
+    /\b(cv|constant[- ]velocity|universal|u|uj)[- ]joints?\b/,
+    /\b(drive|fan|timing|serpentine|v)[- ]belts?\b/,
+    /\b\d[\d,]* ?rpm\b/,
+    /\b(run|running|spin|turn|turning|bump|bumping) (it|the (motor|engine|drive|shaft|wheels?)) (over|up)\b/,
     /\b(run|running|spin) the (motor|engine|drive)\b/,
   ],
   high_voltage: [

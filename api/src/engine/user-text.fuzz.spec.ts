@@ -2,6 +2,7 @@ import fc from 'fast-check';
 import { GROWTH_ALLOWANCE, GROWTH_FACTOR, growthRatio, ignoringExpectedErrors } from '../testing/linear-time';
 import { EngineError } from './engine-error';
 import { fitLimits, parseToleranceClass } from './fits';
+import { detectSafetyTopics } from './safety-topics';
 import { parseSplinePitch } from './splines';
 import { extractMeasurements, findPartNumbers } from './spoken-measurements';
 import { parseTranscript, TranscriptParseError, type TranscriptFormat } from './transcript-formats';
@@ -259,3 +260,29 @@ describe('tolerance classes and spline pitches under fuzzing', () => {
 function escapeRegExp(text: string): string {
   return text.replace(/[.*+?^${}()|[\]\\]/gu, '\\$&');
 }
+
+/* ---------------------------------------------------------------- safety topics */
+
+/** Near-misses for the topic patterns' look-behinds and optional words, stretched. */
+const SAFETY_SHAPES: Shape[] = [
+  { head: 'the ', filler: 'screwdriver ', tail: 'shaft', grow: 'stretch' },
+  { head: '', filler: 'drive ', tail: 'shaf', grow: 'stretch' },
+  { head: 'trailer', filler: ' ', tail: 'coupler of light', grow: 'stretch' },
+  { head: '', filler: 'press the ', tail: 'bearin', grow: 'tile' },
+  { head: '', filler: '1,', tail: ' rp', grow: 'stretch' },
+];
+
+describe('safety topic detection under fuzzing', () => {
+  it('never throws and names only known topics', () => {
+    fc.assert(
+      fc.property(trickyText(40), (text) => {
+        for (const topic of detectSafetyTopics(text)) expect(['lifting', 'rotating_parts', 'high_voltage', 'welding', 'pressing']).toContain(topic);
+      }),
+      { numRuns: 300 },
+    );
+  });
+
+  it('takes linear time', () => {
+    expectLinear(detectSafetyTopics, 6, SAFETY_SHAPES);
+  });
+});
