@@ -21,6 +21,7 @@ import { GuidesModule } from './guides/guides.module';
 import { MarksModule } from './marks/marks.module';
 import { MeasurementsModule } from './measurements/measurements.module';
 import { PartsModule } from './parts/parts.module';
+import { SearchModule } from './search/search.module';
 import { ToolsModule } from './tools/tools.module';
 import { TranscriptsModule } from './transcripts/transcripts.module';
 
@@ -54,6 +55,7 @@ import { TranscriptsModule } from './transcripts/transcripts.module';
     GuidesModule,
     FollowsModule,
     FitReportsModule,
+    SearchModule,
   ],
 })
 export class AppModule implements NestModule {

@@ -93,3 +93,8 @@ export function plainText(content: Pick<GuideContent, 'title' | 'summary' | 'ste
     .replace(/&nbsp;/g, ' ')
     .replace(/&amp;/g, '&');
 }
+
+/** Everything a reader can search in a published revision, as plain text (stored with the revision for FULLTEXT search). */
+export function guideSearchText(content: GuideContent): string {
+  return [plainText(content), ...content.tools, ...content.consumables].join('\n');
+}

@@ -13,7 +13,7 @@ import type { CreateGuideDto, CreateStepDto, StepFieldsDto, UpdateGuideDto, Upda
 import { GuideRevision } from './entities/guide-revision.entity';
 import { GuideStep } from './entities/guide-step.entity';
 import { Guide } from './entities/guide.entity';
-import { contentHash, guideContent, plainText, type GuideMarkContent } from './guide-content';
+import { contentHash, guideContent, guideSearchText, plainText, type GuideMarkContent } from './guide-content';
 import { toGuideResponse, toGuideSummary, toRevisionResponse, toStepResponse, type GuideState } from './guide.mapper';
 import { sanitizeRichText, slugFromTitle } from './rich-text';
 
@@ -196,6 +196,11 @@ export class GuidesService {
         }),
       );
       await manager.update(Guide, { id: guide.id }, { publishedRevisionId: saved.id });
+      // The revision's words for search, in the same transaction: a published guide is findable the moment it is public.
+      await manager.query(
+        'INSERT INTO guide_revision_search (revision_id, guide_id, workshop_id, footage_id, assembly_id, title, search_text) VALUES (?, ?, ?, ?, ?, ?, ?)',
+        [saved.id, guide.id, guide.workshopId, state.content.footageId, state.content.assemblyId, state.content.title, guideSearchText(state.content)],
+      );
       return saved;
     });
     return toRevisionResponse(revision, null);

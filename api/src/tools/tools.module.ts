@@ -27,5 +27,7 @@ import { ToolsService } from './tools.service';
     },
     ToolsThrottlerGuard,
   ],
+  // Other public read routes (search) take the calculators' per-address budget with the same guard.
+  exports: [ToolsThrottlerGuard, TOOLS_THROTTLER_OPTIONS, TOOLS_THROTTLER_STORAGE],
 })
 export class ToolsModule {}

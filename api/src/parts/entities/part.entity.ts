@@ -53,6 +53,4 @@ export class Part {
   updatedAt!: Date;
 }
 
-export function partNumberKey(partNumber: string): string {
-  return partNumber.toUpperCase().replace(/[^A-Z0-9]/g, '');
-}
+export { partNumberKey } from '../part-number-key';

@@ -1,0 +1,352 @@
+import { BadRequestException, Injectable } from '@nestjs/common';
+import { InjectDataSource } from '@nestjs/typeorm';
+import type { DataSource } from 'typeorm';
+import type { SessionUser } from '../common/types/access-context';
+import { SEARCH_KINDS, type SearchHitDto, type SearchKind, type SearchQueryDto, type SearchResultsDto } from './dto/search.dto';
+import { isEmptySearch, parseSearchQuery, type ParsedSearch } from './search-query';
+import { highlightSnippet } from './search-snippet';
+
+/** One kind's rows as SQL: the same columns for every kind, so a page is one UNION ALL ordered by score. */
+interface KindQuery {
+  kind: SearchKind;
+  sql: string;
+  params: unknown[];
+}
+
+interface HitRow {
+  kind: SearchKind;
+  id: string;
+  score: number | string;
+  published: number | string;
+  title: string;
+  body: string | null;
+  workshopId: string;
+  workshopSlug: string;
+  workshopName: string;
+  vehicle: string | null;
+  guideSlug: string | null;
+  targetId: string | null;
+  startMs: number | string | null;
+  checkState: string | null;
+}
+
+/** Every kind names these columns, in its own order; a page reads them by name so UNION ALL lines them up. */
+const COLUMNS = 'kind, id, score, published, title, body, workshopId, workshopSlug, workshopName, vehicle, guideSlug, targetId, startMs, checkState';
+
+/** A part-number hit outranks every FULLTEXT relevance (InnoDB's relevance stays far below this). */
+const PART_NUMBER_SCORE = 1000;
+
+
+/**
+ * Search across published guides (everyone) and a member's own workshops (signed in). A named read
+ * model: read-only SQL over the owning tables, each through its own FULLTEXT index (see the Search
+ * migration), so there is no second copy of any record to keep in step. Public kinds read only what a
+ * published revision shows: the revision's words (`guide_revision_search`), the parts of the assembly it
+ * names and the active transcript of the footage it names, in a workshop that is not disabled; a
+ * withdrawn guide falls out by the join on `guides.published_revision_id`. Member kinds are limited to
+ * the caller's memberships; for those workshops the public part and cue hits give way to the member
+ * ones, which open the studio.
+ */
+@Injectable()
+export class SearchService {
+  constructor(@InjectDataSource() private readonly dataSource: DataSource) {}
+
+  async search(query: SearchQueryDto, user: SessionUser | undefined): Promise<SearchResultsDto> {
+    const parsed = parseSearchQuery(query.q);
+    if (isEmptySearch(parsed)) {
+      throw new BadRequestException({
+        message: 'q: nothing to search for; use words of three letters or more (not "the", "for"…) or a part number',
+        errors: { q: 'Use words of three letters or more, or a part number' },
+      });
+    }
+    const offset = query.offset ?? 0;
+    const limit = query.limit ?? 20;
+    const memberWorkshopIds = user ? await this.memberWorkshopIds(user.id) : [];
+    const all = this.kindQueries(parsed, query, memberWorkshopIds);
+    const asked = query.kind ? all.filter((kind) => kind.kind === query.kind) : all;
+
+    const [counts, rows] = await Promise.all([
+      Promise.all(all.map((kind) => this.count(kind))),
+      asked.length ? this.page(asked, offset, limit) : Promise.resolve([]),
+    ]);
+    const countByKind = new Map<SearchKind, number>();
+    all.forEach((kind, index) => countByKind.set(kind.kind, (countByKind.get(kind.kind) ?? 0) + counts[index]));
+    const total = asked.reduce((sum, kind) => sum + counts[all.indexOf(kind)], 0);
+    return {
+      terms: parsed.terms,
+      partNumbers: parsed.partNumberKeys,
+      total,
+      offset,
+      limit,
+      counts: SEARCH_KINDS.filter((kind) => countByKind.has(kind)).map((kind) => ({ kind, count: countByKind.get(kind) ?? 0 })),
+      results: rows.map((row) => toHit(row, parsed)),
+    };
+  }
+
+  private async memberWorkshopIds(userId: string): Promise<string[]> {
+    const rows = await this.dataSource.query<{ workshopId: string }[]>(
+      'SELECT workshop_id AS workshopId FROM workshop_members WHERE user_id = ?',
+      [userId],
+    );
+    return rows.map((row) => row.workshopId);
+  }
+
+  private async count(kind: KindQuery): Promise<number> {
+    const [row] = await this.dataSource.query<{ n: number | string }[]>(`SELECT COUNT(*) AS n FROM (${kind.sql}) AS hits`, kind.params);
+    return Number(row?.n ?? 0);
+  }
+
+  /** Each kind contributes its best `offset + limit` rows; the union is ordered by score (ties by kind and id, so pages are stable). */
+  private async page(kinds: KindQuery[], offset: number, limit: number): Promise<HitRow[]> {
+    const take = offset + limit;
+    const sql = `${kinds.map((kind) => `(SELECT ${COLUMNS} FROM (${kind.sql}) AS hits ORDER BY score DESC, id LIMIT ${take})`).join(' UNION ALL ')} ORDER BY score DESC, kind, id LIMIT ? OFFSET ?`;
+    return this.dataSource.query<HitRow[]>(sql, [...kinds.flatMap((kind) => kind.params), limit, offset]);
+  }
+
+  private kindQueries(parsed: ParsedSearch, query: SearchQueryDto, memberWorkshopIds: string[]): KindQuery[] {
+    const text = parsed.booleanQuery;
+    const keys = parsed.partNumberKeys;
+    const filters = new Filters(query);
+    const wantPublic = query.state !== 'unpublished';
+    const wantMember = query.state !== 'published' && memberWorkshopIds.length > 0;
+    const kinds: KindQuery[] = [];
+    const members = memberWorkshopIds;
+    const notMember = members.length ? `AND g.workshop_id NOT IN (${members.map(() => '?').join(', ')})` : '';
+    const inMember = (column: string) => `${column} IN (${members.map(() => '?').join(', ')})`;
+
+    // Published guides: the revision's words, joined to a live, enabled workshop by the published revision.
+    const publishedGuide = `FROM guide_revision_search rs
+      JOIN guides g ON g.published_revision_id = rs.revision_id
+      JOIN workshops w ON w.id = g.workshop_id AND w.disabled_at IS NULL
+      JOIN builds b ON b.id = g.build_id`;
+
+    if (wantPublic && text) {
+      const where = filters.sql('w', 'b');
+      kinds.push({
+        kind: 'guide',
+        sql: `SELECT 'guide' AS kind, g.id AS id, MATCH (rs.search_text) AGAINST (? IN BOOLEAN MODE) AS score, 1 AS published,
+            rs.title AS title, rs.search_text AS body, w.id AS workshopId, w.slug AS workshopSlug, w.name AS workshopName,
+            b.vehicle AS vehicle, g.slug AS guideSlug, NULL AS targetId, NULL AS startMs, NULL AS checkState
+          ${publishedGuide}
+          WHERE MATCH (rs.search_text) AGAINST (? IN BOOLEAN MODE) ${where.sql}`,
+        params: [text, text, ...where.params],
+      });
+      kinds.push({
+        kind: 'cue',
+        sql: `SELECT 'cue' AS kind, CONCAT(g.id, ':', c.transcript_id, ':', c.cue_index) AS id, MATCH (c.text) AGAINST (? IN BOOLEAN MODE) AS score,
+            1 AS published, rs.title AS title, c.text AS body, w.id AS workshopId, w.slug AS workshopSlug, w.name AS workshopName,
+            b.vehicle AS vehicle, g.slug AS guideSlug, NULL AS targetId, c.start_ms AS startMs, NULL AS checkState
+          FROM transcript_cues c
+          JOIN transcripts t ON t.id = c.transcript_id AND t.is_active = 1
+          JOIN guide_revision_search rs ON rs.footage_id = t.footage_id
+          JOIN guides g ON g.published_revision_id = rs.revision_id
+          JOIN workshops w ON w.id = g.workshop_id AND w.disabled_at IS NULL
+          JOIN builds b ON b.id = g.build_id
+          WHERE MATCH (c.text) AGAINST (? IN BOOLEAN MODE) ${notMember} ${where.sql}`,
+        params: [text, text, ...members, ...where.params],
+      });
+    }
+    if (wantPublic && (text || keys.length)) {
+      const matched = matchedParts(text, keys, null);
+      const where = filters.sql('w', 'b');
+      kinds.push({
+        kind: 'part',
+        sql: `SELECT 'part' AS kind, CONCAT(g.id, ':', p.id) AS id, m.score AS score, 1 AS published,
+            CONCAT(p.title, ' · ', p.part_number) AS title, CONCAT_WS(' · ', p.maker, rs.title) AS body,
+            w.id AS workshopId, w.slug AS workshopSlug, w.name AS workshopName,
+            b.vehicle AS vehicle, g.slug AS guideSlug, NULL AS targetId, NULL AS startMs, NULL AS checkState
+          FROM (${matched.sql}) m
+          JOIN parts p ON p.id = m.id
+          JOIN assembly_parts ap ON ap.part_id = p.id
+          JOIN guide_revision_search rs ON rs.assembly_id = ap.assembly_id
+          JOIN guides g ON g.published_revision_id = rs.revision_id
+          JOIN workshops w ON w.id = g.workshop_id AND w.disabled_at IS NULL
+          JOIN builds b ON b.id = g.build_id
+          WHERE 1 = 1 ${notMember} ${where.sql}`,
+        params: [...matched.params, ...members, ...where.params],
+      });
+    }
+    if (!wantMember) return kinds;
+
+    const workshopJoin = 'JOIN workshops w ON w.id = x.workshop_id';
+    if (text || keys.length) {
+      const matched = matchedParts(text, keys, members);
+      const where = filters.sql('w', null);
+      const vehicle = filters.partVehicle();
+      kinds.push({
+        kind: 'part',
+        sql: `SELECT 'part' AS kind, x.id AS id, m.score AS score, 0 AS published, CONCAT(x.title, ' · ', x.part_number) AS title,
+            CONCAT_WS(' · ', x.maker, x.notes) AS body, w.id AS workshopId, w.slug AS workshopSlug, w.name AS workshopName,
+            NULL AS vehicle, NULL AS guideSlug, x.id AS targetId, NULL AS startMs, NULL AS checkState
+          FROM (${matched.sql}) m JOIN parts x ON x.id = m.id ${workshopJoin}
+          WHERE 1 = 1 ${where.sql} ${vehicle.sql}`,
+        params: [...matched.params, ...where.params, ...vehicle.params],
+      });
+    }
+    if (!text) return kinds;
+
+    const memberKind = (kind: SearchKind, select: string, from: string, match: string, vehicleBuild: string | null): KindQuery => {
+      const where = filters.sql('w', vehicleBuild);
+      return {
+        kind,
+        sql: `SELECT '${kind}' AS kind, ${select}, MATCH (${match}) AGAINST (? IN BOOLEAN MODE) AS score, 0 AS published,
+            w.id AS workshopId, w.slug AS workshopSlug, w.name AS workshopName
+          ${from} ${workshopJoin}
+          WHERE MATCH (${match}) AGAINST (? IN BOOLEAN MODE) AND ${inMember('x.workshop_id')} ${where.sql}`,
+        params: [text, text, ...members, ...where.params],
+      };
+    };
+    kinds.push(
+      memberKind(
+        'build',
+        "x.id AS id, x.title AS title, CONCAT_WS(' · ', x.vehicle, x.goal) AS body, x.vehicle AS vehicle, NULL AS guideSlug, x.id AS targetId, NULL AS startMs, NULL AS checkState",
+        'FROM builds x JOIN builds b ON b.id = x.id',
+        'x.title, x.vehicle, x.goal',
+        'b',
+      ),
+      memberKind(
+        'footage',
+        "x.id AS id, x.title AS title, b.title AS body, b.vehicle AS vehicle, NULL AS guideSlug, x.id AS targetId, NULL AS startMs, NULL AS checkState",
+        'FROM footage x JOIN builds b ON b.id = x.build_id',
+        'x.title',
+        'b',
+      ),
+      memberKind(
+        'cue',
+        "CONCAT(c.transcript_id, ':', c.cue_index) AS id, f.title AS title, c.text AS body, b.vehicle AS vehicle, NULL AS guideSlug, f.id AS targetId, c.start_ms AS startMs, NULL AS checkState",
+        'FROM transcript_cues c JOIN transcripts x ON x.id = c.transcript_id AND x.is_active = 1 JOIN footage f ON f.id = x.footage_id JOIN builds b ON b.id = f.build_id',
+        'c.text',
+        'b',
+      ),
+      memberKind(
+        'mark',
+        "x.id AS id, f.title AS title, x.label AS body, b.vehicle AS vehicle, NULL AS guideSlug, f.id AS targetId, x.start_ms AS startMs, NULL AS checkState",
+        'FROM marks x JOIN footage f ON f.id = x.footage_id JOIN builds b ON b.id = f.build_id',
+        'x.label',
+        'b',
+      ),
+      memberKind(
+        'fit_check',
+        "x.id AS id, x.title AS title, x.reason AS body, b.vehicle AS vehicle, NULL AS guideSlug, x.assembly_id AS targetId, NULL AS startMs, x.state AS checkState",
+        'FROM fit_checks x JOIN assemblies a ON a.id = x.assembly_id JOIN builds b ON b.id = a.build_id',
+        'x.title, x.reason',
+        'b',
+      ),
+      memberKind(
+        'draft_guide',
+        "x.id AS id, x.title AS title, x.summary AS body, b.vehicle AS vehicle, NULL AS guideSlug, x.id AS targetId, NULL AS startMs, NULL AS checkState",
+        'FROM guides x JOIN builds b ON b.id = x.build_id',
+        'x.title, x.summary',
+        'b',
+      ),
+      memberKind(
+        'draft_guide',
+        "s.id AS id, CONCAT(x.title, ' — ', s.title) AS title, CONCAT_WS(' ', s.body, s.caution_text) AS body, b.vehicle AS vehicle, NULL AS guideSlug, x.id AS targetId, s.start_ms AS startMs, NULL AS checkState",
+        'FROM guide_steps s JOIN guides x ON x.id = s.guide_id JOIN builds b ON b.id = x.build_id',
+        's.title, s.body, s.caution_text',
+        'b',
+      ),
+    );
+    return kinds;
+  }
+}
+
+/** Parts matched by words (FULLTEXT) or by part-number key (exact or prefix), each part once with its best score. */
+function matchedParts(text: string | null, keys: string[], workshopIds: string[] | null): { sql: string; params: unknown[] } {
+  const scope = workshopIds ? `AND workshop_id IN (${workshopIds.map(() => '?').join(', ')})` : '';
+  const scopeParams = workshopIds ?? [];
+  const pieces: string[] = [];
+  const params: unknown[] = [];
+  if (text) {
+    pieces.push(`SELECT id, MATCH (part_number, maker, title, notes) AGAINST (? IN BOOLEAN MODE) AS score FROM parts
+      WHERE MATCH (part_number, maker, title, notes) AGAINST (? IN BOOLEAN MODE) ${scope}`);
+    params.push(text, text, ...scopeParams);
+  }
+  for (const key of keys) {
+    // Keys hold only A-Z and 0-9 (parseSearchQuery), so LIKE needs no escaping; an exact key ranks above a prefix.
+    pieces.push(`SELECT id, IF(part_number_key = ?, ${PART_NUMBER_SCORE + 1}, ${PART_NUMBER_SCORE}) AS score FROM parts WHERE part_number_key LIKE ? ${scope}`);
+    params.push(key, `${key}%`, ...scopeParams);
+  }
+  return { sql: `SELECT id, MAX(score) AS score FROM (${pieces.join(' UNION ALL ')}) AS candidates GROUP BY id`, params };
+}
+
+/** The workshop and vehicle filters as SQL on the aliases a kind uses. */
+class Filters {
+  constructor(private readonly query: SearchQueryDto) {}
+
+  sql(workshopAlias: string, buildAlias: string | null): { sql: string; params: unknown[] } {
+    let sql = '';
+    const params: unknown[] = [];
+    if (this.query.workshop) {
+      sql += ` AND ${workshopAlias}.slug = ?`;
+      params.push(this.query.workshop);
+    }
+    if (this.query.vehicle?.trim()) {
+      if (!buildAlias) return { sql: `${sql} AND 1 = 0`, params };
+      sql += ` AND ${buildAlias}.vehicle LIKE ?`;
+      params.push(likeContaining(this.query.vehicle));
+    }
+    return { sql, params };
+  }
+
+  /** A part belongs to no build itself: it matches a vehicle through the assemblies it is placed in. */
+  partVehicle(): { sql: string; params: unknown[] } {
+    if (!this.query.vehicle?.trim()) return { sql: '', params: [] };
+    return {
+      sql: ` AND EXISTS (SELECT 1 FROM assembly_parts ap JOIN assemblies a ON a.id = ap.assembly_id JOIN builds vb ON vb.id = a.build_id
+        WHERE ap.part_id = x.id AND vb.vehicle LIKE ?)`,
+      params: [likeContaining(this.query.vehicle)],
+    };
+  }
+}
+
+function likeContaining(text: string): string {
+  return `%${text.trim().replace(/[\\%_]/gu, (character) => `\\${character}`)}%`;
+}
+
+function toHit(row: HitRow, parsed: ParsedSearch): SearchHitDto {
+  const startMs = row.startMs === null ? null : Number(row.startMs);
+  const published = Number(row.published) === 1;
+  return {
+    kind: row.kind,
+    id: row.id,
+    published,
+    title: row.title,
+    snippet: highlightSnippet(row.body ?? '', parsed.terms),
+    workshop: { name: row.workshopName, slug: row.workshopSlug },
+    vehicle: row.vehicle || null,
+    startMs,
+    checkState: row.checkState,
+    link: published ? publicLink(row, startMs) : memberLink(row, startMs),
+  };
+}
+
+const seconds = (ms: number) => (ms / 1000).toFixed(1);
+
+function publicLink(row: HitRow, startMs: number | null): string {
+  const path = `/guides/${encodeURIComponent(row.workshopSlug)}/${encodeURIComponent(row.guideSlug ?? '')}`;
+  return startMs === null ? path : `${path}?t=${seconds(startMs)}`;
+}
+
+/** The studio pages (config/paths.ts in the studio): footage opens at ?t= seconds. */
+function memberLink(row: HitRow, startMs: number | null): string {
+  const workshop = `/workshops/${row.workshopId}`;
+  const target = row.targetId ?? '';
+  switch (row.kind) {
+    case 'build':
+      return `${workshop}/builds/${target}`;
+    case 'part':
+      return `${workshop}/parts/${target}`;
+    case 'fit_check':
+      return `${workshop}/assemblies/${target}`;
+    case 'draft_guide':
+      return `${workshop}/guides/${target}`;
+    case 'footage':
+    case 'cue':
+    case 'mark':
+      return `${workshop}/footage/${target}${startMs === null ? '' : `?t=${seconds(startMs)}`}`;
+    default:
+      return workshop;
+  }
+}
+

@@ -1,0 +1,153 @@
+import { NestExpressApplication } from '@nestjs/platform-express';
+import { randomInt } from 'node:crypto';
+import { createTestApp } from './create-test-app';
+import { browserAgent, signUpAndSignIn, type Agent } from './support/accounts';
+import { makeWorkshopFixture, type WorkshopFixture } from './support/workshop-fixture';
+
+jest.setTimeout(180_000);
+
+/** A made-up word no other test writes, so counts are exact even on a database other runs have used. */
+function inventedWord(): string {
+  return Array.from({ length: 10 }, () => String.fromCharCode(97 + randomInt(26))).join('');
+}
+
+interface Hit {
+  kind: string;
+  id: string;
+  published: boolean;
+  title: string;
+  snippet: { text: string; match: boolean }[];
+  workshop: { name: string; slug: string };
+  startMs: number | null;
+  link: string;
+}
+interface Results {
+  terms: string[];
+  total: number;
+  offset: number;
+  limit: number;
+  counts: { kind: string; count: number }[];
+  results: Hit[];
+}
+
+async function search(agent: Agent, query: Record<string, string | number>): Promise<Results> {
+  return (await agent.get('/api/search').query(query).expect(200)).body as Results;
+}
+
+describe('search: published guides for everyone, own workshops for members (real MariaDB)', () => {
+  let app: NestExpressApplication;
+  let shop: WorkshopFixture;
+  let other: WorkshopFixture;
+  let reader: Agent;
+  const stepWord = inventedWord();
+  const cueWord = inventedWord();
+  const draftWord = inventedWord();
+  const pagedWord = inventedWord();
+
+  beforeAll(async () => {
+    app = await createTestApp();
+    [shop, other] = [await makeWorkshopFixture(app, 'searchshop'), await makeWorkshopFixture(app, 'searchother')];
+    reader = await browserAgent(app);
+    const { owner, base, guideId, stepId, footageId, assemblyId } = shop;
+    // The fixture's clip is four seconds long: every cue sits inside it.
+    const at = (ms: number) => `00:00:0${Math.floor(ms / 1000)}.${String(ms % 1000).padStart(3, '0')}`;
+    const cues = [
+      `${at(1000)} --> ${at(1400)}\nThe ${cueWord} coupler slides on <img src=x onerror=alert(1)>`,
+      ...Array.from({ length: 5 }, (_, index) => `${at(1500 + index * 400)} --> ${at(1800 + index * 400)}\nCue ${index} says ${pagedWord}`),
+    ];
+    await owner.agent.put(`${base}/footage/${footageId}/transcript`).send({ text: `WEBVTT\n\n${cues.join('\n\n')}\n` }).expect(200);
+    await owner.agent.patch(`${base}/guides/${guideId}`).send({ assemblyId, summary: 'Bench and truck checks.' }).expect(200);
+    await owner.agent.patch(`${base}/guides/${guideId}/steps/${stepId}`).send({ body: `<p>Press the ${stepWord} bearing home.</p>` }).expect(200);
+    await owner.agent.post(`${base}/guides/${guideId}/revisions`).send({}).expect(201);
+    // After publishing: a draft change the public must not see until it is published.
+    await owner.agent.patch(`${base}/guides/${guideId}/steps/${stepId}`).send({ body: `<p>Press the ${stepWord} bearing home. ${draftWord}</p>` }).expect(200);
+  });
+
+  afterAll(async () => {
+    await app.close();
+  });
+
+  it("finds a published step's words for a signed-out reader, with a highlighted snippet and the guide's link", async () => {
+    const found = await search(reader, { q: stepWord });
+    expect(found.total).toBe(1);
+    const [hit] = found.results;
+    expect(hit).toMatchObject({ kind: 'guide', published: true, link: `/guides/${shop.workshopSlug}/${shop.guideSlug}` });
+    expect(hit.snippet).toContainEqual({ text: stepWord, match: true });
+  });
+
+  it('gives a cue hit its footage time and a link that opens the guide at that moment; the cue text stays text', async () => {
+    const found = await search(reader, { q: `${cueWord} coupler` });
+    expect(found.results).toHaveLength(1);
+    const [hit] = found.results;
+    expect(hit).toMatchObject({ kind: 'cue', startMs: 1000, link: `/guides/${shop.workshopSlug}/${shop.guideSlug}?t=1.0` });
+    expect(hit.snippet.some((segment) => segment.text.includes('<'))).toBe(false);
+  });
+
+  it('finds a part of a published guide by its part number, hyphens or not, exactly or by prefix', async () => {
+    const partNumber = 'SEARCHSHOP-1'; // the fixture's part number is the label upper-cased with "-1"
+    for (const q of [partNumber, 'searchshop1', 'SEARCHSHOP']) {
+      const found = await search(reader, { q, kind: 'part' });
+      expect(found.results.map((hit) => hit.title)).toContain(`Pilot bearing and shaft · ${partNumber}`);
+      expect(found.results.every((hit) => hit.published)).toBe(true);
+    }
+  });
+
+  it('pages cue hits with a total, disjoint pages and the whole set across them', async () => {
+    const first = await search(reader, { q: pagedWord, limit: 2 });
+    const second = await search(reader, { q: pagedWord, limit: 2, offset: 2 });
+    const third = await search(reader, { q: pagedWord, limit: 2, offset: 4 });
+    expect(first.total).toBe(5);
+    expect(first.counts).toContainEqual({ kind: 'cue', count: 5 });
+    const ids = [...first.results, ...second.results, ...third.results].map((hit) => hit.id);
+    expect(ids).toHaveLength(5);
+    expect(new Set(ids).size).toBe(5);
+  });
+
+  it('never shows draft guide text to the public; the workshop member finds it as a draft', async () => {
+    expect((await search(reader, { q: draftWord })).total).toBe(0);
+    const stranger = await signUpAndSignIn(app);
+    expect((await search(stranger.agent, { q: draftWord })).total).toBe(0);
+    const own = await search(shop.owner.agent, { q: draftWord });
+    expect(own.results).toHaveLength(1);
+    expect(own.results[0]).toMatchObject({ kind: 'draft_guide', published: false, link: `/workshops/${shop.workshopId}/guides/${shop.guideId}` });
+  });
+
+  it("never shows another workshop's unpublished parts, footage or marks; their members see them", async () => {
+    // The other fixture's guide names no assembly: its part is in no published guide.
+    const partNumber = 'SEARCHOTHER-1';
+    // (Its published guide's title, "searchother guide", is public; the part is not.)
+    expect((await search(reader, { q: partNumber, kind: 'part' })).total).toBe(0);
+    expect((await search(shop.owner.agent, { q: partNumber, kind: 'part' })).total).toBe(0);
+    const own = await search(other.owner.agent, { q: partNumber, kind: 'part' });
+    expect(own.results).toHaveLength(1);
+    expect(own.results[0]).toMatchObject({ published: false, link: `/workshops/${other.workshopId}/parts/${other.partId}` });
+    // The fixture's check title ("searchother check") is a fit check only members see.
+    expect((await search(reader, { q: 'searchother check', kind: 'fit_check' })).total).toBe(0);
+    expect((await search(other.owner.agent, { q: 'searchother check', kind: 'fit_check' })).total).toBeGreaterThanOrEqual(1);
+  });
+
+  it('filters by workshop, state and vehicle', async () => {
+    expect((await search(reader, { q: stepWord, workshop: other.workshopSlug })).total).toBe(0);
+    expect((await search(reader, { q: stepWord, workshop: shop.workshopSlug })).total).toBe(1);
+    expect((await search(shop.owner.agent, { q: draftWord, state: 'published' })).total).toBe(0);
+    expect((await search(shop.owner.agent, { q: stepWord, state: 'unpublished', kind: 'guide' })).total).toBe(0);
+    // The fixture's build has no vehicle: any vehicle filter leaves it out.
+    expect((await search(reader, { q: stepWord, vehicle: 'pickup' })).total).toBe(0);
+  });
+
+  it('refuses a query with nothing to search and out-of-range paging, naming the field', async () => {
+    const empty = await reader.get('/api/search').query({ q: 'the an' }).expect(400);
+    expect(empty.body.message).toMatch(/^q:/u);
+    const tooMany = await reader.get('/api/search').query({ q: stepWord, limit: 500 }).expect(400);
+    expect(JSON.stringify(tooMany.body)).toMatch(/limit/u);
+    const badKind = await reader.get('/api/search').query({ q: stepWord, kind: 'everything' }).expect(400);
+    expect(JSON.stringify(badKind.body)).toMatch(/kind/u);
+  });
+
+  it('drops a withdrawn guide from every public kind at once', async () => {
+    await shop.owner.agent.delete(`${shop.base}/guides/${shop.guideId}/publication`).expect(204);
+    expect((await search(reader, { q: stepWord })).total).toBe(0);
+    expect((await search(reader, { q: cueWord })).total).toBe(0);
+    expect((await search(reader, { q: 'SEARCHSHOP-1', workshop: shop.workshopSlug })).total).toBe(0);
+  });
+});
