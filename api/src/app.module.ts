@@ -15,6 +15,7 @@ import { AssembliesModule } from './assemblies/assemblies.module';
 import { BuildsModule } from './builds/builds.module';
 import { FitChecksModule } from './fit-checks/fit-checks.module';
 import { FitReportsModule } from './fit-reports/fit-reports.module';
+import { FitFinderModule } from './fit-finder/fit-finder.module';
 import { FollowsModule } from './follows/follows.module';
 import { FootageModule } from './footage/footage.module';
 import { GuidesModule } from './guides/guides.module';
@@ -55,6 +56,7 @@ import { TranscriptsModule } from './transcripts/transcripts.module';
     GuidesModule,
     FollowsModule,
     FitReportsModule,
+    FitFinderModule,
     SearchModule,
   ],
 })

@@ -21,6 +21,8 @@ export interface SplineFeatureInput {
   diametralPitch?: number;
   stubPitch?: number;
   module?: number;
+  /** Degrees; compared when both sides record it. */
+  pressureAngle?: number;
 }
 
 export interface DiameterFeatureInput {
@@ -90,8 +92,8 @@ function splinePitch(feature: SplineFeatureInput): SplinePitch | null {
 
 function evaluateSpline(first: SplineFeatureInput, second: SplineFeatureInput): InterfaceVerdict {
   const result = checkSplinePair(
-    { name: first.name, teeth: first.teeth, kind: first.gender, pitch: splinePitch(first) },
-    { name: second.name, teeth: second.teeth, kind: second.gender, pitch: splinePitch(second) },
+    { name: first.name, teeth: first.teeth, kind: first.gender, pitch: splinePitch(first), pressureAngleDeg: first.pressureAngle ?? null },
+    { name: second.name, teeth: second.teeth, kind: second.gender, pitch: splinePitch(second), pressureAngleDeg: second.pressureAngle ?? null },
   );
   const outcome: CheckOutcome = result.status === 'match' ? 'pass' : result.status === 'no_match' ? 'fail' : 'unknown';
   return {

@@ -26,6 +26,9 @@ export function toFeatureSpec(input: FeatureInputDto): FeatureSpec {
       if (input.diametralPitch !== undefined) spec.diametralPitch = input.diametralPitch;
       if (input.stubPitch !== undefined) spec.stubPitch = input.stubPitch;
       if (input.module !== undefined) spec.module = input.module;
+      if (input.pressureAngle !== undefined) spec.pressureAngle = input.pressureAngle;
+      if (input.splineFit !== undefined) spec.fit = input.splineFit;
+      if (input.splineClass !== undefined) spec.toleranceClass = input.splineClass;
       const major = length('majorDiameter');
       if (major !== undefined) spec.majorDiameterNm = major;
       return spec;
@@ -80,6 +83,12 @@ export function describeFeatureSpec(kind: FeatureKind, spec: FeatureSpec, unit: 
     } else if (spline.module !== undefined) {
       shown.pitch = `module ${spline.module}`;
     }
+    // The standard follows from the pitch system: diametral pitch is ANSI B92.1, module ISO 4156.
+    if (spline.diametralPitch !== undefined) shown.standard = 'ANSI B92.1';
+    else if (spline.module !== undefined) shown.standard = 'ISO 4156';
+    if (spline.pressureAngle !== undefined) shown.pressureAngle = `${spline.pressureAngle}°`;
+    if (spline.fit !== undefined) shown.fit = spline.fit === 'side' ? 'side fit' : 'major-diameter fit';
+    if (spline.toleranceClass !== undefined) shown.toleranceClass = `class ${spline.toleranceClass}`;
   }
   return shown;
 }

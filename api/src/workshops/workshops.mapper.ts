@@ -17,6 +17,7 @@ export function toWorkshopView(
     description: workshop.description,
     logoUrl,
     disabled: workshop.disabledAt !== null,
+    showMemberNames: workshop.showMemberNames,
     role,
     createdAt: workshop.createdAt.toISOString(),
   };

@@ -88,6 +88,7 @@ export class WorkshopsService {
     if (dto.name !== undefined) workshop.name = dto.name;
     if (dto.slug !== undefined) workshop.slug = dto.slug;
     if (dto.description !== undefined) workshop.description = dto.description;
+    if (dto.showMemberNames !== undefined) workshop.showMemberNames = dto.showMemberNames;
     try {
       await this.workshops.save(workshop);
     } catch (error) {

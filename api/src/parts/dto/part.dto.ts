@@ -18,7 +18,8 @@ import {
   ValidateNested,
 } from 'class-validator';
 import { LENGTH_UNITS, type LengthUnit } from '../../engine/units';
-import { FEATURE_KINDS, type FeatureKind } from '../entities/part-feature.entity';
+import { SPLINE_PRESSURE_ANGLES, type SplineFit, type SplinePressureAngle } from '../../engine/splines';
+import { FEATURE_KINDS, SPLINE_TOLERANCE_CLASSES, type FeatureKind, type SplineToleranceClass } from '../entities/part-feature.entity';
 import { PART_CATEGORIES, PART_SOURCES, type PartCategory, type PartSource } from '../entities/part.entity';
 import { NumberFromText } from '../../common/decorators/number-from-text.decorator';
 
@@ -28,7 +29,7 @@ const DECIMAL_MESSAGE = (field: string) => `${field} must be a number such as 25
 
 /**
  * One typed attribute of a part. The fields that apply depend on `kind`:
- * spline (teeth, gender, diametralPitch/stubPitch or module, majorDiameter), diameter (role, nominal,
+ * spline (teeth, gender, diametralPitch/stubPitch or module, pressureAngle, splineFit, splineClass, majorDiameter), diameter (role, nominal,
  * toleranceClass or max/min), length (length, compressed, extended), free (value, freeUnit).
  */
 export class FeatureInputDto {
@@ -78,6 +79,21 @@ export class FeatureInputDto {
   @IsPositive()
   @Max(1000)
   module?: number;
+
+  @ApiPropertyOptional({ enum: SPLINE_PRESSURE_ANGLES, example: 30, description: 'spline pressure angle, degrees' })
+  @IsOptional()
+  @IsIn(SPLINE_PRESSURE_ANGLES, { message: 'pressureAngle must be 30, 37.5 or 45' })
+  pressureAngle?: SplinePressureAngle;
+
+  @ApiPropertyOptional({ enum: ['side', 'major'], description: 'spline fit: side fit or major-diameter fit' })
+  @IsOptional()
+  @IsIn(['side', 'major'], { message: 'splineFit must be side or major' })
+  splineFit?: SplineFit;
+
+  @ApiPropertyOptional({ enum: SPLINE_TOLERANCE_CLASSES, description: 'spline tolerance class (ANSI B92.1 / ISO 4156)' })
+  @IsOptional()
+  @IsIn(SPLINE_TOLERANCE_CLASSES, { message: 'splineClass must be 4, 5, 6 or 7' })
+  splineClass?: SplineToleranceClass;
 
   @ApiPropertyOptional({ example: '1.375' })
   @IsOptional()

@@ -1,7 +1,11 @@
 import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryColumn } from 'typeorm';
 import { CreatedAtColumn, newId, UpdatedAtColumn } from '../../common/database/columns';
+import type { SplineFit, SplinePressureAngle } from '../../engine/splines';
 import type { LengthUnit } from '../../engine/units';
 import { Part } from './part.entity';
+
+export const SPLINE_TOLERANCE_CLASSES = [4, 5, 6, 7] as const;
+export type SplineToleranceClass = (typeof SPLINE_TOLERANCE_CLASSES)[number];
 
 export const FEATURE_KINDS = ['spline', 'diameter', 'length', 'free'] as const;
 export type FeatureKind = (typeof FEATURE_KINDS)[number];
@@ -16,6 +20,12 @@ export interface SplineSpec {
   stubPitch?: number;
   /** Module m in millimetres. */
   module?: number;
+  /** Pressure angle in degrees: 30, 37.5 or 45 in both standards. */
+  pressureAngle?: SplinePressureAngle;
+  /** Side fit or major-diameter fit (ANSI B92.1; ISO 4156 splines here are side fit). */
+  fit?: SplineFit;
+  /** Tolerance class 4, 5, 6 or 7 (ANSI B92.1 and ISO 4156 use the same numbers). */
+  toleranceClass?: SplineToleranceClass;
   majorDiameterNm?: number;
 }
 

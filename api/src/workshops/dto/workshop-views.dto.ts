@@ -9,6 +9,7 @@ export class WorkshopView {
   @ApiProperty({ nullable: true, type: String, description: 'A time-limited link to the logo image' })
   logoUrl!: string | null;
   @ApiProperty({ description: 'Disabled by a site admin: readable, not changeable' }) disabled!: boolean;
+  @ApiProperty({ description: 'Members’ names may appear on public pages (who confirmed a fit)' }) showMemberNames!: boolean;
   @ApiProperty({ enum: [...MEMBER_ROLES, 'admin'], nullable: true, description: "The caller's role" })
   role!: MemberRole | 'admin' | null;
   @ApiProperty() createdAt!: string;

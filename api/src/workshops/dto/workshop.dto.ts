@@ -1,6 +1,6 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Transform } from 'class-transformer';
-import { IsNotIn, IsOptional, IsString, Length, Matches, MaxLength } from 'class-validator';
+import { IsBoolean, IsNotIn, IsOptional, IsString, Length, Matches, MaxLength } from 'class-validator';
 
 const trim = ({ value }: { value: unknown }) => (typeof value === 'string' ? value.trim() : value);
 const slugify = ({ value }: { value: unknown }) => (typeof value === 'string' ? value.trim().toLowerCase() : value);
@@ -60,6 +60,11 @@ export class UpdateWorkshopDto {
   @IsString()
   @MaxLength(500, { message: 'Description must be at most 500 characters' })
   description?: string;
+
+  @ApiPropertyOptional({ description: 'Show members’ names on public pages (who confirmed a fit); off by default' })
+  @IsOptional()
+  @IsBoolean({ message: 'showMemberNames must be true or false' })
+  showMemberNames?: boolean;
 }
 
 export class DeleteWorkshopDto {

@@ -21,6 +21,10 @@ export class Workshop {
   @Column({ name: 'logo_key', type: 'varchar', length: 255, nullable: true })
   logoKey!: string | null;
 
+  /** Whether members' names may appear on public pages (who confirmed a fit); off unless the workshop turns it on. */
+  @Column({ name: 'show_member_names', type: 'boolean', default: false })
+  showMemberNames!: boolean;
+
   /** Set by a site admin; members can still read, nobody can change anything. */
   @Column({ name: 'disabled_at', type: 'datetime', precision: 3, nullable: true })
   disabledAt!: Date | null;
