@@ -20,6 +20,15 @@ export function useDeleteFootage(workshopId: string) {
   });
 }
 
+/** Makes the web renditions again after a failure (owners and editors; re-running replaces partial outputs). */
+export function useRetryRenditions(workshopId: string, footageId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: () => apiRequest<Footage>(`/workshops/${workshopId}/footage/${footageId}/renditions/retry`, { method: 'POST' }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: footageQueries.all() }),
+  });
+}
+
 export type TranscriptInput =
   | { kind: 'paste'; text: string; format: TranscriptFormat | 'auto' }
   | { kind: 'file'; file: File; format: TranscriptFormat | 'auto' };

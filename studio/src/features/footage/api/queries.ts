@@ -2,9 +2,10 @@ import { infiniteQueryOptions, queryOptions } from '@tanstack/react-query';
 import { ApiError, apiRequest } from '@/lib/api-client';
 import type { CueMatch, Footage, FootageLimits, Playback, SearchResults, Transcript, TranscriptRevision, WorkshopCueMatch } from './types';
 
-/** While footage is being processed the studio asks every two seconds; otherwise it does not poll. */
+/** While footage is being processed (or its web renditions made) the studio asks every two seconds; otherwise it does not poll. */
 const LIVE_STATE_POLL_MS = 2_000;
-const isSettling = (footage: Footage) => footage.state === 'processing';
+const isSettling = (footage: Footage) =>
+  footage.state === 'processing' || footage.renditions?.state === 'waiting' || footage.renditions?.state === 'processing';
 
 export const footageQueries = {
   all: () => ['footage'] as const,
@@ -27,10 +28,13 @@ export const footageQueries = {
       queryFn: ({ signal }) => apiRequest<FootageLimits>(`/workshops/${workshopId}/footage-limits`, { signal }),
       staleTime: Infinity,
     }),
-  /** The link is valid for an hour; keep it while the page is open so the player is not reloaded under the viewer. */
-  playback: (workshopId: string, footageId: string) =>
+  /**
+   * The link is valid for an hour; keep it while the page is open so the player is not reloaded under the viewer.
+   * `renditionsState` is part of the key: once the renditions are ready the answer gains the HLS master.
+   */
+  playback: (workshopId: string, footageId: string, renditionsState?: string) =>
     queryOptions({
-      queryKey: [...footageQueries.all(), 'playback', workshopId, footageId] as const,
+      queryKey: [...footageQueries.all(), 'playback', workshopId, footageId, renditionsState ?? null] as const,
       queryFn: ({ signal }) => apiRequest<Playback>(`/workshops/${workshopId}/footage/${footageId}/playback`, { signal }),
       staleTime: Infinity,
       gcTime: 0,

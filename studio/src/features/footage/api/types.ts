@@ -2,6 +2,16 @@
 
 export type FootageState = 'uploading' | 'processing' | 'ready' | 'failed';
 
+/** The web renditions (HLS and MP4) made after probing; the footage is usable meanwhile. */
+export interface Renditions {
+  state: 'waiting' | 'processing' | 'ready' | 'failed';
+  /** 0..100 while processing, 100 when ready. */
+  percent: number | null;
+  secondsLeft: number | null;
+  /** Plain words when failed (the original is kept). */
+  reason: string | null;
+}
+
 export interface Footage {
   id: string;
   workshopId: string;
@@ -20,6 +30,11 @@ export interface Footage {
   videoCodec: string | null;
   audioCodec: string | null;
   posterUrl: string | null;
+  /** Absent from an API without the media pipeline. */
+  renditions?: Renditions;
+  /** The picture as shown, after rotation (a portrait phone clip stays portrait). */
+  displayWidth?: number | null;
+  displayHeight?: number | null;
   upload: { partCount: number; completedPartCount: number; uploadedBytes: number } | null;
   transcript: { revision: number; cueCount: number } | null;
   createdAt: string;
@@ -42,9 +57,16 @@ export interface FootageLimits {
 }
 
 export interface Playback {
+  /** The best progressive file: the MP4 rendition once ready, else the original (short-lived link). */
   url: string;
   expiresAt: string;
   contentType: string;
+  /** Same-origin API paths, null until the renditions are ready (absent from an API without the media pipeline). */
+  hlsUrl?: string | null;
+  thumbnailsUrl?: string | null;
+  waveformUrl?: string | null;
+  displayWidth?: number | null;
+  displayHeight?: number | null;
 }
 
 export type TranscriptFormat = 'webvtt' | 'srt' | 'timestamped';

@@ -9,6 +9,7 @@ import type { Footage } from '../api/types';
 import { FootageStateBadge } from './footage-state-badge';
 import { formatClock } from '@/lib/clock';
 import { formatBytes } from './format';
+import { RenditionsStatus } from './renditions-status';
 
 export interface FootageCardProps {
   footage: Footage;
@@ -84,6 +85,7 @@ export function FootageCard({ footage, uploadingHere, onResume }: FootageCardPro
           {footage.frameRate ? ` · ${footage.frameRate} fps` : ''}
           {footage.transcript ? ` · transcript, ${footage.transcript.cueCount} cues` : ''}
         </Text>
+        <RenditionsStatus footage={footage} compact />
         {footage.state === 'failed' && footage.failureReason && (
           <Text size="sm" c="red">
             {footage.failureReason}

@@ -1,6 +1,6 @@
 import { Alert, Anchor, Badge, Breadcrumbs, Grid, Group, Skeleton, Stack, Text, Title } from '@mantine/core';
 import { useQuery } from '@tanstack/react-query';
-import { useRef, useState, type ComponentType } from 'react';
+import type { ComponentType } from 'react';
 import { Link } from 'react-router-dom';
 import { paths } from '@/config/paths';
 import { captionsUrl, footageQueries, transcriptQueries } from '../api/queries';
@@ -8,8 +8,11 @@ import type { Footage } from '../api/types';
 import { FootageStateBadge } from './footage-state-badge';
 import { formatClock } from '@/lib/clock';
 import { formatBytes } from './format';
+import { RenditionsStatus } from './renditions-status';
 import { TranscriptPane } from './transcript-pane';
-import { useRenewingVideoLink } from '@/lib/use-renewing-video-link';
+import { FootagePlayer } from '@/components/footage-player/footage-player';
+import { useFootagePlayer } from '@/components/footage-player/use-footage-player';
+import { usePlaybackMs, type PlaybackClock } from '@/lib/playback-clock';
 
 export interface FootagePlayerPageProps {
   workshopId: string;
@@ -23,11 +26,18 @@ export interface FootagePlayerPageProps {
 /** The player as other tools see it: where it is, how long the footage is, and how to move it. */
 export interface FootagePlayerHandle {
   currentMs: number;
+  /** The same time as a subscription, for a part that should re-render alone on each tick. */
+  clock: PlaybackClock;
   durationMs: number | null;
   readPositionMs: () => number;
   seek: (ms: number) => void;
   pause: () => void;
+  /** Scrub previews (WebVTT thumbnails) and the audio's peaks, once the pipeline has made them. */
+  media: { thumbnailsUrl: string | null; waveformUrl: string | null };
 }
+
+/** Under the marking tools the picture stays short enough that the controls below are in view. */
+const PLAYER_MAX_HEIGHT = 'max(12rem, calc(100dvh - 30rem))';
 
 function describe(footage: Footage): string {
   const parts = [
@@ -45,30 +55,12 @@ function describe(footage: Footage): string {
 export function FootagePlayerPage({ workshopId, footageId, startAtMs, workspace: Workspace }: FootagePlayerPageProps) {
   const footage = useQuery(footageQueries.detail(workshopId, footageId));
   const ready = footage.data?.state === 'ready';
-  const playback = useQuery({ ...footageQueries.playback(workshopId, footageId), enabled: ready });
+  const playback = useQuery({ ...footageQueries.playback(workshopId, footageId, footage.data?.renditions?.state), enabled: ready });
   const transcript = useQuery({ ...transcriptQueries.active(workshopId, footageId), enabled: ready });
   const limits = useQuery(footageQueries.limits(workshopId));
-  const video = useRef<HTMLVideoElement>(null);
-  const [currentMs, setCurrentMs] = useState(0);
-
-  const seek = (ms: number) => {
-    const element = video.current;
-    if (!element) return;
-    element.currentTime = ms / 1000;
-    setCurrentMs(ms);
-    element.play().catch(() => {
-      // Autoplay may be refused until the viewer interacts; the position is set either way.
-    });
-  };
-
-  const readPositionMs = () => (video.current ? video.current.currentTime * 1000 : currentMs);
-  const pause = () => video.current?.pause();
-
-  const { videoError, onLoadedMetadata, onError } = useRenewingVideoLink(playback, {
-    cannotPlay: 'This browser cannot play the video. Download it, or convert it to H.264 MP4 or VP9 WebM.',
-    startAtMs,
-    onResumed: setCurrentMs,
-  });
+  const player = useFootagePlayer();
+  const currentMs = usePlaybackMs(player.clock);
+  const seek = (ms: number) => player.seek(ms, { play: true });
 
   if (footage.isPending) return <Skeleton height={420} />;
   if (footage.isError) return <Alert color="red" title="Footage not found">{footage.error.message}</Alert>;
@@ -100,41 +92,31 @@ export function FootagePlayerPage({ workshopId, footageId, startAtMs, workspace:
               : 'The upload has not finished. Go back to the build to resume it.'}
         </Alert>
       )}
+      {ready && <RenditionsStatus footage={item} />}
       {ready && (
         <Grid gap="md">
           <Grid.Col span={{ base: 12, md: 8 }}>
             {playback.isError && <Alert color="red" title="The video cannot be played">{playback.error.message}</Alert>}
-            {videoError && (
-              <Alert color="red" title="The video cannot be played" mb="xs">
-                {videoError}
-              </Alert>
-            )}
             {playback.data ? (
-              <video
-                ref={video}
-                key={playback.data.url}
-                src={playback.data.url}
-                poster={item.posterUrl ?? undefined}
-                controls
-                preload="metadata"
-                playsInline
-                onTimeUpdate={(event) => setCurrentMs(event.currentTarget.currentTime * 1000)}
-                onSeeked={(event) => setCurrentMs(event.currentTarget.currentTime * 1000)}
-                onLoadedMetadata={onLoadedMetadata}
-                onError={onError}
-                data-testid="footage-video"
-                style={{ width: '100%', aspectRatio: item.width && item.height ? `${item.width} / ${item.height}` : '16 / 9', background: '#000', borderRadius: 8 }}
-              >
-                {transcript.data && (
-                  <track
-                    kind="captions"
-                    srcLang="en"
-                    label={`Transcript (revision ${transcript.data.revision})`}
-                    src={captionsUrl(workshopId, footageId, transcript.data.revision)}
-                    default
-                  />
-                )}
-              </video>
+              <FootagePlayer
+                control={player}
+                sources={{ hlsUrl: playback.data.hlsUrl ?? null, fileUrl: playback.data.url }}
+                fileLinkExpiresAt={playback.data.expiresAt}
+                onRenewFileLink={() => void playback.refetch()}
+                posterUrl={item.posterUrl}
+                captions={
+                  transcript.data
+                    ? { src: captionsUrl(workshopId, footageId, transcript.data.revision), label: `Transcript (revision ${transcript.data.revision})` }
+                    : null
+                }
+                label={`Video: ${item.title}`}
+                displayWidth={playback.data.displayWidth ?? item.displayWidth ?? item.width}
+                displayHeight={playback.data.displayHeight ?? item.displayHeight ?? item.height}
+                maxHeight={Workspace ? PLAYER_MAX_HEIGHT : undefined}
+                startAtMs={startAtMs}
+                cannotPlayMessage="This browser cannot play the video. Download it, or convert it to H.264 MP4 or VP9 WebM."
+                testId="footage-video"
+              />
             ) : (
               <Skeleton height={360} />
             )}
@@ -152,7 +134,15 @@ export function FootagePlayerPage({ workshopId, footageId, startAtMs, workspace:
               <Workspace
                 workshopId={workshopId}
                 footageId={footageId}
-                player={{ currentMs, durationMs: item.durationMs, readPositionMs, seek, pause }}
+                player={{
+                  currentMs,
+                  clock: player.clock,
+                  durationMs: item.durationMs,
+                  readPositionMs: player.readPositionMs,
+                  seek,
+                  pause: player.pause,
+                  media: { thumbnailsUrl: playback.data?.thumbnailsUrl ?? null, waveformUrl: playback.data?.waveformUrl ?? null },
+                }}
               />
             )}
           </Grid.Col>

@@ -99,14 +99,7 @@ export function GuideDocument({ data, followSlot, reportSlot }: { data: Publishe
         {footage && (
           // On a phone this area stays at the top while the page scrolls, with the playing step under the video.
           <div className={classes.areaVideo} data-testid="guide-player">
-            <GuideVideo
-              footage={footage}
-              videoRef={player.videoRef}
-              currentMs={player.currentMs}
-              failed={player.failed}
-              onRetry={player.retry}
-              events={player.videoEvents}
-            />
+            <GuideVideo footage={footage} player={player} />
             <NowPlaying step={data.steps.find((step) => step.id === playing) ?? null} stepCount={data.steps.length} />
           </div>
         )}

@@ -1,55 +1,49 @@
-import { Alert, Button, Group, Text } from '@mantine/core';
-import type { RefObject, SyntheticEvent } from 'react';
+import { Text } from '@mantine/core';
 import type { GuideFootage } from '../api/types';
-import classes from './guide-view.module.css';
+import type { GuidePlayer } from '../hooks/use-guide-player';
+import { FootagePlayer } from '@/components/footage-player/footage-player';
+import type { FootagePlayerControl } from '@/components/footage-player/use-footage-player';
 import { formatClock } from '@/lib/clock';
+import { usePlaybackMs } from '@/lib/playback-clock';
 
 export interface GuideVideoProps {
   footage: GuideFootage;
-  videoRef: RefObject<HTMLVideoElement | null>;
-  currentMs: number;
-  failed: boolean;
-  onRetry: () => void;
-  events: {
-    onTimeUpdate: (event: SyntheticEvent<HTMLVideoElement>) => void;
-    onSeeked: (event: SyntheticEvent<HTMLVideoElement>) => void;
-    onLoadedMetadata: (event: SyntheticEvent<HTMLVideoElement>) => void;
-    onError: () => void;
-  };
+  player: GuidePlayer;
 }
 
-/** The guide's video with its transcript as captions (on by default). */
-export function GuideVideo({ footage, videoRef, currentMs, failed, onRetry, events }: GuideVideoProps) {
+/** The line under the video: re-renders alone as the video plays. */
+function VideoPosition({ control, footage }: { control: FootagePlayerControl; footage: GuideFootage }) {
+  const currentMs = usePlaybackMs(control.clock);
   return (
-    <div className={classes.videoArea}>
-      {failed && (
-        <Alert color="red" title="The video did not load" mb="xs">
-          <Group justify="space-between" gap="xs">
-            <Text size="sm">The connection may have dropped, or this browser cannot play the video.</Text>
-            <Button size="xs" variant="default" onClick={onRetry}>
-              Try again
-            </Button>
-          </Group>
-        </Alert>
-      )}
-      <video
-        ref={videoRef}
-        src={footage.videoUrl}
-        poster={footage.posterUrl ?? undefined}
-        controls
-        preload="metadata"
-        playsInline
-        className={classes.video}
-        aria-label={`Video: ${footage.title}`}
-        data-testid="guide-video"
-        {...events}
-      >
-        {footage.captionsUrl && <track kind="captions" srcLang="en" label="English captions" src={footage.captionsUrl} default />}
-      </video>
-      <Text size="xs" c="dimmed" mt={4} data-testid="video-position">
-        {formatClock(currentMs)}
-        {footage.durationMs !== null ? ` of ${formatClock(footage.durationMs)}` : ''} · {footage.title}
-      </Text>
+    <Text size="xs" c="dimmed" mt={4} data-testid="video-position">
+      {formatClock(currentMs)}
+      {footage.durationMs !== null ? ` of ${formatClock(footage.durationMs)}` : ''} · {footage.title}
+    </Text>
+  );
+}
+
+/**
+ * The guide's video with its transcript as captions (on by default): the HLS renditions where there are
+ * some, else the file (its address redirects to a short-lived storage link, so "Try again" gets a fresh one),
+ * and a seek bar with scrub previews. The layout may bound its height with `--guide-video-max-height`.
+ */
+export function GuideVideo({ footage, player }: GuideVideoProps) {
+  return (
+    <div>
+      <FootagePlayer
+        control={player.control}
+        sources={{ hlsUrl: footage.hlsUrl ?? null, fileUrl: footage.mp4Url ?? footage.videoUrl }}
+        posterUrl={footage.posterUrl}
+        captions={footage.captionsUrl ? { src: footage.captionsUrl, label: 'English captions' } : null}
+        label={`Video: ${footage.title}`}
+        displayWidth={footage.displayWidth}
+        displayHeight={footage.displayHeight}
+        maxHeight="var(--guide-video-max-height, calc(100dvh - 56px - 4rem))"
+        cannotPlayMessage="The connection may have dropped, or this browser cannot play the video."
+        scrubBar={footage.durationMs !== null ? { durationMs: footage.durationMs, thumbnailsUrl: footage.thumbnailsUrl ?? null } : undefined}
+        testId="guide-video"
+      />
+      <VideoPosition control={player.control} footage={footage} />
     </div>
   );
 }

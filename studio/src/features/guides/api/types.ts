@@ -120,4 +120,8 @@ export interface AssemblyChoice {
 export interface Playback {
   url: string;
   expiresAt: string;
+  /** The HLS master (same-origin API path), null until the web renditions are ready; absent from an older API. */
+  hlsUrl?: string | null;
+  displayWidth?: number | null;
+  displayHeight?: number | null;
 }

@@ -11,7 +11,7 @@ import { StepPlayer, useStepPlayer } from './step-player';
 export function StepsSection({ workshopId, guide }: { workshopId: string; guide: Guide }) {
   const footage = useQuery({ ...guideQueries.footageChoices(workshopId, guide.buildId), enabled: guide.footageId !== null });
   const mainFootage = footage.data?.find((item) => item.id === guide.footageId) ?? null;
-  const { videoRef, currentMs, setCurrentMs, readPositionMs, seek } = useStepPlayer();
+  const player = useStepPlayer();
   const playable = mainFootage?.state === 'ready';
   // 'new' while adding a step, a step's id while changing it.
   const [editing, setEditing] = useState<string | null>(null);
@@ -25,7 +25,7 @@ export function StepsSection({ workshopId, guide }: { workshopId: string; guide:
         guideId={guide.id}
         step={editingStep}
         mainFootage={mainFootage}
-        readPositionMs={playable ? readPositionMs : null}
+        readPositionMs={playable ? player.readPositionMs : null}
         onDone={() => setEditing(null)}
       />
     );
@@ -46,7 +46,7 @@ export function StepsSection({ workshopId, guide }: { workshopId: string; guide:
               guideId={guide.id}
               steps={guide.steps}
               mainFootageId={guide.footageId}
-              onSeek={playable ? seek : undefined}
+              onSeek={playable ? player.seek : undefined}
               onEdit={(step) => setEditing(step.id)}
               editingStepId={editing}
               editor={form}
@@ -62,7 +62,7 @@ export function StepsSection({ workshopId, guide }: { workshopId: string; guide:
           <Grid.Col span={{ base: 12, md: 5 }}>
             {/* Stays in view while the steps scroll, so a moment can be found for any of them. */}
             <div style={{ position: 'sticky', top: 'calc(var(--app-shell-header-height, 60px) + var(--mantine-spacing-md))' }}>
-              <StepPlayer workshopId={workshopId} footage={mainFootage} videoRef={videoRef} currentMs={currentMs} onTimeChange={setCurrentMs} />
+              <StepPlayer workshopId={workshopId} footage={mainFootage} control={player} />
             </div>
           </Grid.Col>
         )}
