@@ -40,6 +40,7 @@ step "dependency audit: its own tests" node --test scripts/audit.test.mjs
 step "dependency audit (npm audit; continues when the advisory service does not answer)" node scripts/audit.mjs
 step "api tests (unit + e2e on real services)" npm test -w api --silent
 step "studio component tests" npm test -w studio --silent
+step "viewer bundle budget (public routes: JS ≤ 250 KB gz, CSS ≤ 40 KB gz, no editor code)" node --test studio/scripts/viewer-budget.test.mjs
 # Its own profile ("faults"): it starts, stops and kills its own MariaDB, Redis and API processes, never these.
 step "fault tests (MariaDB and Redis restarted, API killed mid-job)" bash scripts/faults.sh
 

@@ -24,6 +24,8 @@ export default defineConfig({
   build: {
     outDir: 'dist',
     sourcemap: true,
+    // dist/.vite/manifest.json: which chunks each route loads, read by the viewer budget test and bench/bundle.
+    manifest: true,
     chunkSizeWarningLimit: 700,
   },
   test: {

@@ -1,9 +1,12 @@
-import { Button, Group, Modal, Text } from '@mantine/core';
+import { Button, Group, Loader, Modal, Text } from '@mantine/core';
 import { useDisclosure } from '@mantine/hooks';
+import { lazy, Suspense } from 'react';
 import { Link, useLocation } from 'react-router-dom';
 import { signInPathFor } from '@/components/route-guards';
 import { useSession } from '@/lib/session';
-import { FitReportForm } from './fit-report-form';
+
+// The form (with its photo drop zone) loads when a reader opens it, so the guide's readers never download it.
+const FitReportForm = lazy(async () => ({ default: (await import('./fit-report-form')).FitReportForm }));
 
 export interface ReportFitButtonProps {
   workshopSlug: string;
@@ -41,7 +44,9 @@ export function ReportFitButton({ workshopSlug, guideSlug, guideTitle }: ReportF
       </Text>
       {/* A stray click beside the form must not throw away what was typed. */}
       <Modal opened={opened} onClose={close} title={`Report a fit: ${guideTitle}`} size="lg" closeOnClickOutside={false}>
-        <FitReportForm workshopSlug={workshopSlug} guideSlug={guideSlug} emailVerified={user.emailVerified} onClose={close} />
+        <Suspense fallback={<Loader size="sm" aria-label="Loading the form" />}>
+          <FitReportForm workshopSlug={workshopSlug} guideSlug={guideSlug} emailVerified={user.emailVerified} onClose={close} />
+        </Suspense>
       </Modal>
     </Group>
   );
