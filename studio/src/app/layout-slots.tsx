@@ -2,13 +2,15 @@ import { Group, NavLink } from '@mantine/core';
 import { Link, useLocation } from 'react-router-dom';
 import { paths } from '@/config/paths';
 import { AccountMenu } from '@/features/auth/components/account-menu';
+import { HeaderSearch } from '@/features/search/components/header-search';
 import { WorkshopSwitcher } from '@/features/workshops/components/workshop-switcher';
 import { useSession } from '@/lib/session';
 
-/** The header's right side: the workshop switcher and the account menu (composed here, as features do not import each other). */
+/** The header's right side: the search box, the workshop switcher and the account menu (composed here, as features do not import each other). */
 export function HeaderActions() {
   return (
     <Group gap="sm" wrap="nowrap">
+      <HeaderSearch />
       <WorkshopSwitcher />
       <AccountMenu />
     </Group>

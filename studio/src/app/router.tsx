@@ -18,6 +18,7 @@ const router = createBrowserRouter([
       // Published guides: anyone may read them, signed in or not.
       { path: paths.guideIndex, lazy: async () => ({ Component: (await import('./routes/guides')).GuideIndexRoute }) },
       { path: paths.publicGuide.path, lazy: async () => ({ Component: (await import('./routes/guides')).PublicGuideRoute }) },
+      { path: paths.search, lazy: async () => ({ Component: (await import('./routes/search')).SearchRoute }) },
       // Accounts: open to everyone (the e-mailed links land on these).
       { path: paths.signIn, lazy: async () => ({ Component: (await import('./routes/accounts')).SignInRoute }) },
       { path: paths.signUp, lazy: async () => ({ Component: (await import('./routes/accounts')).SignUpRoute }) },

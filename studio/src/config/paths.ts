@@ -35,6 +35,8 @@ export const paths = {
     path: '/guides/:workshopSlug/:guideSlug',
     to: (workshopSlug: string, guideSlug: string) => `/guides/${encodeURIComponent(workshopSlug)}/${encodeURIComponent(guideSlug)}`,
   },
+  // One search over published guides (and, signed in, one's own workshops): ?q=&kind=&state=&vehicle=&page=.
+  search: '/search',
   // Accounts (the e-mailed links use verifyEmail, resetPassword, confirmEmail and acceptInvitation with ?token=).
   signIn: '/sign-in',
   signUp: '/sign-up',
