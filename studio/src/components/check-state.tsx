@@ -1,7 +1,8 @@
 import { Group, Text } from '@mantine/core';
+import type { ApiSchema } from '@/lib/api-types';
 
 /** The fit-check states and checklist verdicts of the API (DESIGN.md vocabulary). */
-export type FitCheckState = 'open' | 'bench_pass' | 'confirmed' | 'no_fit' | 'retired';
+export type FitCheckState = ApiSchema<'FitCheckState'>;
 export type ChecklistVerdict = Exclude<FitCheckState, 'retired'>;
 
 interface StateLook {

@@ -1058,6 +1058,102 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/workshops/{workshopId}/footage/{footageId}/hls/master.m3u8": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["FootageMediaController_master"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/footage/{footageId}/hls/{variant}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["FootageMediaController_variant"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/footage/{footageId}/thumbnails.vtt": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["FootageMediaController_thumbnails"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/footage/{footageId}/waveform": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["FootageMediaController_waveform"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/footage/{footageId}/renditions/retry": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["FootageMediaController_retry"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/media-settings": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["FootageMediaController_settings"];
+        put: operations["FootageMediaController_updateSettings"];
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/workshops/{workshopId}/footage/{footageId}/transcript": {
         parameters: {
             query?: never;
@@ -1426,6 +1522,22 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/guides/{workshopSlug}/{guideSlug}/evidence/{evidenceId}/photo": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["PublishedGuidesController_evidencePhoto"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/guides/{workshopSlug}/{guideSlug}/captions.vtt": {
         parameters: {
             query?: never;
@@ -1434,6 +1546,70 @@ export interface paths {
             cookie?: never;
         };
         get: operations["PublishedGuidesController_captions"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/guides/{workshopSlug}/{guideSlug}/hls/master.m3u8": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["PublishedGuidesController_hlsMaster"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/guides/{workshopSlug}/{guideSlug}/hls/{variant}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["PublishedGuidesController_hlsVariant"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/guides/{workshopSlug}/{guideSlug}/thumbnails.vtt": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["PublishedGuidesController_thumbnails"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/guides/{workshopSlug}/{guideSlug}/waveform": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["PublishedGuidesController_waveform"];
         put?: never;
         post?: never;
         delete?: never;
@@ -1602,6 +1778,40 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/fit-finder": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** Published assemblies whose checks match what you have, confirmed first; near misses apart with the reason */
+        get: operations["FitFinderController_find"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/search": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** Search published guides (titles, steps, parts, part numbers, transcript cues) and, signed in, your workshops */
+        get: operations["SearchController_search"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
 }
 export type webhooks = Record<string, never>;
 export interface components {
@@ -1712,6 +1922,8 @@ export interface components {
             logoUrl: string | null;
             /** @description Disabled by a site admin: readable, not changeable */
             disabled: boolean;
+            /** @description Members’ names may appear on public pages (who confirmed a fit) */
+            showMemberNames: boolean;
             /**
              * @description The caller's role
              * @enum {string|null}
@@ -1724,6 +1936,8 @@ export interface components {
             /** @description Changing it changes the workshop’s web addresses */
             slug?: string;
             description?: string;
+            /** @description Show members’ names on public pages (who confirmed a fit); off by default */
+            showMemberNames?: boolean;
         };
         DeleteWorkshopDto: {
             /** @description The workshop’s name, typed again: deleting cannot be undone */
@@ -2014,6 +2228,17 @@ export interface components {
              */
             truncated: boolean;
         };
+        BuildResponseDto: {
+            id: string;
+            workshopId: string;
+            title: string;
+            vehicle: string;
+            goal: string;
+            /** @enum {string} */
+            status: "planning" | "in_progress" | "verified" | "archived";
+            createdAt: string;
+            updatedAt: string;
+        };
         CreateBuildDto: {
             /** @example Motor-to-gearbox coupler */
             title: string;
@@ -2064,6 +2289,22 @@ export interface components {
              * @example 1.25
              */
             module?: number;
+            /**
+             * @description spline pressure angle, degrees
+             * @example 30
+             * @enum {number}
+             */
+            pressureAngle?: 30 | 37.5 | 45;
+            /**
+             * @description spline fit: side fit or major-diameter fit
+             * @enum {string}
+             */
+            splineFit?: "side" | "major";
+            /**
+             * @description spline tolerance class (ANSI B92.1 / ISO 4156)
+             * @enum {number}
+             */
+            splineClass?: 4 | 5 | 6 | 7;
             /** @example 1.375 */
             majorDiameter?: string;
             /** @enum {string} */
@@ -2165,6 +2406,22 @@ export interface components {
              * @example 1.25
              */
             module?: number;
+            /**
+             * @description spline pressure angle, degrees
+             * @example 30
+             * @enum {number}
+             */
+            pressureAngle?: 30 | 37.5 | 45;
+            /**
+             * @description spline fit: side fit or major-diameter fit
+             * @enum {string}
+             */
+            splineFit?: "side" | "major";
+            /**
+             * @description spline tolerance class (ANSI B92.1 / ISO 4156)
+             * @enum {number}
+             */
+            splineClass?: 4 | 5 | 6 | 7;
             /** @example 1.375 */
             majorDiameter?: string;
             /** @enum {string} */
@@ -2202,6 +2459,85 @@ export interface components {
             value?: string;
             /** @example N·m */
             freeUnit?: string;
+        };
+        InstrumentResponseDto: {
+            /** @enum {string} */
+            kind: "outside_micrometer" | "inside_micrometer" | "bore_gauge" | "caliper" | "dial_indicator" | "feeler_gauge" | "tape" | "other";
+            /** @example 2540 */
+            resolutionNm: number;
+            /**
+             * @description The resolution in the reading’s unit
+             * @example 0.0001
+             */
+            resolution: string;
+            /** @example 2026-03-02 */
+            calibratedOn: string | null;
+            /** @example  */
+            note: string;
+        };
+        MeasurementResponseDto: {
+            /** Format: uuid */
+            id: string;
+            /** Format: uuid */
+            featureId: string | null;
+            /** Format: uuid */
+            interfaceId: string | null;
+            /** @enum {string} */
+            quantity: "diameter" | "length" | "clearance" | "runout" | "other";
+            /**
+             * @description As written by the person who took it
+             * @example 1.2505
+             */
+            value: string;
+            /** @enum {string} */
+            unit: "mm" | "um" | "in" | "thou" | "tenths";
+            /**
+             * @description The reading in integer nanometres
+             * @example 31762700
+             */
+            valueNm: number;
+            /**
+             * @description In its unit, with as many decimals as the instrument resolves
+             * @example 1.2505 in
+             */
+            shown: string;
+            instrument: components["schemas"]["InstrumentResponseDto"];
+            /** @example 21.5 */
+            temperatureC: number | null;
+            /**
+             * Format: uuid
+             * @description The member who took it
+             */
+            takenBy: string | null;
+            /** Format: date-time */
+            takenAt: string;
+            /** Format: uuid */
+            footageId: string | null;
+            /** @description The moment in the footage that shows the reading */
+            footageTimeMs: number | null;
+            /** @example  */
+            note: string;
+        };
+        MeasurementSummaryDto: {
+            /** @example 3 */
+            count: number;
+            /**
+             * @description The unit of the latest reading
+             * @enum {string}
+             */
+            unit: "mm" | "um" | "in" | "thou" | "tenths";
+            meanNm: number;
+            spreadNm: number;
+            /** @example 1.2505 in */
+            mean: string;
+            /** @example 0.0002 in */
+            spread: string;
+        };
+        MeasurementListDto: {
+            /** @description Oldest first */
+            measurements: components["schemas"]["MeasurementResponseDto"][];
+            /** @description Mean and spread when one subject (feature or interface) is asked for */
+            summary: components["schemas"]["MeasurementSummaryDto"] | null;
         };
         CreateMeasurementDto: {
             /** @description The part feature measured (give this or interfaceId) */
@@ -2247,16 +2583,14 @@ export interface components {
             /** @default true */
             required: boolean;
         };
+        /** @enum {string} */
+        FitCheckState: "open" | "bench_pass" | "confirmed" | "no_fit" | "retired";
         TransitionDto: {
-            /** @enum {string} */
-            to: "open" | "bench_pass" | "confirmed" | "no_fit" | "retired";
+            to: components["schemas"]["FitCheckState"];
             /** @example Test-fitted with the motor bolted up; turns by hand with no bind. */
             reason: string;
-            /**
-             * @description The state the caller saw and expects to leave; if the check is no longer in it, 409 and nothing changes
-             * @enum {string}
-             */
-            from?: "open" | "bench_pass" | "confirmed" | "no_fit" | "retired";
+            /** @description The state the caller saw and expects to leave; if the check is no longer in it, 409 and nothing changes */
+            from?: components["schemas"]["FitCheckState"];
         };
         AddEvidenceDto: {
             /**
@@ -2269,6 +2603,20 @@ export interface components {
             /** @description For kind `mark`: a moment in this workshop's footage that shows the fit */
             markId?: string;
             note?: string;
+        };
+        AssemblyResponseDto: {
+            /** Format: uuid */
+            id: string;
+            /** Format: uuid */
+            buildId: string;
+            /** @example 21-tooth coupler with the long driveshaft */
+            name: string;
+            /** @example  */
+            notes: string;
+            /** Format: date-time */
+            createdAt: string;
+            /** Format: date-time */
+            updatedAt: string;
         };
         CreateAssemblyDto: {
             /** @example 21-tooth coupler with the long driveshaft */
@@ -2316,6 +2664,32 @@ export interface components {
              * @example 5
              */
             margin?: string;
+        };
+        InterfaceResponseDto: {
+            /** Format: uuid */
+            id: string;
+            /** @enum {string} */
+            kind: "spline" | "bore_shaft" | "length_window";
+            /** @example Motor shaft into coupler */
+            name: string;
+            /** Format: uuid */
+            featureAId: string;
+            /** Format: uuid */
+            featureBId: string | null;
+            /**
+             * @description The unit lengths are shown in (feature A’s)
+             * @enum {string}
+             */
+            unit: "mm" | "um" | "in" | "thou" | "tenths";
+            installedMinNm: number | null;
+            installedMaxNm: number | null;
+            marginNm: number | null;
+            /** @example 412.0 */
+            installedMin: string | null;
+            /** @example 418.5 */
+            installedMax: string | null;
+            /** @example 3.0 */
+            margin: string | null;
         };
         UpdateInterfaceDto: {
             /** @enum {string} */
@@ -2375,6 +2749,38 @@ export interface components {
             revision: number;
             cueCount: number;
         };
+        RenditionVariantDto: {
+            /** @example 1920 */
+            width: number;
+            /** @example 1080 */
+            height: number;
+            /**
+             * @description Peak bit rate as the master playlist declares it (bit/s)
+             * @example 5640800
+             */
+            bandwidth: number;
+        };
+        RenditionsDto: {
+            /**
+             * @description waiting: queued (or the footage is not probed yet)
+             * @enum {string}
+             */
+            state: "waiting" | "processing" | "ready" | "failed";
+            /**
+             * @description Percent done while processing; 100 when ready
+             * @example 42.5
+             */
+            percent: number | null;
+            /**
+             * @description Estimated seconds left while processing
+             * @example 37
+             */
+            secondsLeft: number | null;
+            /** @description Why the web versions could not be made, in plain words */
+            reason: string | null;
+            /** @description The renditions made, highest first; empty until ready */
+            variants: components["schemas"]["RenditionVariantDto"][];
+        };
         FootageResponseDto: {
             id: string;
             workshopId: string;
@@ -2400,6 +2806,13 @@ export interface components {
             upload: components["schemas"]["UploadProgressDto"] | null;
             /** @description The active transcript, if any */
             transcript: components["schemas"]["TranscriptSummaryDto"] | null;
+            /** @description Width as displayed (after rotation); known once renditions start */
+            displayWidth: number | null;
+            displayHeight: number | null;
+            /** @description The web renditions (HLS, MP4, scrub previews, waveform) */
+            renditions: components["schemas"]["RenditionsDto"];
+            /** @description False once the workshop setting dropped the original after transcoding */
+            originalKept: boolean;
             createdAt: string;
             updatedAt: string;
         };
@@ -2448,10 +2861,24 @@ export interface components {
             title: string;
         };
         PlaybackResponseDto: {
-            /** @description Presigned GET URL; supports HTTP Range requests for seeking */
+            /** @description Presigned GET URL of a progressive file (the MP4 rendition once ready, else the original); HTTP Range works */
             url: string;
             expiresAt: string;
             contentType: string;
+            /**
+             * @description HLS master playlist (API path) once renditions are ready
+             * @example /api/workshops/…/footage/…/hls/master.m3u8
+             */
+            hlsUrl: string | null;
+            /** @description Presigned link to the faststart H.264/AAC MP4 once ready */
+            mp4Url: string | null;
+            /** @description WebVTT thumbnails track (API path); cue texts are sprite links with #xywh= */
+            thumbnailsUrl: string | null;
+            /** @description Waveform peaks (API path, WaveformDto) */
+            waveformUrl: string | null;
+            displayWidth: number | null;
+            displayHeight: number | null;
+            renditions: components["schemas"]["RenditionsDto"];
         };
         PartUrlsRequestDto: {
             /**
@@ -2485,6 +2912,22 @@ export interface components {
             partNumber: number;
             completedPartCount: number;
             partCount: number;
+        };
+        WaveformDto: {
+            durationMs: number;
+            /**
+             * @description Peaks per second of footage
+             * @example 20
+             */
+            peaksPerSecond: number;
+            /** @description False when the source had no audio (the renditions carry silence) */
+            hasAudio: boolean;
+            /** @description Largest absolute sample of each slice, 0..1 of full scale */
+            peaks: number[];
+        };
+        MediaSettingsDto: {
+            /** @description Keep the uploaded original after web versions are made (default true) */
+            keepOriginals: boolean;
         };
         CueDto: {
             /** @description Position in the transcript, from 0 */
@@ -2796,6 +3239,157 @@ export interface components {
             creatorNote?: string;
             /** @description A fit check of this workshop that verifies the claim; null unties it */
             fitCheckId?: Record<string, never> | null;
+        };
+        FinderWorkshopDto: {
+            name: string;
+            slug: string;
+        };
+        FinderGuideDto: {
+            title: string;
+            slug: string;
+            /** @example /guides/harrow-lane-garage/fitting-the-21-tooth-coupler-stack */
+            path: string;
+            revision: number;
+            publishedAt: string;
+        };
+        FinderMeasurementDto: {
+            /** @example OM-G5-IN pilot nose */
+            feature: string;
+            /**
+             * @description as taken, in its unit and to its instrument’s resolution
+             * @example 0.5902 in
+             */
+            value: string;
+            /** @enum {string} */
+            unit: "mm" | "um" | "in" | "thou" | "tenths";
+            /** @description the same length in millimetres, exactly */
+            millimetres: number;
+            /** @example outside_micrometer */
+            instrument: string;
+            takenAt: string;
+        };
+        FinderCheckDto: {
+            /** Format: uuid */
+            id: string;
+            /** @example Spline match: coupler to gearbox input */
+            title: string;
+            /**
+             * @description which part of the query this check answers
+             * @enum {string}
+             */
+            criterion: "spline" | "diameter" | "clearance" | "length" | "part";
+            /** @enum {string} */
+            state: "open" | "bench_pass" | "confirmed" | "no_fit";
+            /** @enum {string} */
+            verdict: "match" | "near_miss";
+            /** @description why it matches, or what differs */
+            reasons: string[];
+            measurements: components["schemas"]["FinderMeasurementDto"][];
+            confirmedAt: string | null;
+            /** @description who confirmed it, when the workshop shows names publicly */
+            confirmedBy: string | null;
+            /** @description seconds into the guide’s video where the evidence is */
+            evidenceAtSeconds: number | null;
+        };
+        FinderFitReportsDto: {
+            /** @description readers’ reports that it fit (declined ones left out) */
+            fit: number;
+            /** @description readers’ reports that it did not fit */
+            noFit: number;
+        };
+        FitFinderResultDto: {
+            /** @enum {string} */
+            verdict: "match" | "near_miss";
+            /**
+             * @description the least proven state among the matching checks
+             * @enum {string}
+             */
+            state: "confirmed" | "bench_pass" | "open" | "no_fit";
+            workshop: components["schemas"]["FinderWorkshopDto"];
+            guide: components["schemas"]["FinderGuideDto"];
+            buildTitle: string;
+            vehicle: string;
+            /** @example 21-tooth coupler stack */
+            assembly: string;
+            checks: components["schemas"]["FinderCheckDto"][];
+            fitReports: components["schemas"]["FinderFitReportsDto"];
+            /**
+             * @description opens the guide at the evidence moment
+             * @example /guides/harrow-lane-garage/fitting-the-21-tooth-coupler-stack?t=41.5
+             */
+            link: string;
+        };
+        FitFinderAnswerDto: {
+            /**
+             * @description the query as understood
+             * @example [
+             *       "spline: 21 teeth, 16/32 diametral pitch (ANSI B92.1)"
+             *     ]
+             */
+            understood: string[];
+            /** @description matching results in all */
+            total: number;
+            offset: number;
+            limit: number;
+            /** @description confirmed first, then bench-passed, then open */
+            results: components["schemas"]["FitFinderResultDto"][];
+            /** @description near misses in all */
+            nearMissTotal: number;
+            /** @description the first near misses, each with its reason (same page size, from the start) */
+            nearMisses: components["schemas"]["FitFinderResultDto"][];
+        };
+        SearchKindCountDto: {
+            /** @enum {string} */
+            kind: "guide" | "part" | "cue" | "build" | "footage" | "mark" | "fit_check" | "draft_guide";
+            count: number;
+        };
+        SnippetSegmentDto: {
+            /** @description Plain text: draw it as text, never as HTML */
+            text: string;
+            /** @description True for a word the search matched (draw it highlighted) */
+            match: boolean;
+        };
+        SearchWorkshopDto: {
+            name: string;
+            slug: string;
+        };
+        SearchHitDto: {
+            /** @enum {string} */
+            kind: "guide" | "part" | "cue" | "build" | "footage" | "mark" | "fit_check" | "draft_guide";
+            /** @description Stable within its kind */
+            id: string;
+            /** @description True when the hit comes from a published guide; false for your own workshop records */
+            published: boolean;
+            /** @description What the hit belongs to: the guide, the part, the build… */
+            title: string;
+            /** @description Words around the match, matched words flagged */
+            snippet: components["schemas"]["SnippetSegmentDto"][];
+            workshop: components["schemas"]["SearchWorkshopDto"];
+            /** @description The build's vehicle, when the hit belongs to a build */
+            vehicle: string | null;
+            /** @description Footage time of a cue or a mark, in milliseconds */
+            startMs: number | null;
+            /** @description A fit check's state */
+            checkState: string | null;
+            /**
+             * @description Studio path that opens the hit; a cue opens the video at startMs (?t= seconds)
+             * @example /guides/harrow-lane-garage/motor-coupler?t=42.0
+             */
+            link: string;
+        };
+        SearchResultsDto: {
+            /** @description The words searched for */
+            terms: string[];
+            /** @description Part-number keys matched exactly or by prefix (letters and digits, upper case) */
+            partNumbers: string[];
+            /** @description Hits of the asked kind (or of every kind) in all; results holds at most `limit` */
+            total: number;
+            offset: number;
+            limit: number;
+            /** @description Hits per kind under the other filters, for the kind chips */
+            counts: components["schemas"]["SearchKindCountDto"][];
+            /** @description Best first */
+            results: components["schemas"]["SearchHitDto"][];
         };
     };
     responses: never;
@@ -3897,7 +4491,9 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["BuildResponseDto"][];
+                };
             };
         };
     };
@@ -3920,7 +4516,9 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["BuildResponseDto"];
+                };
             };
         };
     };
@@ -3940,7 +4538,9 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["BuildResponseDto"];
+                };
             };
         };
     };
@@ -3956,6 +4556,7 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Deleted with its assemblies, footage and guides */
             204: {
                 headers: {
                     [name: string]: unknown;
@@ -3984,7 +4585,9 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["BuildResponseDto"];
+                };
             };
         };
     };
@@ -4259,7 +4862,9 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["MeasurementListDto"];
+                };
             };
         };
     };
@@ -4282,7 +4887,9 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["MeasurementResponseDto"];
+                };
             };
         };
     };
@@ -4507,7 +5114,9 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["AssemblyResponseDto"][];
+                };
             };
         };
     };
@@ -4531,7 +5140,9 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["AssemblyResponseDto"];
+                };
             };
         };
     };
@@ -4595,7 +5206,9 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["AssemblyResponseDto"];
+                };
             };
         };
     };
@@ -4665,7 +5278,9 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["InterfaceResponseDto"];
+                };
             };
         };
     };
@@ -4711,7 +5326,9 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["InterfaceResponseDto"];
+                };
             };
         };
     };
@@ -5044,6 +5661,204 @@ export interface operations {
                     [name: string]: unknown;
                 };
                 content?: never;
+            };
+        };
+    };
+    FootageMediaController_master: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                footageId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description HLS master playlist; variant URIs are API paths */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/vnd.apple.mpegurl": string;
+                };
+            };
+            /** @description No such footage, or its web versions are not ready */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FootageMediaController_variant: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                footageId: string;
+                variant: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description A rendition’s media playlist (`v0.m3u8` is the highest) with short-lived segment links */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/vnd.apple.mpegurl": string;
+                };
+            };
+            /** @description No such footage or rendition, or the web versions are not ready */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FootageMediaController_thumbnails: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                footageId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description WebVTT thumbnails track: each cue is a sprite-sheet link with #xywh=x,y,w,h */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "text/vtt": string;
+                };
+            };
+            /** @description No such footage, or its web versions are not ready */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FootageMediaController_waveform: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                footageId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description Audio peaks for drawing under the timeline */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["WaveformDto"];
+                };
+            };
+            /** @description No such footage, or its web versions are not ready */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FootageMediaController_retry: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                footageId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description Queued again; earlier outputs are replaced, never doubled */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["FootageResponseDto"];
+                };
+            };
+            /** @description Not ready yet, already being made, or the original was dropped */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FootageMediaController_settings: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["MediaSettingsDto"];
+                };
+            };
+        };
+    };
+    FootageMediaController_updateSettings: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["MediaSettingsDto"];
+            };
+        };
+        responses: {
+            /** @description Applies to footage transcoded from now on */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["MediaSettingsDto"];
+                };
             };
         };
     };
@@ -5818,6 +6633,35 @@ export interface operations {
             };
         };
     };
+    PublishedGuidesController_evidencePhoto: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopSlug: string;
+                guideSlug: string;
+                evidenceId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description Redirects to a short-lived link to the photo */
+            302: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description No such photo in the published guide’s live checklist */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
     PublishedGuidesController_captions: {
         parameters: {
             query?: never;
@@ -5831,6 +6675,127 @@ export interface operations {
         requestBody?: never;
         responses: {
             200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    PublishedGuidesController_hlsMaster: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopSlug: string;
+                guideSlug: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description HLS master playlist of the guide’s footage; variant URIs are API paths */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/vnd.apple.mpegurl": string;
+                };
+            };
+            /** @description Not published, no footage, or its web versions are not ready */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    PublishedGuidesController_hlsVariant: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopSlug: string;
+                guideSlug: string;
+                variant: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description A rendition’s media playlist (`v0.m3u8` is the highest) with short-lived segment links */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/vnd.apple.mpegurl": string;
+                };
+            };
+            /** @description Not published, no such rendition, or the web versions are not ready */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    PublishedGuidesController_thumbnails: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopSlug: string;
+                guideSlug: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description WebVTT thumbnails track: each cue is a sprite-sheet link with #xywh=x,y,w,h */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "text/vtt": string;
+                };
+            };
+            /** @description Not published, no footage, or its web versions are not ready */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    PublishedGuidesController_waveform: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopSlug: string;
+                guideSlug: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description Audio peaks of the guide’s footage */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["WaveformDto"];
+                };
+            };
+            /** @description Not published, no footage, or its web versions are not ready */
+            404: {
                 headers: {
                     [name: string]: unknown;
                 };
@@ -6075,6 +7040,112 @@ export interface operations {
         requestBody?: never;
         responses: {
             200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FitFinderController_find: {
+        parameters: {
+            query?: {
+                /** @description part number; spacing and dashes ignored */
+                partNumber?: string;
+                maker?: string;
+                /** @description words of the build’s vehicle */
+                vehicle?: string;
+                /** @description spline tooth count */
+                splineTeeth?: number;
+                /** @description diametral pitch (16/32, 20 DP) or module (m1.25) */
+                splinePitch?: string;
+                /** @description degrees */
+                pressureAngle?: 30 | 37.5 | 45;
+                splineFit?: "side" | "major";
+                /** @description a diameter: a length such as 0.750 in, 19.05 mm, 3/4" or 15 thou */
+                diameter?: string;
+                /** @description ISO 286 class of the diameter (H7 a bore, g6 a shaft); without it the diameter is a measured size */
+                toleranceClass?: string;
+                /** @description the fit you want at that diameter: bore/shaft interfaces are judged by their clearance */
+                fit?: string;
+                /** @description shortest installed length: a length such as 0.750 in, 19.05 mm, 3/4" or 15 thou */
+                lengthMin?: string;
+                /** @description longest installed length */
+                lengthMax?: string;
+                /** @description unit for lengths written without one */
+                unit?: "mm" | "um" | "in" | "thou" | "tenths";
+                limit?: number;
+                offset?: number;
+            };
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["FitFinderAnswerDto"];
+                };
+            };
+            /** @description Nothing to look for, or a field that cannot be read (named in the message) */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description Too many requests from this address; wait a minute */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    SearchController_search: {
+        parameters: {
+            query: {
+                /** @description Words to find (each must appear; three letters or more) or a part number (exact or prefix, hyphens ignored) */
+                q: string;
+                /** @description Only this kind of hit */
+                kind?: "guide" | "part" | "cue" | "build" | "footage" | "mark" | "fit_check" | "draft_guide";
+                /** @description A workshop's slug: only its hits */
+                workshop?: string;
+                /** @description published: public hits only; unpublished: your own workshop records only */
+                state?: "published" | "unpublished";
+                /** @description Words the build's vehicle must contain */
+                vehicle?: string;
+                offset?: number;
+                limit?: number;
+            };
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["SearchResultsDto"];
+                };
+            };
+            /** @description A filter out of range, or a query with nothing to search for; the message names the field */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description Too many requests from this address; wait a minute */
+            429: {
                 headers: {
                     [name: string]: unknown;
                 };

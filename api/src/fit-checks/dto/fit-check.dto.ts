@@ -16,7 +16,7 @@ export class CreateManualCheckDto {
 }
 
 export class TransitionDto {
-  @ApiProperty({ enum: FIT_CHECK_STATES })
+  @ApiProperty({ enum: FIT_CHECK_STATES, enumName: 'FitCheckState' })
   @IsIn(FIT_CHECK_STATES)
   to!: FitCheckState;
 
@@ -27,6 +27,7 @@ export class TransitionDto {
 
   @ApiPropertyOptional({
     enum: FIT_CHECK_STATES,
+    enumName: 'FitCheckState',
     description: 'The state the caller saw and expects to leave; if the check is no longer in it, 409 and nothing changes',
   })
   @IsOptional()

@@ -1,13 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '@/lib/api-client';
-import { buildQueries, type Build, type BuildStatus } from './queries';
+import type { ApiSchema } from '@/lib/api-types';
+import { buildQueries, type Build } from './queries';
 
-export interface BuildInput {
-  title: string;
-  vehicle?: string;
-  goal?: string;
-  status?: BuildStatus;
-}
+export type BuildInput = ApiSchema<'CreateBuildDto'>;
 
 export function useCreateBuild(workshopId: string) {
   const queryClient = useQueryClient();

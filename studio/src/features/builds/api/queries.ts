@@ -1,19 +1,11 @@
 import { queryOptions } from '@tanstack/react-query';
 import { apiRequest } from '@/lib/api-client';
+import type { ApiSchema } from '@/lib/api-types';
 
-export const BUILD_STATUSES = ['planning', 'in_progress', 'verified', 'archived'] as const;
-export type BuildStatus = (typeof BUILD_STATUSES)[number];
-
-export interface Build {
-  id: string;
-  workshopId: string;
-  title: string;
-  vehicle: string;
-  goal: string;
-  status: BuildStatus;
-  createdAt: string;
-  updatedAt: string;
-}
+export type Build = ApiSchema<'BuildResponseDto'>;
+export type BuildStatus = Build['status'];
+/** In the order a build goes through them (for pickers); each must be a status of the contract. */
+export const BUILD_STATUSES = ['planning', 'in_progress', 'verified', 'archived'] as const satisfies readonly BuildStatus[];
 
 export const buildQueries = {
   all: () => ['builds'] as const,

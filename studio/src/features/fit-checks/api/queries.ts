@@ -2,9 +2,9 @@ import { queryOptions } from '@tanstack/react-query';
 import { apiRequest } from '@/lib/api-client';
 import type { LengthUnit } from '@/lib/units';
 
-export const FIT_CHECK_STATES = ['open', 'bench_pass', 'confirmed', 'no_fit', 'retired'] as const;
-export type FitCheckState = (typeof FIT_CHECK_STATES)[number];
-export type ChecklistVerdict = Exclude<FitCheckState, 'retired'>;
+import type { ChecklistVerdict, FitCheckState } from '@/components/check-state';
+
+export type { ChecklistVerdict, FitCheckState };
 export type CheckKind = 'spline_match' | 'fit' | 'length_window' | 'manual';
 
 export interface Evidence {

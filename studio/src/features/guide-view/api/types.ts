@@ -1,10 +1,11 @@
+import type { ChecklistVerdict, FitCheckState } from '@/components/check-state';
+
 /** Shapes of the public guide routes (api/src/guides; OpenAPI at /api/docs). Anyone may read them, signed in or not. */
 
 export type CautionLevel = 'DANGER' | 'WARNING' | 'CAUTION' | 'NOTICE';
 export type SafetyTopic = 'lifting' | 'rotating_parts' | 'high_voltage' | 'welding' | 'pressing';
 export type MarkKind = 'part' | 'measurement' | 'check_evidence' | 'step' | 'caution' | 'note';
-export type CheckState = 'open' | 'bench_pass' | 'confirmed' | 'no_fit' | 'retired';
-export type ChecklistVerdict = 'open' | 'bench_pass' | 'confirmed' | 'no_fit';
+export type { ChecklistVerdict };
 
 /** One card of the public index (GET /api/guides). */
 export interface PublishedGuideSummary {
@@ -61,7 +62,7 @@ export interface CheckEvidence {
 export interface PublishedCheck {
   id: string;
   title: string;
-  state: CheckState;
+  state: FitCheckState;
   required: boolean;
   detail: string | null;
   confirmedAt: string | null;

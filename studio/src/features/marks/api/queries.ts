@@ -1,5 +1,6 @@
 import { queryOptions } from '@tanstack/react-query';
 import { ApiError, apiRequest } from '@/lib/api-client';
+import type { FitCheckState } from '@/components/check-state';
 
 /** Shapes of the marks routes (api/src/marks; OpenAPI at /api/docs). */
 export const MARK_KINDS = ['part', 'measurement', 'check_evidence', 'step', 'caution', 'note'] as const;
@@ -54,7 +55,7 @@ export interface MeasurementChoice {
   footageId: string | null;
   footageTimeMs: number | null;
 }
-export type FitCheckState = 'open' | 'bench_pass' | 'confirmed' | 'no_fit' | 'retired';
+export type { FitCheckState };
 /** An assembly of the workshop with what a mark can point at in it: its interfaces and its fit checks. */
 export interface LinkAssembly {
   id: string;
