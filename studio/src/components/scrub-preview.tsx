@@ -28,23 +28,11 @@ export function useThumbnailTiles(thumbnailsUrl: string | null | undefined): Thu
   return tiles.data ?? NO_TILES;
 }
 
-export interface ScrubPreviewProps {
-  tiles: readonly ThumbnailTile[];
-  /** The moment under the pointer, or null when nothing is hovered or dragged. */
-  atMs: number | null;
-  /** The pointer's x within the container (px) and the container's width: the preview stays inside it. */
-  x: number;
-  containerWidth: number;
-}
-
-/** The frame at the hovered moment (a tile of the sprite sheet) and its time, above a bar or timeline that is `position: relative`. */
-export function ScrubPreview({ tiles, atMs, x, containerWidth }: ScrubPreviewProps) {
-  if (atMs === null) return null;
+/** The frame at a moment (a tile of the sprite sheet, when there is one) and its time: for a container that places it. */
+export function ScrubFrame({ tiles, atMs }: { tiles: readonly ThumbnailTile[]; atMs: number }) {
   const tile = tileAt(tiles, atMs);
-  const width = tile?.width ?? 56;
-  const left = Math.max(0, Math.min(containerWidth - width, x - width / 2));
   return (
-    <div className={classes.preview} style={{ left, width }} data-testid="scrub-preview" aria-hidden="true">
+    <div className={classes.frame} data-testid="scrub-frame">
       {tile && (
         <div
           className={classes.tile}
@@ -58,6 +46,27 @@ export function ScrubPreview({ tiles, atMs, x, containerWidth }: ScrubPreviewPro
         />
       )}
       <span className={classes.time}>{formatClock(atMs)}</span>
+    </div>
+  );
+}
+
+export interface ScrubPreviewProps {
+  tiles: readonly ThumbnailTile[];
+  /** The moment under the pointer, or null when nothing is hovered or dragged. */
+  atMs: number | null;
+  /** The pointer's x within the container (px) and the container's width: the preview stays inside it. */
+  x: number;
+  containerWidth: number;
+}
+
+/** The frame at the hovered moment floating above a bar that is `position: relative`, kept within the bar's width. */
+export function ScrubPreview({ tiles, atMs, x, containerWidth }: ScrubPreviewProps) {
+  if (atMs === null) return null;
+  const width = tileAt(tiles, atMs)?.width ?? 56;
+  const left = Math.max(0, Math.min(containerWidth - width, x - width / 2));
+  return (
+    <div className={classes.preview} style={{ left, width }} data-testid="scrub-preview" aria-hidden="true">
+      <ScrubFrame tiles={tiles} atMs={atMs} />
     </div>
   );
 }

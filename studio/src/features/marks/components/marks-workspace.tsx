@@ -4,6 +4,8 @@ import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { markQueries, type Mark, type MarkSuggestion } from '../api/queries';
 import { MARKING_SHORTCUTS, useMarkingShortcuts } from '../hooks/marking-shortcuts';
+import { ScrubFrame, useThumbnailTiles } from '@/components/scrub-preview';
+import { useWaveform, WaveformLane } from '@/components/waveform-lane';
 import { formatClock } from '@/lib/clock';
 import { draftOf, emptyLinks, MarkForm, type MarkDraft, type SpokenReading } from './mark-form';
 import { MarksList } from './marks-list';
@@ -18,6 +20,8 @@ export interface MarkingPlayer {
   readPositionMs: () => number;
   seek: (ms: number) => void;
   pause: () => void;
+  /** Scrub previews (WebVTT thumbnails) and the audio's peaks, once the media pipeline has made them. */
+  media?: { thumbnailsUrl: string | null; waveformUrl: string | null };
 }
 
 export interface MarksWorkspaceProps {
@@ -46,6 +50,8 @@ export function MarksWorkspace({ workshopId, footageId, player }: MarksWorkspace
   const suggestions = useQuery(markQueries.suggestions(workshopId, footageId));
   const [draft, setDraft] = useState<MarkDraft | null>(null);
   const [helpOpen, help] = useDisclosure(false);
+  const thumbnailTiles = useThumbnailTiles(player.media?.thumbnailsUrl);
+  const waveform = useWaveform(player.media?.waveformUrl);
 
   const handlers = {
     pin: () => {
@@ -68,6 +74,8 @@ export function MarksWorkspace({ workshopId, footageId, player }: MarksWorkspace
           durationMs={player.durationMs}
           currentMs={player.currentMs}
           onSeek={player.seek}
+          renderLanes={waveform ? (view) => <WaveformLane waveform={waveform} fromMs={view.startMs} toMs={view.endMs} /> : undefined}
+          renderHoverPreview={thumbnailTiles.length > 0 ? (atMs) => <ScrubFrame tiles={thumbnailTiles} atMs={atMs} /> : undefined}
         />
       )}
       <Group gap="xs">
