@@ -22,7 +22,7 @@ const DEMO_PARTS: CreatePartDto[] = [
     source: 'new',
     notes: 'Machined in house from 4140 bar; keyed motor bore, broached 21-tooth spline.',
     features: [
-      { name: 'gearbox spline', kind: 'spline', teeth: 21, gender: 'internal', diametralPitch: 16, stubPitch: 32 },
+      { name: 'gearbox spline', kind: 'spline', teeth: 21, gender: 'internal', diametralPitch: 16, stubPitch: 32, pressureAngle: 30, splineFit: 'side', splineClass: 5 },
       { name: 'motor bore', kind: 'diameter', role: 'hole', nominal: '24', toleranceClass: 'H7', unit: 'mm' },
     ],
   },
@@ -33,7 +33,7 @@ const DEMO_PARTS: CreatePartDto[] = [
     category: 'coupler',
     source: 'new',
     notes: 'Sent in by a follower as a possible off-the-shelf coupler.',
-    features: [{ name: 'gearbox spline', kind: 'spline', teeth: 27, gender: 'internal', diametralPitch: 16, stubPitch: 32 }],
+    features: [{ name: 'gearbox spline', kind: 'spline', teeth: 27, gender: 'internal', diametralPitch: 16, stubPitch: 32, pressureAngle: 30, splineFit: 'side', splineClass: 5 }],
   },
   {
     partNumber: 'OM-G5-IN',
@@ -43,7 +43,7 @@ const DEMO_PARTS: CreatePartDto[] = [
     source: 'remanufactured',
     notes: 'Remanufactured unit; pilot nose diameters vary from box to box, so measure each one.',
     features: [
-      { name: 'input spline', kind: 'spline', teeth: 21, gender: 'external', diametralPitch: 16, stubPitch: 32 },
+      { name: 'input spline', kind: 'spline', teeth: 21, gender: 'external', diametralPitch: 16, stubPitch: 32, pressureAngle: 30, splineFit: 'side', splineClass: 5 },
       { name: 'pilot nose', kind: 'diameter', role: 'shaft', nominal: '15', toleranceClass: 'g6', unit: 'mm' },
     ],
   },

@@ -7,6 +7,7 @@ import { loadDemoFitData } from './demo-fit-data';
 import { loadDemoFootage } from './demo-footage';
 import { loadDemoFollower, loadDemoGuide } from './demo-guide';
 import { loadDemoMarks } from './demo-marks';
+import { loadDemoFinderEvidence, loadDemoSecondWorkshop, SECOND_WORKSHOP_OWNER } from './demo-second-workshop';
 
 /**
  * Loads the invented demo scenario (DESIGN.md) into the database; idempotent. Run by `npm start`
@@ -25,9 +26,13 @@ async function loadDemo(): Promise<void> {
     // The build's published guide, with step marks; after the marks, so it can point at them.
     console.log(`[demo] ${await loadDemoGuide(app, { workshopId: accounts.workshopId, creatorId: accounts.ownerId })}`);
     console.log(`[demo] ${await loadDemoFollower(app, { workshopId: accounts.workshopId, followerId: accounts.followerId })}`);
+    // The fit finder's demo: the spline check confirmed at its moment, and a second workshop whose coupler is a near miss.
+    console.log(`[demo] ${await loadDemoFinderEvidence(app, { workshopId: accounts.workshopId, creatorId: accounts.ownerId })}`);
+    console.log(`[demo] ${await loadDemoSecondWorkshop(app)}`);
     // Printed plainly (the app's logger is quietened to warnings while the demo loads).
     console.log(`[demo] workshop "Harrow Lane Garage" is ready: ${accounts.workshopId}`);
     for (const line of demoSignInLines()) console.log(`[demo] ${line}`);
+    console.log(`[demo]   ${SECOND_WORKSHOP_OWNER.email.padEnd(30)} ${SECOND_WORKSHOP_OWNER.displayName}, ${SECOND_WORKSHOP_OWNER.role}`);
   } finally {
     await app.close();
   }
