@@ -1,5 +1,6 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
-import { IsIn, IsOptional, IsString, IsUUID, Length, MaxLength, ValidateIf } from 'class-validator';
+import { IsIn, IsOptional, IsString, Length, MaxLength } from 'class-validator';
+import { NullableUuid } from '../../common/decorators/nullable-fields.decorator';
 import { FIT_REPORT_OUTCOMES, FIT_REPORT_STATUSES, type FitReportOutcome, type FitReportStatus } from '../entities/fit-report.entity';
 
 export class CreateFitReportDto {
@@ -37,10 +38,7 @@ export class UpdateFitReportDto {
   @MaxLength(1000)
   creatorNote?: string;
 
-  @ApiPropertyOptional({ nullable: true, description: 'A fit check of this workshop that verifies the claim; null unties it' })
-  @IsOptional()
-  @ValidateIf((_, value) => value !== null)
-  @IsUUID()
+  @NullableUuid('A fit check of this workshop that verifies the claim; null unties it')
   fitCheckId?: string | null;
 }
 

@@ -5,18 +5,14 @@ import {
   ArrayUnique,
   IsArray,
   IsIn,
-  IsInt,
   IsOptional,
   IsString,
   IsUUID,
   Length,
-  Max,
   MaxLength,
-  Min,
-  ValidateIf,
   ValidateNested,
 } from 'class-validator';
-import { MAX_FOOTAGE_MS } from '../../common/http/limits';
+import { NullableFootageTime, NullableUuid } from '../../common/decorators/nullable-fields.decorator';
 import { CAUTION_LEVELS, SAFETY_TOPICS, type CautionLevel, type SafetyTopic } from '../../engine/safety-topics';
 
 /** Rich text arrives as Tiptap HTML; the server keeps only the allowed tags (see rich-text.ts). */
@@ -31,16 +27,10 @@ export class GuideFieldsDto {
   @MaxLength(RICH_TEXT_MAX)
   summary?: string;
 
-  @ApiPropertyOptional({ nullable: true, description: 'The footage viewers follow (a footage of the same build)' })
-  @IsOptional()
-  @ValidateIf((_, value) => value !== null)
-  @IsUUID()
+  @NullableUuid('The footage viewers follow (a footage of the same build)')
   footageId?: string | null;
 
-  @ApiPropertyOptional({ nullable: true, description: 'Its checklist and parts go in the guide (an assembly of the same build)' })
-  @IsOptional()
-  @ValidateIf((_, value) => value !== null)
-  @IsUUID()
+  @NullableUuid('Its checklist and parts go in the guide (an assembly of the same build)')
   assemblyId?: string | null;
 
   @ApiPropertyOptional({ enum: SAFETY_TOPICS, isArray: true })
@@ -100,31 +90,17 @@ export class StepFieldsDto {
   @MaxLength(RICH_TEXT_MAX)
   body?: string;
 
-  @ApiPropertyOptional({ nullable: true, description: 'A footage of the guide’s build; defaults to the guide’s footage when a time is given' })
-  @IsOptional()
-  @ValidateIf((_, value) => value !== null)
-  @IsUUID()
+  @NullableUuid('A footage of the guide’s build; defaults to the guide’s footage when a time is given')
   footageId?: string | null;
 
-  @ApiPropertyOptional({ nullable: true, example: 42_000, description: 'The step’s moment in the footage, ms' })
-  @IsOptional()
-  @ValidateIf((_, value) => value !== null)
-  @IsInt()
-  @Min(0)
-  @Max(MAX_FOOTAGE_MS, { message: '$property must be at most 86400000 (24 hours, in ms)' })
+  @NullableFootageTime('The step’s moment in the footage, ms', 42_000)
   startMs?: number | null;
 
-  @ApiPropertyOptional({ nullable: true, description: 'End of the step’s span, ms (after startMs)' })
-  @IsOptional()
-  @ValidateIf((_, value) => value !== null)
-  @IsInt()
-  @Min(0)
-  @Max(MAX_FOOTAGE_MS, { message: '$property must be at most 86400000 (24 hours, in ms)' })
+  @NullableFootageTime('End of the step’s span, ms (after startMs)')
   endMs?: number | null;
 
   @ApiPropertyOptional({ type: StepCautionDto, nullable: true })
   @IsOptional()
-  @ValidateIf((_, value) => value !== null)
   @ValidateNested()
   @Type(() => StepCautionDto)
   caution?: StepCautionDto | null;
