@@ -1,10 +1,11 @@
-import { FootageResponseDto, TranscriptSummaryDto, UploadProgressDto } from './dto/footage.dto';
+import { FootageResponseDto, RenditionsDto, TranscriptSummaryDto, UploadProgressDto } from './dto/footage.dto';
 import { Footage } from './entities/footage.entity';
 
 export interface FootageExtras {
   posterUrl: string | null;
   upload: UploadProgressDto | null;
   transcript: TranscriptSummaryDto | null;
+  renditions: RenditionsDto;
 }
 
 export function toFootageResponse(footage: Footage, extras: FootageExtras): FootageResponseDto {
@@ -28,6 +29,10 @@ export function toFootageResponse(footage: Footage, extras: FootageExtras): Foot
     posterUrl: extras.posterUrl,
     upload: extras.upload,
     transcript: extras.transcript,
+    displayWidth: footage.displayWidth,
+    displayHeight: footage.displayHeight,
+    renditions: extras.renditions,
+    originalKept: footage.originalKept,
     createdAt: footage.createdAt.toISOString(),
     updatedAt: footage.updatedAt.toISOString(),
   };

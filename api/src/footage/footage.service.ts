@@ -7,6 +7,7 @@ import {
   Injectable,
   Logger,
   NotFoundException,
+  OnApplicationBootstrap,
   UnprocessableEntityException,
 } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
@@ -34,7 +35,9 @@ import {
 import { Footage } from './entities/footage.entity';
 import { FootageUploadPart } from './entities/footage-upload-part.entity';
 import { FootageUpload } from './entities/footage-upload.entity';
-import { MEDIA_JOBS, type ProcessFootageJob } from './footage-jobs';
+import { MEDIA_JOBS, type ProcessFootageJob, type TranscodeFootageJob } from './footage-jobs';
+import { FootageMediaService } from './footage-media.service';
+import { FootageRenditionsService, renditionsPrefix } from './footage-renditions.service';
 import { toFootageResponse } from './footage.mapper';
 import {
   checkFileSize,
@@ -55,7 +58,7 @@ const POSTER_URL_TTL_SECONDS = 60 * 60;
 
 /** Footage of a build and its resumable upload: the browser sends the bytes to storage itself. */
 @Injectable()
-export class FootageService {
+export class FootageService implements OnApplicationBootstrap {
   private readonly logger = new Logger(FootageService.name);
   private readonly maxBytes: number;
 
@@ -65,10 +68,31 @@ export class FootageService {
     @InjectRepository(FootageUploadPart) private readonly parts: Repository<FootageUploadPart>,
     @Inject(BuildsService) private readonly builds: BuildsService,
     @Inject(StorageService) private readonly storage: StorageService,
-    @InjectQueue(QUEUES.media) private readonly mediaQueue: Queue<ProcessFootageJob>,
+    @InjectQueue(QUEUES.media) private readonly mediaQueue: Queue<ProcessFootageJob | TranscodeFootageJob>,
+    @Inject(FootageMediaService) private readonly media: FootageMediaService,
+    @Inject(FootageRenditionsService) private readonly renditions: FootageRenditionsService,
     @Inject(ConfigService) config: ConfigService<AppConfig, true>,
   ) {
     this.maxBytes = config.get('footage', { infer: true }).maxBytes;
+  }
+
+  /** Footage probed before renditions existed (or whose job was lost) is queued again; job ids keep this idempotent. */
+  async onApplicationBootstrap(): Promise<void> {
+    try {
+      const waiting = await this.footage.find({ where: { state: 'ready', renditionsState: In(['waiting', 'processing']) }, select: { id: true } });
+      for (const row of waiting) await this.enqueueRenditions(row.id);
+    } catch (error) {
+      this.logger.warn(`could not queue waiting renditions: ${errorMessage(error)}`);
+    }
+  }
+
+  /** Queues the transcode job (media processor, after probing; a retry). */
+  async enqueueRenditions(footageId: string): Promise<void> {
+    const jobId = `transcode-footage-${footageId}`;
+    // A finished or failed job with this id would make add() a no-op; a retry must run again.
+    const earlier = await this.mediaQueue.getJob(jobId);
+    if (earlier && ((await earlier.isCompleted()) || (await earlier.isFailed()))) await earlier.remove();
+    await this.mediaQueue.add(MEDIA_JOBS.transcodeFootage, { footageId }, { jobId, attempts: 3, backoff: { type: 'exponential', delay: 5000 } });
   }
 
   limits(): FootageLimitsDto {
@@ -275,7 +299,7 @@ export class FootageService {
     await this.footage.delete({ id: footage.id, workshopId });
   }
 
-  /** Deletes footage in any state, with its stored file, poster and transcripts. */
+  /** Deletes footage in any state, with its stored file, poster, web renditions and transcripts. */
   async remove(workshopId: string, footageId: string): Promise<void> {
     const footage = await this.get(workshopId, footageId);
     if (footage.state === 'uploading') {
@@ -285,6 +309,8 @@ export class FootageService {
     await this.storage.deleteObject(footage.objectKey);
     if (footage.posterKey) await this.storage.deleteObject(footage.posterKey);
     await this.footage.delete({ id: footage.id, workshopId });
+    // After the row: a transcode still running finds the row gone and clears what it stored itself.
+    await this.storage.deletePrefix(renditionsPrefix(footage));
   }
 
   async playback(workshopId: string, footageId: string): Promise<PlaybackResponseDto> {
@@ -292,11 +318,40 @@ export class FootageService {
     if (footage.state !== 'ready') {
       throw new ConflictException(`The footage cannot be played yet: it is ${footage.state}`);
     }
+    const media = await this.media.playbackMedia(footage, { basePath: `/api/workshops/${workshopId}/footage/${footageId}` });
+    // Once the web MP4 exists it is the progressive file every browser plays; the original may be HEVC.
+    const url = media.mp4Url ?? (await this.storage.presignedGetUrl(footage.objectKey, PLAYBACK_URL_TTL_SECONDS));
     return {
-      url: await this.storage.presignedGetUrl(footage.objectKey, PLAYBACK_URL_TTL_SECONDS),
+      url,
       expiresAt: new Date(Date.now() + PLAYBACK_URL_TTL_SECONDS * 1000).toISOString(),
-      contentType: footage.contentType,
+      contentType: media.mp4Url ? 'video/mp4' : footage.contentType,
+      ...media,
+      renditions: this.media.renditions(footage),
     };
+  }
+
+  /** Makes the web renditions again (after a failure, or to replace them); the footage stays usable meanwhile. */
+  async retryRenditions(workshopId: string, footageId: string): Promise<FootageResponseDto> {
+    const footage = await this.get(workshopId, footageId);
+    if (footage.state !== 'ready') throw new ConflictException(`Web versions are made once the footage is ready; it is ${footage.state}`);
+    if (!footage.originalKept) throw new ConflictException('The original was dropped after transcoding, so the web versions cannot be made again');
+    if (footage.renditionsState === 'waiting' || footage.renditionsState === 'processing') {
+      throw new ConflictException(`Web versions are already being made (${footage.renditionsState})`);
+    }
+    await this.footage.update(
+      { id: footage.id, renditionsState: footage.renditionsState },
+      { renditionsState: 'waiting', renditionsPercent: null, renditionsSecondsLeft: null, renditionsReason: null },
+    );
+    await this.enqueueRenditions(footage.id);
+    return this.describe(await this.get(workshopId, footageId));
+  }
+
+  async mediaSettings(workshopId: string): Promise<{ keepOriginals: boolean }> {
+    return { keepOriginals: await this.renditions.keepOriginals(workshopId) };
+  }
+
+  async updateMediaSettings(workshopId: string, keepOriginals: boolean): Promise<{ keepOriginals: boolean }> {
+    return { keepOriginals: await this.renditions.setKeepOriginals(workshopId, keepOriginals) };
   }
 
   /** Adds the processing job; the job id makes a repeated call a no-op while the job exists. */
@@ -374,7 +429,12 @@ export class FootageService {
           };
         }
         const posterUrl = row.posterKey ? await this.storage.presignedGetUrl(row.posterKey, POSTER_URL_TTL_SECONDS) : null;
-        return toFootageResponse(row, { posterUrl, upload: progress, transcript: transcripts.get(row.id) ?? null });
+        return toFootageResponse(row, {
+          posterUrl,
+          upload: progress,
+          transcript: transcripts.get(row.id) ?? null,
+          renditions: this.media.renditions(row),
+        });
       }),
     );
   }

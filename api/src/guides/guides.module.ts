@@ -6,6 +6,7 @@ import { BuildsModule } from '../builds/builds.module';
 import { Build } from '../builds/entities/build.entity';
 import { FitChecksModule } from '../fit-checks/fit-checks.module';
 import { Footage } from '../footage/entities/footage.entity';
+import { FootageModule } from '../footage/footage.module';
 import { Mark } from '../marks/entities/mark.entity';
 import { Measurement } from '../measurements/entities/measurement.entity';
 import { Transcript } from '../transcripts/entities/transcript.entity';
@@ -19,6 +20,7 @@ import { Guide } from './entities/guide.entity';
 import { GuidesController } from './guides.controller';
 import { GuidesService } from './guides.service';
 import { PublishedGuidesController } from './published-guides.controller';
+import { PublishedGuideMediaService } from './published-guide-media.service';
 import { PublishedGuidesService } from './published-guides.service';
 
 @Module({
@@ -28,9 +30,10 @@ import { PublishedGuidesService } from './published-guides.service';
     AssembliesModule,
     FitChecksModule,
     TranscriptsModule,
+    FootageModule,
   ],
   controllers: [GuidesController, PublishedGuidesController],
-  providers: [GuidesService, PublishedGuidesService],
+  providers: [GuidesService, PublishedGuidesService, PublishedGuideMediaService],
   exports: [GuidesService],
 })
 export class GuidesModule {}

@@ -3,7 +3,9 @@ import { ApiHeader, ApiNotFoundResponse, ApiOkResponse, ApiProduces, ApiResponse
 import type { Request, Response } from 'express';
 import { Public } from '../common/decorators/access.decorator';
 import { unlessNotModified } from '../common/http/entity-tag';
+import { WaveformDto } from '../footage/dto/footage.dto';
 import { PublicGuidesQueryDto } from './dto/guide.dto';
+import { PublishedGuideMediaService } from './published-guide-media.service';
 import { PublishedGuidesService } from './published-guides.service';
 
 /**
@@ -12,6 +14,10 @@ import { PublishedGuidesService } from './published-guides.service';
  * signed in or not (following is done elsewhere), so the policy stands for signed-in readers too.
  */
 export const PUBLIC_GUIDE_CACHE = 'public, max-age=30, stale-while-revalidate=300';
+
+/** Playlists and the thumbnails track carry storage links valid an hour: caches may keep them a minute. */
+const PUBLIC_MEDIA_CACHE = 'public, max-age=60';
+const HLS_TYPE = 'application/vnd.apple.mpegurl';
 
 function ConditionalPublicRead(what: string) {
   return applyDecorators(
@@ -33,7 +39,10 @@ function ConditionalPublicRead(what: string) {
 @Public()
 @Controller('guides')
 export class PublishedGuidesController {
-  constructor(@Inject(PublishedGuidesService) private readonly published: PublishedGuidesService) {}
+  constructor(
+    @Inject(PublishedGuidesService) private readonly published: PublishedGuidesService,
+    @Inject(PublishedGuideMediaService) private readonly media: PublishedGuideMediaService,
+  ) {}
 
   @Get()
   @ConditionalPublicRead('Published guides, newest first (at most 50)')
@@ -94,5 +103,48 @@ export class PublishedGuidesController {
   ): Promise<string> {
     response.type('text/vtt; charset=utf-8');
     return this.published.captions(workshopSlug, guideSlug);
+  }
+
+  @Get(':workshopSlug/:guideSlug/hls/master.m3u8')
+  @Header('Cache-Control', PUBLIC_MEDIA_CACHE)
+  @ApiProduces(HLS_TYPE)
+  @ApiOkResponse({ type: String, description: 'HLS master playlist of the guide’s footage; variant URIs are API paths' })
+  @ApiNotFoundResponse({ description: 'Not published, no footage, or its web versions are not ready' })
+  async hlsMaster(@Param('workshopSlug') workshopSlug: string, @Param('guideSlug') guideSlug: string, @Res({ passthrough: true }) response: Response) {
+    response.type(HLS_TYPE);
+    return this.media.master(workshopSlug, guideSlug);
+  }
+
+  @Get(':workshopSlug/:guideSlug/hls/:variant')
+  @Header('Cache-Control', PUBLIC_MEDIA_CACHE)
+  @ApiProduces(HLS_TYPE)
+  @ApiOkResponse({ type: String, description: 'A rendition’s media playlist (`v0.m3u8` is the highest) with short-lived segment links' })
+  @ApiNotFoundResponse({ description: 'Not published, no such rendition, or the web versions are not ready' })
+  async hlsVariant(
+    @Param('workshopSlug') workshopSlug: string,
+    @Param('guideSlug') guideSlug: string,
+    @Param('variant') variant: string,
+    @Res({ passthrough: true }) response: Response,
+  ) {
+    response.type(HLS_TYPE);
+    return this.media.variant(workshopSlug, guideSlug, variant);
+  }
+
+  @Get(':workshopSlug/:guideSlug/thumbnails.vtt')
+  @Header('Cache-Control', PUBLIC_MEDIA_CACHE)
+  @ApiProduces('text/vtt')
+  @ApiOkResponse({ type: String, description: 'WebVTT thumbnails track: each cue is a sprite-sheet link with #xywh=x,y,w,h' })
+  @ApiNotFoundResponse({ description: 'Not published, no footage, or its web versions are not ready' })
+  async thumbnails(@Param('workshopSlug') workshopSlug: string, @Param('guideSlug') guideSlug: string, @Res({ passthrough: true }) response: Response) {
+    response.type('text/vtt; charset=utf-8');
+    return this.media.thumbnails(workshopSlug, guideSlug);
+  }
+
+  @Get(':workshopSlug/:guideSlug/waveform')
+  @Header('Cache-Control', PUBLIC_MEDIA_CACHE)
+  @ApiOkResponse({ type: WaveformDto, description: 'Audio peaks of the guide’s footage' })
+  @ApiNotFoundResponse({ description: 'Not published, no footage, or its web versions are not ready' })
+  waveform(@Param('workshopSlug') workshopSlug: string, @Param('guideSlug') guideSlug: string): Promise<WaveformDto> {
+    return this.media.waveform(workshopSlug, guideSlug);
   }
 }

@@ -7,6 +7,7 @@ import { detectSafetyTopics, GUIDE_DISCLAIMER, SAFETY_TOPICS, standardCautions }
 import { formatLength } from '../engine/units';
 import { entityTagOf } from '../common/http/entity-tag';
 import { Footage } from '../footage/entities/footage.entity';
+import { FootageMediaService } from '../footage/footage-media.service';
 import { FitChecksService } from '../fit-checks/fit-checks.service';
 import { StorageService } from '../infra/storage/storage.service';
 import { Mark } from '../marks/entities/mark.entity';
@@ -54,6 +55,7 @@ export class PublishedGuidesService {
     private readonly assemblies: AssembliesService,
     private readonly transcriptsService: TranscriptsService,
     private readonly storage: StorageService,
+    private readonly footageMedia: FootageMediaService,
   ) {}
 
   /** The index's entity tag, from one aggregate over the published guides (the same for every search). */
@@ -156,6 +158,8 @@ export class PublishedGuidesService {
               videoUrl: `${basePath}/video`,
               posterUrl: footage.posterKey ? `${basePath}/poster` : null,
               captionsUrl: transcript ? `${basePath}/captions.vtt` : null,
+              // Web renditions (HLS, scrub previews, waveform) once made; `videoUrl` then serves the H.264 MP4.
+              ...(await this.footageMedia.playbackMedia(footage, { basePath }, `${basePath}/video`)),
             }
           : null,
       steps: content.steps,
@@ -180,6 +184,8 @@ export class PublishedGuidesService {
 
   async videoUrl(workshopSlug: string, guideSlug: string): Promise<string> {
     const footage = await this.guideFootage(workshopSlug, guideSlug);
+    // The web MP4 plays in every browser; the original (perhaps HEVC, perhaps dropped) only until it exists.
+    if (footage.renditionsState === 'ready') return this.footageMedia.downloadUrl(footage);
     return this.storage.presignedGetUrl(footage.objectKey, MEDIA_URL_TTL_SECONDS);
   }
 
@@ -211,7 +217,8 @@ export class PublishedGuidesService {
     return { workshop, guide, revision, content: revision.content };
   }
 
-  private async guideFootage(workshopSlug: string, guideSlug: string): Promise<Footage> {
+  /** The published guide's footage, ready to play; 404 when the guide is not published or has none. */
+  async guideFootage(workshopSlug: string, guideSlug: string): Promise<Footage> {
     const { workshop, content } = await this.find(workshopSlug, guideSlug);
     const footage = content.footageId ? await this.footage.findOneBy({ id: content.footageId, workshopId: workshop.id }) : null;
     if (!footage || footage.state !== 'ready') throw new NotFoundException('This guide has no footage to play');

@@ -4,6 +4,7 @@ import {
   ArrayMinSize,
   ArrayUnique,
   IsArray,
+  IsBoolean,
   IsInt,
   IsOptional,
   IsString,
@@ -13,7 +14,7 @@ import {
   MaxLength,
   Min,
 } from 'class-validator';
-import { FOOTAGE_STATES, type FootageState } from '../entities/footage.entity';
+import { FOOTAGE_STATES, type FootageState, RENDITION_STATES, type RenditionState } from '../entities/footage.entity';
 import { MAX_PARTS } from '../upload-plan';
 
 export class CreateFootageDto {
@@ -97,6 +98,37 @@ export class TranscriptSummaryDto {
   @ApiProperty() cueCount!: number;
 }
 
+export class RenditionVariantDto {
+  @ApiProperty({ example: 1920 }) width!: number;
+  @ApiProperty({ example: 1080 }) height!: number;
+  @ApiProperty({ example: 5640800, description: 'Peak bit rate as the master playlist declares it (bit/s)' }) bandwidth!: number;
+}
+
+export class RenditionsDto {
+  @ApiProperty({ enum: RENDITION_STATES, description: 'waiting: queued (or the footage is not probed yet)' }) state!: RenditionState;
+  @ApiProperty({ type: Number, nullable: true, example: 42.5, description: 'Percent done while processing; 100 when ready' })
+  percent!: number | null;
+  @ApiProperty({ type: Number, nullable: true, example: 37, description: 'Estimated seconds left while processing' })
+  secondsLeft!: number | null;
+  @ApiProperty({ type: String, nullable: true, description: 'Why the web versions could not be made, in plain words' })
+  reason!: string | null;
+  @ApiProperty({ type: [RenditionVariantDto], description: 'The renditions made, highest first; empty until ready' })
+  variants!: RenditionVariantDto[];
+}
+
+export class WaveformDto {
+  @ApiProperty() durationMs!: number;
+  @ApiProperty({ example: 20, description: 'Peaks per second of footage' }) peaksPerSecond!: number;
+  @ApiProperty({ description: 'False when the source had no audio (the renditions carry silence)' }) hasAudio!: boolean;
+  @ApiProperty({ type: [Number], description: 'Largest absolute sample of each slice, 0..1 of full scale' }) peaks!: number[];
+}
+
+export class MediaSettingsDto {
+  @ApiProperty({ description: 'Keep the uploaded original after web versions are made (default true)' })
+  @IsBoolean()
+  keepOriginals!: boolean;
+}
+
 export class FootageResponseDto {
   @ApiProperty() id!: string;
   @ApiProperty() workshopId!: string;
@@ -121,6 +153,12 @@ export class FootageResponseDto {
   upload!: UploadProgressDto | null;
   @ApiProperty({ type: TranscriptSummaryDto, nullable: true, description: 'The active transcript, if any' })
   transcript!: TranscriptSummaryDto | null;
+  @ApiProperty({ type: Number, nullable: true, description: 'Width as displayed (after rotation); known once renditions start' })
+  displayWidth!: number | null;
+  @ApiProperty({ type: Number, nullable: true }) displayHeight!: number | null;
+  @ApiProperty({ type: RenditionsDto, description: 'The web renditions (HLS, MP4, scrub previews, waveform)' })
+  renditions!: RenditionsDto;
+  @ApiProperty({ description: 'False once the workshop setting dropped the original after transcoding' }) originalKept!: boolean;
   @ApiProperty() createdAt!: string;
   @ApiProperty() updatedAt!: string;
 }
@@ -147,9 +185,21 @@ export class RecordPartResponseDto {
 }
 
 export class PlaybackResponseDto {
-  @ApiProperty({ description: 'Presigned GET URL; supports HTTP Range requests for seeking' }) url!: string;
+  @ApiProperty({ description: 'Presigned GET URL of a progressive file (the MP4 rendition once ready, else the original); HTTP Range works' })
+  url!: string;
   @ApiProperty() expiresAt!: string;
   @ApiProperty() contentType!: string;
+  @ApiProperty({ type: String, nullable: true, example: '/api/workshops/…/footage/…/hls/master.m3u8', description: 'HLS master playlist (API path) once renditions are ready' })
+  hlsUrl!: string | null;
+  @ApiProperty({ type: String, nullable: true, description: 'Presigned link to the faststart H.264/AAC MP4 once ready' })
+  mp4Url!: string | null;
+  @ApiProperty({ type: String, nullable: true, description: 'WebVTT thumbnails track (API path); cue texts are sprite links with #xywh=' })
+  thumbnailsUrl!: string | null;
+  @ApiProperty({ type: String, nullable: true, description: 'Waveform peaks (API path, WaveformDto)' })
+  waveformUrl!: string | null;
+  @ApiProperty({ type: Number, nullable: true }) displayWidth!: number | null;
+  @ApiProperty({ type: Number, nullable: true }) displayHeight!: number | null;
+  @ApiProperty({ type: RenditionsDto }) renditions!: RenditionsDto;
 }
 
 export class FootageTypeDto {

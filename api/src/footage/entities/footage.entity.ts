@@ -4,6 +4,33 @@ import { CreatedAtColumn, newId, UpdatedAtColumn } from '../../common/database/c
 export const FOOTAGE_STATES = ['uploading', 'processing', 'ready', 'failed'] as const;
 export type FootageState = (typeof FOOTAGE_STATES)[number];
 
+/** The web renditions' progress: waiting (queued, or the footage is not probed yet), processing, ready, failed. */
+export const RENDITION_STATES = ['waiting', 'processing', 'ready', 'failed'] as const;
+export type RenditionState = (typeof RENDITION_STATES)[number];
+
+/** What the transcode job made, kept as JSON beside the footage (storage keys follow from the footage's folder). */
+export interface RenditionsMedia {
+  /** Highest first; `bandwidth` in bit/s as the master playlist declares it. */
+  variants: { width: number; height: number; bandwidth: number }[];
+  sprites: {
+    intervalSeconds: number;
+    tileWidth: number;
+    tileHeight: number;
+    columns: number;
+    rows: number;
+    count: number;
+    sheets: number;
+  };
+  hasAudio: boolean;
+  /** Constant output frame rate. */
+  frameRate: number;
+}
+
+const jsonTransformer: ValueTransformer = {
+  to: (value: RenditionsMedia | null | undefined) => (value === undefined ? undefined : value === null ? null : JSON.stringify(value)),
+  from: (value: string | RenditionsMedia | null) => (typeof value === 'string' ? (JSON.parse(value) as RenditionsMedia) : value),
+};
+
 /** BIGINT and DECIMAL columns come back from mysql2 as strings; sizes stay far below 2^53. */
 const numberTransformer: ValueTransformer = {
   to: (value: number | null | undefined) => value,
@@ -69,6 +96,36 @@ export class Footage {
 
   @Column({ name: 'poster_key', type: 'varchar', length: 300, nullable: true })
   posterKey!: string | null;
+
+  /** Size as players show it, after the stream's rotation (a portrait phone clip is taller than wide). */
+  @Column({ name: 'display_width', type: 'int', unsigned: true, nullable: true })
+  displayWidth!: number | null;
+
+  @Column({ name: 'display_height', type: 'int', unsigned: true, nullable: true })
+  displayHeight!: number | null;
+
+  @Column({ name: 'renditions_state', type: 'enum', enum: RENDITION_STATES, default: 'waiting' })
+  renditionsState!: RenditionState;
+
+  @Column({ name: 'renditions_percent', type: 'decimal', precision: 4, scale: 1, nullable: true, transformer: numberTransformer })
+  renditionsPercent!: number | null;
+
+  @Column({ name: 'renditions_seconds_left', type: 'int', unsigned: true, nullable: true })
+  renditionsSecondsLeft!: number | null;
+
+  @Column({ name: 'renditions_reason', type: 'varchar', length: 500, nullable: true })
+  renditionsReason!: string | null;
+
+  /** When the job last stored its progress; a stalled job shows here. */
+  @Column({ name: 'renditions_progress_at', type: 'datetime', precision: 3, nullable: true })
+  renditionsProgressAt!: Date | null;
+
+  @Column({ name: 'renditions_media', type: 'longtext', nullable: true, transformer: jsonTransformer })
+  renditionsMedia!: RenditionsMedia | null;
+
+  /** False once the workshop's "drop originals" setting removed the upload after transcoding. */
+  @Column({ name: 'original_kept', type: 'boolean', default: true })
+  originalKept!: boolean;
 
   @Column({ name: 'created_by', type: 'char', length: 36, nullable: true })
   createdBy!: string | null;

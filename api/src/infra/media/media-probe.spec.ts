@@ -20,7 +20,18 @@ describe('interpretProbe', () => {
       container: 'mp4',
       videoCodec: 'h264',
       audioCodec: 'aac',
+      rotation: 0,
     });
+  });
+
+  it('reads the rotation from the display matrix (ffmpeg 5.1 side data) or the older rotate tag', () => {
+    // Shape from ffprobe of a clip remuxed with `-metadata:s:v:0 rotate=90` (ffmpeg 5.1).
+    const matrix = { ...MP4_CLIP, streams: [{ ...MP4_CLIP.streams[0], side_data_list: [{ side_data_type: 'Display Matrix', rotation: -90 }] }] };
+    expect(interpretProbe(matrix).rotation).toBe(-90);
+    const tagged = { ...MP4_CLIP, streams: [{ ...MP4_CLIP.streams[0], tags: { rotate: '270' } }] };
+    expect(interpretProbe(tagged).rotation).toBe(270);
+    const flipped = { ...MP4_CLIP, streams: [{ ...MP4_CLIP.streams[0], side_data_list: [{ side_data_type: 'Display Matrix', rotation: 180 }] }] };
+    expect(interpretProbe(flipped).rotation).toBe(180);
   });
 
   it('tells QuickTime from MP4 by the brand, and WebM from Matroska by the extension (they share demuxers)', () => {

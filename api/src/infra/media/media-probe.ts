@@ -28,6 +28,8 @@ export interface MediaInfo {
   container: string;
   videoCodec: string;
   audioCodec: string | null;
+  /** Degrees the player turns the picture (the stream's display matrix, or the old `rotate` tag); 0, ±90 or 180. */
+  rotation: number;
 }
 
 /** A file that is readable but is not a video we accept; `reason` is shown to the creator. */
@@ -47,6 +49,8 @@ interface ProbeStream {
   r_frame_rate?: string;
   duration?: string;
   disposition?: { attached_pic?: number };
+  side_data_list?: { side_data_type?: string; rotation?: number }[];
+  tags?: { rotate?: string };
 }
 
 interface ProbeOutput {
@@ -106,7 +110,16 @@ export function interpretProbe(output: unknown, extension?: string): MediaInfo {
     container,
     videoCodec: video.codec_name ?? 'unknown',
     audioCodec: audio?.codec_name ?? null,
+    rotation: rotationOf(video),
   };
+}
+
+function rotationOf(video: ProbeStream): number {
+  const matrix = video.side_data_list?.find((entry) => entry.side_data_type === 'Display Matrix');
+  const degrees = typeof matrix?.rotation === 'number' ? matrix.rotation : Number(video.tags?.rotate ?? 0);
+  if (!Number.isFinite(degrees)) return 0;
+  const quarterTurns = Math.round(degrees / 90) % 4;
+  return quarterTurns === 0 ? 0 : quarterTurns * 90;
 }
 
 /** ffprobe messages that mean "this is not media", as opposed to a network or storage hiccup worth retrying. */

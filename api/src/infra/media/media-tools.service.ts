@@ -1,6 +1,15 @@
 import { Injectable, Logger } from '@nestjs/common';
-import { execFile } from 'node:child_process';
+import { execFile, spawn } from 'node:child_process';
 import { interpretProbe, isNotMediaMessage, MediaInfo, NotAVideoError } from './media-probe';
+import { faststartArguments, PROGRESS_FD, ProgressReader, type TranscodePlan, type TranscodeProgress, transcodeArguments } from './transcode-command';
+
+/** ffmpeg could not read or decode the source: retrying will not help; `reason` is shown to the creator. */
+export class UnreadableSourceError extends Error {
+  constructor(readonly reason: string) {
+    super(reason);
+    this.name = 'UnreadableSourceError';
+  }
+}
 
 /** A tool run that failed for a reason other than the input (a timeout, storage unreachable); worth retrying. */
 export class MediaToolError extends Error {
@@ -73,6 +82,61 @@ export class MediaToolsService {
     }
   }
 
+  /**
+   * Runs the one transcode command (transcode-command.ts) and reports progress blocks as ffmpeg
+   * writes them (every half second). Throws UnreadableSourceError when ffmpeg stops on the input.
+   */
+  async transcode(plan: TranscodePlan, onProgress: (progress: TranscodeProgress) => void): Promise<void> {
+    // Generous: far slower than real time means something is stuck.
+    const timeoutMs = Math.max(10 * 60_000, plan.durationMs * 20);
+    await this.spawnWithProgress(transcodeArguments(plan), plan.input, timeoutMs, onProgress);
+  }
+
+  /** The download MP4: the top rendition's segments copied into one file with its index up front. */
+  async remuxFaststart(variantPlaylist: string, output: string): Promise<void> {
+    try {
+      await this.run('ffmpeg', faststartArguments(variantPlaylist, output), variantPlaylist);
+    } catch (error) {
+      throw this.asToolError('ffmpeg', error);
+    }
+  }
+
+  private spawnWithProgress(args: string[], input: string, timeoutMs: number, onProgress: (progress: TranscodeProgress) => void): Promise<void> {
+    return new Promise((resolve, reject) => {
+      const child = spawn('ffmpeg', args, { stdio: ['ignore', 'ignore', 'pipe', 'pipe'], windowsHide: true });
+      const reader = new ProgressReader(onProgress);
+      let stderr = '';
+      let timedOut = false;
+      const timer = setTimeout(() => {
+        timedOut = true;
+        child.kill('SIGKILL');
+      }, timeoutMs);
+      child.stderr?.setEncoding('utf8');
+      child.stderr?.on('data', (chunk: string) => {
+        if (stderr.length < 64_000) stderr += chunk;
+      });
+      const progress = child.stdio[PROGRESS_FD];
+      if (progress && 'setEncoding' in progress) {
+        progress.setEncoding('utf8');
+        progress.on('data', (chunk: string) => reader.push(chunk));
+      }
+      child.on('error', (error: NodeJS.ErrnoException) => {
+        clearTimeout(timer);
+        reject(error.code === 'ENOENT' ? new MediaToolError('ffmpeg is not installed (Debian package "ffmpeg")') : error);
+      });
+      child.on('close', (code, signal) => {
+        clearTimeout(timer);
+        const cleanStderr = stderr.split(input).join('<input>');
+        if (code === 0) return resolve();
+        if (timedOut) return reject(new MediaToolError(`ffmpeg took longer than ${Math.round(timeoutMs / 1000)} s`));
+        if (signal) return reject(new MediaToolError(`ffmpeg was stopped (${signal})`));
+        this.logger.warn(`ffmpeg transcode failed: ${cleanStderr.slice(0, 500)}`);
+        if (isNetworkMessage(cleanStderr)) return reject(new MediaToolError(`ffmpeg could not read from storage: ${firstLine(cleanStderr)}`));
+        reject(new UnreadableSourceError(`The video could not be converted: ffmpeg stopped reading it (${firstLine(cleanStderr)}).`));
+      });
+    });
+  }
+
   private networkOptions(input: string): string[] {
     return /^https?:\/\//u.test(input) ? ['-rw_timeout', READ_TIMEOUT_US] : [];
   }
@@ -115,6 +179,11 @@ class ToolExit extends Error {
   ) {
     super(`${tool} exited with an error`);
   }
+}
+
+/** Storage trouble, worth retrying, as opposed to a source ffmpeg cannot decode. */
+function isNetworkMessage(stderr: string): boolean {
+  return /Connection refused|Connection timed out|Server returned 5\d\d|Server returned 403|I\/O error|Network is unreachable/iu.test(stderr);
 }
 
 /** The most telling line of a tool's error output, without the "<input>: " prefix. */

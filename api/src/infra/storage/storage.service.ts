@@ -12,9 +12,11 @@ import {
   S3ServiceException,
   UploadPartCommand,
 } from '@aws-sdk/client-s3';
+import { Upload } from '@aws-sdk/lib-storage';
 import { getSignedUrl } from '@aws-sdk/s3-request-presigner';
 import { Inject, Injectable, Logger, OnModuleDestroy } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
+import { createReadStream } from 'node:fs';
 import { AppConfig } from '../../config/app-config';
 import { createS3Client } from './s3-client';
 import { isStorageUnavailable, multipartRefusal, StorageUnavailableError } from './storage-errors';
@@ -40,6 +42,36 @@ export class StorageService implements OnModuleDestroy {
     await this.reach(() =>
       this.client.send(new PutObjectCommand({ Bucket: this.bucket, Key: key, Body: body, ContentType: contentType })),
     );
+  }
+
+  /**
+   * Stores a file from local disk without holding it in memory (media the API makes: renditions,
+   * segments); large files go up in 16 MiB parts.
+   */
+  async putFile(key: string, path: string, contentType: string): Promise<void> {
+    await this.reach(async () => {
+      const upload = new Upload({
+        client: this.client,
+        params: { Bucket: this.bucket, Key: key, Body: createReadStream(path), ContentType: contentType },
+        partSize: 16 * 1024 * 1024,
+        queueSize: 2,
+      });
+      await upload.done();
+    });
+  }
+
+  /** Every key under `prefix`, a page at a time. */
+  async listKeys(prefix: string): Promise<string[]> {
+    const keys: string[] = [];
+    let continuationToken: string | undefined;
+    do {
+      const page = await this.reach(() =>
+        this.client.send(new ListObjectsV2Command({ Bucket: this.bucket, Prefix: prefix, ContinuationToken: continuationToken })),
+      );
+      for (const item of page.Contents ?? []) if (item.Key) keys.push(item.Key);
+      continuationToken = page.IsTruncated ? page.NextContinuationToken : undefined;
+    } while (continuationToken);
+    return keys;
   }
 
   /** Reads a whole object into memory; meant for small objects. */

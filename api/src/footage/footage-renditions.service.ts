@@ -1,0 +1,241 @@
+import { Inject, Injectable, Logger } from '@nestjs/common';
+import { InjectRepository } from '@nestjs/typeorm';
+import { createReadStream } from 'node:fs';
+import { mkdir, mkdtemp, readdir, rm, writeFile } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import { join, relative } from 'node:path';
+import { In, Repository } from 'typeorm';
+import {
+  constantFrameRate,
+  displaySize,
+  PeakAccumulator,
+  renditionLadder,
+  samplesPerPeak,
+  spriteLayout,
+  WAVEFORM_SAMPLE_RATE,
+} from '../engine/media-renditions';
+import { MediaToolsService, UnreadableSourceError } from '../infra/media/media-tools.service';
+import { progressEstimate, TRANSCODE_OUTPUTS, type TranscodePlan } from '../infra/media/transcode-command';
+import { StorageService } from '../infra/storage/storage.service';
+import { Footage, type RenditionsMedia } from './entities/footage.entity';
+import { WorkshopMediaSettings } from './entities/workshop-media-settings.entity';
+import { extensionOf } from './upload-plan';
+
+/** ffmpeg reads the original through a link valid this long; long footage takes a while. */
+const TOOL_URL_TTL_SECONDS = 6 * 60 * 60;
+/** Progress is stored at most this often (the studio polls; the goal is at least every 2 s). */
+const PROGRESS_WRITE_MS = 1000;
+/** Fewer frames than this share of the expected ones means the source ends early (a cut-short upload). */
+const MIN_FRAME_SHARE = 0.9;
+
+export type RenditionOutcome = 'ready' | 'failed' | 'skipped';
+
+/** Where a footage's web renditions live: a folder next to its original. */
+export function renditionsPrefix(footage: Pick<Footage, 'objectKey'>): string {
+  return footage.objectKey.replace(/\/[^/]+$/u, '/web/');
+}
+
+export const RENDITION_FILES = {
+  master: TRANSCODE_OUTPUTS.master,
+  download: 'download.mp4',
+  waveform: 'waveform.json',
+  variantPlaylist: TRANSCODE_OUTPUTS.variantPlaylist,
+  spriteSheet: TRANSCODE_OUTPUTS.spriteSheet,
+} as const;
+
+export interface WaveformFile {
+  durationMs: number;
+  peaksPerSecond: number;
+  hasAudio: boolean;
+  peaks: number[];
+}
+
+const CONTENT_TYPES: Record<string, string> = {
+  m3u8: 'application/vnd.apple.mpegurl',
+  m4s: 'video/iso.segment',
+  mp4: 'video/mp4',
+  jpg: 'image/jpeg',
+  json: 'application/json',
+};
+
+/**
+ * The transcode job for one footage: one ffmpeg run makes H.264/AAC renditions cut for HLS, the
+ * sprite sheets and the waveform's PCM; the top rendition is remuxed into a faststart MP4; all of
+ * it goes to storage under `<footage folder>/web/`. Re-running first clears that folder, so a retry
+ * replaces partial outputs and never doubles them.
+ */
+@Injectable()
+export class FootageRenditionsService {
+  private readonly logger = new Logger(FootageRenditionsService.name);
+
+  constructor(
+    @InjectRepository(Footage) private readonly footage: Repository<Footage>,
+    @InjectRepository(WorkshopMediaSettings) private readonly settings: Repository<WorkshopMediaSettings>,
+    @Inject(StorageService) private readonly storage: StorageService,
+    @Inject(MediaToolsService) private readonly media: MediaToolsService,
+  ) {}
+
+  async transcode(footageId: string): Promise<RenditionOutcome> {
+    const footage = await this.footage.findOneBy({ id: footageId });
+    if (!footage || footage.state !== 'ready' || !footage.originalKept || footage.renditionsState === 'ready') return 'skipped';
+    const claimed = await this.footage.update(
+      { id: footage.id, renditionsState: In(['waiting', 'processing', 'failed']) },
+      { renditionsState: 'processing', renditionsPercent: 0, renditionsSecondsLeft: null, renditionsReason: null, renditionsProgressAt: new Date() },
+    );
+    if (!claimed.affected) return 'skipped';
+
+    const prefix = renditionsPrefix(footage);
+    // Whatever an interrupted attempt stored goes first, so nothing is ever doubled.
+    await this.storage.deletePrefix(prefix);
+    const workDir = await mkdtemp(join(tmpdir(), 'fitwright-transcode-'));
+    try {
+      const media = await this.makeRenditions(footage, workDir);
+      await this.storeFolder(workDir, prefix);
+      const finished = await this.footage.update(
+        { id: footage.id, renditionsState: 'processing' },
+        {
+          renditionsState: 'ready',
+          renditionsPercent: 100,
+          renditionsSecondsLeft: 0,
+          renditionsReason: null,
+          renditionsProgressAt: new Date(),
+          renditionsMedia: media,
+        },
+      );
+      if (!finished.affected) {
+        // Deleted (or retried elsewhere) while we worked: leave nothing behind.
+        await this.storage.deletePrefix(prefix);
+        return 'skipped';
+      }
+      await this.dropOriginalIfAsked(footage);
+      return 'ready';
+    } catch (error) {
+      if (!(error instanceof UnreadableSourceError)) throw error;
+      await this.storage.deletePrefix(prefix);
+      await this.markFailed(footage.id, `${error.reason} The original is kept.`);
+      this.logger.log(`footage ${footage.id}: renditions failed: ${error.reason}`);
+      return 'failed';
+    } finally {
+      await rm(workDir, { recursive: true, force: true });
+    }
+  }
+
+  async markFailed(footageId: string, reason: string): Promise<void> {
+    await this.footage.update(
+      { id: footageId, renditionsState: In(['waiting', 'processing']) },
+      { renditionsState: 'failed', renditionsReason: reason.slice(0, 500), renditionsSecondsLeft: null, renditionsProgressAt: new Date() },
+    );
+  }
+
+  async keepOriginals(workshopId: string): Promise<boolean> {
+    return (await this.settings.findOneBy({ workshopId }))?.keepOriginals ?? true;
+  }
+
+  async setKeepOriginals(workshopId: string, keepOriginals: boolean): Promise<boolean> {
+    await this.settings.upsert({ workshopId, keepOriginals }, ['workshopId']);
+    return keepOriginals;
+  }
+
+  private async makeRenditions(footage: Footage, workDir: string): Promise<RenditionsMedia> {
+    const input = await this.storage.internalGetUrl(footage.objectKey, TOOL_URL_TTL_SECONDS);
+    const info = await this.media.probe(input, extensionOf(footage.objectKey));
+    const display = displaySize(info.width, info.height, info.rotation);
+    await this.footage.update({ id: footage.id }, { displayWidth: display.width, displayHeight: display.height });
+
+    const renditions = renditionLadder(display);
+    const frameRate = constantFrameRate(info.frameRate);
+    const sprites = spriteLayout(info.durationMs, display);
+    const hasAudio = info.audioCodec !== null;
+    for (let index = 0; index < renditions.length; index += 1) await mkdir(join(workDir, `v${index}`));
+    const plan: TranscodePlan = { input, outputDir: workDir, renditions, frameRate, hasAudio, durationMs: info.durationMs, sprites };
+
+    const expectedFrames = Math.max(1, Math.round((info.durationMs / 1000) * frameRate.value));
+    const startedAt = Date.now();
+    let lastWrite = 0;
+    let framesWritten = 0;
+    let pendingWrite: Promise<unknown> = Promise.resolve();
+    await this.media.transcode(plan, ({ frames }) => {
+      framesWritten = frames;
+      const now = Date.now();
+      if (now - lastWrite < PROGRESS_WRITE_MS) return;
+      lastWrite = now;
+      const estimate = progressEstimate(frames, expectedFrames, now - startedAt);
+      // Never 100 before the files are stored.
+      const percent = Math.min(99, estimate.percent);
+      pendingWrite = pendingWrite.then(() =>
+        this.footage
+          .update(
+            { id: footage.id, renditionsState: 'processing' },
+            { renditionsPercent: percent, renditionsSecondsLeft: estimate.secondsLeft, renditionsProgressAt: new Date() },
+          )
+          .catch((error: unknown) => this.logger.warn(`progress of ${footage.id} not stored: ${String(error)}`)),
+      );
+    });
+    await pendingWrite;
+    if (framesWritten < expectedFrames * MIN_FRAME_SHARE) {
+      const readSeconds = (framesWritten / frameRate.value).toFixed(1);
+      throw new UnreadableSourceError(
+        `The video ends early: only ${readSeconds} s of its ${(info.durationMs / 1000).toFixed(1)} s could be read (the upload may be cut short).`,
+      );
+    }
+
+    await this.media.remuxFaststart(join(workDir, RENDITION_FILES.variantPlaylist(0)), join(workDir, RENDITION_FILES.download));
+    const waveform = await this.waveform(join(workDir, TRANSCODE_OUTPUTS.pcm), info.durationMs, hasAudio);
+    await writeFile(join(workDir, RENDITION_FILES.waveform), JSON.stringify(waveform));
+    await rm(join(workDir, TRANSCODE_OUTPUTS.pcm), { force: true });
+
+    return {
+      variants: renditions.map((size) => ({
+        width: size.width,
+        height: size.height,
+        // As ffmpeg declares BANDWIDTH in the master playlist: (video cap + 128 kbit/s audio) × 1.1.
+        bandwidth: Math.round((size.maxKbits + 128) * 1000 * 1.1),
+      })),
+      sprites,
+      hasAudio,
+      frameRate: Math.round(frameRate.value * 1000) / 1000,
+    };
+  }
+
+  private async waveform(pcmPath: string, durationMs: number, hasAudio: boolean): Promise<WaveformFile> {
+    const perPeak = samplesPerPeak(durationMs);
+    const accumulator = new PeakAccumulator(perPeak);
+    for await (const chunk of createReadStream(pcmPath)) accumulator.push(chunk as Buffer);
+    return {
+      durationMs,
+      peaksPerSecond: Math.round((WAVEFORM_SAMPLE_RATE / perPeak) * 1000) / 1000,
+      hasAudio,
+      peaks: accumulator.finish(),
+    };
+  }
+
+  /** Uploads every file under `folder`, a few at a time; playlists last so no playlist names a missing segment. */
+  private async storeFolder(folder: string, prefix: string): Promise<void> {
+    const files = (await readdir(folder, { recursive: true, withFileTypes: true }))
+      .filter((entry) => entry.isFile())
+      .map((entry) => relative(folder, join(entry.parentPath, entry.name)));
+    const playlists = files.filter((file) => file.endsWith('.m3u8'));
+    const others = files.filter((file) => !file.endsWith('.m3u8'));
+    const put = (file: string) => this.storage.putFile(`${prefix}${file}`, join(folder, file), CONTENT_TYPES[file.split('.').pop() ?? ''] ?? 'application/octet-stream');
+    await runLimited(others, 4, put);
+    await runLimited(playlists, 4, put);
+  }
+
+  private async dropOriginalIfAsked(footage: Footage): Promise<void> {
+    if (await this.keepOriginals(footage.workshopId)) return;
+    await this.storage.deleteObject(footage.objectKey);
+    await this.footage.update({ id: footage.id }, { originalKept: false });
+  }
+}
+
+async function runLimited<T>(items: T[], limit: number, work: (item: T) => Promise<void>): Promise<void> {
+  let next = 0;
+  const workers = Array.from({ length: Math.min(limit, items.length) }, async () => {
+    while (next < items.length) {
+      const item = items[next];
+      next += 1;
+      await work(item);
+    }
+  });
+  await Promise.all(workers);
+}
