@@ -129,6 +129,10 @@ describe('search: published guides for everyone, own workshops for members (real
   it('filters by workshop, state and vehicle', async () => {
     expect((await search(reader, { q: stepWord, workshop: other.workshopSlug })).total).toBe(0);
     expect((await search(reader, { q: stepWord, workshop: shop.workshopSlug })).total).toBe(1);
+    // A kind filter narrows the page; the chips still count the other kinds.
+    const onlyCues = await search(reader, { q: stepWord, kind: 'cue' });
+    expect(onlyCues.total).toBe(0);
+    expect(onlyCues.counts).toContainEqual({ kind: 'guide', count: 1 });
     expect((await search(shop.owner.agent, { q: draftWord, state: 'published' })).total).toBe(0);
     expect((await search(shop.owner.agent, { q: stepWord, state: 'unpublished', kind: 'guide' })).total).toBe(0);
     // The fixture's build has no vehicle: any vehicle filter leaves it out.

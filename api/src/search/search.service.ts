@@ -63,22 +63,15 @@ export class SearchService {
     const limit = query.limit ?? 20;
     const memberWorkshopIds = user ? await this.memberWorkshopIds(user.id) : [];
     const all = this.kindQueries(parsed, query, memberWorkshopIds);
-    const asked = query.kind ? all.filter((kind) => kind.kind === query.kind) : all;
-
-    const [counts, rows] = await Promise.all([
-      Promise.all(all.map((kind) => this.count(kind))),
-      asked.length ? this.page(asked, offset, limit) : Promise.resolve([]),
-    ]);
-    const countByKind = new Map<SearchKind, number>();
-    all.forEach((kind, index) => countByKind.set(kind.kind, (countByKind.get(kind.kind) ?? 0) + counts[index]));
-    const total = asked.reduce((sum, kind) => sum + counts[all.indexOf(kind)], 0);
+    const { rows, counts } = await this.page(all, query.kind, offset, limit);
+    const total = query.kind ? (counts.get(query.kind) ?? 0) : [...counts.values()].reduce((sum, count) => sum + count, 0);
     return {
       terms: parsed.terms,
       partNumbers: parsed.partNumberKeys,
       total,
       offset,
       limit,
-      counts: SEARCH_KINDS.filter((kind) => countByKind.has(kind)).map((kind) => ({ kind, count: countByKind.get(kind) ?? 0 })),
+      counts: SEARCH_KINDS.filter((kind) => all.some((entry) => entry.kind === kind)).map((kind) => ({ kind, count: counts.get(kind) ?? 0 })),
       results: rows.map((row) => toHit(row, parsed)),
     };
   }
@@ -91,16 +84,31 @@ export class SearchService {
     return rows.map((row) => row.workshopId);
   }
 
-  private async count(kind: KindQuery): Promise<number> {
-    const [row] = await this.dataSource.query<{ n: number | string }[]>(`SELECT COUNT(*) AS n FROM (${kind.sql}) AS hits`, kind.params);
-    return Number(row?.n ?? 0);
-  }
-
-  /** Each kind contributes its best `offset + limit` rows; the union is ordered by score (ties by kind and id, so pages are stable). */
-  private async page(kinds: KindQuery[], offset: number, limit: number): Promise<HitRow[]> {
+  /**
+   * One statement per search: each kind gives its best `offset + limit` rows and, through a window
+   * count, how many it has in all, so every FULLTEXT match is read once (not once to count and again
+   * for the page). Kinds not asked for give one row, for their count. The page is cut here, by score
+   * (ties by kind and id, so pages are stable).
+   */
+  private async page(kinds: KindQuery[], asked: SearchKind | undefined, offset: number, limit: number): Promise<{ rows: HitRow[]; counts: Map<SearchKind, number> }> {
     const take = offset + limit;
-    const sql = `${kinds.map((kind) => `(SELECT ${COLUMNS} FROM (${kind.sql}) AS hits ORDER BY score DESC, id LIMIT ${take})`).join(' UNION ALL ')} ORDER BY score DESC, kind, id LIMIT ? OFFSET ?`;
-    return this.dataSource.query<HitRow[]>(sql, [...kinds.flatMap((kind) => kind.params), limit, offset]);
+    const sql = kinds
+      .map(
+        (kind, branch) =>
+          `(SELECT ${COLUMNS}, ${branch} AS branch, COUNT(*) OVER () AS kindTotal FROM (${kind.sql}) AS hits ORDER BY score DESC, id LIMIT ${!asked || asked === kind.kind ? take : 1})`,
+      )
+      .join(' UNION ALL ');
+    const found = await this.dataSource.query<(HitRow & { branch: number | string; kindTotal: number | string })[]>(sql, kinds.flatMap((kind) => kind.params));
+    // A kind may come from two queries (public and member parts): each query's window counts its own rows.
+    const totals = new Map<number, number>();
+    for (const row of found) totals.set(Number(row.branch), Number(row.kindTotal));
+    const counts = new Map<SearchKind, number>();
+    kinds.forEach((kind, branch) => counts.set(kind.kind, (counts.get(kind.kind) ?? 0) + (totals.get(branch) ?? 0)));
+    const rows = found
+      .filter((row) => !asked || row.kind === asked)
+      .sort((a, b) => Number(b.score) - Number(a.score) || (a.kind < b.kind ? -1 : a.kind > b.kind ? 1 : 0) || (a.id < b.id ? -1 : a.id > b.id ? 1 : 0))
+      .slice(offset, offset + limit);
+    return { rows, counts };
   }
 
   private kindQueries(parsed: ParsedSearch, query: SearchQueryDto, memberWorkshopIds: string[]): KindQuery[] {

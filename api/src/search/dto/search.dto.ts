@@ -11,7 +11,8 @@ export type SearchKind = (typeof SEARCH_KINDS)[number];
 export const SEARCH_STATES = ['published', 'unpublished'] as const;
 export type SearchState = (typeof SEARCH_STATES)[number];
 
-export const MAX_SEARCH_OFFSET = 10_000;
+/** Deep pages cost every kind `offset + limit` rows; past the first thousand hits a narrower search serves better. */
+export const MAX_SEARCH_OFFSET = 1_000;
 export const MAX_SEARCH_LIMIT = 50;
 
 export class SearchQueryDto {
