@@ -15,6 +15,7 @@ const router = createBrowserRouter([
       { path: paths.status, lazy: async () => ({ Component: (await import('./routes/status')).StatusRoute }) },
       // Public calculator: viewers use it too, signed in or not.
       { path: paths.fitCalculator, lazy: async () => ({ Component: (await import('./routes/fit-calculator')).FitCalculatorRoute }) },
+      { path: paths.fitFinder, lazy: async () => ({ Component: (await import('./routes/fit-finder')).FitFinderRoute }) },
       // Published guides: anyone may read them, signed in or not.
       { path: paths.guideIndex, lazy: async () => ({ Component: (await import('./routes/guides')).GuideIndexRoute }) },
       { path: paths.publicGuide.path, lazy: async () => ({ Component: (await import('./routes/guides')).PublicGuideRoute }) },

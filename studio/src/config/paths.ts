@@ -29,6 +29,8 @@ export const paths = {
     to: (workshopId: string, guideId: string) => `/workshops/${workshopId}/guides/${guideId}`,
   },
   fitCalculator: '/tools/fit-calculator',
+  // The public fit finder; its form lives in the address (?splineTeeth=21&splinePitch=16/32…), so a search can be shared.
+  fitFinder: '/fit-finder',
   // Published guides, open to everyone: the index and the follow-along view.
   guideIndex: '/guides',
   publicGuide: {

@@ -1,4 +1,4 @@
-import { useParams } from 'react-router-dom';
+import { useParams, useSearchParams } from 'react-router-dom';
 import { ReportFitButton } from '@/features/fit-reports/components/report-fit-button';
 import { FollowControl } from '@/features/follows/components/follow-control';
 import { FollowAlongView, type FollowSlot, type ReportSlot } from '@/features/guide-view/components/follow-along-view';
@@ -18,11 +18,16 @@ const reportSlot: ReportSlot = (guide) => <ReportFitButton {...guide} />;
 /** One published guide to follow beside its video. */
 export function PublicGuideRoute() {
   const { workshopSlug = '', guideSlug = '' } = useParams();
+  // ?t= seconds: start the video there (the fit finder links to a check's evidence moment this way).
+  const [search] = useSearchParams();
+  const seconds = Number(search.get('t'));
+  const startAtMs = Number.isFinite(seconds) && seconds > 0 ? Math.round(seconds * 1000) : undefined;
   return (
     <FollowAlongView
-      key={`${workshopSlug}/${guideSlug}`}
+      key={`${workshopSlug}/${guideSlug}@${startAtMs ?? 0}`}
       workshopSlug={workshopSlug}
       guideSlug={guideSlug}
+      startAtMs={startAtMs}
       followSlot={followSlot}
       reportSlot={reportSlot}
     />

@@ -8,6 +8,7 @@ import { PageLoader } from '../page-loader';
 const NAVIGATION = [
   { label: 'Home', to: paths.home },
   { label: 'Guides', to: paths.guideIndex },
+  { label: 'Fit finder', to: paths.fitFinder },
   { label: 'System status', to: paths.status },
   { label: 'Fit calculator', to: paths.fitCalculator },
 ];

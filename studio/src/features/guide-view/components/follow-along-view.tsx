@@ -44,7 +44,18 @@ export type ReportSlot = (guide: { workshopSlug: string; guideSlug: string; guid
  * beside it (on a phone: the video stays at the top with the playing step under it), then the summary, the proof
  * and the parts.
  */
-export function GuideDocument({ data, followSlot, reportSlot }: { data: PublishedGuide; followSlot?: FollowSlot; reportSlot?: ReportSlot }) {
+export function GuideDocument({
+  data,
+  followSlot,
+  reportSlot,
+  startAtMs,
+}: {
+  data: PublishedGuide;
+  followSlot?: FollowSlot;
+  reportSlot?: ReportSlot;
+  /** Where the video starts: the evidence moment a fit finder result opens (`?t=`). */
+  startAtMs?: number;
+}) {
   const { guide, workshop, revision, footage } = data;
   const player = useGuidePlayer();
   useGuideTitle(guide.title);
@@ -99,7 +110,7 @@ export function GuideDocument({ data, followSlot, reportSlot }: { data: Publishe
         {footage && (
           // On a phone this area stays at the top while the page scrolls, with the playing step under the video.
           <div className={classes.areaVideo} data-testid="guide-player">
-            <GuideVideo footage={footage} player={player} />
+            <GuideVideo footage={footage} player={player} startAtMs={startAtMs} />
             <NowPlaying step={data.steps.find((step) => step.id === playing) ?? null} stepCount={data.steps.length} />
           </div>
         )}
@@ -146,11 +157,13 @@ export function FollowAlongView({
   guideSlug,
   followSlot,
   reportSlot,
+  startAtMs,
 }: {
   workshopSlug: string;
   guideSlug: string;
   followSlot?: FollowSlot;
   reportSlot?: ReportSlot;
+  startAtMs?: number;
 }) {
   const guide = useQuery(guideViewQueries.detail(workshopSlug, guideSlug));
   if (guide.isPending) {
@@ -175,5 +188,5 @@ export function FollowAlongView({
       </Alert>
     );
   }
-  return <GuideDocument data={guide.data} followSlot={followSlot} reportSlot={reportSlot} />;
+  return <GuideDocument data={guide.data} followSlot={followSlot} reportSlot={reportSlot} startAtMs={startAtMs} />;
 }

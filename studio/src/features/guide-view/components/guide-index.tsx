@@ -1,4 +1,4 @@
-import { Alert, AspectRatio, Box, Card, Image, Loader, SimpleGrid, Skeleton, Stack, Text, TextInput, Title } from '@mantine/core';
+import { Alert, Anchor, AspectRatio, Box, Card, Image, Loader, SimpleGrid, Skeleton, Stack, Text, TextInput, Title } from '@mantine/core';
 import { useDebouncedCallback } from '@mantine/hooks';
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
@@ -64,6 +64,13 @@ export function GuideIndex() {
       <div>
         <Title order={1}>Guides</Title>
         <Text c="dimmed">Step-by-step builds to follow beside their video, each with its verified-fit checklist.</Text>
+        <Text size="sm">
+          Looking for parts that fit what you have?{' '}
+          <Anchor component={Link} to={paths.fitFinder}>
+            Try the fit finder
+          </Anchor>
+          : it looks across every guide for proven fits by spline, diameter, length or part number.
+        </Text>
       </div>
       <TextInput
         type="search"

@@ -9,6 +9,8 @@ import { usePlaybackMs } from '@/lib/playback-clock';
 export interface GuideVideoProps {
   footage: GuideFootage;
   player: GuidePlayer;
+  /** Where to start, e.g. the evidence moment a fit finder result links to (`?t=`). */
+  startAtMs?: number;
 }
 
 /** The line under the video: re-renders alone as the video plays. */
@@ -27,7 +29,7 @@ function VideoPosition({ control, footage }: { control: FootagePlayerControl; fo
  * some, else the file (its address redirects to a short-lived storage link, so "Try again" gets a fresh one),
  * and a seek bar with scrub previews. The layout may bound its height with `--guide-video-max-height`.
  */
-export function GuideVideo({ footage, player }: GuideVideoProps) {
+export function GuideVideo({ footage, player, startAtMs }: GuideVideoProps) {
   return (
     <div>
       <FootagePlayer
@@ -39,6 +41,7 @@ export function GuideVideo({ footage, player }: GuideVideoProps) {
         displayWidth={footage.displayWidth}
         displayHeight={footage.displayHeight}
         maxHeight="var(--guide-video-max-height, calc(100dvh - 56px - 4rem))"
+        startAtMs={startAtMs}
         cannotPlayMessage="The connection may have dropped, or this browser cannot play the video."
         scrubBar={footage.durationMs !== null ? { durationMs: footage.durationMs, thumbnailsUrl: footage.thumbnailsUrl ?? null } : undefined}
         testId="guide-video"
