@@ -1,7 +1,7 @@
 import type { INestApplicationContext } from '@nestjs/common';
 import { NestFactory } from '@nestjs/core';
 import { AppModule } from '../src/app.module';
-import { MailQueueService } from '../src/infra/mail/mail-queue.service';
+import { MailOutbox } from '../src/outbox/mail-outbox.service';
 import { uniqueEmail } from './support/accounts';
 import { waitForMail } from './support/mail-inbox';
 
@@ -15,9 +15,9 @@ describe('a queue-only worker process (src/worker.ts: no HTTP)', () => {
   });
   afterAll(async () => worker.close());
 
-  it('works the queues: a queued e-mail is sent', async () => {
+  it('relays the mail outbox: a written e-mail is sent', async () => {
     const to = uniqueEmail('worker');
-    await worker.get(MailQueueService).enqueue({ to, subject: 'Sent by a worker process', text: 'Queued and sent without HTTP.' });
+    await worker.get(MailOutbox).send({ kind: 'test', mail: { to, subject: 'Sent by a worker process', text: 'Queued and sent without HTTP.' } });
     const mail = await waitForMail(to, { subject: 'Sent by a worker process' });
     expect(mail.text).toContain('Queued and sent without HTTP.');
   });

@@ -16,7 +16,7 @@ import type { Request, Response } from 'express';
 import type { AppConfig } from '../config/app-config';
 import type { SessionUser } from '../common/types/access-context';
 import { QUEUES } from '../infra/jobs/queues';
-import { MailQueueService } from '../infra/mail/mail-queue.service';
+import { MailOutbox } from '../outbox/mail-outbox.service';
 import { normalizeEmail } from '../users/email-address';
 import { User } from '../users/entities/user.entity';
 import { toSessionUser } from '../users/users.mapper';
@@ -58,7 +58,7 @@ export class AuthService {
     @Inject(UsersService) private readonly users: UsersService,
     @Inject(SessionService) private readonly sessions: SessionService,
     @Inject(EmailTokenService) private readonly tokens: EmailTokenService,
-    @Inject(MailQueueService) private readonly mail: MailQueueService,
+    @Inject(MailOutbox) private readonly mail: MailOutbox,
     @Inject(SignInAttemptsStore) private readonly signInAttempts: SignInAttemptsStore,
     @InjectQueue(QUEUES.accounts) private readonly accountsQueue: Queue<PasswordResetRequestedJob>,
     @Inject(ConfigService) config: ConfigService<AppConfig, true>,
@@ -80,7 +80,7 @@ export class AuthService {
     const passwordHash = await hashPassword(dto.password);
     const existing = await this.users.findByEmail(email);
     if (existing) {
-      await this.mail.enqueue(accountExistsMail(email, this.link('/sign-in'), this.link('/forgot-password')));
+      await this.mail.send({ kind: 'account', mail: accountExistsMail(email, this.link('/sign-in'), this.link('/forgot-password')) });
       return;
     }
     let user: User;
@@ -88,7 +88,7 @@ export class AuthService {
       user = await this.users.create({ email, passwordHash, displayName: dto.displayName });
     } catch (error) {
       if (!isDuplicateKey(error)) throw error;
-      await this.mail.enqueue(accountExistsMail(email, this.link('/sign-in'), this.link('/forgot-password')));
+      await this.mail.send({ kind: 'account', mail: accountExistsMail(email, this.link('/sign-in'), this.link('/forgot-password')) });
       return;
     }
     await this.sendVerification(user);
@@ -170,7 +170,7 @@ export class AuthService {
     const user = await this.users.findByEmail(email);
     if (!user || user.disabledAt) return false;
     const token = await this.tokens.issue(user.id, 'reset-password');
-    await this.mail.enqueue(resetPasswordMail(user.email, this.link('/reset-password', token)));
+    await this.mail.send({ kind: 'account', mail: resetPasswordMail(user.email, this.link('/reset-password', token)) });
     return true;
   }
 
@@ -183,7 +183,7 @@ export class AuthService {
     user.emailVerifiedAt ??= new Date();
     await this.users.save(user);
     await this.sessions.endAllFor(user.id);
-    await this.mail.enqueue(passwordChangedMail(user.email));
+    await this.mail.send({ kind: 'account', mail: passwordChangedMail(user.email) });
   }
 
   async changePassword(sessionUser: SessionUser, dto: ChangePasswordDto, request: Request): Promise<void> {
@@ -197,7 +197,7 @@ export class AuthService {
     user.passwordHash = await hashPassword(dto.newPassword);
     await this.users.save(user);
     await this.sessions.endAllFor(user.id, request);
-    await this.mail.enqueue(passwordChangedMail(user.email));
+    await this.mail.send({ kind: 'account', mail: passwordChangedMail(user.email) });
   }
 
   /** E-mails a confirmation link to the new address; the address changes only when it is followed. */
@@ -214,11 +214,11 @@ export class AuthService {
       });
     }
     if (await this.users.findByEmail(newEmail)) {
-      await this.mail.enqueue(emailTakenMail(newEmail));
+      await this.mail.send({ kind: 'account', mail: emailTakenMail(newEmail) });
       return;
     }
     const token = await this.tokens.issue(user.id, 'change-email', newEmail);
-    await this.mail.enqueue(changeEmailMail(newEmail, this.link('/confirm-email', token)));
+    await this.mail.send({ kind: 'account', mail: changeEmailMail(newEmail, this.link('/confirm-email', token)) });
   }
 
   async confirmEmailChange(token: string): Promise<SessionUser> {
@@ -234,14 +234,14 @@ export class AuthService {
       if (!isDuplicateKey(error)) throw error;
       throw new ConflictException('Another account took this address in the meantime; nothing was changed.');
     }
-    await this.mail.enqueue(emailChangedMail(oldEmail, user.email));
+    await this.mail.send({ kind: 'account', mail: emailChangedMail(oldEmail, user.email) });
     this.logger.log(`user ${user.id} changed e-mail address`);
     return toSessionUser(user);
   }
 
   private async sendVerification(user: User): Promise<void> {
     const token = await this.tokens.issue(user.id, 'verify-email');
-    await this.mail.enqueue(verifyEmailMail(user.email, user.displayName, this.link('/verify-email', token)));
+    await this.mail.send({ kind: 'account', mail: verifyEmailMail(user.email, user.displayName, this.link('/verify-email', token)) });
   }
 
   /** ADMIN_EMAILS names the first admins; an address counts only once its owner has verified it. */

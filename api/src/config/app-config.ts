@@ -33,6 +33,8 @@ export interface AppConfig {
     user?: string;
     password?: string;
     from: string;
+    /** The outbox relay: on in this process or not, SMTP connections, mails a minute across all processes. */
+    relay: { enabled: boolean; concurrency: number; ratePerMinute: number };
   };
 }
 
@@ -85,6 +87,7 @@ export function buildAppConfig(env: EnvironmentVariables): AppConfig {
       user: env.SMTP_USER,
       password: env.SMTP_PASSWORD,
       from: env.MAIL_FROM,
+      relay: { enabled: env.MAIL_RELAY, concurrency: env.MAIL_CONCURRENCY, ratePerMinute: env.MAIL_RATE_PER_MINUTE },
     },
   };
 }

@@ -142,6 +142,24 @@ export class EnvironmentVariables {
   @IsEmail({ allow_display_name: true })
   MAIL_FROM!: string;
 
+  /** Whether this process relays the mail outbox (SMTP). Off on API processes when queue-only workers send. */
+  @Transform(toBoolean)
+  @IsBoolean()
+  MAIL_RELAY: boolean = true;
+
+  /** SMTP connections (and messages in flight) per relaying process. */
+  @Transform(({ value }) => (value === undefined ? undefined : Number(value)))
+  @IsInt()
+  @Min(1)
+  @Max(50)
+  MAIL_CONCURRENCY: number = 5;
+
+  /** Mails accepted by the SMTP relay per minute, counted across every process (the relay's contract). */
+  @Transform(({ value }) => (value === undefined ? undefined : Number(value)))
+  @IsInt()
+  @Min(1)
+  MAIL_RATE_PER_MINUTE: number = 6000;
+
   /** Comma-separated e-mail addresses whose accounts are site admins (optional; e.g. the first admin). */
   @IsOptional()
   @IsString()

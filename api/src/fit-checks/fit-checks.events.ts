@@ -15,4 +15,6 @@ export interface FitCheckChangedEvent {
   reason: string;
   /** Null when a re-evaluation changed it. */
   actorId: string | null;
+  /** When the change was stored (ISO 8601): digests list changes in this order. */
+  occurredAt?: string;
 }

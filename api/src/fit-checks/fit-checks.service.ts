@@ -6,6 +6,7 @@ import { AssemblyInterface } from '../assemblies/entities/assembly-interface.ent
 import { newId } from '../common/database/columns';
 import { requireImage, type UploadedFileLike } from '../common/uploads/image-file';
 import { StorageService } from '../infra/storage/storage.service';
+import { MailOutbox } from '../outbox/mail-outbox.service';
 import { Assembly } from '../assemblies/entities/assembly.entity';
 import { canTransition, rollUpChecklist, stateAfterOutcome, stateForOutcome, type FitCheckState } from '../engine/checklist';
 import { EngineError } from '../engine/engine-error';
@@ -61,6 +62,7 @@ export class FitChecksService {
     @Inject(EventEmitter2) private readonly emitter: EventEmitter2,
     @Inject(StorageService) private readonly storage: StorageService,
     @Inject(UsersService) private readonly users: UsersService,
+    @Inject(MailOutbox) private readonly outbox: MailOutbox,
   ) {}
 
   // ---- re-evaluation ----
@@ -196,8 +198,7 @@ export class FitChecksService {
         existing.confirmedBy = null;
         existing.confirmedAt = null;
       }
-      await this.checks.save(existing);
-      await this.record(existing, from, nextState, why, actorId);
+      await this.record(existing, from, nextState, why, actorId, (manager) => manager.save(existing));
     } else {
       await this.checks.save(existing);
     }
@@ -269,7 +270,9 @@ export class FitChecksService {
     const history = await this.checks.manager.transaction(async (manager) => {
       const claimed = await manager.update(FitCheck, { id: check.id, state: from }, change);
       if (!claimed.affected) return null;
-      return this.saveHistory(manager, check.id, from, target, input.reason, actorId);
+      const saved = await this.saveHistory(manager, check.id, from, target, input.reason, actorId);
+      await this.recordOutboxEvent(manager, check, saved);
+      return saved;
     });
     if (!history) throw this.stateConflict(await this.checkOf(workshopId, checkId), input.to);
     const changed = await this.checkOf(workshopId, checkId);
@@ -376,8 +379,47 @@ export class FitChecksService {
 
   // ---- helpers ----
 
-  private async record(check: FitCheck, from: FitCheckState | null, to: FitCheckState, reason: string, actorId: string | null) {
-    await this.announce(check, await this.saveHistory(this.events.manager, check.id, from, to, reason, actorId));
+  /** Stores a change (`applyChange` writes the check itself) with its history and outbox rows in one transaction. */
+  private async record(
+    check: FitCheck,
+    from: FitCheckState | null,
+    to: FitCheckState,
+    reason: string,
+    actorId: string | null,
+    applyChange?: (manager: EntityManager) => Promise<unknown>,
+  ) {
+    const history = await this.events.manager.transaction(async (manager) => {
+      await applyChange?.(manager);
+      const saved = await this.saveHistory(manager, check.id, from, to, reason, actorId);
+      await this.recordOutboxEvent(manager, check, saved);
+      return saved;
+    });
+    await this.announce(check, history);
+  }
+
+  /**
+   * The change's outbox row, in the transaction that stores the change: fit news (and any other mail a
+   * change causes) is relayed from it, so a crash can neither lose the news of a stored change nor tell
+   * of one that rolled back.
+   */
+  private async recordOutboxEvent(manager: EntityManager, check: FitCheck, history: FitCheckEvent): Promise<void> {
+    if (history.fromState === history.toState) return;
+    await this.outbox.record(manager, FIT_CHECK_CHANGED, this.changedEvent(check, history));
+  }
+
+  private changedEvent(check: FitCheck, history: FitCheckEvent): FitCheckChangedEvent {
+    return {
+      eventId: history.id,
+      workshopId: check.workshopId,
+      assemblyId: check.assemblyId,
+      fitCheckId: check.id,
+      title: check.title,
+      from: history.fromState,
+      to: history.toState,
+      reason: history.reason,
+      actorId: history.actorId,
+      occurredAt: (history.createdAt ?? new Date()).toISOString(),
+    };
   }
 
   private saveHistory(
@@ -391,23 +433,14 @@ export class FitChecksService {
     return manager.save(FitCheckEvent, manager.create(FitCheckEvent, { fitCheckId, fromState: from, toState: to, reason: reason.slice(0, 500), actorId }));
   }
 
-  /** Tells the rest of the app (fit news) about a stored change; a row that changed nothing is history only. */
+  /**
+   * Tells in-process listeners about a committed change; a row that changed nothing is history only.
+   * Mail never hangs on this (a process may die right here): it is relayed from the outbox row.
+   */
   private async announce(check: FitCheck, history: FitCheckEvent): Promise<void> {
-    const { fromState: from, toState: to } = history;
-    if (from === to) return;
-    const event: FitCheckChangedEvent = {
-      eventId: history.id,
-      workshopId: check.workshopId,
-      assemblyId: check.assemblyId,
-      fitCheckId: check.id,
-      title: check.title,
-      from,
-      to,
-      reason: history.reason,
-      actorId: history.actorId,
-    };
-    this.logger.log(`check ${check.id} ${from ?? 'new'} → ${to}`);
-    await this.emitter.emitAsync(FIT_CHECK_CHANGED, event);
+    if (history.fromState === history.toState) return;
+    this.logger.log(`check ${check.id} ${history.fromState ?? 'new'} → ${history.toState}`);
+    await this.emitter.emitAsync(FIT_CHECK_CHANGED, this.changedEvent(check, history));
   }
 
   private async assemblyOf(workshopId: string, assemblyId: string): Promise<Assembly> {

@@ -17,7 +17,8 @@ import type { CreateFitReportDto, UpdateFitReportDto } from './dto/fit-report.dt
 import { FitReport, type FitReportStatus } from './entities/fit-report.entity';
 import { referenceNotFound } from '../common/http/field-errors';
 import type { AppConfig } from '../config/app-config';
-import { MailQueueService } from '../infra/mail/mail-queue.service';
+import { MailPreferencesService } from '../follows/mail-preferences.service';
+import { MailOutbox } from '../outbox/mail-outbox.service';
 import { MembersService } from '../workshops/members.service';
 import { fitReportArrivedMail } from './fit-report-mails';
 
@@ -50,7 +51,8 @@ export class FitReportsService {
     @InjectRepository(User) private readonly users: Repository<User>,
     private readonly storage: StorageService,
     @Inject(MembersService) private readonly members: MembersService,
-    @Inject(MailQueueService) private readonly mail: MailQueueService,
+    @Inject(MailOutbox) private readonly mail: MailOutbox,
+    @Inject(MailPreferencesService) private readonly mailPreferences: MailPreferencesService,
     config: ConfigService<AppConfig, true>,
   ) {
     this.appOrigin = config.get('appOrigin', { infer: true });
@@ -85,16 +87,22 @@ export class FitReportsService {
   }
 
   /**
-   * One e-mail per owner and editor, each queued as a mail job (the mail processor sends it). The report is
-   * stored already: a queue that cannot take the mails is logged, not turned into a failed report.
+   * One e-mail per owner and editor, written to the mail outbox (its relay sends it), once per report and
+   * member. The report is stored already: an outbox that cannot take the mails is logged, not a failed report.
    */
   private async tellWorkshop(workshop: Workshop, guide: Guide, report: FitReport): Promise<void> {
     try {
       const reporter = await this.users.findOneBy({ id: report.reporterId });
-      const recipients = (await this.members.list(workshop.id)).filter((member) => member.role === 'owner' || member.role === 'editor');
+      const team = (await this.members.list(workshop.id)).filter((member) => member.role === 'owner' || member.role === 'editor');
+      // Each member's own choice: "new fit report" mail at once (default) or off.
+      const off = await this.mailPreferences.fitReportMailOff(team.map((member) => member.userId));
+      const recipients = team.filter((member) => !off.has(member.userId));
       for (const member of recipients) {
-        await this.mail.enqueue(
-          fitReportArrivedMail({
+        await this.mail.send({
+          kind: 'fit-report',
+          idempotencyKey: `fit-report:${report.id}:${member.userId}`,
+          userId: member.userId,
+          mail: fitReportArrivedMail({
             to: member.email,
             workshopName: workshop.name,
             guideTitle: guide.title,
@@ -104,7 +112,7 @@ export class FitReportsService {
             vehicle: report.vehicle,
             reviewUrl: `${this.appOrigin}/workshops/${workshop.id}/fit-reports`,
           }),
-        );
+        });
       }
     } catch (error) {
       this.logger.warn(`fit report ${report.id}: the workshop's e-mails could not be queued: ${error instanceof Error ? error.message : String(error)}`);

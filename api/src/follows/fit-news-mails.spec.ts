@@ -11,7 +11,11 @@ const news: FitNews = {
   buildTitle: 'Motor-to-gearbox coupler',
   link: { label: 'See the verified-fit checklist', url: 'https://fitwright.test/guides/harrow/coupler#checklist' },
   because: { kind: 'follow', label: 'Motor-to-gearbox coupler' },
-  unsubscribe: { pageUrl: 'https://fitwright.test/unsubscribe?token=abc', oneClickUrl: 'https://fitwright.test/api/follows/unsubscribe?token=abc' },
+  unsubscribe: {
+    pageUrl: 'https://fitwright.test/unsubscribe?token=abc',
+    oneClickUrl: 'https://fitwright.test/api/follows/unsubscribe?token=abc',
+    preferencesUrl: 'https://fitwright.test/mail-preferences?token=abc',
+  },
 };
 
 describe('fitNewsMail', () => {
@@ -27,6 +31,7 @@ describe('fitNewsMail', () => {
     });
     expect(mail.text).toContain('open https://fitwright.test/unsubscribe?token=abc');
     expect(mail.html).toContain('https://fitwright.test/unsubscribe?token=abc');
+    expect(mail.text).toContain('https://fitwright.test/mail-preferences?token=abc');
   });
 
   it('says why the mail came', () => {

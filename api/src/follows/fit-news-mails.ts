@@ -31,6 +31,8 @@ export interface UnsubscribeLinks {
   pageUrl: string;
   /** The API address that stops it in one POST (for mail clients, RFC 8058). */
   oneClickUrl: string;
+  /** The page to choose at once, daily, weekly or paused for each follow; works without signing in. */
+  preferencesUrl: string;
 }
 
 /** The e-mail a follower (or the person whose fit report the check verifies) gets when a fit is confirmed or fails. */
@@ -46,6 +48,7 @@ export function fitNewsMail(news: FitNews): OutgoingMail {
       news.because.kind === 'follow'
         ? `You get this because you follow ${news.because.label}. To stop, open ${news.unsubscribe.pageUrl}`
         : `You get this because you sent a fit report that this check verifies. To stop news about your report, open ${news.unsubscribe.pageUrl}`,
+      `Choose at once, a daily or weekly digest, or pause, for each thing you follow: ${news.unsubscribe.preferencesUrl}`,
     ],
     news.link,
     { 'List-Unsubscribe': `<${news.unsubscribe.oneClickUrl}>`, 'List-Unsubscribe-Post': 'List-Unsubscribe=One-Click' },

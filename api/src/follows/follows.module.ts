@@ -10,20 +10,23 @@ import { Measurement } from '../measurements/entities/measurement.entity';
 import { User } from '../users/entities/user.entity';
 import { WorkshopMember } from '../workshops/entities/workshop-member.entity';
 import { Workshop } from '../workshops/entities/workshop.entity';
+import { DigestItem } from './entities/digest-item.entity';
 import { FitNewsDelivery } from './entities/fit-news-delivery.entity';
+import { MailLink } from './entities/mail-link.entity';
+import { MailPreference } from './entities/mail-preference.entity';
 import { Follow } from './entities/follow.entity';
-import { FitNewsListener } from './fit-news.listener';
-import { FitNewsProcessor } from './fit-news.processor';
+import { DigestsService } from './digests.service';
 import { FitNewsService } from './fit-news.service';
 import { FollowsController } from './follows.controller';
 import { FollowsService } from './follows.service';
+import { MailPreferencesService } from './mail-preferences.service';
 
 @Module({
   imports: [
-    TypeOrmModule.forFeature([Follow, FitNewsDelivery, FitReport, Workshop, WorkshopMember, Build, Assembly, Guide, User, FitCheckEvidence, Mark, Measurement]),
+    TypeOrmModule.forFeature([Follow, FitNewsDelivery, MailPreference, DigestItem, MailLink, FitReport, Workshop, WorkshopMember, Build, Assembly, Guide, User, FitCheckEvidence, Mark, Measurement]),
   ],
   controllers: [FollowsController],
-  providers: [FollowsService, FitNewsService, FitNewsListener, FitNewsProcessor],
-  exports: [FollowsService],
+  providers: [FollowsService, FitNewsService, DigestsService, MailPreferencesService],
+  exports: [FollowsService, MailPreferencesService],
 })
 export class FollowsModule {}

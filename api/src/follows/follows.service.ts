@@ -10,6 +10,7 @@ import { Guide } from '../guides/entities/guide.entity';
 import { WorkshopMember } from '../workshops/entities/workshop-member.entity';
 import { Workshop } from '../workshops/entities/workshop.entity';
 import { FitNewsDelivery } from './entities/fit-news-delivery.entity';
+import { MailLink } from './entities/mail-link.entity';
 import { Follow, type FollowTargetKind } from './entities/follow.entity';
 
 export interface FollowTarget {
@@ -18,6 +19,10 @@ export interface FollowTarget {
   workshopId: string;
   label: string;
 }
+
+/** What an unsubscribe link stops: what sent the mail, everything from its workshop, or all fit news. */
+export const UNSUBSCRIBE_SCOPES = ['this', 'workshop', 'everything'] as const;
+export type UnsubscribeScope = (typeof UNSUBSCRIBE_SCOPES)[number];
 
 const NOTHING_TO_FOLLOW = 'Nothing to follow here';
 
@@ -30,6 +35,7 @@ export class FollowsService {
   constructor(
     @InjectRepository(Follow) private readonly follows: Repository<Follow>,
     @InjectRepository(FitNewsDelivery) private readonly deliveries: Repository<FitNewsDelivery>,
+    @InjectRepository(MailLink) private readonly links: Repository<MailLink>,
     @InjectRepository(FitReport) private readonly reports: Repository<FitReport>,
     @InjectRepository(Workshop) private readonly workshops: Repository<Workshop>,
     @InjectRepository(Build) private readonly builds: Repository<Build>,
@@ -73,9 +79,10 @@ export class FollowsService {
    * build, its workshop), so the page can offer to stop those too. Using it twice is harmless.
    * With `alsoStopFollowId`, the same link stops one of those other follows instead.
    */
-  async unsubscribe(token: string, alsoStopFollowId?: string) {
+  async unsubscribe(token: string, alsoStopFollowId?: string, scope: UnsubscribeScope = 'this') {
     const delivery = await this.deliveries.findOneBy({ tokenHash: hashSecretToken(token) });
-    if (!delivery) throw new NotFoundException('This unsubscribe link is not known. Manage what you follow on your account page.');
+    if (!delivery) return this.unsubscribeDigest(token);
+    if (scope !== 'this') return this.unsubscribeWider(delivery, scope);
     if (alsoStopFollowId !== undefined) {
       const covering = await this.followsCovering(delivery);
       if (!covering.some((follow) => follow.id === alsoStopFollowId)) {
@@ -89,6 +96,41 @@ export class FollowsService {
     if (!delivery.followId) return this.unsubscribeOutcome(delivery, 'already');
     const removed = await this.follows.delete({ id: delivery.followId, userId: delivery.userId });
     return this.unsubscribeOutcome(delivery, removed.affected ? 'unfollowed' : 'already');
+  }
+
+  /**
+   * Wider stops from the same link: every follow in the mail's workshop (and the news of the person's
+   * reports to it), or every follow and report news the person has.
+   */
+  private async unsubscribeWider(delivery: FitNewsDelivery, scope: 'workshop' | 'everything') {
+    const assembly = await this.assemblies.findOneBy({ id: delivery.assemblyId });
+    const where = scope === 'workshop' ? { userId: delivery.userId, workshopId: assembly?.workshopId ?? '' } : { userId: delivery.userId };
+    const removed = await this.follows.delete(where);
+    const reportWhere =
+      scope === 'workshop'
+        ? { reporterId: delivery.userId, workshopId: assembly?.workshopId ?? '', fitNewsStoppedAt: IsNull() }
+        : { reporterId: delivery.userId, fitNewsStoppedAt: IsNull() };
+    const stoppedReports = await this.reports.update(reportWhere, { fitNewsStoppedAt: new Date() });
+    const workshop = assembly ? await this.workshops.findOneBy({ id: assembly.workshopId }) : null;
+    return {
+      status: (removed.affected ?? 0) + (stoppedReports.affected ?? 0) > 0 ? ('unfollowed' as const) : ('already' as const),
+      stopped: scope,
+      label: scope === 'workshop' ? `all fit news from ${workshop?.name ?? 'this workshop'}` : 'all fit news',
+      stillFollowing: await this.describe(await this.follows.find({ where: { userId: delivery.userId } })),
+    };
+  }
+
+  /** A digest's link: stops that digest (its follows are paused) and lists what still brings mail. */
+  private async unsubscribeDigest(token: string) {
+    const link = await this.links.findOneBy({ tokenHash: hashSecretToken(token) });
+    if (!link?.cadence) throw new NotFoundException('This unsubscribe link is not known. Manage what you follow on your account page.');
+    const paused = await this.follows.update({ userId: link.userId, delivery: link.cadence }, { delivery: 'paused' });
+    return {
+      status: paused.affected ? ('unfollowed' as const) : ('already' as const),
+      stopped: 'digest' as const,
+      label: `your ${link.cadence} digest`,
+      stillFollowing: await this.describe(await this.follows.find({ where: { userId: link.userId, delivery: Not('paused') } })),
+    };
   }
 
   /** Stops the news of the person's reports tied to the same check as this one (each would bring the same mail). */
@@ -160,6 +202,7 @@ export class FollowsService {
           targetKind: follow.targetKind,
           targetId: follow.targetId,
           label: target?.label ?? '(removed)',
+          delivery: follow.delivery,
           workshop: { name: workshop?.name ?? '', slug: workshop?.slug ?? '' },
           createdAt: follow.createdAt.toISOString(),
         };

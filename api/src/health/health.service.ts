@@ -23,7 +23,7 @@ export class HealthService {
     @Inject(DataSource) private readonly dataSource: DataSource,
     @Inject(StorageService) private readonly storage: StorageService,
     @Inject(MailService) private readonly mail: MailService,
-    @InjectQueue(QUEUES.mail) private readonly mailQueue: Queue,
+    @InjectQueue(QUEUES.media) private readonly mediaQueue: Queue,
   ) {}
 
   async check(): Promise<HealthReport> {
@@ -31,7 +31,7 @@ export class HealthService {
       this.probe('database', () => this.dataSource.query('SELECT 1')),
       this.probe('storage', () => this.storage.ping()),
       this.probe('mail', () => this.mail.ping()),
-      this.probe('queue', () => this.mailQueue.client.ping()),
+      this.probe('queue', () => this.mediaQueue.client.ping()),
     ]);
     const checks = { database, storage, mail, queue };
     const allUp = Object.values(checks).every((state) => state === 'up');

@@ -4,8 +4,6 @@ import { ConfigService } from '@nestjs/config';
 import { AppConfig } from '../config/app-config';
 import { QueueWorkersLifecycle } from './jobs/queue-workers.lifecycle';
 import { QUEUES } from './jobs/queues';
-import { MailQueueService } from './mail/mail-queue.service';
-import { MailProcessor } from './mail/mail.processor';
 import { MailService } from './mail/mail.service';
 import { MediaToolsService } from './media/media-tools.service';
 import { StorageService } from './storage/storage.service';
@@ -34,9 +32,9 @@ import { StorageService } from './storage/storage.service';
         };
       },
     }),
-    BullModule.registerQueue({ name: QUEUES.mail }, { name: QUEUES.media }, { name: QUEUES.marks }, { name: QUEUES.notifications }, { name: QUEUES.accounts }),
+    BullModule.registerQueue({ name: QUEUES.media }, { name: QUEUES.marks }, { name: QUEUES.accounts }),
   ],
-  providers: [StorageService, MailService, MailQueueService, MailProcessor, MediaToolsService, QueueWorkersLifecycle],
-  exports: [StorageService, MailService, MailQueueService, BullModule, MediaToolsService],
+  providers: [StorageService, MailService, MediaToolsService, QueueWorkersLifecycle],
+  exports: [StorageService, MailService, BullModule, MediaToolsService],
 })
 export class InfraModule {}

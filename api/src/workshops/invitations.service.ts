@@ -12,7 +12,7 @@ import { DataSource, In, IsNull, Repository } from 'typeorm';
 import type { AppConfig } from '../config/app-config';
 import { hashSecretToken, newSecretToken } from '../common/secret-token';
 import type { SessionUser, WorkshopMembership } from '../common/types/access-context';
-import { MailQueueService } from '../infra/mail/mail-queue.service';
+import { MailOutbox } from '../outbox/mail-outbox.service';
 import { normalizeEmail } from '../users/email-address';
 import { User } from '../users/entities/user.entity';
 import type { CreateInvitationDto } from './dto/members.dto';
@@ -36,7 +36,7 @@ export class InvitationsService {
     @InjectRepository(WorkshopMember) private readonly members: Repository<WorkshopMember>,
     @InjectRepository(User) private readonly users: Repository<User>,
     @Inject(MembersService) private readonly membersService: MembersService,
-    @Inject(MailQueueService) private readonly mail: MailQueueService,
+    @Inject(MailOutbox) private readonly mail: MailOutbox,
     @Inject(DataSource) private readonly dataSource: DataSource,
     @Inject(ConfigService) config: ConfigService<AppConfig, true>,
   ) {
@@ -77,21 +77,29 @@ export class InvitationsService {
       acceptedBy: null,
       invitedBy: inviter.id,
     });
+    const url = `${this.appOrigin}/invitations/accept?token=${encodeURIComponent(token)}`;
+    const roleWords = dto.role === 'owner' ? 'an owner' : 'an editor';
+    // The invitation and its mail commit together: no invitation without its mail, no mail for a rolled-back one.
     await this.dataSource.transaction(async (manager) => {
       await manager.delete(Invitation, { workshopId: workshop.id, email, acceptedAt: IsNull() });
       await manager.insert(Invitation, invitation);
-    });
-    const url = `${this.appOrigin}/invitations/accept?token=${encodeURIComponent(token)}`;
-    const roleWords = dto.role === 'owner' ? 'an owner' : 'an editor';
-    await this.mail.enqueue({
-      to: email,
-      subject: `${inviter.displayName} invited you to ${workshop.name} on Fitwright`,
-      text: [
-        `${inviter.displayName} invited you to join the workshop "${workshop.name}" on Fitwright as ${roleWords}.`,
-        `Accept the invitation (the link works for 7 days): ${url}`,
-        `If you have no Fitwright account yet, create one with this address (${email}) and then accept.`,
-        '— Fitwright',
-      ].join('\n\n'),
+      await this.mail.send(
+        {
+          kind: 'invitation',
+          idempotencyKey: `invitation:${invitation.id}`,
+          mail: {
+            to: email,
+            subject: `${inviter.displayName} invited you to ${workshop.name} on Fitwright`,
+            text: [
+              `${inviter.displayName} invited you to join the workshop "${workshop.name}" on Fitwright as ${roleWords}.`,
+              `Accept the invitation (the link works for 7 days): ${url}`,
+              `If you have no Fitwright account yet, create one with this address (${email}) and then accept.`,
+              '— Fitwright',
+            ].join('\n\n'),
+          },
+        },
+        manager,
+      );
     });
     const saved = await this.invitations.findOneByOrFail({ id: invitation.id });
     return toInvitationView(saved, inviter.displayName);

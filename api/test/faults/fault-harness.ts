@@ -67,7 +67,7 @@ function quietly(command: string, args: string[]): boolean {
 }
 
 /** A child process whose output goes to a log file in the profile's log folder. */
-class Service {
+export class Service {
   private child: ChildProcess | undefined;
   private exited: Promise<void> = Promise.resolve();
 

@@ -1,6 +1,7 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { IsIn, IsOptional, IsString, IsUUID, Length } from 'class-validator';
-import { FOLLOW_TARGET_KINDS, type FollowTargetKind } from '../entities/follow.entity';
+import { FOLLOW_DELIVERIES, FOLLOW_TARGET_KINDS, type FollowDelivery, type FollowTargetKind } from '../entities/follow.entity';
+import { UNSUBSCRIBE_SCOPES, type UnsubscribeScope } from '../follows.service';
 
 export class CreateFollowDto {
   @ApiProperty({ enum: FOLLOW_TARGET_KINDS })
@@ -29,6 +30,14 @@ export class UnsubscribeBodyDto extends UnsubscribeQueryDto {
   @IsUUID()
   followId?: string;
 
+  @ApiPropertyOptional({
+    enum: UNSUBSCRIBE_SCOPES,
+    description: 'this (default): what sent the mail; workshop: every follow and report news in its workshop; everything: all fit news',
+  })
+  @IsOptional()
+  @IsIn(UNSUBSCRIBE_SCOPES)
+  scope?: UnsubscribeScope;
+
   @ApiPropertyOptional({ description: 'Sent by mail clients on one-click unsubscribe; ignored' })
   @IsOptional()
   @IsString()
@@ -42,6 +51,7 @@ export class UnsubscribedFollowDto {
   @ApiProperty() label!: string;
   @ApiProperty({ example: { name: 'Harrow Lane Garage', slug: 'harrow-lane' } }) workshop!: { name: string; slug: string };
   @ApiProperty() createdAt!: string;
+  @ApiProperty({ enum: FOLLOW_DELIVERIES }) delivery!: FollowDelivery;
 }
 
 /** What the unsubscribe link did, and what would still bring news of the same assembly. */
@@ -49,8 +59,11 @@ export class UnsubscribeResultDto {
   @ApiProperty({ enum: ['unfollowed', 'already'], description: '`already` when the link had been used before' })
   status!: 'unfollowed' | 'already';
 
-  @ApiProperty({ enum: ['follow', 'report'], description: 'What the e-mail came through: a follow, or the person\'s fit report' })
-  stopped!: 'follow' | 'report';
+  @ApiProperty({
+    enum: ['follow', 'report', 'digest', 'workshop', 'everything'],
+    description: 'What stopped: the follow or the fit report the e-mail came through, a digest, all news from a workshop, or all fit news',
+  })
+  stopped!: 'follow' | 'report' | 'digest' | 'workshop' | 'everything';
 
   @ApiProperty({ description: 'What the e-mail named: the followed workshop, build or assembly, or "your fit report"' })
   label!: string;

@@ -4,6 +4,10 @@ import { CreatedAtColumn, newId } from '../../common/database/columns';
 export const FOLLOW_TARGET_KINDS = ['workshop', 'build', 'assembly'] as const;
 export type FollowTargetKind = (typeof FOLLOW_TARGET_KINDS)[number];
 
+/** How a follow's news comes: each change at once, gathered in a daily or weekly digest, or not at all for now. */
+export const FOLLOW_DELIVERIES = ['at_once', 'daily', 'weekly', 'paused'] as const;
+export type FollowDelivery = (typeof FOLLOW_DELIVERIES)[number];
+
 /** A person follows a workshop, a build or an assembly, to be e-mailed when a fit there is confirmed or fails. */
 @Entity('follows')
 @Index(['userId', 'targetKind', 'targetId'], { unique: true })
@@ -24,6 +28,9 @@ export class Follow {
 
   @Column({ name: 'target_id', type: 'char', length: 36 })
   targetId!: string;
+
+  @Column({ type: 'enum', enum: FOLLOW_DELIVERIES, default: 'at_once' })
+  delivery!: FollowDelivery;
 
   @CreatedAtColumn()
   createdAt!: Date;

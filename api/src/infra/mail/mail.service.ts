@@ -1,4 +1,4 @@
-import { Inject, Injectable, Logger, OnModuleDestroy } from '@nestjs/common';
+import { Inject, Injectable, OnModuleDestroy } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { createTransport, Transporter } from 'nodemailer';
 import { AppConfig } from '../../config/app-config';
@@ -11,17 +11,41 @@ export interface OutgoingMail {
   headers?: Record<string, string>;
 }
 
-/** The only place that speaks SMTP. Domain code enqueues mail jobs; the mail processor calls send(). */
+/** What the SMTP server answered to a message it took. */
+export interface SmtpAcceptance {
+  reply: string;
+}
+
+/** The SMTP server refused the message: `permanent` for a 5xx answer (the address or the message is refused). */
+export class SmtpRefusal extends Error {
+  constructor(
+    message: string,
+    readonly responseCode: number | undefined,
+    readonly permanent: boolean,
+  ) {
+    super(message);
+  }
+}
+
+/**
+ * The only place that speaks SMTP, through one pooled connection set per process (bounded by the
+ * relay's concurrency). Domain code writes mail to the outbox; the outbox relay calls send().
+ */
 @Injectable()
 export class MailService implements OnModuleDestroy {
-  private readonly logger = new Logger(MailService.name);
   private readonly transporter: Transporter;
   private readonly from: string;
+  /** The host part of Message-IDs (the sender's domain), so they look like the sender's own. */
+  readonly messageIdDomain: string;
 
   constructor(@Inject(ConfigService) config: ConfigService<AppConfig, true>) {
     const mail = config.get('mail', { infer: true });
     this.from = mail.from;
+    this.messageIdDomain = /@([^>\s]+)/.exec(mail.from)?.[1] ?? 'fitwright.local';
     this.transporter = createTransport({
+      pool: true,
+      maxConnections: mail.relay.concurrency,
+      maxMessages: 500,
       host: mail.host,
       port: mail.port,
       secure: mail.secure,
@@ -29,6 +53,7 @@ export class MailService implements OnModuleDestroy {
       auth: mail.user ? { user: mail.user, pass: mail.password } : undefined,
       connectionTimeout: 5000,
       greetingTimeout: 5000,
+      socketTimeout: 20_000,
     });
   }
 
@@ -37,9 +62,22 @@ export class MailService implements OnModuleDestroy {
     await this.transporter.verify();
   }
 
-  async send(mail: OutgoingMail): Promise<void> {
-    await this.transporter.sendMail({ from: this.from, ...mail });
-    this.logger.log(`sent "${mail.subject}"`);
+  /**
+   * Sends one message with the given Message-ID (derived from its idempotency key, so a repeat after a
+   * crash carries the same id and a receiving system can drop it). Resolves only once the server accepted.
+   */
+  async send(mail: OutgoingMail, messageId: string): Promise<SmtpAcceptance> {
+    try {
+      const info = (await this.transporter.sendMail({ from: this.from, ...mail, messageId })) as { response?: string; rejected?: unknown[] };
+      if (Array.isArray(info.rejected) && info.rejected.length > 0) throw new SmtpRefusal(`recipient refused: ${info.response ?? ''}`, 550, true);
+      return { reply: String(info.response ?? 'accepted').slice(0, 500) };
+    } catch (error) {
+      if (error instanceof SmtpRefusal) throw error;
+      const code = (error as { responseCode?: unknown }).responseCode;
+      const responseCode = typeof code === 'number' ? code : undefined;
+      const message = error instanceof Error ? error.message : String(error);
+      throw new SmtpRefusal(message.slice(0, 500), responseCode, responseCode !== undefined && responseCode >= 500 && responseCode < 600);
+    }
   }
 
   onModuleDestroy(): void {
