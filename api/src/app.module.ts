@@ -7,6 +7,7 @@ import { RequestLoggerMiddleware } from './common/request-logger.middleware';
 import { typeormOptions } from './database/typeorm-options';
 import { HealthModule } from './health/health.module';
 import { InfraModule } from './infra/infra.module';
+import { OutboxModule } from './outbox/outbox.module';
 import { AdminModule } from './admin/admin.module';
 import { AuthModule } from './auth/auth.module';
 import { UsersModule } from './users/users.module';
@@ -39,6 +40,7 @@ import { TranscriptsModule } from './transcripts/transcripts.module';
     }),
     EventEmitterModule.forRoot(),
     InfraModule,
+    OutboxModule,
     HealthModule,
     AuthModule,
     UsersModule,
