@@ -9,11 +9,11 @@ import { Follows1765100000000 } from './1765100000000-follows';
 import { FitReports1765200000000 } from './1765200000000-fit-reports';
 import { FitNewsUnsubscribe1765310000000 } from './1765310000000-fit-news-unsubscribe';
 import { PublishedGuidesIndex1765320000000 } from './1765320000000-published-guides-index';
-import { MailOutbox1765450000000 } from './1765450000000-mail-outbox';
-import { MailPreferences1765450000001 } from './1765450000001-mail-preferences';
 import { FootageRenditions1765410000000 } from './1765410000000-footage-renditions';
 import { FitFinder1765430000000 } from './1765430000000-fit-finder';
 import { Search1765440000000 } from './1765440000000-search';
+import { MailOutbox1765450000000 } from './1765450000000-mail-outbox';
+import { MailPreferences1765450000001 } from './1765450000001-mail-preferences';
 
 /** Every migration, oldest first. Listed explicitly so the same list works from src (tests) and dist. */
 // eslint-disable-next-line @typescript-eslint/no-unsafe-function-type
@@ -28,9 +28,9 @@ export const migrations: MixedList<Function> = [
   FitReports1765200000000,
   FitNewsUnsubscribe1765310000000,
   PublishedGuidesIndex1765320000000,
-  MailOutbox1765450000000,
-  MailPreferences1765450000001,
   FootageRenditions1765410000000,
   FitFinder1765430000000,
   Search1765440000000,
+  MailOutbox1765450000000,
+  MailPreferences1765450000001,
 ];
