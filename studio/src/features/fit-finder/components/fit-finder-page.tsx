@@ -43,12 +43,13 @@ const FIELDS = [
 type Field = (typeof FIELDS)[number];
 type FormValues = Record<Field, string>;
 
+/** What each check answers; shown for the part-number case, where the title alone would not say why it is there. */
 const CRITERION_WORDS: Record<FinderCheck['criterion'], string> = {
   spline: 'Spline',
   diameter: 'Diameter',
   clearance: 'Clearance',
   length: 'Length window',
-  part: 'Assembly',
+  part: 'The assembly',
 };
 
 function valuesFrom(params: URLSearchParams): FormValues {
@@ -284,7 +285,8 @@ function CheckLine({ check }: { check: FinderCheck }) {
     <Stack gap={4} pl="sm" style={{ borderLeft: '3px solid var(--mantine-color-gray-3)' }}>
       <Group gap="xs">
         <Text size="sm" fw={500}>
-          {CRITERION_WORDS[check.criterion]}: {check.title}
+          {check.criterion === 'part' ? `${CRITERION_WORDS.part}'s best check: ` : ''}
+          {check.title}
         </Text>
         <StateLine state={check.state} />
       </Group>
