@@ -8,6 +8,7 @@ import { useSendFitReport } from '../api/mutations';
 import { FIT_REPORT_LIMITS, type FitReport, type FitReportOutcome } from '../api/queries';
 import { usePhotoSending, type PhotoSending } from '../hooks/use-photo-sending';
 import { PhotoPicker } from './photo-picker';
+import { RetryNotice } from '@/components/retry-notice';
 
 export interface FitReportFormProps {
   workshopSlug: string;
@@ -170,14 +171,7 @@ function PhotoProgress({ item, onRetry }: { item: PhotoSending; onRetry: () => v
           <Progress value={percent} size="sm" aria-label={`Sending ${item.file.name}`} aria-valuenow={percent} animated={item.phase === 'sending'} />
         )}
         {item.phase === 'failed' && (
-          <Group justify="space-between" gap="xs">
-            <Text size="sm" c="red">
-              {item.error}
-            </Text>
-            <Button size="xs" variant="default" onClick={onRetry}>
-              Try again
-            </Button>
-          </Group>
+          <RetryNotice message={item.error ?? 'The photo could not be sent.'} onRetry={onRetry} />
         )}
       </Stack>
     </Paper>

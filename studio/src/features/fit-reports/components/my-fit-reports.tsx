@@ -1,4 +1,4 @@
-import { Anchor, Blockquote, Button, Group, Paper, Skeleton, Stack, Text, Title } from '@mantine/core';
+import { Anchor, Blockquote, Group, Paper, Skeleton, Stack, Text, Title } from '@mantine/core';
 import { useQuery } from '@tanstack/react-query';
 import { Link } from 'react-router-dom';
 import { CheckStateBadge } from '@/components/check-state';
@@ -6,6 +6,7 @@ import { paths } from '@/config/paths';
 import { fitReportQueries, type FitReport } from '../api/queries';
 import { OutcomeLabel, STATUS_FOR_REPORTER } from './report-words';
 import { formatDate } from '@/lib/dates';
+import { RetryNotice } from '@/components/retry-notice';
 
 /** The account page's list of the fit reports I sent, with how each workshop answered. */
 export function MyFitReports() {
@@ -22,14 +23,7 @@ export function MyFitReports() {
         {reports.isPending ? (
           <Skeleton height={80} aria-label="Loading your fit reports" />
         ) : reports.isError ? (
-          <Stack gap={4} align="flex-start">
-            <Text size="sm" c="red" role="alert">
-              {reports.error.message}
-            </Text>
-            <Button size="xs" variant="default" onClick={() => void reports.refetch()}>
-              Try again
-            </Button>
-          </Stack>
+          <RetryNotice message={reports.error.message} onRetry={() => void reports.refetch()} />
         ) : reports.data.length === 0 ? (
           <Text size="sm" data-testid="my-fit-reports-empty">
             You have sent no fit reports. Open a{' '}

@@ -1,9 +1,10 @@
-import { Alert, Button, Group, SegmentedControl, Skeleton, Stack, Text, Title } from '@mantine/core';
+import { SegmentedControl, Skeleton, Stack, Text, Title } from '@mantine/core';
 import { useQuery } from '@tanstack/react-query';
 import { useSearchParams } from 'react-router-dom';
 import { FIT_REPORT_STATUSES, fitReportQueries, type FitReport, type FitReportStatus } from '../api/queries';
 import { ReportReviewCard } from './report-review-card';
 import { STATUS_WORDS } from './report-words';
+import { RetryNotice } from '@/components/retry-notice';
 
 const isStatus = (value: string | null): value is FitReportStatus => FIT_REPORT_STATUSES.includes(value as FitReportStatus);
 
@@ -64,14 +65,7 @@ export function WorkshopFitReports({ workshopId, readOnly = false }: { workshopI
       />
       {reports.isPending && <Skeleton height={160} aria-label="Loading fit reports" />}
       {reports.isError && (
-        <Alert color="red" title="Fit reports could not be loaded">
-          <Group justify="space-between">
-            <Text size="sm">{reports.error.message}</Text>
-            <Button size="xs" variant="default" onClick={() => void reports.refetch()}>
-              Try again
-            </Button>
-          </Group>
-        </Alert>
+        <RetryNotice title="Fit reports could not be loaded" message={reports.error.message} onRetry={() => void reports.refetch()} />
       )}
       {reports.data && shown.length === 0 && (
         <Text c="dimmed" data-testid="fit-reports-empty">

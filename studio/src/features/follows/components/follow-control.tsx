@@ -9,6 +9,7 @@ import { useSession, type SessionUser } from '@/lib/session';
 import { useFollow, useUnfollow } from '../api/mutations';
 import { findFollow, followQueries, type FollowTarget, type FollowTargetKind, type FollowTargets } from '../api/queries';
 import { FOLLOW_EXPLANATION, KIND_IN_WORDS, listInWords } from './follow-words';
+import { RetryNotice } from '@/components/retry-notice';
 
 interface Choice {
   kind: FollowTargetKind;
@@ -129,14 +130,7 @@ function SignedInFollowControl({ user, targets }: { user: SessionUser; targets: 
               </Alert>
             )}
             {follows.isError ? (
-              <Stack gap={4} align="flex-start">
-                <Text size="sm" c="red" role="alert">
-                  {follows.error.message}
-                </Text>
-                <Button size="xs" variant="default" onClick={() => void follows.refetch()}>
-                  Try again
-                </Button>
-              </Stack>
+              <RetryNotice message={follows.error.message} onRetry={() => void follows.refetch()} />
             ) : (
               <Stack gap="xs" role="group" aria-labelledby={groupLabelId}>
                 {choices.map((choice) => (

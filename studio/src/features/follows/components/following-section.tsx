@@ -6,6 +6,7 @@ import { notifyDone, notifyError } from '@/lib/notify';
 import { useUnfollow } from '../api/mutations';
 import { followQueries, type Follow } from '../api/queries';
 import { KIND_IN_WORDS } from './follow-words';
+import { RetryNotice } from '@/components/retry-notice';
 
 /** The account page's list of what I follow, each with a way to stop. */
 export function FollowingSection() {
@@ -22,14 +23,7 @@ export function FollowingSection() {
         {follows.isPending ? (
           <Skeleton height={80} aria-label="Loading what you follow" />
         ) : follows.isError ? (
-          <Stack gap={4} align="flex-start">
-            <Text size="sm" c="red" role="alert">
-              {follows.error.message}
-            </Text>
-            <Button size="xs" variant="default" onClick={() => void follows.refetch()}>
-              Try again
-            </Button>
-          </Stack>
+          <RetryNotice message={follows.error.message} onRetry={() => void follows.refetch()} />
         ) : follows.data.length === 0 ? (
           <Text size="sm" data-testid="following-empty">
             You follow nothing yet. Open a{' '}
