@@ -7,7 +7,8 @@ import { createTestApp } from './create-test-app';
 import { signIn } from './support/accounts';
 
 // The first run generates the clip with ffmpeg and espeak-ng (about 15 s); later runs reuse it from .data/.
-jest.setTimeout(180_000);
+// Loading also waits for the web renditions (about 20 s on an idle 2-core box; far longer under load).
+jest.setTimeout(420_000);
 
 describe('demo footage (real MariaDB, Redis, S3 fake, ffmpeg)', () => {
   let app: NestExpressApplication;
@@ -33,6 +34,13 @@ describe('demo footage (real MariaDB, Redis, S3 fake, ffmpeg)', () => {
     );
     expect(footage).toHaveLength(1);
     expect(footage[0]).toMatchObject({ state: 'ready', width: 960, height: 540, videoCodec: 'h264', transcript: { revision: 1, cueCount: DEMO_CARDS.length } });
+    // The same media pipeline as any upload: web renditions at the source's 540 lines and 360 (made at load, or at start for older data).
+    let renditions = footage[0].renditions;
+    for (const deadline = Date.now() + 120_000; renditions.state !== 'ready' && renditions.state !== 'failed' && Date.now() < deadline; ) {
+      await new Promise((done) => setTimeout(done, 500));
+      renditions = (await owner.get(`${base}/footage/${footage[0].id}`).expect(200)).body.renditions;
+    }
+    expect(renditions).toMatchObject({ state: 'ready', variants: [{ width: 960, height: 540 }, { width: 640, height: 360 }] });
     // About 60–90 s of narration (or 6 s a card when espeak-ng is missing).
     expect(footage[0].durationMs).toBeGreaterThan(55_000);
     expect(footage[0].durationMs).toBeLessThan(95_000);

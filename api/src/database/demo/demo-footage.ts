@@ -150,6 +150,18 @@ async function waitForProcessing(footage: FootageService, workshopId: string, fo
   throw new Error('the demo footage was not processed within two minutes; is Redis up?');
 }
 
+/** Waits for the web renditions (HLS, MP4, scrub previews, waveform) the same media queue makes after probing. */
+async function waitForRenditions(footage: FootageService, workshopId: string, footageId: string): Promise<string> {
+  const deadline = Date.now() + 600_000;
+  while (Date.now() < deadline) {
+    const { renditions } = await footage.describe(await footage.get(workshopId, footageId));
+    if (renditions.state === 'ready') return `web renditions ${renditions.variants.map(({ height }) => `${height}p`).join(', ')}`;
+    if (renditions.state === 'failed') return `web renditions failed: ${renditions.reason}`;
+    await new Promise((done) => setTimeout(done, 500));
+  }
+  return 'web renditions still being made; the server finishes them';
+}
+
 /** Idempotent: makes sure the demo build has its walkthrough, processed, with its transcript. */
 export async function loadDemoFootage(app: INestApplicationContext, ids: Ids): Promise<string> {
   const builds = app.get(BuildsService);
@@ -180,5 +192,6 @@ export async function loadDemoFootage(app: INestApplicationContext, ids: Ids): P
     format: 'webvtt',
     fileName: 'coupler-walkthrough.vtt',
   });
-  return `demo footage "${DEMO_FOOTAGE_TITLE}" uploaded, processed and transcribed (${media.summary})`;
+  const renditions = await waitForRenditions(footage, ids.workshopId, footageId);
+  return `demo footage "${DEMO_FOOTAGE_TITLE}" uploaded, processed and transcribed (${media.summary}; ${renditions})`;
 }
