@@ -22,6 +22,7 @@ import { GuidesService } from './guides.service';
 import { PublishedGuidesController } from './published-guides.controller';
 import { PublishedGuideMediaService } from './published-guide-media.service';
 import { PublishedGuidesService } from './published-guides.service';
+import { PublishedTranscriptController } from './published-transcript.controller';
 
 @Module({
   imports: [
@@ -32,7 +33,7 @@ import { PublishedGuidesService } from './published-guides.service';
     TranscriptsModule,
     FootageModule,
   ],
-  controllers: [GuidesController, PublishedGuidesController],
+  controllers: [GuidesController, PublishedGuidesController, PublishedTranscriptController],
   providers: [GuidesService, PublishedGuidesService, PublishedGuideMediaService],
   exports: [GuidesService],
 })

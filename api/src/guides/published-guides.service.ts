@@ -14,6 +14,7 @@ import { Mark } from '../marks/entities/mark.entity';
 import { Measurement } from '../measurements/entities/measurement.entity';
 import { Transcript } from '../transcripts/entities/transcript.entity';
 import { TranscriptCue } from '../transcripts/entities/transcript-cue.entity';
+import type { CueWindowQueryDto, CueWindowResponseDto } from '../transcripts/dto/transcript.dto';
 import { TranscriptsService } from '../transcripts/transcripts.service';
 import { Workshop } from '../workshops/entities/workshop.entity';
 import { GuideRevision } from './entities/guide-revision.entity';
@@ -198,6 +199,14 @@ export class PublishedGuidesService {
   async captions(workshopSlug: string, guideSlug: string): Promise<string> {
     const footage = await this.guideFootage(workshopSlug, guideSlug);
     return (await this.transcriptsService.exportWebVtt(footage.workshopId, footage.id)).body;
+  }
+
+  /** A window of the guide's transcript, so the reader's list fetches the cues it shows rather than every cue. */
+  async cueWindow(workshopSlug: string, guideSlug: string, window: CueWindowQueryDto): Promise<CueWindowResponseDto> {
+    const footage = await this.guideFootage(workshopSlug, guideSlug);
+    const transcript = await this.transcripts.findOneBy({ footageId: footage.id, isActive: true });
+    if (!transcript) throw new NotFoundException('This guide has no transcript');
+    return this.transcriptsService.cueWindow(transcript.id, window);
   }
 
   /** A photo evidencing a live check of the guide's assembly (never a retired check's, nor another assembly's). */

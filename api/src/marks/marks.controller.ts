@@ -1,11 +1,15 @@
-import { Body, Controller, Delete, Get, HttpCode, Inject, Param, ParseUUIDPipe, Patch, Post, Query } from '@nestjs/common';
-import { ApiTags } from '@nestjs/swagger';
+import { Body, Controller, Delete, Get, HttpCode, Inject, Param, ParseUUIDPipe, Patch, Post, Query, Res } from '@nestjs/common';
+import { ApiHeader, ApiTags } from '@nestjs/swagger';
+import type { Response } from 'express';
 import { WorkshopEditor } from '../common/decorators/access.decorator';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import type { SessionUser } from '../common/types/access-context';
 import { AcceptSuggestionDto, CreateMarkDto, ListMarksQueryDto, ListSuggestionsQueryDto, UpdateMarkDto } from './dto/mark.dto';
 import { toAcceptedResponse, toMarkResponse, toSuggestionResponse } from './mark.mapper';
 import { MarksService } from './marks.service';
+
+/** Lists answer whole unless paged (`limit`, `offset`); this header gives the count in all either way. */
+const TOTAL_COUNT_HEADER = 'X-Total-Count';
 
 /** Marks of one footage and the suggestions mined from its transcript. */
 @ApiTags('marks')
@@ -15,12 +19,16 @@ export class MarksController {
   constructor(@Inject(MarksService) private readonly marks: MarksService) {}
 
   @Get('marks')
+  @ApiHeader({ name: TOTAL_COUNT_HEADER, description: 'How many marks there are in all (set on the answer)', required: false })
   async list(
     @Param('workshopId', ParseUUIDPipe) workshopId: string,
     @Param('footageId', ParseUUIDPipe) footageId: string,
     @Query() query: ListMarksQueryDto,
+    @Res({ passthrough: true }) response: Response,
   ) {
-    return (await this.marks.list(workshopId, footageId, query.kind)).map(toMarkResponse);
+    const { items, total } = await this.marks.listPage(workshopId, footageId, query.kind, query);
+    response.setHeader(TOTAL_COUNT_HEADER, String(total));
+    return items.map(toMarkResponse);
   }
 
   @Post('marks')
@@ -55,12 +63,16 @@ export class MarksController {
   }
 
   @Get('mark-suggestions')
+  @ApiHeader({ name: TOTAL_COUNT_HEADER, description: 'How many suggestions there are in all (set on the answer)', required: false })
   async suggestions(
     @Param('workshopId', ParseUUIDPipe) workshopId: string,
     @Param('footageId', ParseUUIDPipe) footageId: string,
     @Query() query: ListSuggestionsQueryDto,
+    @Res({ passthrough: true }) response: Response,
   ) {
-    return (await this.marks.listSuggestions(workshopId, footageId, query.status)).map(toSuggestionResponse);
+    const { items, total } = await this.marks.listSuggestionsPage(workshopId, footageId, query.status, query);
+    response.setHeader(TOTAL_COUNT_HEADER, String(total));
+    return items.map(toSuggestionResponse);
   }
 
   @Post('mark-suggestions/:suggestionId/accept')

@@ -7,7 +7,7 @@ import { FootageService } from '../footage/footage.service';
 import { Measurement } from '../measurements/entities/measurement.entity';
 import { MeasurementsService } from '../measurements/measurements.service';
 import { Part } from '../parts/entities/part.entity';
-import { CreateMarkDto, MarkLinksDto, UpdateMarkDto, AcceptSuggestionDto } from './dto/mark.dto';
+import { CreateMarkDto, MarkLinksDto, UpdateMarkDto, AcceptSuggestionDto, type PageQueryDto } from './dto/mark.dto';
 import { Mark, MarkKind } from './entities/mark.entity';
 import { MarkSuggestion, SuggestionStatus } from './entities/mark-suggestion.entity';
 import { resolutionOfDigits } from './spoken-reading';
@@ -43,11 +43,18 @@ export class MarksService {
   ) {}
 
   async list(workshopId: string, footageId: string, kind?: MarkKind): Promise<Mark[]> {
+    return (await this.listPage(workshopId, footageId, kind)).items;
+  }
+
+  /** In time order; a page when `page.limit` is given (ids break ties, so pages never repeat or skip a mark). */
+  async listPage(workshopId: string, footageId: string, kind?: MarkKind, page: PageQueryDto = {}): Promise<{ items: Mark[]; total: number }> {
     await this.footage.get(workshopId, footageId);
-    return this.marks.find({
+    const [items, total] = await this.marks.findAndCount({
       where: { workshopId, footageId, ...(kind ? { kind } : {}) },
-      order: { startMs: 'ASC', createdAt: 'ASC' },
+      order: { startMs: 'ASC', createdAt: 'ASC', id: 'ASC' },
+      ...(page.limit !== undefined ? { skip: page.offset ?? 0, take: page.limit } : {}),
     });
+    return { items, total };
   }
 
   async create(workshopId: string, footageId: string, actorId: string, input: CreateMarkDto): Promise<Mark> {
@@ -122,8 +129,22 @@ export class MarksService {
   }
 
   async listSuggestions(workshopId: string, footageId: string, status: SuggestionStatus = 'pending'): Promise<MarkSuggestion[]> {
+    return (await this.listSuggestionsPage(workshopId, footageId, status)).items;
+  }
+
+  async listSuggestionsPage(
+    workshopId: string,
+    footageId: string,
+    status: SuggestionStatus = 'pending',
+    page: PageQueryDto = {},
+  ): Promise<{ items: MarkSuggestion[]; total: number }> {
     await this.footage.get(workshopId, footageId);
-    return this.suggestions.find({ where: { workshopId, footageId, status }, order: { startMs: 'ASC', phrase: 'ASC' } });
+    const [items, total] = await this.suggestions.findAndCount({
+      where: { workshopId, footageId, status },
+      order: { startMs: 'ASC', phrase: 'ASC', id: 'ASC' },
+      ...(page.limit !== undefined ? { skip: page.offset ?? 0, take: page.limit } : {}),
+    });
+    return { items, total };
   }
 
   /**

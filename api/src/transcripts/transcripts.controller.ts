@@ -28,6 +28,8 @@ import {
   AttachTranscriptFileDto,
   ExportQueryDto,
   FootageSearchResponseDto,
+  HitMomentsQueryDto,
+  HitMomentsResponseDto,
   SearchQueryDto,
   TranscriptDto,
   TranscriptQueryDto,
@@ -134,6 +136,16 @@ export class TranscriptsController {
     @Query() query: SearchQueryDto,
   ): Promise<FootageSearchResponseDto> {
     return this.transcripts.searchFootage(workshopId, footageId, query);
+  }
+
+  @Get('footage/:footageId/transcript/search/moments')
+  @ApiOkResponse({ type: HitMomentsResponseDto, description: 'Where every hit starts, for the density band on the marking timeline' })
+  hitMoments(
+    @Param('workshopId', ParseUUIDPipe) workshopId: string,
+    @Param('footageId', ParseUUIDPipe) footageId: string,
+    @Query() query: HitMomentsQueryDto,
+  ): Promise<HitMomentsResponseDto> {
+    return this.transcripts.hitMoments(workshopId, footageId, query.q);
   }
 
   @Get('transcripts/search')

@@ -15,8 +15,12 @@ import { Footage } from '../footage/entities/footage.entity';
 import { FootageService } from '../footage/footage.service';
 import { sanitiseFileName } from '../footage/upload-plan';
 import {
+  CUE_WINDOW_MAX,
   CueMatchDto,
+  type CueWindowQueryDto,
+  type CueWindowResponseDto,
   FootageSearchResponseDto,
+  type HitMomentsResponseDto,
   SearchQueryDto,
   TranscriptDto,
   TranscriptFormatChoice,
@@ -160,6 +164,44 @@ export class TranscriptsService {
       .limit(page.limit)
       .getManyAndCount();
     return { terms, total, offset: page.offset, results: rows.map(toCueMatch) };
+  }
+
+  /** When each hit of the active transcript starts (every one, in time order): one indexed column, no text. */
+  async hitMoments(workshopId: string, footageId: string, q: string): Promise<HitMomentsResponseDto> {
+    await this.footage.get(workshopId, footageId);
+    const { terms, booleanQuery } = this.requireTerms(q);
+    const rows: { start_ms: number | string }[] = await this.cues.query(
+      `SELECT cue.start_ms FROM transcript_cues cue
+         JOIN transcripts transcript ON transcript.id = cue.transcript_id AND transcript.is_active = 1
+        WHERE transcript.workshop_id = ? AND transcript.footage_id = ?
+          AND MATCH(cue.text) AGAINST (? IN BOOLEAN MODE)
+        ORDER BY cue.start_ms, cue.cue_index
+        LIMIT ${TRANSCRIPT_MAX_CUES}`,
+      [workshopId, footageId, booleanQuery],
+    );
+    const startMs = rows.map((row) => Number(row.start_ms));
+    return { terms, total: startMs.length, startMs };
+  }
+
+  /**
+   * A window of the active transcript's cues, by time or by position (see CueWindowQueryDto), so a reader's list
+   * fetches what it shows rather than every cue. `transcriptId` comes from the caller that resolved the footage.
+   */
+  async cueWindow(transcriptId: string, window: CueWindowQueryDto): Promise<CueWindowResponseDto> {
+    const byTime = window.fromMs !== undefined || window.toMs !== undefined;
+    const byIndex = window.fromIndex !== undefined || window.limit !== undefined;
+    if (byTime === byIndex) throw new BadRequestException('Give either fromMs and toMs, or fromIndex (and limit)');
+    if (byTime && (window.fromMs === undefined || window.toMs === undefined || window.toMs <= window.fromMs)) {
+      throw new BadRequestException('toMs must be greater than fromMs, and both are needed');
+    }
+    const total = await this.cues.countBy({ transcriptId });
+    const query = this.cues.createQueryBuilder('cue').where('cue.transcriptId = :transcriptId', { transcriptId }).orderBy('cue.cueIndex', 'ASC');
+    if (byTime) {
+      query.andWhere('cue.endMs > :fromMs AND cue.startMs < :toMs', { fromMs: window.fromMs, toMs: window.toMs }).limit(CUE_WINDOW_MAX);
+    } else {
+      query.andWhere('cue.cueIndex >= :fromIndex', { fromIndex: window.fromIndex ?? 0 }).limit(window.limit ?? 100);
+    }
+    return { total, cues: (await query.getMany()).map(toCue) };
   }
 
   /** Cues of every active transcript in the workshop containing every word, best match first, a page at a time. */

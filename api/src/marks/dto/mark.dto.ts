@@ -1,5 +1,7 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
-import { IsIn, IsInt, IsOptional, IsString, IsUUID, Matches, Max, MaxLength, Min, ValidateIf } from 'class-validator';
+import { IsIn, IsInt, IsOptional, IsString, IsUUID, Matches, Max, MaxLength, Min } from 'class-validator';
+import { NullableFootageTime, NullableUuid } from '../../common/decorators/nullable-fields.decorator';
+import { NumberFromText } from '../../common/decorators/number-from-text.decorator';
 import { MAX_FOOTAGE_MS } from '../../common/http/limits';
 import { QUANTITIES, INSTRUMENT_KINDS, type InstrumentKind, type Quantity } from '../../measurements/entities/measurement.entity';
 import { MARK_KINDS, type MarkKind } from '../entities/mark.entity';
@@ -7,28 +9,16 @@ import { SUGGESTION_STATUSES, type SuggestionStatus } from '../entities/mark-sug
 
 /** Links are optional; a given link must match the kind (a part for `part`, a fit check for `check_evidence`…). */
 export class MarkLinksDto {
-  @ApiPropertyOptional({ nullable: true, description: 'For kind `part`' })
-  @IsOptional()
-  @ValidateIf((_, value) => value !== null)
-  @IsUUID()
+  @NullableUuid('For kind `part`')
   partId?: string | null;
 
-  @ApiPropertyOptional({ nullable: true, description: 'For kind `measurement`' })
-  @IsOptional()
-  @ValidateIf((_, value) => value !== null)
-  @IsUUID()
+  @NullableUuid('For kind `measurement`')
   measurementId?: string | null;
 
-  @ApiPropertyOptional({ nullable: true, description: 'For kind `check_evidence`' })
-  @IsOptional()
-  @ValidateIf((_, value) => value !== null)
-  @IsUUID()
+  @NullableUuid('For kind `check_evidence`')
   fitCheckId?: string | null;
 
-  @ApiPropertyOptional({ nullable: true, description: 'For kind `step`: a step of one of the workshop’s guides' })
-  @IsOptional()
-  @ValidateIf((_, value) => value !== null)
-  @IsUUID()
+  @NullableUuid('For kind `step`: a step of one of the workshop’s guides')
   guideStepId?: string | null;
 }
 
@@ -39,12 +29,7 @@ export class CreateMarkDto extends MarkLinksDto {
   @Max(MAX_FOOTAGE_MS, { message: '$property must be at most 86400000 (24 hours, in ms)' })
   startMs!: number;
 
-  @ApiPropertyOptional({ example: 101_500, nullable: true, description: 'End of a span, ms (after startMs)' })
-  @IsOptional()
-  @ValidateIf((_, value) => value !== null)
-  @IsInt()
-  @Min(0)
-  @Max(MAX_FOOTAGE_MS, { message: '$property must be at most 86400000 (24 hours, in ms)' })
+  @NullableFootageTime('End of a span, ms (after startMs)', 101_500)
   endMs?: number | null;
 
   @ApiProperty({ enum: MARK_KINDS })
@@ -66,12 +51,7 @@ export class UpdateMarkDto extends MarkLinksDto {
   @Max(MAX_FOOTAGE_MS, { message: '$property must be at most 86400000 (24 hours, in ms)' })
   startMs?: number;
 
-  @ApiPropertyOptional({ nullable: true })
-  @IsOptional()
-  @ValidateIf((_, value) => value !== null)
-  @IsInt()
-  @Min(0)
-  @Max(MAX_FOOTAGE_MS, { message: '$property must be at most 86400000 (24 hours, in ms)' })
+  @NullableFootageTime('End of a span, ms (after startMs); null makes it a moment')
   endMs?: number | null;
 
   @ApiPropertyOptional({ enum: MARK_KINDS })
@@ -86,14 +66,36 @@ export class UpdateMarkDto extends MarkLinksDto {
   label?: string;
 }
 
-export class ListMarksQueryDto {
+/** Longest page of marks or suggestions; without `limit` a list answers whole, as it always has. */
+export const MARKS_PAGE_MAX = 500;
+
+/** Optional paging, in time order; the answer's `X-Total-Count` header says how many there are in all. */
+export class PageQueryDto {
+  @ApiPropertyOptional({ minimum: 1, maximum: MARKS_PAGE_MAX, description: 'At most this many (all when absent)' })
+  @IsOptional()
+  @NumberFromText()
+  @IsInt()
+  @Min(1)
+  @Max(MARKS_PAGE_MAX)
+  limit?: number;
+
+  @ApiPropertyOptional({ minimum: 0, maximum: 100_000, default: 0, description: 'How many to skip: the next page starts at offset + limit' })
+  @IsOptional()
+  @NumberFromText()
+  @IsInt()
+  @Min(0)
+  @Max(100_000)
+  offset?: number;
+}
+
+export class ListMarksQueryDto extends PageQueryDto {
   @ApiPropertyOptional({ enum: MARK_KINDS })
   @IsOptional()
   @IsIn(MARK_KINDS)
   kind?: MarkKind;
 }
 
-export class ListSuggestionsQueryDto {
+export class ListSuggestionsQueryDto extends PageQueryDto {
   @ApiPropertyOptional({ enum: SUGGESTION_STATUSES, default: 'pending' })
   @IsOptional()
   @IsIn(SUGGESTION_STATUSES)

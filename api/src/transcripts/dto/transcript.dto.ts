@@ -124,3 +124,64 @@ export class WorkshopSearchResponseDto {
   @ApiProperty({ type: [WorkshopCueMatchDto], description: "Matching cues of the workshop's active transcripts, best first" })
   results!: WorkshopCueMatchDto[];
 }
+
+/** Every hit's moment at once, for drawing where hits gather along the footage (the marking timeline). */
+export class HitMomentsQueryDto {
+  @ApiProperty({ example: 'spline', description: 'Words to find; each must appear (words of three letters or more)' })
+  @IsString()
+  @Length(1, 200)
+  q!: string;
+}
+
+export class HitMomentsResponseDto {
+  @ApiProperty({ description: 'The words searched for' }) terms!: string[];
+  @ApiProperty({ description: 'How many cues match' }) total!: number;
+  @ApiProperty({ type: [Number], description: 'Start of every matching cue of the active transcript, ms, in time order' })
+  startMs!: number[];
+}
+
+/** Longest stretch of cues one window answer holds: a screenful and more, never the whole transcript. */
+export const CUE_WINDOW_MAX = 500;
+
+/**
+ * A window of a transcript's cues: by time (`fromMs`, `toMs`: the cues playing in that stretch, to follow playback)
+ * or by position (`fromIndex`, `limit`: the rows a scrolled list shows). Give one pair.
+ */
+export class CueWindowQueryDto {
+  @ApiPropertyOptional({ minimum: 0, maximum: 86_400_000, description: 'Cues still playing at or after this time, ms' })
+  @IsOptional()
+  @NumberFromText()
+  @IsInt()
+  @Min(0)
+  @Max(86_400_000)
+  fromMs?: number;
+
+  @ApiPropertyOptional({ minimum: 0, maximum: 86_400_000, description: 'Cues starting before this time, ms (after fromMs)' })
+  @IsOptional()
+  @NumberFromText()
+  @IsInt()
+  @Min(0)
+  @Max(86_400_000)
+  toMs?: number;
+
+  @ApiPropertyOptional({ minimum: 0, maximum: 100_000, description: 'First cue by position, from 0' })
+  @IsOptional()
+  @NumberFromText()
+  @IsInt()
+  @Min(0)
+  @Max(100_000)
+  fromIndex?: number;
+
+  @ApiPropertyOptional({ minimum: 1, maximum: CUE_WINDOW_MAX, default: 100, description: 'How many cues from fromIndex' })
+  @IsOptional()
+  @NumberFromText()
+  @IsInt()
+  @Min(1)
+  @Max(CUE_WINDOW_MAX)
+  limit?: number;
+}
+
+export class CueWindowResponseDto {
+  @ApiProperty({ description: 'How many cues the whole transcript has (to size a list before its rows arrive)' }) total!: number;
+  @ApiProperty({ type: [CueDto], description: `The cues in the window, in order (at most ${CUE_WINDOW_MAX})` }) cues!: CueDto[];
+}
