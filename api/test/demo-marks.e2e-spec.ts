@@ -88,9 +88,11 @@ describe('demo marks (real MariaDB, Redis, S3 fake, ffmpeg)', () => {
     expect(evidence).toMatchObject({ kind: 'check_evidence', startMs: cueSaying('Fit confirmed').startMs });
     expect(checklist.checks.find((check) => check.id === evidence.fitCheckId)).toMatchObject({ state: 'confirmed' });
 
-    // The caution spans its whole cue; the note links nothing; none is a guide step (the demo guide adds those).
+    // The caution spans its whole cue (the battery hazard is DANGER, as everywhere in the demo); the note links
+    // nothing; none is a guide step (the demo guide adds those).
     const warning = cueSaying('isolate the high voltage battery');
-    expect(markLabelled('WARNING')).toMatchObject({ kind: 'caution', startMs: warning.startMs, endMs: warning.endMs, partId: null });
+    expect(markLabelled('high-voltage battery')).toMatchObject({ kind: 'caution', startMs: warning.startMs, endMs: warning.endMs, partId: null });
+    expect(markLabelled('high-voltage battery').label).toMatch(/^DANGER: /);
     expect(marks.find((mark) => mark.kind === 'note')).toMatchObject({ partId: null, measurementId: null, fitCheckId: null });
     expect(marks.filter((mark) => mark.kind === 'step' || mark.guideStepId !== null)).toEqual([]);
 

@@ -1,6 +1,12 @@
 import type { ReactNode } from 'react';
 import classes from './signal-word.module.css';
 
+/**
+ * The safety alert symbol as one path in a 12×12 box (a triangle with the exclamation mark cut out, wound
+ * the other way), for small marks such as a caution on a timeline.
+ */
+export const SAFETY_ALERT_SHAPE = 'M6 0.5l5.8 11H0.2z M5.3 4v4h1.4V4z M5.3 9v1.4h1.4V9z';
+
 /** ANSI Z535 signal words, most severe first. */
 export type SignalWord = 'DANGER' | 'WARNING' | 'CAUTION' | 'NOTICE';
 

@@ -58,7 +58,7 @@ export const DEMO_MARKS: DemoMark[] = [
   {
     cue: 'isolate the high voltage battery',
     kind: 'caution',
-    label: 'WARNING: truck on stands, high-voltage battery isolated before working under it',
+    label: 'DANGER: high-voltage battery isolated and proven dead; truck on stands before working under it',
     span: true,
   },
 ];

@@ -1,4 +1,5 @@
 import { Group, Text } from '@mantine/core';
+import { SAFETY_ALERT_SHAPE } from '@/components/signal-word';
 import type { GuideMark, MarkKind } from '../api/types';
 import classes from './guide-view.module.css';
 import { formatClock } from '@/lib/clock';
@@ -8,8 +9,9 @@ export const MARK_LOOK: Record<MarkKind, { name: string; shape: string; colour: 
   part: { name: 'Part', shape: 'M2 2h8v8H2z', colour: 'var(--mantine-color-blue-7)' },
   measurement: { name: 'Measurement', shape: 'M6 0l6 6-6 6-6-6z', colour: 'var(--mantine-color-grape-7)' },
   check_evidence: { name: 'Check evidence', shape: 'M6 1a5 5 0 1 0 0.01 0z', colour: 'var(--mantine-color-teal-8)' },
-  step: { name: 'Step', shape: 'M6 1l5.5 10H0.5z', colour: 'var(--mantine-color-dark-5)' },
-  caution: { name: 'Caution', shape: 'M4 0h4l4 4v4l-4 4H4L0 8V4z', colour: 'var(--mantine-color-orange-8)' },
+  step: { name: 'Step', shape: 'M1 0.5h1.6v11H1z M2.6 0.5l8.4 3.2-8.4 3.2z', colour: 'var(--mantine-color-dark-5)' },
+  // The safety alert symbol, as the signal-word headers in the editor and the reader carry it.
+  caution: { name: 'Caution', shape: SAFETY_ALERT_SHAPE, colour: 'var(--mantine-color-orange-8)' },
   note: { name: 'Note', shape: 'M4.5 0h3v12h-3z', colour: 'var(--mantine-color-gray-7)' },
 };
 

@@ -8,15 +8,12 @@ export const SAFETY_TOPIC_LABELS: Record<SafetyTopic, { name: string; hint: stri
   pressing: { name: 'Pressing', hint: 'a hydraulic press, pressing bearings or bushes' },
 };
 
-/**
- * How each signal word looks. The word itself is always shown; the shape (a small SVG path in a
- * 12×12 box) and the colour only help, so the level reads in grey print too.
- */
-export const CAUTION_LOOK: Record<CautionLevel, { color: string; shape: string; meaning: string }> = {
-  DANGER: { color: 'red', shape: 'M4 0h4l4 4v4l-4 4H4L0 8V4z', meaning: 'will cause death or serious injury' },
-  WARNING: { color: 'orange', shape: 'M6 0.5l5.5 11H0.5z', meaning: 'could cause death or serious injury' },
-  CAUTION: { color: 'yellow', shape: 'M6 0l6 6-6 6-6-6z', meaning: 'could cause minor or moderate injury' },
-  NOTICE: { color: 'blue', shape: 'M1 1h10v10H1z', meaning: 'could damage parts or the vehicle, not people' },
+/** What each ANSI Z535 signal word means, for the editor's level picker (the look is components/signal-word). */
+export const CAUTION_LOOK: Record<CautionLevel, { meaning: string }> = {
+  DANGER: { meaning: 'will cause death or serious injury' },
+  WARNING: { meaning: 'could cause death or serious injury' },
+  CAUTION: { meaning: 'could cause minor or moderate injury' },
+  NOTICE: { meaning: 'could damage parts or the vehicle, not people' },
 };
 
 /** Names for the kinds of marks a step can carry (the marks feature has the full set). */

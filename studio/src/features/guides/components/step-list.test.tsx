@@ -60,7 +60,11 @@ describe('StepList', () => {
     expect(cards.map((card) => within(card).getByRole('heading').textContent)).toEqual(['Support the gearbox', 'Slide the coupler on', 'Torque the bolts']);
     expect(within(cards[0]).getByText('Step 1')).toBeTruthy();
     expect(within(cards[0]).getByTestId('step-time').textContent).toBe('0:04.2');
-    expect(within(cards[0]).getByTestId('step-caution').textContent).toBe('WARNING Use a transmission jack.');
+    // The editor shows a caution as the reader will: the ANSI Z535 safety alert symbol and the word, then the text.
+    const caution = within(cards[0]).getByTestId('step-caution');
+    expect(caution.querySelector('[data-signal-header]')?.textContent).toBe('WARNING');
+    expect(caution.querySelector('[data-signal-header] [data-symbol="safety-alert"]')).toBeTruthy();
+    expect(caution.textContent).toBe('WARNINGUse a transmission jack.');
     expect(within(cards[1]).getByText('splines').tagName).toBe('STRONG');
     expect(within(cards[1]).getByTestId('step-mark').textContent).toBe('1:15.3 Part Coupler HL-2127');
     expect(within(cards[2]).queryByTestId('step-time')).toBeNull();

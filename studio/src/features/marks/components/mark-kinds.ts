@@ -1,4 +1,5 @@
 import type { FitCheckState, MarkKind } from '../api/queries';
+import { SAFETY_ALERT_SHAPE } from '@/components/signal-word';
 
 /**
  * How each kind reads on screen. Every kind has its own shape (an SVG path in a 12×12 box) and name,
@@ -8,8 +9,9 @@ export const KIND_LOOK: Record<MarkKind, { name: string; shape: string; color: s
   part: { name: 'Part', shape: 'M2 2h8v8H2z', color: 'var(--mantine-color-blue-7)' },
   measurement: { name: 'Measurement', shape: 'M6 0l6 6-6 6-6-6z', color: 'var(--mantine-color-grape-7)' },
   check_evidence: { name: 'Check evidence', shape: 'M6 1a5 5 0 1 0 0.01 0z', color: 'var(--mantine-color-teal-8)' },
-  step: { name: 'Step', shape: 'M6 1l5.5 10H0.5z', color: 'var(--mantine-color-dark-5)' },
-  caution: { name: 'Caution', shape: 'M4 0h4l4 4v4l-4 4H4L0 8V4z', color: 'var(--mantine-color-orange-8)' },
+  step: { name: 'Step', shape: 'M1 0.5h1.6v11H1z M2.6 0.5l8.4 3.2-8.4 3.2z', color: 'var(--mantine-color-dark-5)' },
+  // The safety alert symbol, as the signal-word headers in the editor and the reader carry it.
+  caution: { name: 'Caution', shape: SAFETY_ALERT_SHAPE, color: 'var(--mantine-color-orange-8)' },
   note: { name: 'Note', shape: 'M4.5 0h3v12h-3z', color: 'var(--mantine-color-gray-7)' },
 };
 
