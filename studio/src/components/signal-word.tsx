@@ -50,3 +50,13 @@ export function SignalWordHeader({ level, source, children }: { level: SignalWor
 
 /** The class that sets `--signal-bg` and `--signal-fg` for a level, for borders drawn in the level's colour. */
 export const signalColours = classes.signal;
+
+/** A short caution in running text (outside a guide): the signal-word header over the text, bordered in its colour. */
+export function SignalNote({ level, children, testId }: { level: SignalWord; children: ReactNode; testId?: string }) {
+  return (
+    <div className={`${classes.signal} ${classes.note}`} data-level={level} data-testid={testId} role="note" aria-label={level}>
+      <SignalWordHeader level={level} />
+      <div className={classes.noteText}>{children}</div>
+    </div>
+  );
+}

@@ -30,6 +30,28 @@ describe('FitCalculator', () => {
     expect(screen.getByTestId('tolerance-zone-diagram')).toBeTruthy();
     expect(screen.getByTestId('fit-convention').textContent).toBe('Convention: js/JS = ±IT/2 exactly, as in the current ISO 286-2 tables.');
     expect(requests[0].url.search).toBe('?size=25&unit=mm&hole=H7&shaft=g6');
+    expect(screen.queryByTestId('press-caution')).toBeNull();
+  });
+
+  it('carries the usual pressing caution on an interference fit, and none on a clearance fit', async () => {
+    stubApi([
+      {
+        path: /^\/tools\/fits\?/,
+        // ISO 286-2, 18–30 mm: H7 +21/0, p6 +35/+22 µm; clearance 21 − 22 = −1 and 0 − 35 = −35 µm: always interference.
+        body: {
+          hole: { upper: 21, lower: 0 },
+          shaft: { upper: 35, lower: 22 },
+          clearance: { max: -1, min: -35 },
+          kind: 'interference',
+          convention: { jsRounding: 'none', description: 'js/JS = ±IT/2 exactly, as in the current ISO 286-2 tables' },
+        },
+      },
+    ]);
+    renderWithProviders(<FitCalculator />, { route: '/tools/fit-calculator?size=25&unit=mm&hole=H7&shaft=p6' });
+    const caution = await screen.findByTestId('press-caution');
+    expect(caution.getAttribute('data-level')).toBe('WARNING');
+    expect(caution.querySelector('[data-symbol="safety-alert"]')).toBeTruthy();
+    expect(caution.textContent).toMatch(/eye protection.*line of force.*heat-resistant gloves/);
   });
 
   it('puts the API’s complaint about a class under that class', async () => {

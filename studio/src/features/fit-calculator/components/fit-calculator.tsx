@@ -9,6 +9,7 @@ import { splitApiErrors } from '@/lib/form-errors';
 import { formatLength, formatReadableLength, toNanometres } from '@/lib/units';
 import { fitCalculatorQueries, type FitAnswer, type FitQuery } from '../api/queries';
 import { SplineSection } from './spline-section';
+import { SignalNote } from '@/components/signal-word';
 
 const LABELS = { size: 'Nominal size', unit: 'Unit', hole: 'Hole class', shaft: 'Shaft class' };
 const HOLE_CLASSES = ['H6', 'H7', 'H8', 'H9', 'H11', 'G7', 'F8', 'E9', 'D10', 'JS7', 'K7', 'M7', 'N7', 'P7', 'R7', 'S7'];
@@ -227,6 +228,13 @@ function FitResult({
           <Text fw={600} data-testid="fit-kind">
             {KIND_WORDS[answer.kind]}
           </Text>
+          {answer.kind === 'interference' && (
+            <SignalNote level="WARNING" testId="press-caution">
+              Pressing or shrinking a part in stores great force and heat: a part can shatter or fly out. Wear eye protection,
+              support the part on the correct adapters, stay within the press’s rating and keep clear of the line of force;
+              handle heated parts with heat-resistant gloves.
+            </SignalNote>
+          )}
           <Text size="sm" c="dimmed" data-testid="fit-convention">
             Convention: {answer.convention.description}.
           </Text>
