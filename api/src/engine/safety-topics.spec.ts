@@ -22,6 +22,8 @@ describe('detectSafetyTopics', () => {
     ['Tack it in place, then MIG weld the gusset.', ['welding']],
     ['Press the pilot bearing in with the arbor press and a flat driver.', ['pressing']],
     ['It is a press-fit, so support the inner race.', ['pressing']],
+    ['Heat the ring gear in the oven and drop it on.', ['pressing']],
+    ['A shrink fit holds the sleeve without a key.', ['pressing']],
   ])('finds the topic in %j', (text, topics) => {
     expect(detectSafetyTopics(text)).toEqual(topics);
   });
@@ -37,6 +39,7 @@ describe('detectSafetyTopics', () => {
     'Push the air hose coupling onto the line.',
     'The coupling nut on the brake line is finger tight.',
     'A shaft of sunlight fell across the bench.',
+    'Heat the workshop before the paint goes on.',
     'The lift shaft in the old mill is boarded over.',
   ])('finds nothing in %j', (text) => {
     expect(detectSafetyTopics(text)).toEqual([]);

@@ -47,7 +47,8 @@ const STANDARD_CAUTIONS: Record<SafetyTopic, Omit<StandardCaution, 'topic'>> = {
     level: 'WARNING',
     text:
       'Presses and pullers store great force; a part can shatter or fly out. Wear eye protection, support the part on the ' +
-      'correct adapters, stay within the press’s rating and keep clear of the line of force.',
+      'correct adapters, stay within the press’s rating and keep clear of the line of force. A part heated for a shrink ' +
+      'fit burns: handle it with heat-resistant gloves.',
   },
   welding: {
     level: 'WARNING',
@@ -100,6 +101,9 @@ const TOPIC_PATTERNS: Record<SafetyTopic, RegExp[]> = {
     /\bpress[- ]fit\w*\b/,
     /\b(hydraulic|arbor|shop|bearing) press\b/,
     /\b(bearing|gear|hub) puller\b/,
+    // Heating a part to shrink it on is the other way of making an interference fit.
+    /\bshrink[- ](fit|on)\w*\b/,
+    /\b(heat|heats|heated|heating) (the|a|an|its|new) (\w+ ){0,2}(bearing|race|ring|gear|hub|coupler|sleeve|flange)s?\b/,
   ],
 };
 

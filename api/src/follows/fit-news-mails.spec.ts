@@ -40,4 +40,11 @@ describe('fitNewsMail', () => {
       'You get this because you sent a fit report that this check verifies. To stop news about your report, open ',
     );
   });
+
+  it('carries the usual caution where the news talks about pressing or heating, and none otherwise', () => {
+    const pressed = fitNewsMail({ ...news, checkTitle: 'Pilot bearing pressed in', reason: 'Heated the coupler hub and pressed the bearing in' }).text;
+    expect(pressed).toContain('WARNING: Presses and pullers store great force');
+    expect(pressed).toContain('heat-resistant gloves');
+    expect(fitNewsMail(news).text).not.toMatch(/WARNING|DANGER/);
+  });
 });

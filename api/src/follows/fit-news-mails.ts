@@ -1,5 +1,6 @@
 import { composeMail } from '../infra/mail/compose-mail';
 import type { OutgoingMail } from '../infra/mail/mail.service';
+import { detectSafetyTopics, standardCautions } from '../engine/safety-topics';
 
 export interface FitNews {
   to: string;
@@ -45,6 +46,10 @@ export function fitNewsMail(news: FitNews): OutgoingMail {
       `${news.workshopName} has ${outcome}: “${news.checkTitle}” in “${news.assemblyName}” (${news.buildTitle}).`,
       ...(news.reason ? [`Their note: ${news.reason}`] : []),
       ...(news.evidence.length ? [`Evidence: ${news.evidence.join('; ')}.`] : []),
+      // A fit confirmed is a fit the reader may now make: where it is pressed or shrunk on, the usual caution goes with it.
+      ...standardCautions(detectSafetyTopics([news.checkTitle, news.reason, ...news.evidence].join('\n')).filter((topic) => topic === 'pressing')).map(
+        (caution) => `${caution.level}: ${caution.text}`,
+      ),
       news.because.kind === 'follow'
         ? `You get this because you follow ${news.because.label}. To stop, open ${news.unsubscribe.pageUrl}`
         : `You get this because you sent a fit report that this check verifies. To stop news about your report, open ${news.unsubscribe.pageUrl}`,
