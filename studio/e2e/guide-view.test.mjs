@@ -110,7 +110,7 @@ test('a signed-out reader finds the guide, follows it beside the video, searches
   await page.getByRole('navigation', { name: 'Main navigation' }).getByRole('link', { name: 'Guides' }).click();
   await page.waitForURL(`${baseUrl}/guides`);
   await page.getByRole('heading', { level: 1, name: 'Guides' }).waitFor();
-  await page.getByRole('searchbox', { name: 'Search guides' }).fill(run);
+  await page.getByRole('searchbox', { name: 'Search guides', exact: true }).fill(run);
   await page.waitForURL(/\/guides\?q=/);
   await page.getByText(`1 guide matches “${run}”`).waitFor();
   const card = page.getByTestId('guide-card').filter({ hasText: title });

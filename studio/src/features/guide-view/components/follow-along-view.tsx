@@ -65,12 +65,17 @@ export function GuideDocument({
   return (
     <Stack gap="lg" className={classes.document} data-guide-document="">
       <Stack gap={4}>
-        <Breadcrumbs className={classes.noPrint}>
-          <Anchor component={Link} to={paths.guideIndex}>
-            Guides
-          </Anchor>
-          <Text size="sm">{workshop.name}</Text>
-        </Breadcrumbs>
+        <Group justify="space-between" gap="xs" wrap="nowrap" className={classes.noPrint}>
+          <Breadcrumbs>
+            <Anchor component={Link} to={paths.guideIndex}>
+              Guides
+            </Anchor>
+            <Text size="sm">{workshop.name}</Text>
+          </Breadcrumbs>
+          <Button variant="default" size="xs" onClick={() => window.print()}>
+            Print
+          </Button>
+        </Group>
         <Group justify="space-between" align="flex-start" gap="sm">
           <div style={{ flex: '1 1 20rem' }}>
             <Title order={1}>{guide.title}</Title>
@@ -82,21 +87,7 @@ export function GuideDocument({
               Revision {revision.number} · published {formatDate(revision.publishedAt)}
               {revision.note ? ` · ${revision.note}` : ''}
             </Text>
-            {/* An API from before follows sends no targets: then there is nothing to offer. */}
-            {followSlot && data.followTargets && (
-              <Box mt="xs" className={classes.noPrint}>
-                {followSlot(data.followTargets)}
-              </Box>
-            )}
-            {reportSlot && (
-              <Box mt="xs" className={classes.noPrint}>
-                {reportSlot({ workshopSlug: workshop.slug, guideSlug: guide.slug, guideTitle: guide.title })}
-              </Box>
-            )}
           </div>
-          <Button variant="default" onClick={() => window.print()} className={classes.noPrint}>
-            Print
-          </Button>
         </Group>
         <Text size="xs" className={classes.printOnly}>
           Printed from {window.location.origin}
@@ -104,9 +95,11 @@ export function GuideDocument({
         </Text>
       </Stack>
 
-      <CautionsBlock guide={data} />
-
       <div className={classes.followAlong} data-has-video={footage ? '' : undefined}>
+        {/* First in reading order; on a phone the video is drawn above it (it is no step) and stays in view. */}
+        <div className={classes.areaSafety}>
+          <CautionsBlock guide={data} />
+        </div>
         {footage && (
           // On a phone this area stays at the top while the page scrolls, with the playing step under the video.
           <div className={classes.areaVideo} data-testid="guide-player">
@@ -128,6 +121,17 @@ export function GuideDocument({
           </div>
         )}
       </div>
+
+      {/* Following and fit reports come after the follow-along, so the video and the cautions own the first screen. */}
+      {((followSlot && data.followTargets) || reportSlot) && (
+        <Group gap="lg" align="flex-start" className={classes.noPrint}>
+          {/* An API from before follows sends no targets: then there is nothing to offer. */}
+          {followSlot && data.followTargets && <Box style={{ flex: '1 1 18rem' }}>{followSlot(data.followTargets)}</Box>}
+          {reportSlot && (
+            <Box style={{ flex: '1 1 18rem' }}>{reportSlot({ workshopSlug: workshop.slug, guideSlug: guide.slug, guideTitle: guide.title })}</Box>
+          )}
+        </Group>
+      )}
 
       {guide.summary && (
         <section aria-labelledby="guide-summary-heading">
