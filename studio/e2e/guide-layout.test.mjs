@@ -11,7 +11,7 @@ import { join } from 'node:path';
 import { after, before, test } from 'node:test';
 import { getDocument } from 'pdfjs-dist/legacy/build/pdf.mjs';
 import { baseUrl, launchBrowser } from './browser.mjs';
-import { makeClip, signUpThroughApi, uploadClip } from './support.mjs';
+import { apiClient, makeClip, signUpThroughApi, uploadClip } from './support.mjs';
 
 const screenshots = new URL('./screenshots/', import.meta.url);
 mkdirSync(screenshots, { recursive: true });
@@ -68,6 +68,12 @@ before(async () => {
   const assembly = await api.post(`${w}/builds/${build.id}/assemblies`, { name: '21-tooth coupler' });
   await api.put(`${w}/assemblies/${assembly.id}/parts/${coupler.id}`, { position: 'motor side' });
   const check = await api.post(`${w}/assemblies/${assembly.id}/checks`, { title: 'Coupler slides onto the motor shaft', required: true });
+  // Checks in other states, so the studio page shows more than one state glyph.
+  await api.post(`${w}/assemblies/${assembly.id}/checks`, { title: 'Bell housing bolts reach full thread', required: true });
+  const refused = await api.post(`${w}/assemblies/${assembly.id}/checks`, { title: '27-tooth coupler on this shaft', required: false });
+  await api.post(`${w}/checks/${refused.id}/transitions`, { to: 'no_fit', reason: 'Spline counts differ' });
+  ids.workshopId = workshop.id;
+  ids.assemblyId = assembly.id;
   const moment = await api.post(`${w}/footage/${footageId}/marks`, { startMs: 7_400, kind: 'check_evidence', label: 'Slides on by hand', fitCheckId: check.id });
   await api.post(`${w}/checks/${check.id}/evidence`, { kind: 'mark', markId: moment.id });
   const photo = await creator.request.fetch(`${baseUrl}/api${w}/checks/${check.id}/photos`, {
@@ -263,17 +269,36 @@ test('printed to PDF, "Steps" never ends a page without step 1, wherever the pag
   await context.close();
 });
 
+/** axe-core's colour-contrast rule on the page as it is now: the failures, each with its element and numbers. */
+async function contrastFailures(page) {
+  await page.addScriptTag({ content: axeSource });
+  const result = await page.evaluate(() => window.axe.run(document, { runOnly: { type: 'rule', values: ['color-contrast'] } }));
+  assert.ok(result.passes.length > 0, 'axe checked something');
+  return result.violations.flatMap((violation) => violation.nodes.map((node) => `${node.target.join(' ')}: ${node.failureSummary}`));
+}
+
+test('axe-core finds no colour-contrast failure on the studio’s assembly page with its check-state glyphs', async () => {
+  const context = await browser.newContext({ viewport: { width: 1440, height: 900 }, bypassCSP: true });
+  const api = apiClient(context);
+  await context.request.get(`${baseUrl}/api/auth/me`);
+  await api.post('/auth/login', { email: person.email, password: person.password });
+  const page = await context.newPage();
+  await page.goto(`${baseUrl}/workshops/${ids.workshopId}/assemblies/${ids.assemblyId}`);
+  await page.getByText('27-tooth coupler on this shaft').first().waitFor();
+  const glyphs = await page.locator('svg[data-icon]').evaluateAll((icons) => [...new Set(icons.map((icon) => icon.dataset.icon))].sort());
+  assert.ok(glyphs.includes('confirmed') && glyphs.includes('open') && glyphs.includes('no_fit'), `state glyphs on the page: ${glyphs}`);
+  await shot(page, '05-assembly-glyphs', { fullPage: true });
+  assert.deepEqual(await contrastFailures(page), [], 'contrast failures on the assembly page');
+  await context.close();
+});
+
 test('axe-core finds no colour-contrast failure on the guide (desktop and phone)', async () => {
   for (const viewport of [{ width: 1440, height: 900 }, { width: 390, height: 844 }]) {
     // The page's policy allows no inline script; the test injects axe-core as a tool, not as the page's code.
     const context = await browser.newContext({ viewport, bypassCSP: true });
     const page = await openGuide(context);
     await page.evaluate(() => document.querySelectorAll('[data-testid="caution"]').forEach((element) => element.setAttribute('open', '')));
-    await page.addScriptTag({ content: axeSource });
-    const result = await page.evaluate(() => window.axe.run(document, { runOnly: { type: 'rule', values: ['color-contrast'] } }));
-    const failures = result.violations.flatMap((violation) => violation.nodes.map((node) => `${node.target.join(' ')}: ${node.failureSummary}`));
-    assert.deepEqual(failures, [], `contrast failures at ${viewport.width}px`);
-    assert.ok(result.passes.length > 0, 'axe checked something');
+    assert.deepEqual(await contrastFailures(page), [], `contrast failures at ${viewport.width}px`);
     await context.close();
   }
 });
