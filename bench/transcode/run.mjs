@@ -2,7 +2,7 @@
 // through the app's media pipeline (upload, probe, poster, the transcode job: one ffmpeg run making
 // every rendition, sprites and waveform PCM, the faststart remux, storing it all in the bucket) against
 // ffmpeg run directly on the same file with the same arguments (built by the same code) plus the same
-// remux, in the same run. Prints wall times, the ratio direct/pipeline (goal ≥ 0.9), and the intervals
+// sprite tiling and remux, in the same run. Prints wall times, the ratio direct/pipeline (goal ≥ 0.9), and the intervals
 // between progress changes the studio would see while polling (goal: at most 2 s).
 // Run with: bash bench/run.sh transcode [--minutes N]   (see the header of bench/run.sh)
 import { spawn, execFileSync } from 'node:child_process';
@@ -18,7 +18,7 @@ if (!(MINUTES > 0)) throw new Error('--minutes needs a positive number');
 const SECONDS = Math.round(MINUTES * 60);
 const file = join(process.env.BENCH_DATA ?? '.data/bench', `transcode-${SECONDS}s-1080p.mp4`);
 
-const { transcodeArguments, faststartArguments } = await import(`${root}api/dist/infra/media/transcode-command.js`);
+const { transcodeArguments, faststartArguments, spriteSheetArguments } = await import(`${root}api/dist/infra/media/transcode-command.js`);
 const { interpretProbe } = await import(`${root}api/dist/infra/media/media-probe.js`);
 const engine = await import(`${root}api/dist/engine/media-renditions.js`);
 
@@ -68,6 +68,7 @@ async function direct() {
     execFileSync('mkdir', ['-p', ...plan.renditions.map((_size, index) => join(outputDir, `v${index}`))]);
     const started = performance.now();
     await runFfmpeg(transcodeArguments(plan));
+    await runFfmpeg(spriteSheetArguments(outputDir, plan.sprites));
     await runFfmpeg(faststartArguments(join(outputDir, 'v0/index.m3u8'), join(outputDir, 'download.mp4')));
     return (performance.now() - started) / 1000;
   } finally {

@@ -179,6 +179,8 @@ export class FootageRenditionsService {
       );
     }
 
+    await this.media.tileSprites(workDir, sprites);
+    for (const file of await readdir(workDir)) if (file.startsWith('thumb-')) await rm(join(workDir, file));
     await this.media.remuxFaststart(join(workDir, RENDITION_FILES.variantPlaylist(0)), join(workDir, RENDITION_FILES.download));
     const waveform = await this.waveform(join(workDir, TRANSCODE_OUTPUTS.pcm), info.durationMs, hasAudio);
     await writeFile(join(workDir, RENDITION_FILES.waveform), JSON.stringify(waveform));

@@ -1,7 +1,7 @@
 import { Injectable, Logger } from '@nestjs/common';
 import { execFile, spawn } from 'node:child_process';
 import { interpretProbe, isNotMediaMessage, MediaInfo, NotAVideoError } from './media-probe';
-import { faststartArguments, PROGRESS_FD, ProgressReader, type TranscodePlan, type TranscodeProgress, transcodeArguments } from './transcode-command';
+import { faststartArguments, PROGRESS_FD, spriteSheetArguments, ProgressReader, type TranscodePlan, type TranscodeProgress, transcodeArguments } from './transcode-command';
 
 /** ffmpeg could not read or decode the source: retrying will not help; `reason` is shown to the creator. */
 export class UnreadableSourceError extends Error {
@@ -90,6 +90,15 @@ export class MediaToolsService {
     // Generous: far slower than real time means something is stuck.
     const timeoutMs = Math.max(10 * 60_000, plan.durationMs * 20);
     await this.spawnWithProgress(transcodeArguments(plan), plan.input, timeoutMs, onProgress);
+  }
+
+  /** Sprite sheets from the thumbnails the transcode wrote. */
+  async tileSprites(outputDir: string, sprites: TranscodePlan['sprites']): Promise<void> {
+    try {
+      await this.run('ffmpeg', spriteSheetArguments(outputDir, sprites), outputDir);
+    } catch (error) {
+      throw this.asToolError('ffmpeg', error);
+    }
   }
 
   /** The download MP4: the top rendition's segments copied into one file with its index up front. */

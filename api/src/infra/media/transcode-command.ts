@@ -31,6 +31,8 @@ export interface TranscodePlan {
 export const TRANSCODE_OUTPUTS = {
   master: 'master.m3u8',
   variantPlaylist: (index: number) => `v${index}/index.m3u8`,
+  /** Single thumbnails; a second, cheap step tiles them into sheets (a tile filter in the main run holds back its progress reports). */
+  thumbnailPattern: 'thumb-%04d.jpg',
   spritePattern: 'sprite-%02d.jpg',
   spriteSheet: (sheet: number) => `sprite-${String(sheet + 1).padStart(2, '0')}.jpg`,
   pcm: 'audio.pcm',
@@ -58,7 +60,7 @@ export function transcodeArguments(plan: TranscodePlan): string[] {
   const graph = [
     `[0:v:0]fps=${plan.frameRate.ffmpeg},format=yuv420p,split=${count + 1}${videoLabels}[sp]`,
     ...scales,
-    `[sp]fps=1/${sprites.intervalSeconds},scale=${sprites.tileWidth}:${sprites.tileHeight},tile=${sprites.columns}x${sprites.rows}[sheet]`,
+    `[sp]fps=1/${sprites.intervalSeconds},scale=${sprites.tileWidth}:${sprites.tileHeight}[thumbs]`,
   ].join(';');
 
   const gop = String(framesPerKeyframe(plan.frameRate));
@@ -86,8 +88,16 @@ export function transcodeArguments(plan: TranscodePlan): string[] {
     '-hls_segment_filename', `${plan.outputDir}/v%v/seg-%05d.m4s`,
     '-master_pl_name', TRANSCODE_OUTPUTS.master, '-var_stream_map', streamMap,
     `${plan.outputDir}/v%v/index.m3u8`,
-    '-map', '[sheet]', '-f', 'image2', '-q:v', '5', `${plan.outputDir}/${TRANSCODE_OUTPUTS.spritePattern}`,
+    '-map', '[thumbs]', '-f', 'image2', '-q:v', '3', `${plan.outputDir}/${TRANSCODE_OUTPUTS.thumbnailPattern}`,
     '-map', audioInput, '-ac', '1', '-ar', String(WAVEFORM_SAMPLE_RATE), '-f', 's16le', `${plan.outputDir}/${TRANSCODE_OUTPUTS.pcm}`,
+  ];
+}
+
+/** Tiles the single thumbnails into sprite sheets of columns × rows (the last sheet padded). */
+export function spriteSheetArguments(outputDir: string, sprites: SpriteLayout): string[] {
+  return [
+    '-v', 'error', '-y', '-framerate', '1', '-i', `${outputDir}/${TRANSCODE_OUTPUTS.thumbnailPattern}`,
+    '-vf', `tile=${sprites.columns}x${sprites.rows}`, '-q:v', '5', '-f', 'image2', `${outputDir}/${TRANSCODE_OUTPUTS.spritePattern}`,
   ];
 }
 
