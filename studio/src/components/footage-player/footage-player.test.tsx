@@ -3,7 +3,7 @@ import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { renderWithProviders } from '@/testing/render';
 import { usePlaybackMs } from '@/lib/playback-clock';
 import { FootagePlayer, type FootagePlayerProps } from './footage-player';
-import { chooseStream, playerAspect } from './stream-source';
+import { chooseStream, playerAspect, type StreamKind } from './stream-source';
 import { useFootagePlayer, type FootagePlayerControl } from './use-footage-player';
 
 // hls.js needs Media Source Extensions, which jsdom lacks: the attachment is replaced by a recorder so the
@@ -66,16 +66,20 @@ afterEach(() => {
 
 describe('chooseStream', () => {
   const sources = { hlsUrl: HLS, fileUrl: FILE };
-  it('plays HLS natively where the browser can, through hls.js where it has MSE, else the file', () => {
-    expect(chooseStream(sources, { nativeHls: true, mediaSource: true }, false)).toEqual({ kind: 'native-hls', url: HLS });
-    expect(chooseStream(sources, { nativeHls: false, mediaSource: true }, false)).toEqual({ kind: 'hls.js', url: HLS });
-    expect(chooseStream(sources, { nativeHls: false, mediaSource: false }, false)).toEqual({ kind: 'file', url: FILE });
+  const none = new Set<StreamKind>();
+  it('streams HLS through hls.js where the browser has MSE, natively where it has only native HLS, else plays the file', () => {
+    expect(chooseStream(sources, { nativeHls: true, mediaSource: true }, none)).toEqual({ kind: 'hls.js', url: HLS });
+    expect(chooseStream(sources, { nativeHls: true, mediaSource: false }, none)).toEqual({ kind: 'native-hls', url: HLS });
+    expect(chooseStream(sources, { nativeHls: false, mediaSource: false }, none)).toEqual({ kind: 'file', url: FILE });
   });
 
-  it('takes the file once HLS has failed, or while there are no renditions, and nothing when there is neither', () => {
-    expect(chooseStream(sources, { nativeHls: true, mediaSource: true }, true)).toEqual({ kind: 'file', url: FILE });
-    expect(chooseStream({ hlsUrl: null, fileUrl: FILE }, { nativeHls: false, mediaSource: true }, false)).toEqual({ kind: 'file', url: FILE });
-    expect(chooseStream({ hlsUrl: HLS, fileUrl: null }, { nativeHls: false, mediaSource: false }, false)).toBeNull();
+  it('moves on to the next stream once one has failed, takes the file while there are no renditions, and gives up after the file', () => {
+    const abilities = { nativeHls: true, mediaSource: true };
+    expect(chooseStream(sources, abilities, new Set<StreamKind>(['hls.js']))).toEqual({ kind: 'native-hls', url: HLS });
+    expect(chooseStream(sources, abilities, new Set<StreamKind>(['hls.js', 'native-hls']))).toEqual({ kind: 'file', url: FILE });
+    expect(chooseStream(sources, abilities, new Set<StreamKind>(['hls.js', 'native-hls', 'file']))).toBeNull();
+    expect(chooseStream({ hlsUrl: null, fileUrl: FILE }, abilities, none)).toEqual({ kind: 'file', url: FILE });
+    expect(chooseStream({ hlsUrl: HLS, fileUrl: null }, { nativeHls: false, mediaSource: false }, none)).toBeNull();
   });
 });
 
@@ -91,7 +95,7 @@ describe('FootagePlayer', () => {
     expect(hlsAttachments.calls).toHaveLength(0);
   });
 
-  it('gives the master playlist to the browser when it plays HLS itself, and falls back to the file on an error', () => {
+  it('gives the master playlist to a browser with native HLS but no MSE, and falls back to the file on an error', () => {
     withNativeHls();
     renderWithProviders(<Player />);
     expect(video().dataset.stream).toBe('native-hls');
@@ -117,6 +121,18 @@ describe('FootagePlayer', () => {
     expect(video().getAttribute('src')).toBe(FILE);
     expect(hlsAttachments.calls[0].destroyed).toBe(true);
     expect(video().querySelector('track[kind="captions"]')?.getAttribute('src')).toBe(CAPTIONS);
+  });
+
+  it('tries the browser’s own HLS after hls.js where it has both, then the file', async () => {
+    withMediaSource();
+    withNativeHls();
+    renderWithProviders(<Player />);
+    await vi.waitFor(() => expect(hlsAttachments.calls).toHaveLength(1));
+    act(() => hlsAttachments.calls[0].onFatal(false));
+    expect(video().dataset.stream).toBe('native-hls');
+    expect(video().getAttribute('src')).toBe(HLS);
+    fireEvent.error(video());
+    expect(video().dataset.stream).toBe('file');
   });
 
   it('gives hls.js one fresh start after a network failure (expired segment links), then falls back', async () => {

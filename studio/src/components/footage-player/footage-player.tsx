@@ -3,7 +3,7 @@ import { useEffect, useRef, useState, type CSSProperties, type SyntheticEvent } 
 import { ScrubBar } from '../scrub-preview';
 import classes from './footage-player.module.css';
 import { attachHls, type HlsAttachment } from './hls-attachment';
-import { browserAbilities, chooseStream, playerAspect, type BrowserAbilities, type StreamSources } from './stream-source';
+import { browserAbilities, chooseStream, playerAspect, type BrowserAbilities, type StreamKind, type StreamSources } from './stream-source';
 import type { FootagePlayerControl } from './use-footage-player';
 
 export interface FootagePlayerProps {
@@ -57,7 +57,8 @@ export function FootagePlayer({
 }: FootagePlayerProps) {
   const { videoRef, clock } = control;
   const [abilities, setAbilities] = useState<BrowserAbilities | null>(null);
-  const [hlsFailed, setHlsFailed] = useState(false);
+  // Streams that failed on this page, so the next best is tried (a retry clears them).
+  const [failedStreams, setFailedStreams] = useState<ReadonlySet<StreamKind>>(() => new Set());
   const [failure, setFailure] = useState<string | null>(null);
   const [attempt, setAttempt] = useState(0);
   const resumeAtMs = useRef<number | undefined>(startAtMs);
@@ -68,7 +69,7 @@ export function FootagePlayer({
     if (videoRef.current) setAbilities(browserAbilities(videoRef.current));
   }, [videoRef]);
 
-  const choice = abilities ? chooseStream(sources, abilities, hlsFailed) : null;
+  const choice = abilities ? chooseStream(sources, abilities, failedStreams) : null;
   const hlsJsUrl = choice?.kind === 'hls.js' ? choice.url : null;
 
   const rememberPosition = () => {
@@ -76,13 +77,13 @@ export function FootagePlayer({
     if (video && video.currentTime > 0) resumeAtMs.current = video.currentTime * 1000;
   };
 
-  const fallBackToFile = () => {
+  const giveUpOn = (kind: StreamKind) => {
     rememberPosition();
-    setHlsFailed(true);
+    setFailedStreams((current) => new Set(current).add(kind));
   };
 
   // hls.js owns the element's source while attached; a fatal network error (a playlist's segment links ran
-  // out, a dropped connection) gets one fresh start, anything else falls back to the file.
+  // out, a dropped connection) gets one fresh start, anything else moves on to the next stream.
   useEffect(() => {
     const video = videoRef.current;
     if (!video || hlsJsUrl === null) return;
@@ -95,7 +96,7 @@ export function FootagePlayer({
         networkRetries.current += 1;
         setAttempt((value) => value + 1);
       } else {
-        setHlsFailed(true);
+        giveUpOn('hls.js');
       }
     })
       .then((attached) => {
@@ -103,13 +104,13 @@ export function FootagePlayer({
         else attachment = attached;
       })
       .catch(() => {
-        if (!cancelled) setHlsFailed(true);
+        if (!cancelled) giveUpOn('hls.js');
       });
     return () => {
       cancelled = true;
       attachment?.destroy();
     };
-    // rememberPosition reads refs only.
+    // rememberPosition and giveUpOn read refs and set state only.
     // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [hlsJsUrl, attempt, videoRef]);
 
@@ -125,7 +126,7 @@ export function FootagePlayer({
   const handleError = () => {
     if (choice === null) return;
     if (choice.kind !== 'file') {
-      fallBackToFile();
+      giveUpOn(choice.kind);
       return;
     }
     const expired = fileLinkExpiresAt !== undefined && Date.parse(fileLinkExpiresAt) - Date.now() < EXPIRY_MARGIN_MS;
@@ -141,7 +142,7 @@ export function FootagePlayer({
     rememberPosition();
     networkRetries.current = 0;
     setFailure(null);
-    setHlsFailed(false);
+    setFailedStreams(new Set());
     setAttempt((value) => value + 1);
     onRenewFileLink?.();
     // A redirecting file address gives a fresh storage link on every load.

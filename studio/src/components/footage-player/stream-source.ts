@@ -1,7 +1,9 @@
 /**
- * Which stream a player loads: the HLS master where the browser plays HLS itself, through hls.js where it
- * has Media Source Extensions but no native HLS, and the progressive file otherwise or once HLS has failed.
- * Plain functions, so the choice is tested without a browser.
+ * Which stream a player loads, best first: the HLS master through hls.js where the browser has Media Source
+ * Extensions (hls.js's own advice, and what every desktop browser and iPadOS have), the browser's own HLS where it
+ * has no MSE (iPhone Safari), and the progressive file otherwise or once the others have failed. Native HLS comes
+ * second on purpose: Chromium 156 answers "maybe" to canPlayType for HLS yet refused our fMP4 playlists with
+ * MEDIA_ERR_SRC_NOT_SUPPORTED (seen in the playback journey). Plain functions, so the choice is tested without a browser.
  */
 
 export interface StreamSources {
@@ -16,14 +18,16 @@ export interface BrowserAbilities {
   mediaSource: boolean;
 }
 
-export type StreamChoice = { kind: 'native-hls' | 'hls.js' | 'file'; url: string };
+export type StreamKind = 'hls.js' | 'native-hls' | 'file';
+export type StreamChoice = { kind: StreamKind; url: string };
 
-export function chooseStream(sources: StreamSources, abilities: BrowserAbilities, hlsFailed: boolean): StreamChoice | null {
-  if (sources.hlsUrl !== null && !hlsFailed) {
-    if (abilities.nativeHls) return { kind: 'native-hls', url: sources.hlsUrl };
-    if (abilities.mediaSource) return { kind: 'hls.js', url: sources.hlsUrl };
+export function chooseStream(sources: StreamSources, abilities: BrowserAbilities, failed: ReadonlySet<StreamKind>): StreamChoice | null {
+  const { hlsUrl, fileUrl } = sources;
+  if (hlsUrl !== null) {
+    if (abilities.mediaSource && !failed.has('hls.js')) return { kind: 'hls.js', url: hlsUrl };
+    if (abilities.nativeHls && !failed.has('native-hls')) return { kind: 'native-hls', url: hlsUrl };
   }
-  return sources.fileUrl === null ? null : { kind: 'file', url: sources.fileUrl };
+  return fileUrl === null || failed.has('file') ? null : { kind: 'file', url: fileUrl };
 }
 
 /** H.264 High + AAC-LC, what every rendition is encoded as. */

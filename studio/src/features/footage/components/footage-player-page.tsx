@@ -37,12 +37,13 @@ export interface FootagePlayerHandle {
 }
 
 /** Under the marking tools the picture stays short enough that the controls below are in view. */
-const PLAYER_MAX_HEIGHT = 'max(12rem, calc(100dvh - 30rem))';
+const PLAYER_MAX_HEIGHT = 'max(10rem, calc(100dvh - 33rem))';
 
 function describe(footage: Footage): string {
   const parts = [
     footage.durationMs !== null ? formatClock(footage.durationMs) : null,
-    footage.width && footage.height ? `${footage.width}×${footage.height}` : null,
+    // As shown (after rotation): a portrait phone clip reads 1080×1920.
+    footage.width && footage.height ? `${footage.displayWidth ?? footage.width}×${footage.displayHeight ?? footage.height}` : null,
     footage.frameRate ? `${footage.frameRate} fps` : null,
     [footage.videoCodec, footage.audioCodec].filter(Boolean).join(' + ') || null,
     formatBytes(footage.sizeBytes),
