@@ -5,6 +5,7 @@
 #   bash bench/run.sh forgot-password   # "forgot password" answer time: existing vs unknown address (ratio ≈ 1.0)
 #   bash bench/run.sh extract           # 200,000-char measurement extraction: 8× text over 1×, and a fits call's wait during it
 #   bash bench/run.sh load              # autocannon on the public reads (follow-along with and without If-None-Match) vs the static index
+#   bash bench/run.sh fanout            # fit news to 10,000 followers: transition → outbox → relay → SMTP vs a plain pooled nodemailer loop
 #   bash bench/run.sh transcode         # 10-minute 1080p clip: media pipeline vs ffmpeg alone, same arguments (--minutes N for shorter)
 #   bash bench/run.sh fanout            # fit news to 10,000 followers: transition → outbox → relay → SMTP vs a plain pooled nodemailer loop
 #   bash bench/run.sh upload test       # against the test profile's services instead
