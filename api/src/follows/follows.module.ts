@@ -14,9 +14,12 @@ import { DigestItem } from './entities/digest-item.entity';
 import { FitNewsDelivery } from './entities/fit-news-delivery.entity';
 import { MailLink } from './entities/mail-link.entity';
 import { MailPreference } from './entities/mail-preference.entity';
+import { FitChecksModule } from '../fit-checks/fit-checks.module';
 import { Follow } from './entities/follow.entity';
 import { DigestsService } from './digests.service';
 import { FitNewsService } from './fit-news.service';
+import { FitNewsRecordController } from './fit-news-record.controller';
+import { FitNewsRecordService } from './fit-news-record.service';
 import { FollowsController } from './follows.controller';
 import { FollowsService } from './follows.service';
 import { MailPreferencesService } from './mail-preferences.service';
@@ -24,9 +27,10 @@ import { MailPreferencesService } from './mail-preferences.service';
 @Module({
   imports: [
     TypeOrmModule.forFeature([Follow, FitNewsDelivery, MailPreference, DigestItem, MailLink, FitReport, Workshop, WorkshopMember, Build, Assembly, Guide, User, FitCheckEvidence, Mark, Measurement]),
+    FitChecksModule,
   ],
-  controllers: [FollowsController],
-  providers: [FollowsService, FitNewsService, DigestsService, MailPreferencesService],
+  controllers: [FollowsController, FitNewsRecordController],
+  providers: [FollowsService, FitNewsService, DigestsService, MailPreferencesService, FitNewsRecordService],
   exports: [FollowsService, MailPreferencesService],
 })
 export class FollowsModule {}

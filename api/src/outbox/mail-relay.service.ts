@@ -12,6 +12,9 @@ import { MailOutbox, type MailDraft } from './mail-outbox.service';
 /** Turns one outbox event into the mail it causes; runs inside the relay's transaction (use `manager`). */
 export type OutboxExpander = (manager: EntityManager, payload: unknown) => Promise<MailDraft[]>;
 
+/** Told when a server refused a message for good (5xx): the owner of the address may decide to pause it. */
+export type RefusalHandler = (refused: { recipient: string; userId: string | null; reply: string }) => Promise<void>;
+
 /** Work the relay does besides sending (digests fall due): runs between batches, at most every `everyMs`. */
 export interface RelayChore {
   name: string;
@@ -21,6 +24,7 @@ export interface RelayChore {
 
 interface DueDelivery {
   id: string;
+  user_id: string | null;
   idempotency_key: string;
   recipient: string;
   subject: string;
@@ -71,6 +75,7 @@ export class MailRelay implements OnApplicationBootstrap, OnModuleDestroy {
   private readonly owner = newId();
   private readonly expanders = new Map<string, OutboxExpander>();
   private readonly chores: (RelayChore & { lastRunAt: number })[] = [];
+  private readonly refusalHandlers: RefusalHandler[] = [];
   private readonly settings: AppConfig['mail']['relay'];
   private running: Promise<void> | undefined;
   private stopping = false;
@@ -88,6 +93,10 @@ export class MailRelay implements OnApplicationBootstrap, OnModuleDestroy {
   /** Called by the domain that owns an event kind, at module init. */
   registerExpander(kind: string, expander: OutboxExpander): void {
     this.expanders.set(kind, expander);
+  }
+
+  registerRefusalHandler(handler: RefusalHandler): void {
+    this.refusalHandlers.push(handler);
   }
 
   registerChore(chore: RelayChore): void {
@@ -211,7 +220,7 @@ export class MailRelay implements OnApplicationBootstrap, OnModuleDestroy {
     });
     if (!ids.length) return [];
     return (await this.dataSource.query(
-      'SELECT id, idempotency_key, recipient, subject, body_text, body_html, headers, attempts FROM mail_deliveries WHERE id IN (?) ORDER BY next_attempt_at',
+      'SELECT id, user_id, idempotency_key, recipient, subject, body_text, body_html, headers, attempts FROM mail_deliveries WHERE id IN (?) ORDER BY next_attempt_at',
       [ids],
     )) as DueDelivery[];
   }
@@ -242,6 +251,9 @@ export class MailRelay implements OnApplicationBootstrap, OnModuleDestroy {
         [givenUp ? 'failed' : 'pending', attempts, refusal.message.slice(0, 500), backoffMs(attempts) / 1000, delivery.id, this.owner],
       );
       if (givenUp) this.logger.warn(`mail ${delivery.id} not delivered after ${attempts} attempt(s): ${refusal.message}`);
+      if (refusal.permanent) {
+        for (const handler of this.refusalHandlers) await handler({ recipient: delivery.recipient, userId: delivery.user_id, reply: refusal.message });
+      }
       return refusal.responseCode === undefined;
     }
   }
