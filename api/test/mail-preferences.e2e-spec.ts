@@ -109,6 +109,17 @@ describe('mail preferences and digests (real MariaDB, mail fake)', () => {
     app.get(MailClock).set(new Date());
   });
 
+  it('the creator sees how many followers were told of a change, and how many wait for a digest', async () => {
+    const record = (await owner.agent.get(`${base}/checks/${checkIds[0]}/fit-news`).expect(200)).body;
+    expect(record).toEqual([
+      expect.objectContaining({ to: 'confirmed', told: 1, pending: 0, failed: 0, inDigests: 1, refusals: [] }),
+    ]);
+    expect(record[0].firstSentAt).not.toBeNull();
+    // A follower is not a member: the record is the workshop's.
+    await atOnce.agent.get(`${base}/checks/${checkIds[0]}/fit-news`).expect(404);
+    expect((await owner.agent.post(`${base}/checks/${checkIds[0]}/fit-news/retry`).expect(200)).body[0]).toMatchObject({ told: 1, failed: 0 });
+  });
+
   it('preferences and unsubscribe links work signed out, with tokens of at least 128 bits', async () => {
     const mails = await mailsTo(atOnce.email, /Fit confirmed/);
     expect(mails).toHaveLength(3);
