@@ -92,6 +92,13 @@ describe('search: published guides for everyone, own workshops for members (real
     }
   });
 
+  it("never matches a published part by its private notes", async () => {
+    const noteWord = inventedWord();
+    await shop.owner.agent.patch(`${shop.base}/parts/${shop.partId}`).send({ notes: `Bought from ${noteWord} at a discount` }).expect(200);
+    expect((await search(reader, { q: noteWord })).total).toBe(0);
+    expect((await search(shop.owner.agent, { q: noteWord, kind: 'part' })).total).toBe(1);
+  });
+
   it('pages cue hits with a total, disjoint pages and the whole set across them', async () => {
     const first = await search(reader, { q: pagedWord, limit: 2 });
     const second = await search(reader, { q: pagedWord, limit: 2, offset: 2 });

@@ -3,8 +3,8 @@
 // queries timed three ways in the same run:
 //   - GET /api/search (every public kind: guide words, parts by FULLTEXT or part number, cues; counts
 //     per kind, one page with snippets) through our own API process;
-//   - the fit finder's route when FINDER_PATH is set (a path with {teeth} and {pitch} placeholders):
-//     200 varied spline questions over the generated couplers;
+//   - the fit finder (GET /api/fit-finder by spline teeth and pitch; FINDER_PATH overrides the path,
+//     with {teeth} and {pitch} placeholders, or "none" skips it): 200 varied spline questions;
 //   - the baseline: a plain FULLTEXT `MATCH … AGAINST` on transcript_cues, best 20 by relevance, through
 //     one mysql2 connection (no HTTP, no joins, no counts, no snippets).
 // Goal: p95 < 150 ms and ≤ 2 × the baseline's p95.
@@ -238,9 +238,9 @@ async function main() {
     const hits = [];
     for (const item of list.slice(0, 16)) hits.push((await search(item)).total ?? 0);
 
-    const finderPath = process.env.FINDER_PATH;
+    const finderPath = process.env.FINDER_PATH ?? '/api/fit-finder?splineTeeth={teeth}&splinePitch={pitch}';
     let finder = null;
-    if (finderPath) {
+    if (finderPath !== 'none') {
       const finderQueries = Array.from({ length: QUERIES }, (_, index) => finderPath.replaceAll('{teeth}', String([10, 21, 23, 24, 27, 29, 31, 15][index % 8])).replaceAll('{pitch}', index % 2 ? '16/32' : '24/48'));
       finder = summary(await timeEach(finderQueries, async (path) => {
         const response = await fetch(`${api.baseUrl}${path}`, { headers: { 'X-Forwarded-For': '10.9.9.8' } });
@@ -254,7 +254,7 @@ async function main() {
     console.log(`\n${GUIDES.toLocaleString('en')} published guides, ${(GUIDES * CUES_PER_GUIDE).toLocaleString('en')} cues, ${list.length} queries (first hits totals: ${hits.join(', ')})`);
     console.log(`GET /api/search            median ${ms(searchStats.median)}  p95 ${ms(searchStats.p95)}`);
     if (finder) console.log(`fit finder (${finderPath.split('?')[0]})  median ${ms(finder.median)}  p95 ${ms(finder.p95)}`);
-    else console.log('fit finder: not measured (set FINDER_PATH, e.g. "/api/fit-finder?teeth={teeth}&pitch={pitch}")');
+    else console.log('fit finder: not measured (FINDER_PATH=none)');
     console.log(`baseline MATCH … AGAINST   median ${ms(plainStats.median)}  p95 ${ms(plainStats.p95)}`);
     console.log(`search p95 / baseline p95: ${(searchStats.p95 / plainStats.p95).toFixed(2)} (goal ≤ 2), search p95 ${searchStats.p95 < 150 ? '<' : '≥'} 150 ms`);
     if (finder) console.log(`finder p95 / baseline p95: ${(finder.p95 / plainStats.p95).toFixed(2)} (goal ≤ 2), finder p95 ${finder.p95 < 150 ? '<' : '≥'} 150 ms`);

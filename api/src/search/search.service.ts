@@ -263,11 +263,13 @@ export class SearchService {
 function matchedParts(text: string | null, keys: string[], workshopIds: string[] | null): { sql: string; params: unknown[] } {
   const scope = workshopIds ? `AND workshop_id IN (${workshopIds.map(() => '?').join(', ')})` : '';
   const scopeParams = workshopIds ?? [];
+  // The public never matches a part's notes (they are not published); members search them too. Each list is one FULLTEXT index.
+  const columns = workshopIds ? 'part_number, maker, title, notes' : 'part_number, maker, title';
   const pieces: string[] = [];
   const params: unknown[] = [];
   if (text) {
-    pieces.push(`SELECT id, MATCH (part_number, maker, title, notes) AGAINST (? IN BOOLEAN MODE) AS score FROM parts
-      WHERE MATCH (part_number, maker, title, notes) AGAINST (? IN BOOLEAN MODE) ${scope}`);
+    pieces.push(`SELECT id, MATCH (${columns}) AGAINST (? IN BOOLEAN MODE) AS score FROM parts
+      WHERE MATCH (${columns}) AGAINST (? IN BOOLEAN MODE) ${scope}`);
     params.push(text, text, ...scopeParams);
   }
   for (const key of keys) {

@@ -12,6 +12,7 @@ import { PublishedGuidesIndex1765320000000 } from './1765320000000-published-gui
 import { FootageRenditions1765410000000 } from './1765410000000-footage-renditions';
 import { FitFinder1765430000000 } from './1765430000000-fit-finder';
 import { Search1765440000000 } from './1765440000000-search';
+import { SearchPublicParts1765440000001 } from './1765440000001-search-public-parts';
 import { MailOutbox1765450000000 } from './1765450000000-mail-outbox';
 import { MailPreferences1765450000001 } from './1765450000001-mail-preferences';
 
@@ -31,6 +32,7 @@ export const migrations: MixedList<Function> = [
   FootageRenditions1765410000000,
   FitFinder1765430000000,
   Search1765440000000,
+  SearchPublicParts1765440000001,
   MailOutbox1765450000000,
   MailPreferences1765450000001,
 ];
