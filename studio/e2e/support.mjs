@@ -120,11 +120,11 @@ export function makeClip() {
 }
 
 /** The studio's upload path, driven from the test: create, presigned part PUTs, record each ETag, complete. */
-export async function uploadClip(api, workshopId, buildId, file) {
+export async function uploadClip(api, workshopId, buildId, file, { fileName = 'coupler-test-fit.mp4', contentType = 'video/mp4' } = {}) {
   const bytes = readFileSync(file);
   const created = await api.post(`/workshops/${workshopId}/builds/${buildId}/footage`, {
-    fileName: 'coupler-test-fit.mp4',
-    contentType: 'video/mp4',
+    fileName,
+    contentType,
     sizeBytes: statSync(file).size,
   });
   const footageId = created.footage.id;
