@@ -19,6 +19,7 @@ import { GuideStep } from './entities/guide-step.entity';
 import { Guide } from './entities/guide.entity';
 import { GuidesController } from './guides.controller';
 import { GuidesService } from './guides.service';
+import { PublishedGuideCache, publishedGuideStoreProvider } from './published-guide-cache';
 import { PublishedGuidesController } from './published-guides.controller';
 import { PublishedGuideMediaService } from './published-guide-media.service';
 import { PublishedGuidesService } from './published-guides.service';
@@ -34,7 +35,7 @@ import { PublishedTranscriptController } from './published-transcript.controller
     FootageModule,
   ],
   controllers: [GuidesController, PublishedGuidesController, PublishedTranscriptController],
-  providers: [GuidesService, PublishedGuidesService, PublishedGuideMediaService],
+  providers: [GuidesService, PublishedGuidesService, PublishedGuideMediaService, PublishedGuideCache, publishedGuideStoreProvider],
   exports: [GuidesService],
 })
 export class GuidesModule {}

@@ -9,6 +9,25 @@
  * readers never see them.
  */
 
+/**
+ * The tables the two statements below read. A committed write to any of them forgets the tags held in Redis
+ * (`published-guide-cache.ts`), so a new term here must name its table here too.
+ */
+export const PUBLISHED_GUIDE_INPUT_TABLES: ReadonlySet<string> = new Set([
+  'workshops',
+  'guides',
+  'guide_revisions',
+  'builds',
+  'footage',
+  'transcripts',
+  'assemblies',
+  'assembly_parts',
+  'parts',
+  'fit_checks',
+  'fit_check_evidence',
+  'marks',
+]);
+
 // The footage and assembly a revision shows are fixed in its content; JSON_VALUE reads them there
 // (CONVERT … COLLATE so the comparison with the id columns may use their primary keys).
 const REVISION_FOOTAGE_ID = "CONVERT(JSON_VALUE(r.content, '$.footageId') USING utf8mb4) COLLATE utf8mb4_unicode_ci";

@@ -3,6 +3,7 @@ import { ApiHeader, ApiNotFoundResponse, ApiOkResponse, ApiProduces, ApiResponse
 import type { Request, Response } from 'express';
 import { Public } from '../common/decorators/access.decorator';
 import { unlessNotModified } from '../common/http/entity-tag';
+import { precompressedJson } from '../common/http/precompressed-json';
 import { WaveformDto } from '../footage/dto/footage.dto';
 import { PublicGuidesQueryDto } from './dto/guide.dto';
 import { PublishedGuideMediaService } from './published-guide-media.service';
@@ -59,11 +60,16 @@ export class PublishedGuidesController {
     @Req() request: Request,
     @Res({ passthrough: true }) response: Response,
   ) {
+    let tag: string | null = null;
     return unlessNotModified(
       request,
       response,
-      () => this.published.readTag(workshopSlug, guideSlug),
-      () => this.published.read(workshopSlug, guideSlug),
+      async () => (tag = await this.published.readTag(workshopSlug, guideSlug)),
+      async () => {
+        if (tag === null) return this.published.read(workshopSlug, guideSlug);
+        const answer = await this.published.readAnswer(workshopSlug, guideSlug, tag);
+        return 'gzippedJson' in answer ? precompressedJson(request, response, answer.gzippedJson) : answer.personal;
+      },
     );
   }
 

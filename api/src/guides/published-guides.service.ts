@@ -22,6 +22,7 @@ import { Guide } from './entities/guide.entity';
 import { plainText, type GuideContent, type GuideMarkContent } from './guide-content';
 import { publicGuidePath } from './guide.mapper';
 import { PUBLISHED_GUIDE_VERSION_SQL, PUBLISHED_INDEX_VERSION_SQL } from './published-guide-versions';
+import { PublishedGuideCache, type CachedAnswer } from './published-guide-cache';
 
 const MEDIA_URL_TTL_SECONDS = 60 * 60;
 const INDEX_LIMIT = 50;
@@ -57,18 +58,28 @@ export class PublishedGuidesService {
     private readonly transcriptsService: TranscriptsService,
     private readonly storage: StorageService,
     private readonly footageMedia: FootageMediaService,
+    private readonly cache: PublishedGuideCache,
   ) {}
 
-  /** The index's entity tag, from one aggregate over the published guides (the same for every search). */
+  /** The index's entity tag (held in Redis, else one aggregate over the published guides; the same for every search). */
   async indexTag(): Promise<string> {
-    const [row] = await this.guides.query<Record<string, unknown>[]>(PUBLISHED_INDEX_VERSION_SQL);
-    return entityTagOf([ANSWER_SHAPE, 'index', row]);
+    return this.cache.tag('index', async () => {
+      const [row] = await this.guides.query<Record<string, unknown>[]>(PUBLISHED_INDEX_VERSION_SQL);
+      return entityTagOf([ANSWER_SHAPE, 'index', row]);
+    });
   }
 
-  /** The follow-along read's entity tag, from one indexed query; null when the guide is not published. */
+  /** The follow-along read's entity tag (held in Redis, else one indexed query); null when the guide is not published. */
   async readTag(workshopSlug: string, guideSlug: string): Promise<string | null> {
-    const [row] = await this.guides.query<Record<string, unknown>[]>(PUBLISHED_GUIDE_VERSION_SQL, [guideSlug, workshopSlug]);
-    return row ? entityTagOf([ANSWER_SHAPE, 'read', row]) : null;
+    return this.cache.tag(`read:${workshopSlug}/${guideSlug}`, async () => {
+      const [row] = await this.guides.query<Record<string, unknown>[]>(PUBLISHED_GUIDE_VERSION_SQL, [guideSlug, workshopSlug]);
+      return row ? entityTagOf([ANSWER_SHAPE, 'read', row]) : null;
+    });
+  }
+
+  /** The follow-along answer of the state `tag` names: built once, then served gzipped from Redis by every process. */
+  readAnswer(workshopSlug: string, guideSlug: string, tag: string): Promise<CachedAnswer> {
+    return this.cache.answer(tag, () => this.read(workshopSlug, guideSlug));
   }
 
   async index(query?: string) {

@@ -41,7 +41,7 @@ export class NoStoreInterceptor implements NestInterceptor {
   }
 }
 
-function carriesPresignedUrl(body: unknown): boolean {
+export function carriesPresignedUrl(body: unknown): boolean {
   if (body === undefined || body === null || body instanceof StreamableFile || Buffer.isBuffer(body)) return false;
   const text = typeof body === 'string' ? body : JSON.stringify(body);
   return typeof text === 'string' && PRESIGNED_URL.test(text);
