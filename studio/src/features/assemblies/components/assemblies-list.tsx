@@ -9,6 +9,7 @@ import { splitApiErrors } from '@/lib/form-errors';
 import { useWorkshopReadOnly } from '@/lib/workshop-access';
 import { useCreateAssembly } from '../api/mutations';
 import { assemblyQueries } from '../api/queries';
+import { FormProblems } from '@/components/form-problems';
 
 /** A build's assemblies: each a candidate combination of parts with its own checklist. */
 export function AssembliesList({ workshopId, buildId }: { workshopId: string; buildId: string }) {
@@ -53,7 +54,7 @@ export function AssembliesList({ workshopId, buildId }: { workshopId: string; bu
         <Card withBorder>
           <form onSubmit={form.onSubmit(handleSubmit)} aria-label="New assembly" noValidate>
             <Stack gap="sm">
-              {general.length > 0 && <Alert color="red">{general.join(' ')}</Alert>}
+              <FormProblems messages={general} />
               <TextInput label="Name" placeholder="21-tooth coupler with the long shaft" withAsterisk {...form.getInputProps('name')} />
               <Textarea label="Notes" autosize minRows={2} {...form.getInputProps('notes')} />
               <Group justify="flex-end">

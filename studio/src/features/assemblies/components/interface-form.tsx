@@ -1,4 +1,4 @@
-import { Alert, Button, Group, Input, SegmentedControl, Select, SimpleGrid, Stack, Text, TextInput } from '@mantine/core';
+import { Button, Group, Input, SegmentedControl, Select, SimpleGrid, Stack, Text, TextInput } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
 import { splitApiErrors } from '@/lib/form-errors';
@@ -6,6 +6,7 @@ import { LENGTH_UNITS, unitLabel, type LengthUnit } from '@/lib/units';
 import { useAddInterface } from '../api/mutations';
 import { INTERFACE_KINDS, type AssemblyDetail, type InterfaceKind } from '../api/queries';
 import { INTERFACE_KIND_LABELS, interfaceChoices } from './interface-choices';
+import { FormProblems } from '@/components/form-problems';
 
 const LABELS = {
   kind: 'Kind',
@@ -104,11 +105,7 @@ export function InterfaceForm({
   return (
     <form onSubmit={form.onSubmit(handleSubmit)} aria-label="New interface" noValidate>
       <Stack gap="sm">
-        {general.length > 0 && (
-          <Alert color="red" title="The interface was not saved" role="alert">
-            {general.join(' ')}
-          </Alert>
-        )}
+        <FormProblems messages={general} title="The interface was not saved" />
         <Input.Wrapper label="Where the parts mate">
           <SegmentedControl
             fullWidth

@@ -5,6 +5,7 @@ import { splitApiErrors } from '@/lib/form-errors';
 import { notifyDone } from '@/lib/notify';
 import { useSession, type SessionUser } from '@/lib/session';
 import { useChangeEmail, useChangePassword, useResendVerification, useUpdateProfile } from '../api/mutations';
+import { FormProblems } from '@/components/form-problems';
 
 function Section({ title, children }: { title: string; children: ReactNode }) {
   return (
@@ -17,14 +18,6 @@ function Section({ title, children }: { title: string; children: ReactNode }) {
       </Stack>
     </Paper>
   );
-}
-
-function ProblemAlert({ problem }: { problem: string | null }) {
-  return problem ? (
-    <Alert color="red" role="alert">
-      {problem}
-    </Alert>
-  ) : null;
 }
 
 function ProfileForm({ user }: { user: SessionUser }) {
@@ -51,7 +44,7 @@ function ProfileForm({ user }: { user: SessionUser }) {
       })}
     >
       <Stack gap="sm">
-        <ProblemAlert problem={problem} />
+        <FormProblems messages={problem} />
         <TextInput label="Display name" description="Shown to your workshop's members and readers" {...form.getInputProps('displayName')} />
         <div>
           <Text size="sm" fw={500} mb={4}>
@@ -106,7 +99,7 @@ function PasswordForm() {
       })}
     >
       <Stack gap="sm">
-        <ProblemAlert problem={problem} />
+        <FormProblems messages={problem} />
         <PasswordInput label="Current password" autoComplete="current-password" {...form.getInputProps('currentPassword')} />
         <PasswordInput label="New password" autoComplete="new-password" {...form.getInputProps('newPassword')} />
         <Group>
@@ -151,7 +144,7 @@ function EmailForm({ user }: { user: SessionUser }) {
         <Text size="sm">
           Now: <strong>{user.email}</strong>. We send a link to the new address; the change happens when you follow it.
         </Text>
-        <ProblemAlert problem={problem} />
+        <FormProblems messages={problem} />
         <TextInput label="New e-mail address" type="email" autoComplete="email" {...form.getInputProps('newEmail')} />
         <PasswordInput label="Password" autoComplete="current-password" {...form.getInputProps('password')} />
         <Group>

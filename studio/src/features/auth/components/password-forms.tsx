@@ -5,6 +5,7 @@ import { Link } from 'react-router-dom';
 import { paths } from '@/config/paths';
 import { splitApiErrors } from '@/lib/form-errors';
 import { useForgotPassword, useResetPassword } from '../api/mutations';
+import { FormProblems } from '@/components/form-problems';
 
 const PASSWORD_MIN = 10;
 
@@ -40,11 +41,7 @@ export function ForgotPasswordForm() {
       })}
     >
       <Stack gap="sm">
-        {problem && (
-          <Alert color="red" role="alert">
-            {problem}
-          </Alert>
-        )}
+        <FormProblems messages={problem} />
         <TextInput label="E-mail address" type="email" autoComplete="email" required {...form.getInputProps('email')} />
         <Button type="submit" loading={forgot.isPending}>
           Send me a link

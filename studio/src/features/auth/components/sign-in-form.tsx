@@ -1,4 +1,4 @@
-import { Alert, Anchor, Button, Group, PasswordInput, Stack, TextInput } from '@mantine/core';
+import { Anchor, Button, Group, PasswordInput, Stack, TextInput } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
@@ -6,6 +6,7 @@ import { paths } from '@/config/paths';
 import { splitApiErrors } from '@/lib/form-errors';
 import type { SessionUser } from '@/lib/session';
 import { useSignIn } from '../api/mutations';
+import { FormProblems } from '@/components/form-problems';
 
 const LABELS = { email: 'E-mail address', password: 'Password' };
 
@@ -39,11 +40,7 @@ export function SignInForm({ onSignedIn, next }: { onSignedIn: (user: SessionUse
   return (
     <form onSubmit={form.onSubmit(handleSubmit)} noValidate aria-label="Sign in">
       <Stack gap="sm">
-        {problem && (
-          <Alert color="red" role="alert">
-            {problem}
-          </Alert>
-        )}
+        <FormProblems messages={problem} />
         <TextInput label={LABELS.email} type="email" autoComplete="email" required {...form.getInputProps('email')} />
         <PasswordInput label={LABELS.password} autoComplete="current-password" required {...form.getInputProps('password')} />
         <Group justify="space-between" mt="xs">

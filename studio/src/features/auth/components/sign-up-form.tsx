@@ -5,6 +5,7 @@ import { Link } from 'react-router-dom';
 import { paths } from '@/config/paths';
 import { splitApiErrors } from '@/lib/form-errors';
 import { useSignUp } from '../api/mutations';
+import { FormProblems } from '@/components/form-problems';
 
 const LABELS = { displayName: 'Your name', email: 'E-mail address', password: 'Password' };
 const PASSWORD_MIN = 10;
@@ -55,11 +56,7 @@ export function SignUpForm({ next, initialEmail = '' }: { next?: string; initial
   return (
     <form onSubmit={form.onSubmit(handleSubmit)} noValidate aria-label="Create an account">
       <Stack gap="sm">
-        {problem && (
-          <Alert color="red" role="alert">
-            {problem}
-          </Alert>
-        )}
+        <FormProblems messages={problem} />
         <TextInput label={LABELS.displayName} autoComplete="name" required {...form.getInputProps('displayName')} />
         <TextInput label={LABELS.email} type="email" autoComplete="email" required {...form.getInputProps('email')} />
         <PasswordInput

@@ -1,9 +1,10 @@
-import { Alert, Button, Group, Stack, TextInput, Textarea } from '@mantine/core';
+import { Button, Group, Stack, TextInput, Textarea } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { splitApiErrors } from '@/lib/form-errors';
 import { useState } from 'react';
 import { useCreateBuild } from '../api/mutations';
 import type { Build } from '../api/queries';
+import { FormProblems } from '@/components/form-problems';
 
 const LABELS = { title: 'Title', vehicle: 'Vehicle', goal: 'Goal' };
 
@@ -36,11 +37,7 @@ export function BuildCreateForm({ workshopId, onCreated }: { workshopId: string;
   return (
     <form onSubmit={form.onSubmit(handleSubmit)} aria-label="New build">
       <Stack gap="sm">
-        {general.length > 0 && (
-          <Alert color="red" title="The build was not saved">
-            {general.join(' ')}
-          </Alert>
-        )}
+        <FormProblems messages={general} title="The build was not saved" />
         <TextInput label={LABELS.title} placeholder="Motor-to-gearbox coupler" withAsterisk {...form.getInputProps('title')} />
         <TextInput label={LABELS.vehicle} placeholder="1980s compact pickup, electric conversion" {...form.getInputProps('vehicle')} />
         <Textarea label={LABELS.goal} autosize minRows={2} {...form.getInputProps('goal')} />

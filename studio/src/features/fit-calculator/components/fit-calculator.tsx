@@ -1,4 +1,4 @@
-import { Alert, Autocomplete, Button, Checkbox, Chip, Group, Input, Paper, SegmentedControl, SimpleGrid, Stack, Table, Text, TextInput, Title } from '@mantine/core';
+import { Autocomplete, Button, Checkbox, Chip, Group, Input, Paper, SegmentedControl, SimpleGrid, Stack, Table, Text, TextInput, Title } from '@mantine/core';
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { useSearchParams } from 'react-router-dom';
@@ -10,6 +10,7 @@ import { formatLength, formatReadableLength, toNanometres } from '@/lib/units';
 import { fitCalculatorQueries, type FitAnswer, type FitQuery } from '../api/queries';
 import { SplineSection } from './spline-section';
 import { SignalNote } from '@/components/signal-word';
+import { FormProblems } from '@/components/form-problems';
 
 const LABELS = { size: 'Nominal size', unit: 'Unit', hole: 'Hole class', shaft: 'Shaft class' };
 const HOLE_CLASSES = ['H6', 'H7', 'H8', 'H9', 'H11', 'G7', 'F8', 'E9', 'D10', 'JS7', 'K7', 'M7', 'N7', 'P7', 'R7', 'S7'];
@@ -186,11 +187,7 @@ export function FitCalculator() {
         </form>
       </Paper>
 
-      {apiErrors.general.length > 0 && (
-        <Alert color="red" title="No answer for this pair" role="alert">
-          {apiErrors.general.join(' ')}
-        </Alert>
-      )}
+      <FormProblems messages={apiErrors.general} title="No answer for this pair" />
       {answer.data && asked && <FitResult query={asked} answer={answer.data} deviationUnit={deviationUnit} onUnit={setDeviationUnit} />}
       <SplineSection />
     </Stack>

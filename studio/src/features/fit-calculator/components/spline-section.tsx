@@ -1,9 +1,10 @@
-import { Alert, Autocomplete, Button, Group, Input, List, Paper, SegmentedControl, SimpleGrid, Stack, Table, Text, TextInput, Title } from '@mantine/core';
+import { Autocomplete, Button, Group, Input, List, Paper, SegmentedControl, SimpleGrid, Stack, Table, Text, TextInput, Title } from '@mantine/core';
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { formatSplineDiameter, SplineDiametersDiagram } from '@/components/diagrams/spline-diameters-diagram';
 import { splitApiErrors } from '@/lib/form-errors';
 import { fitCalculatorQueries, type SplineDimensionName, type SplineLength, type SplineQuery } from '../api/queries';
+import { FormProblems } from '@/components/form-problems';
 
 const LABELS = { teeth: 'Teeth', pitch: 'Pitch', pressureAngle: 'Pressure angle', root: 'Root', fit: 'Fit' };
 const COMMON_PITCHES = ['12/24', '16/32', '20/40', '24/48', '10/20', '8/16', 'm1', 'm1.25', 'm1.5', 'm2', 'm2.5'];
@@ -128,11 +129,7 @@ export function SplineSection() {
         </form>
       </Paper>
 
-      {apiErrors.general.length > 0 && (
-        <Alert color="red" title="No dimensions for this spline" role="alert">
-          {apiErrors.general.join(' ')}
-        </Alert>
-      )}
+      <FormProblems messages={apiErrors.general} title="No dimensions for this spline" />
       {data && (
         <Paper withBorder p="md" data-testid="spline-result">
           <Stack gap="xs">

@@ -1,8 +1,9 @@
-import { Alert, Button, Checkbox, Group, Stack, TextInput } from '@mantine/core';
+import { Button, Checkbox, Group, Stack, TextInput } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
 import { splitApiErrors } from '@/lib/form-errors';
 import { useCreateManualCheck } from '../api/mutations';
+import { FormProblems } from '@/components/form-problems';
 
 /** A check the engine cannot compute: test-fitted on the vehicle, boot and seal, retention. */
 export function ManualCheckForm({ workshopId, assemblyId, onDone }: { workshopId: string; assemblyId: string; onDone: () => void }) {
@@ -34,7 +35,7 @@ export function ManualCheckForm({ workshopId, assemblyId, onDone }: { workshopId
   return (
     <form onSubmit={form.onSubmit(handleSubmit)} aria-label="New manual check" noValidate>
       <Stack gap="sm">
-        {general.length > 0 && <Alert color="red">{general.join(' ')}</Alert>}
+        <FormProblems messages={general} />
         <TextInput
           label="Check"
           placeholder="Test-fitted on the vehicle: coupler engages fully"

@@ -9,6 +9,7 @@ import { FIT_REPORT_LIMITS, type FitReport, type FitReportOutcome } from '../api
 import { usePhotoSending, type PhotoSending } from '../hooks/use-photo-sending';
 import { PhotoPicker } from './photo-picker';
 import { RetryNotice } from '@/components/retry-notice';
+import { FormProblems } from '@/components/form-problems';
 
 export interface FitReportFormProps {
   workshopSlug: string;
@@ -98,11 +99,7 @@ export function FitReportForm({ workshopSlug, guideSlug, emailVerified, onClose 
   return (
     <form onSubmit={form.onSubmit(handleSubmit)} aria-label="Report a fit" noValidate>
       <Stack gap="md">
-        {general.length > 0 && (
-          <Alert color="red" role="alert">
-            {general.join(' ')}
-          </Alert>
-        )}
+        <FormProblems messages={general} />
         <Radio.Group label={LABELS.outcome} withAsterisk {...form.getInputProps('outcome')}>
           <Group mt={6} gap="lg">
             <Radio value="fit" label="It fit" />

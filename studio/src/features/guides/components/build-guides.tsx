@@ -11,6 +11,7 @@ import { useCreateGuide } from '../api/mutations';
 import { guideQueries } from '../api/queries';
 import { GuideStatusBadges } from './guide-status';
 import { formatDateTime } from '@/lib/dates';
+import { FormProblems } from '@/components/form-problems';
 
 /** A build's guides on its page: where each stands, and a new one by its title. */
 export function BuildGuides({ workshopId, buildId }: { workshopId: string; buildId: string }) {
@@ -50,7 +51,7 @@ export function BuildGuides({ workshopId, buildId }: { workshopId: string; build
         <Card withBorder>
           <form onSubmit={form.onSubmit(handleSubmit)} aria-label="New guide" noValidate>
             <Stack gap="sm">
-              {general.length > 0 && <Alert color="red">{general.join(' ')}</Alert>}
+              <FormProblems messages={general} />
               <TextInput label="Title" placeholder="Fitting the motor-to-gearbox coupler" withAsterisk data-autofocus {...form.getInputProps('title')} />
               <Group justify="flex-end">
                 <Button variant="default" onClick={createForm.close}>

@@ -1,4 +1,4 @@
-import { Alert, Badge, Button, Checkbox, Group, Paper, Select, Stack, TagsInput, Text, TextInput, Title } from '@mantine/core';
+import { Badge, Button, Checkbox, Group, Paper, Select, Stack, TagsInput, Text, TextInput, Title } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
@@ -9,6 +9,7 @@ import { guideQueries } from '../api/queries';
 import { SAFETY_TOPICS, type Guide, type GuideInput, type SafetyTopic } from '../api/types';
 import { SAFETY_TOPIC_LABELS } from './guide-labels';
 import { RichTextField } from './rich-text-field';
+import { FormProblems } from '@/components/form-problems';
 
 const FIELD_LABELS: Record<keyof GuideInput, string> = {
   title: 'Title',
@@ -130,7 +131,7 @@ export function GuideDetailsForm({ workshopId, guide }: { workshopId: string; gu
               </Text>
             )}
           </Group>
-          {general.length > 0 && <Alert color="red">{general.join(' ')}</Alert>}
+          <FormProblems messages={general} />
           <TextInput label="Title" withAsterisk {...form.getInputProps('title')} />
           <RichTextField
             label="Summary"

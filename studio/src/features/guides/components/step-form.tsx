@@ -1,4 +1,4 @@
-import { Alert, Button, Group, Paper, Select, Stack, Text, TextInput, Textarea } from '@mantine/core';
+import { Button, Group, Paper, Select, Stack, Text, TextInput, Textarea } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
 import { splitApiErrors } from '@/lib/form-errors';
@@ -8,6 +8,7 @@ import { CAUTION_LOOK } from './guide-labels';
 import { RichTextField } from './rich-text-field';
 import { formatClock } from '@/lib/clock';
 import { parseStepTime } from './step-time';
+import { FormProblems } from '@/components/form-problems';
 
 const FIELD_LABELS = {
   title: 'Title',
@@ -138,7 +139,7 @@ export function StepForm({ workshopId, guideId, step, mainFootage, readPositionM
       <form onSubmit={form.onSubmit(handleSubmit)} aria-label={formLabel} noValidate>
         <Stack gap="sm">
           <Text fw={600}>{formLabel}</Text>
-          {general.length > 0 && <Alert color="red">{general.join(' ')}</Alert>}
+          <FormProblems messages={general} />
           <TextInput label="Title" withAsterisk placeholder="Press the pilot bearing into the flywheel" {...form.getInputProps('title')} />
           <RichTextField
             label="What to do"

@@ -1,4 +1,4 @@
-import { Alert, Button, Group, NumberInput, Select, SimpleGrid, Stack, TextInput } from '@mantine/core';
+import { Button, Group, NumberInput, Select, SimpleGrid, Stack, TextInput } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { useRef, useState } from 'react';
 import { splitApiErrors } from '@/lib/form-errors';
@@ -6,6 +6,7 @@ import { unitLabel, type LengthUnit } from '@/lib/units';
 import { useAddMeasurement } from '../api/mutations';
 import { INSTRUMENT_KINDS, QUANTITIES, type InstrumentKind, type MeasurementSubject, type Quantity } from '../api/queries';
 import { INSTRUMENT_LABELS, QUANTITY_LABELS, typicalResolution, UNIT_OPTIONS } from './measurement-labels';
+import { FormProblems } from '@/components/form-problems';
 
 const LABELS = {
   value: 'Reading',
@@ -108,11 +109,7 @@ export function ReadingForm({ workshopId, subject, defaultUnit, defaultQuantity,
   return (
     <form onSubmit={form.onSubmit(handleSubmit)} aria-label="New reading" noValidate>
       <Stack gap="sm">
-        {general.length > 0 && (
-          <Alert color="red" title="The reading was not saved" role="alert">
-            {general.join(' ')}
-          </Alert>
-        )}
+        <FormProblems messages={general} title="The reading was not saved" />
         <SimpleGrid cols={{ base: 1, xs: 3 }}>
           <TextInput label={LABELS.value} placeholder="0.6692" withAsterisk styles={MONO} {...form.getInputProps('value')} />
           <Select label={LABELS.unit} data={UNIT_OPTIONS} allowDeselect={false} {...form.getInputProps('unit')} />

@@ -1,4 +1,4 @@
-import { Alert, Button, Group, Input, NumberInput, SegmentedControl, Select, SimpleGrid, Stack, Text, TextInput } from '@mantine/core';
+import { Button, Group, Input, NumberInput, SegmentedControl, Select, SimpleGrid, Stack, Text, TextInput } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
 import { splitApiErrors } from '@/lib/form-errors';
@@ -7,6 +7,7 @@ import type { FeatureInput } from '../api/mutations';
 import { FEATURE_KINDS, type FeatureKind, type PartFeature } from '../api/queries';
 import { FEATURE_KIND_LABELS } from './part-labels';
 import { SplineIdentifyOffer } from './spline-identify-offer';
+import { FormProblems } from '@/components/form-problems';
 
 const LABELS = {
   name: 'Name',
@@ -204,11 +205,7 @@ export function FeatureForm({ feature, pending, onSubmit, onCancel }: FeatureFor
   return (
     <form onSubmit={form.onSubmit(handleSubmit)} aria-label={editing ? 'Edit feature' : 'New feature'} noValidate>
       <Stack gap="sm">
-        {general.length > 0 && (
-          <Alert color="red" title="The feature was not saved" role="alert">
-            {general.join(' ')}
-          </Alert>
-        )}
+        <FormProblems messages={general} title="The feature was not saved" />
         <TextInput label={LABELS.name} placeholder="input spline" withAsterisk {...form.getInputProps('name')} />
         {editing ? (
           <Text size="sm">

@@ -1,4 +1,4 @@
-import { Alert, Button, Group, Select, SimpleGrid, Stack, TextInput, Textarea } from '@mantine/core';
+import { Button, Group, Select, SimpleGrid, Stack, TextInput, Textarea } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
 import { ApiError } from '@/lib/api-client';
@@ -6,6 +6,7 @@ import { splitApiErrors } from '@/lib/form-errors';
 import type { PartInput } from '../api/mutations';
 import { PART_CATEGORIES, PART_SOURCES, type Part, type PartCategory, type PartSource } from '../api/queries';
 import { CATEGORY_LABELS, SOURCE_LABELS } from './part-labels';
+import { FormProblems } from '@/components/form-problems';
 
 const LABELS = {
   partNumber: 'Part number',
@@ -80,11 +81,7 @@ export function PartForm({ initial, submitLabel, pending, onSubmit }: PartFormPr
   return (
     <form onSubmit={form.onSubmit(handleSubmit)} aria-label={submitLabel} noValidate>
       <Stack gap="sm">
-        {general.length > 0 && (
-          <Alert color="red" title="The part was not saved" role="alert">
-            {general.join(' ')}
-          </Alert>
-        )}
+        <FormProblems messages={general} title="The part was not saved" />
         <SimpleGrid cols={{ base: 1, sm: 2 }}>
           <TextInput label={LABELS.partNumber} placeholder="HL-2107" withAsterisk {...form.getInputProps('partNumber')} />
           <TextInput label={LABELS.maker} placeholder="Brackwater Driveline" {...form.getInputProps('maker')} />

@@ -4,6 +4,7 @@ import { useState } from 'react';
 import { splitApiErrors } from '@/lib/form-errors';
 import { fromNanometres, parseLength, toNanometres, type LengthUnit } from '@/lib/units';
 import { splineToolQueries, type SplineCandidate, type SplineIdentifyQuery } from '../api/queries';
+import { FormProblems } from '@/components/form-problems';
 
 export type IdentifiedPitch = { system: 'diametral'; diametralPitch: number; stubPitch: number } | { system: 'module'; module: number };
 
@@ -102,11 +103,7 @@ export function SplineIdentifyOffer({ teeth, gender, majorDiameter, unit, onUse 
             {problem}
           </Text>
         )}
-        {apiErrors.general.length > 0 && (
-          <Alert color="red" role="alert" title="No candidates">
-            {apiErrors.general.join(' ')}
-          </Alert>
-        )}
+        <FormProblems messages={apiErrors.general} title="No candidates" />
         {data && (
           <>
             {data.pitfalls.map((pitfall) => (

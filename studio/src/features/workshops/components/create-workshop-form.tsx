@@ -1,9 +1,10 @@
-import { Alert, Button, Group, Stack, Textarea, TextInput } from '@mantine/core';
+import { Button, Group, Stack, Textarea, TextInput } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
 import { splitApiErrors } from '@/lib/form-errors';
 import { useCreateWorkshop } from '../api/mutations';
 import type { Workshop } from '../api/queries';
+import { FormProblems } from '@/components/form-problems';
 
 const LABELS = { name: 'Workshop name', slug: 'Web address', description: 'Short description' };
 
@@ -56,11 +57,7 @@ export function CreateWorkshopForm({ onCreated }: { onCreated: (workshop: Worksh
       })}
     >
       <Stack gap="sm">
-        {problem && (
-          <Alert color="red" role="alert">
-            {problem}
-          </Alert>
-        )}
+        <FormProblems messages={problem} />
         <TextInput
           label={LABELS.name}
           required

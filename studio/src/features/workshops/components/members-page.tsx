@@ -19,6 +19,7 @@ import { workshopQueries, type Member, type MemberRole, type Workshop } from '..
 import { WorkshopGate } from './workshop-gate';
 import { WorkshopHeader } from './workshop-header';
 import { formatDate } from '@/lib/dates';
+import { FormProblems } from '@/components/form-problems';
 
 const ROLE_OPTIONS = [
   { value: 'editor', label: 'Editor' },
@@ -125,11 +126,7 @@ function InviteForm({ workshopId }: { workshopId: string }) {
       })}
     >
       <Stack gap="sm">
-        {problem && (
-          <Alert color="red" role="alert">
-            {problem}
-          </Alert>
-        )}
+        <FormProblems messages={problem} />
         <Group align="flex-start" gap="sm">
           <TextInput label="E-mail address" type="email" style={{ flex: 1, minWidth: 220 }} {...form.getInputProps('email')} />
           <Select label="Role" w={130} data={ROLE_OPTIONS} allowDeselect={false} {...form.getInputProps('role')} />

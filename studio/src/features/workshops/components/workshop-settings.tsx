@@ -1,4 +1,4 @@
-import { Alert, Avatar, Button, FileButton, Group, Paper, Stack, Text, Textarea, TextInput, Title } from '@mantine/core';
+import { Avatar, Button, FileButton, Group, Paper, Stack, Text, Textarea, TextInput, Title } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
 import { useNavigate } from 'react-router-dom';
@@ -9,6 +9,7 @@ import { useDeleteWorkshop, useRemoveLogo, useUpdateWorkshop, useUploadLogo } fr
 import type { Workshop } from '../api/queries';
 import { WorkshopGate } from './workshop-gate';
 import { WorkshopHeader } from './workshop-header';
+import { FormProblems } from '@/components/form-problems';
 
 const LABELS = { name: 'Workshop name', slug: 'Web address', description: 'Short description' };
 const LOGO_TYPES = ['image/png', 'image/jpeg', 'image/webp'];
@@ -37,11 +38,7 @@ function DetailsForm({ workshop, readOnly }: { workshop: Workshop; readOnly: boo
       })}
     >
       <Stack gap="sm">
-        {problem && (
-          <Alert color="red" role="alert">
-            {problem}
-          </Alert>
-        )}
+        <FormProblems messages={problem} />
         <TextInput label={LABELS.name} readOnly={readOnly} {...form.getInputProps('name')} />
         <TextInput
           label={LABELS.slug}
@@ -88,11 +85,7 @@ function LogoPanel({ workshop, readOnly }: { workshop: Workshop; readOnly: boole
           A square PNG, JPEG or WebP image, at most 2 MB. It appears beside your workshop's name.
         </Text>
       </Group>
-      {problem && (
-        <Alert color="red" role="alert">
-          {problem}
-        </Alert>
-      )}
+      <FormProblems messages={problem} />
       {!readOnly && (
         <Group>
           <FileButton onChange={handleFile} accept={LOGO_TYPES.join(',')}>
@@ -152,11 +145,7 @@ export function DeleteWorkshopPanel({ workshop }: { workshop: Workshop }) {
           onChange={(event) => setTyped(event.currentTarget.value)}
           autoComplete="off"
         />
-        {problem && (
-          <Alert color="red" role="alert">
-            {problem}
-          </Alert>
-        )}
+        <FormProblems messages={problem} />
         <Group>
           <Button type="submit" color="red" disabled={!matches} loading={remove.isPending}>
             Delete this workshop
