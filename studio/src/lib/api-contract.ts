@@ -1234,6 +1234,22 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/workshops/{workshopId}/footage/{footageId}/transcript/search/moments": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["TranscriptsController_hitMoments"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/workshops/{workshopId}/transcripts/search": {
         parameters: {
             query?: never;
@@ -1618,6 +1634,22 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/guides/{workshopSlug}/{guideSlug}/cues": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["PublishedTranscriptController_cues"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/follows": {
         parameters: {
             query?: never;
@@ -1650,6 +1682,38 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/follows/preferences": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["FollowsController_getPreferences"];
+        put: operations["FollowsController_updatePreferences"];
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/follows/preferences/link": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["FollowsController_getPreferencesByLink"];
+        put: operations["FollowsController_updatePreferencesByLink"];
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/follows/{followId}": {
         parameters: {
             query?: never;
@@ -1661,6 +1725,38 @@ export interface paths {
         put?: never;
         post?: never;
         delete: operations["FollowsController_unfollow"];
+        options?: never;
+        head?: never;
+        patch: operations["FollowsController_setDelivery"];
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/checks/{checkId}/fit-news": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["FitNewsRecordController_forCheck"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/checks/{checkId}/fit-news/retry": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["FitNewsRecordController_retry"];
+        delete?: never;
         options?: never;
         head?: never;
         patch?: never;
@@ -2992,6 +3088,14 @@ export interface components {
             /** @description Matching cues of the active transcript, in time order */
             results: components["schemas"]["CueMatchDto"][];
         };
+        HitMomentsResponseDto: {
+            /** @description The words searched for */
+            terms: string[];
+            /** @description How many cues match */
+            total: number;
+            /** @description Start of every matching cue of the active transcript, ms, in time order */
+            startMs: number[];
+        };
         WorkshopCueMatchDto: {
             cueIndex: number;
             startMs: number;
@@ -3012,14 +3116,26 @@ export interface components {
             results: components["schemas"]["WorkshopCueMatchDto"][];
         };
         CreateMarkDto: {
-            /** @description For kind `part` */
-            partId?: Record<string, never> | null;
-            /** @description For kind `measurement` */
-            measurementId?: Record<string, never> | null;
-            /** @description For kind `check_evidence` */
-            fitCheckId?: Record<string, never> | null;
-            /** @description For kind `step`: a step of one of the workshop’s guides */
-            guideStepId?: Record<string, never> | null;
+            /**
+             * Format: uuid
+             * @description For kind `part`
+             */
+            partId?: string | null;
+            /**
+             * Format: uuid
+             * @description For kind `measurement`
+             */
+            measurementId?: string | null;
+            /**
+             * Format: uuid
+             * @description For kind `check_evidence`
+             */
+            fitCheckId?: string | null;
+            /**
+             * Format: uuid
+             * @description For kind `step`: a step of one of the workshop’s guides
+             */
+            guideStepId?: string | null;
             /**
              * @description Time in the footage, ms
              * @example 95000
@@ -3029,7 +3145,7 @@ export interface components {
              * @description End of a span, ms (after startMs)
              * @example 101500
              */
-            endMs?: Record<string, never> | null;
+            endMs?: number | null;
             /** @enum {string} */
             kind: "part" | "measurement" | "check_evidence" | "step" | "caution" | "note";
             /**
@@ -3039,16 +3155,29 @@ export interface components {
             label: string;
         };
         UpdateMarkDto: {
-            /** @description For kind `part` */
-            partId?: Record<string, never> | null;
-            /** @description For kind `measurement` */
-            measurementId?: Record<string, never> | null;
-            /** @description For kind `check_evidence` */
-            fitCheckId?: Record<string, never> | null;
-            /** @description For kind `step`: a step of one of the workshop’s guides */
-            guideStepId?: Record<string, never> | null;
+            /**
+             * Format: uuid
+             * @description For kind `part`
+             */
+            partId?: string | null;
+            /**
+             * Format: uuid
+             * @description For kind `measurement`
+             */
+            measurementId?: string | null;
+            /**
+             * Format: uuid
+             * @description For kind `check_evidence`
+             */
+            fitCheckId?: string | null;
+            /**
+             * Format: uuid
+             * @description For kind `step`: a step of one of the workshop’s guides
+             */
+            guideStepId?: string | null;
             startMs?: number;
-            endMs?: Record<string, never> | null;
+            /** @description End of a span, ms (after startMs); null makes it a moment */
+            endMs?: number | null;
             /** @enum {string} */
             kind?: "part" | "measurement" | "check_evidence" | "step" | "caution" | "note";
             label?: string;
@@ -3082,10 +3211,16 @@ export interface components {
              * @example <p>How the 21-tooth coupler stack goes together.</p>
              */
             summary?: string;
-            /** @description The footage viewers follow (a footage of the same build) */
-            footageId?: Record<string, never> | null;
-            /** @description Its checklist and parts go in the guide (an assembly of the same build) */
-            assemblyId?: Record<string, never> | null;
+            /**
+             * Format: uuid
+             * @description The footage viewers follow (a footage of the same build)
+             */
+            footageId?: string | null;
+            /**
+             * Format: uuid
+             * @description Its checklist and parts go in the guide (an assembly of the same build)
+             */
+            assemblyId?: string | null;
             safetyTopics?: ("lifting" | "rotating_parts" | "high_voltage" | "welding" | "pressing")[];
             /**
              * @example [
@@ -3110,10 +3245,16 @@ export interface components {
              * @example <p>How the 21-tooth coupler stack goes together.</p>
              */
             summary?: string;
-            /** @description The footage viewers follow (a footage of the same build) */
-            footageId?: Record<string, never> | null;
-            /** @description Its checklist and parts go in the guide (an assembly of the same build) */
-            assemblyId?: Record<string, never> | null;
+            /**
+             * Format: uuid
+             * @description The footage viewers follow (a footage of the same build)
+             */
+            footageId?: string | null;
+            /**
+             * Format: uuid
+             * @description Its checklist and parts go in the guide (an assembly of the same build)
+             */
+            assemblyId?: string | null;
             safetyTopics?: ("lifting" | "rotating_parts" | "high_voltage" | "welding" | "pressing")[];
             /**
              * @example [
@@ -3143,15 +3284,18 @@ export interface components {
         CreateStepDto: {
             /** @description HTML (sanitised) */
             body?: string;
-            /** @description A footage of the guide’s build; defaults to the guide’s footage when a time is given */
-            footageId?: Record<string, never> | null;
+            /**
+             * Format: uuid
+             * @description A footage of the guide’s build; defaults to the guide’s footage when a time is given
+             */
+            footageId?: string | null;
             /**
              * @description The step’s moment in the footage, ms
              * @example 42000
              */
-            startMs?: Record<string, never> | null;
+            startMs?: number | null;
             /** @description End of the step’s span, ms (after startMs) */
-            endMs?: Record<string, never> | null;
+            endMs?: number | null;
             caution?: components["schemas"]["StepCautionDto"] | null;
             /** @example Seat the coupler on the motor shaft */
             title: string;
@@ -3163,21 +3307,30 @@ export interface components {
         UpdateStepDto: {
             /** @description HTML (sanitised) */
             body?: string;
-            /** @description A footage of the guide’s build; defaults to the guide’s footage when a time is given */
-            footageId?: Record<string, never> | null;
+            /**
+             * Format: uuid
+             * @description A footage of the guide’s build; defaults to the guide’s footage when a time is given
+             */
+            footageId?: string | null;
             /**
              * @description The step’s moment in the footage, ms
              * @example 42000
              */
-            startMs?: Record<string, never> | null;
+            startMs?: number | null;
             /** @description End of the step’s span, ms (after startMs) */
-            endMs?: Record<string, never> | null;
+            endMs?: number | null;
             caution?: components["schemas"]["StepCautionDto"] | null;
             title?: string;
         };
         PublishRevisionDto: {
             /** @example Added the runout reading to step 3. */
             note?: string;
+        };
+        CueWindowResponseDto: {
+            /** @description How many cues the whole transcript has (to size a list before its rows arrive) */
+            total: number;
+            /** @description The cues in the window, in order (at most 500) */
+            cues: components["schemas"]["CueDto"][];
         };
         CreateFollowDto: {
             /** @enum {string} */
@@ -3189,6 +3342,11 @@ export interface components {
             token?: string;
             /** @description Stop this other follow instead: one of the `stillFollowing` the first answer listed (same token, no sign-in) */
             followId?: string;
+            /**
+             * @description this (default): what sent the mail; workshop: every follow and report news in its workshop; everything: all fit news
+             * @enum {string}
+             */
+            scope?: "this" | "workshop" | "everything";
             /** @description Sent by mail clients on one-click unsubscribe; ignored */
             "List-Unsubscribe"?: string;
         };
@@ -3206,6 +3364,8 @@ export interface components {
              */
             workshop: Record<string, never>;
             createdAt: string;
+            /** @enum {string} */
+            delivery: "at_once" | "daily" | "weekly" | "paused";
         };
         UnsubscribeResultDto: {
             /**
@@ -3214,14 +3374,92 @@ export interface components {
              */
             status: "unfollowed" | "already";
             /**
-             * @description What the e-mail came through: a follow, or the person's fit report
+             * @description What stopped: the follow or the fit report the e-mail came through, a digest, all news from a workshop, or all fit news
              * @enum {string}
              */
-            stopped: "follow" | "report";
+            stopped: "follow" | "report" | "digest" | "workshop" | "everything";
             /** @description What the e-mail named: the followed workshop, build or assembly, or "your fit report" */
             label: string;
             /** @description The person's other follows that still bring news of the same assembly (closest first) */
             stillFollowing: components["schemas"]["UnsubscribedFollowDto"][];
+        };
+        FollowPreferenceDto: {
+            id: string;
+            /** @enum {string} */
+            targetKind: "workshop" | "build" | "assembly";
+            label: string;
+            workshopName: string;
+            /** @enum {string} */
+            delivery: "at_once" | "daily" | "weekly" | "paused";
+        };
+        MailPreferencesDto: {
+            /** @description The address mail goes to */
+            email: string;
+            /** @example UTC */
+            timeZone: string;
+            digestHour: number;
+            digestWeekday: number;
+            /** @enum {string} */
+            fitReportMail: "at_once" | "off";
+            /** @description Set when mail to the address is paused after repeated refusals */
+            pausedAt: string | null;
+            /** @description Why mail is paused: the mail server’s last answer */
+            pausedNote: string | null;
+            follows: components["schemas"]["FollowPreferenceDto"][];
+        };
+        FollowDeliveryChangeDto: {
+            /**
+             * @description at_once (default), daily or weekly digest, or paused
+             * @enum {string}
+             */
+            delivery: "at_once" | "daily" | "weekly" | "paused";
+            followId: string;
+        };
+        UpdateMailPreferencesDto: {
+            /**
+             * @description IANA time zone the digest hour is in
+             * @example Europe/Berlin
+             */
+            timeZone?: string;
+            /** @description Local hour the digests go out */
+            digestHour?: number;
+            /** @description Weekly digest day: 0 = Sunday … 6 = Saturday */
+            digestWeekday?: number;
+            /**
+             * @description Workshop owners and editors: mail when a fit report arrives
+             * @enum {string}
+             */
+            fitReportMail?: "at_once" | "off";
+            /** @description true resumes mail paused after the address refused it */
+            resume?: boolean;
+            /** @description New delivery for some of your follows */
+            follows?: components["schemas"]["FollowDeliveryChangeDto"][];
+        };
+        FollowDeliveryDto: {
+            /**
+             * @description at_once (default), daily or weekly digest, or paused
+             * @enum {string}
+             */
+            delivery: "at_once" | "daily" | "weekly" | "paused";
+        };
+        ChangeDeliveryRecordDto: {
+            /** @description The history entry of the change */
+            changeId: string;
+            /** @enum {string} */
+            to: "confirmed" | "no_fit";
+            changedAt: string;
+            /** @description Followers whose mail server accepted the mail */
+            told: number;
+            /** @description Mails not sent yet (or being tried again) */
+            pending: number;
+            /** @description Mails refused or given up on */
+            failed: number;
+            /** @description Followers who get this change in their daily or weekly digest */
+            inDigests: number;
+            firstSentAt: string | null;
+            lastSentAt: string | null;
+            /** @description What the refusing mail servers answered (addresses are not shown) */
+            refusals: string[];
         };
         CreateFitReportDto: {
             /** @enum {string} */
@@ -3237,8 +3475,11 @@ export interface components {
             status?: "new" | "investigating" | "verified" | "declined";
             /** @description Shown to the reporter */
             creatorNote?: string;
-            /** @description A fit check of this workshop that verifies the claim; null unties it */
-            fitCheckId?: Record<string, never> | null;
+            /**
+             * Format: uuid
+             * @description A fit check of this workshop that verifies the claim; null unties it
+             */
+            fitCheckId?: string | null;
         };
         FinderWorkshopDto: {
             name: string;
@@ -6038,6 +6279,32 @@ export interface operations {
             };
         };
     };
+    TranscriptsController_hitMoments: {
+        parameters: {
+            query: {
+                /** @description Words to find; each must appear (words of three letters or more) */
+                q: string;
+            };
+            header?: never;
+            path: {
+                workshopId: string;
+                footageId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description Where every hit starts, for the density band on the marking timeline */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["HitMomentsResponseDto"];
+                };
+            };
+        };
+    };
     TranscriptsController_searchWorkshop: {
         parameters: {
             query: {
@@ -6068,9 +6335,16 @@ export interface operations {
     MarksController_list: {
         parameters: {
             query?: {
+                /** @description At most this many (all when absent) */
+                limit?: number;
+                /** @description How many to skip: the next page starts at offset + limit */
+                offset?: number;
                 kind?: "part" | "measurement" | "check_evidence" | "step" | "caution" | "note";
             };
-            header?: never;
+            header?: {
+                /** @description How many marks there are in all (set on the answer) */
+                "X-Total-Count"?: string;
+            };
             path: {
                 workshopId: string;
                 footageId: string;
@@ -6160,9 +6434,16 @@ export interface operations {
     MarksController_suggestions: {
         parameters: {
             query?: {
+                /** @description At most this many (all when absent) */
+                limit?: number;
+                /** @description How many to skip: the next page starts at offset + limit */
+                offset?: number;
                 status?: "pending" | "accepted" | "dismissed";
             };
-            header?: never;
+            header?: {
+                /** @description How many suggestions there are in all (set on the answer) */
+                "X-Total-Count"?: string;
+            };
             path: {
                 workshopId: string;
                 footageId: string;
@@ -6803,6 +7084,52 @@ export interface operations {
             };
         };
     };
+    PublishedTranscriptController_cues: {
+        parameters: {
+            query?: {
+                /** @description Cues still playing at or after this time, ms */
+                fromMs?: number;
+                /** @description Cues starting before this time, ms (after fromMs) */
+                toMs?: number;
+                /** @description First cue by position, from 0 */
+                fromIndex?: number;
+                /** @description How many cues from fromIndex */
+                limit?: number;
+            };
+            header?: never;
+            path: {
+                workshopSlug: string;
+                guideSlug: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The cues in a stretch of time (fromMs, toMs) or of positions (fromIndex, limit) */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["CueWindowResponseDto"];
+                };
+            };
+            /** @description Neither or both pairs given, or toMs not after fromMs */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description Not published, no footage, or no transcript */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
     FollowsController_list: {
         parameters: {
             query?: never;
@@ -6874,6 +7201,110 @@ export interface operations {
             };
         };
     };
+    FollowsController_getPreferences: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["MailPreferencesDto"];
+                };
+            };
+        };
+    };
+    FollowsController_updatePreferences: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["UpdateMailPreferencesDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["MailPreferencesDto"];
+                };
+            };
+        };
+    };
+    FollowsController_getPreferencesByLink: {
+        parameters: {
+            query: {
+                /** @description The token from a mail’s preferences or unsubscribe link */
+                token: string;
+            };
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["MailPreferencesDto"];
+                };
+            };
+            /** @description Unknown token */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FollowsController_updatePreferencesByLink: {
+        parameters: {
+            query: {
+                /** @description The token from a mail’s preferences or unsubscribe link */
+                token: string;
+            };
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["UpdateMailPreferencesDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["MailPreferencesDto"];
+                };
+            };
+            /** @description Unknown token */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
     FollowsController_unfollow: {
         parameters: {
             query?: never;
@@ -6890,6 +7321,73 @@ export interface operations {
                     [name: string]: unknown;
                 };
                 content?: never;
+            };
+        };
+    };
+    FollowsController_setDelivery: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                followId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["FollowDeliveryDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["MailPreferencesDto"];
+                };
+            };
+        };
+    };
+    FitNewsRecordController_forCheck: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                checkId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ChangeDeliveryRecordDto"][];
+                };
+            };
+        };
+    };
+    FitNewsRecordController_retry: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                checkId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ChangeDeliveryRecordDto"][];
+                };
             };
         };
     };
