@@ -139,7 +139,7 @@ test('two steps are anchored in the video, one with a WARNING; the second moves 
 
   const cards = page.getByTestId('step-card');
   await cards.nth(1).waitFor();
-  assert.match(await cards.nth(0).textContent(), /Step 1Support the gearbox0:02\.5.*WARNING The gearbox weighs/);
+  assert.match(await cards.nth(0).textContent(), /Step 1Support the gearbox0:02\.5.*WARNING\s*The gearbox weighs/);
   assert.match(await cards.nth(1).textContent(), /Step 2Check the spline count0:07\.5/);
 
   // Keyboard: focus "move up" on step 2 and press Enter; the step moves and focus stays on the moved step.
