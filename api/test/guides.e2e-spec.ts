@@ -116,7 +116,8 @@ describe('guides: writing, publishing and the public follow-along view (real Mar
       [2, 'Raise the truck'],
       [3, 'Check the fit'],
     ]);
-    expect(reordered.body.detectedSafetyTopics).toEqual(['lifting']);
+    // Axle stands mean lifting; seating a coupler means a part that turns with the drive line (common practice).
+    expect(reordered.body.detectedSafetyTopics).toEqual(['lifting', 'rotating_parts']);
 
     await owner.agent.delete(`${base}/guides/${guideId}/steps/${stepIds[2]}`).expect(204);
     const afterDelete = await owner.agent.get(`${base}/guides/${guideId}`).expect(200);
@@ -172,7 +173,7 @@ describe('guides: writing, publishing and the public follow-along view (real Mar
     const view = await anonymous.get(`/api/guides/${workshopSlug}/fitting-the-test-coupler`).expect(200);
     expect(view.body).toMatchObject({
       workshop: { name: 'Guide Test Shop', slug: workshopSlug },
-      guide: { title: 'Fitting the test coupler', buildTitle: 'Coupler install', vehicle: 'Test pickup', tools: ['Torque wrench'], safetyTopics: ['lifting'] },
+      guide: { title: 'Fitting the test coupler', buildTitle: 'Coupler install', vehicle: 'Test pickup', tools: ['Torque wrench'], safetyTopics: ['lifting', 'rotating_parts'] },
       revision: { number: 1, note: 'First cut' },
       parts: [{ partNumber: 'GT-21', maker: 'Test Maker', position: 'input side' }],
       checklist: {
@@ -181,7 +182,10 @@ describe('guides: writing, publishing and the public follow-along view (real Mar
         checks: [{ title: 'Test-fitted on the vehicle', state: 'open', evidence: [{ kind: 'mark', label: 'Fits on the truck', startMs: 8000 }] }],
       },
     });
-    expect(view.body.cautions.map((caution: { topic: string; level: string }) => [caution.topic, caution.level])).toEqual([['lifting', 'WARNING']]);
+    expect(view.body.cautions.map((caution: { topic: string; level: string }) => [caution.topic, caution.level])).toEqual([
+      ['lifting', 'WARNING'],
+      ['rotating_parts', 'WARNING'],
+    ]);
     expect(view.body.disclaimer).toMatch(/manufacturer’s service information/);
     expect(view.body.steps.map((step: { title: string; startMs: number }) => [step.title, step.startMs])).toEqual([
       ['Seat the coupler', 6000],

@@ -87,17 +87,18 @@ JOIN workshops w ON w.id = g.workshop_id AND w.disabled_at IS NULL`;
 
 /**
  * Features of one kind that may answer, found by their keyed column, and the interfaces they sit in (either side).
- * STRAIGHT_JOIN keeps the written order (features by key, then each join by key) whatever the tables' sizes:
- * on a small table the optimizer would otherwise scan the interfaces first, a plan that does not grow well.
+ * STRAIGHT_JOIN and the forced foreign-key index keep the written plan (features by key, then each join by key)
+ * whatever the tables' sizes and statistics: with a few rows, or statistics not yet refreshed, the optimizer
+ * would otherwise scan the interfaces, a plan that does not grow with them.
  */
 function featureInterfacesSql(where: string, interfaceKind: string): string {
-  const side = (column: string) => `
+  const side = (featureSide: 'feature_a' | 'feature_b') => `
     SELECT STRAIGHT_JOIN g.id AS guideId, i.id AS interfaceId, f.id AS featureId
     FROM part_features f
-    JOIN assembly_interfaces i ON i.${column} = f.id AND i.kind = '${interfaceKind}'
+    JOIN assembly_interfaces i FORCE INDEX (fk_interfaces_${featureSide}) ON i.${featureSide}_id = f.id AND i.kind = '${interfaceKind}'
     ${PUBLISHED_FROM_INTERFACE}
     WHERE ${where}`;
-  return `${side('feature_a_id')} UNION ${side('feature_b_id')}`;
+  return `${side('feature_a')} UNION ${side('feature_b')}`;
 }
 
 /**

@@ -166,7 +166,8 @@ export class FootageRenditionsService {
         this.footage
           .update(
             { id: footage.id, renditionsState: 'processing' },
-            { renditionsPercent: percent, renditionsSecondsLeft: estimate.secondsLeft, renditionsProgressAt: new Date() },
+            // updated_at stays: progress is the studio's alone, and every public guide tag reads footage.updated_at.
+            { renditionsPercent: percent, renditionsSecondsLeft: estimate.secondsLeft, renditionsProgressAt: new Date(), updatedAt: () => 'updated_at' },
           )
           .catch((error: unknown) => this.logger.warn(`progress of ${footage.id} not stored: ${String(error)}`)),
       );

@@ -33,7 +33,11 @@ export const PUBLISHED_GUIDE_INPUT_TABLES: ReadonlySet<string> = new Set([
 const REVISION_FOOTAGE_ID = "CONVERT(JSON_VALUE(r.content, '$.footageId') USING utf8mb4) COLLATE utf8mb4_unicode_ci";
 const REVISION_ASSEMBLY_ID = "CONVERT(JSON_VALUE(r.content, '$.assemblyId') USING utf8mb4) COLLATE utf8mb4_unicode_ci";
 
-/** One row for a published guide of an enabled workshop; none when it is not published (the read answers 404). */
+/**
+ * One row for a published guide of an enabled workshop; none when it is not published (the read answers 404).
+ * The subqueries name their keys (STRAIGHT_JOIN, FORCE INDEX): this runs on every public read, and with a few
+ * rows or statistics not yet refreshed the optimizer would otherwise scan the evidence and marks tables.
+ */
 export const PUBLISHED_GUIDE_VERSION_SQL = `
 SELECT
   g.published_revision_id AS revisionId,
@@ -45,16 +49,20 @@ SELECT
   (SELECT t.id FROM transcripts t WHERE t.footage_id = f.id AND t.is_active = 1) AS transcriptId,
   a.id AS assemblyId,
   a.updated_at AS assemblyAt,
-  (SELECT CONCAT_WS(':', COUNT(*), SUM(CRC32(CONCAT_WS('|', ap.part_id, ap.position, ap.sort_order))), MAX(p.updated_at))
-     FROM assembly_parts ap JOIN parts p ON p.id = ap.part_id WHERE ap.assembly_id = a.id) AS parts,
+  (SELECT STRAIGHT_JOIN CONCAT_WS(':', COUNT(*), SUM(CRC32(CONCAT_WS('|', ap.part_id, ap.position, ap.sort_order))), MAX(p.updated_at))
+     FROM assembly_parts ap FORCE INDEX (PRIMARY) JOIN parts p FORCE INDEX (PRIMARY) ON p.id = ap.part_id WHERE ap.assembly_id = a.id) AS parts,
   (SELECT CONCAT_WS(':', COUNT(*), MAX(c.updated_at), SUM(CRC32(CONCAT_WS('|', c.id, c.state, c.required))))
-     FROM fit_checks c WHERE c.assembly_id = a.id) AS checks,
-  (SELECT CONCAT_WS(':', COUNT(*), SUM(CRC32(e.id)))
-     FROM fit_checks c JOIN fit_check_evidence e ON e.fit_check_id = c.id WHERE c.assembly_id = a.id) AS evidence,
-  (SELECT CONCAT_WS(':', COUNT(*), MAX(m.updated_at))
-     FROM fit_checks c JOIN marks m ON m.fit_check_id = c.id WHERE c.assembly_id = a.id) AS checkMarks,
-  (SELECT CONCAT_WS(':', COUNT(*), MAX(m.updated_at))
-     FROM fit_checks c JOIN fit_check_evidence e ON e.fit_check_id = c.id JOIN marks m ON m.id = e.mark_id
+     FROM fit_checks c FORCE INDEX (idx_fit_checks_assembly) WHERE c.assembly_id = a.id) AS checks,
+  (SELECT STRAIGHT_JOIN CONCAT_WS(':', COUNT(*), SUM(CRC32(e.id)))
+     FROM fit_checks c FORCE INDEX (idx_fit_checks_assembly)
+     JOIN fit_check_evidence e FORCE INDEX (idx_evidence_check) ON e.fit_check_id = c.id WHERE c.assembly_id = a.id) AS evidence,
+  (SELECT STRAIGHT_JOIN CONCAT_WS(':', COUNT(*), MAX(m.updated_at))
+     FROM fit_checks c FORCE INDEX (idx_fit_checks_assembly)
+     JOIN marks m FORCE INDEX (fk_marks_fit_check) ON m.fit_check_id = c.id WHERE c.assembly_id = a.id) AS checkMarks,
+  (SELECT STRAIGHT_JOIN CONCAT_WS(':', COUNT(*), MAX(m.updated_at))
+     FROM fit_checks c FORCE INDEX (idx_fit_checks_assembly)
+     JOIN fit_check_evidence e FORCE INDEX (idx_evidence_check) ON e.fit_check_id = c.id
+     JOIN marks m FORCE INDEX (PRIMARY) ON m.id = e.mark_id
     WHERE c.assembly_id = a.id) AS evidenceMarks
 FROM workshops w
 JOIN guides g ON g.workshop_id = w.id AND g.slug = ?
@@ -66,18 +74,19 @@ WHERE w.slug = ? AND w.disabled_at IS NULL`;
 
 /**
  * One row for the whole index (any search narrows the same set): which guides are published at which
- * revision, and the newest change to their workshops, builds and footage (posters).
+ * revision, and the newest change to their workshops, builds and footage (posters). The published guides are
+ * read from their key and the rest by primary key, named so that small tables never turn it into scans.
  */
 export const PUBLISHED_INDEX_VERSION_SQL = `
-SELECT
+SELECT STRAIGHT_JOIN
   COUNT(*) AS guides,
   SUM(CRC32(CONCAT(g.id, g.published_revision_id))) AS revisions,
   MAX(w.updated_at) AS workshopAt,
   MAX(b.updated_at) AS buildAt,
   MAX(f.updated_at) AS footageAt
-FROM guides g
-JOIN workshops w ON w.id = g.workshop_id AND w.disabled_at IS NULL
-JOIN guide_revisions r ON r.id = g.published_revision_id
-JOIN builds b ON b.id = g.build_id
-LEFT JOIN footage f ON f.id = ${REVISION_FOOTAGE_ID}
+FROM guides g FORCE INDEX (idx_guides_published)
+JOIN workshops w FORCE INDEX (PRIMARY) ON w.id = g.workshop_id AND w.disabled_at IS NULL
+JOIN guide_revisions r FORCE INDEX (PRIMARY) ON r.id = g.published_revision_id
+JOIN builds b FORCE INDEX (PRIMARY) ON b.id = g.build_id
+LEFT JOIN footage f FORCE INDEX (PRIMARY) ON f.id = ${REVISION_FOOTAGE_ID}
 WHERE g.published_revision_id IS NOT NULL`;
