@@ -16,14 +16,13 @@ const INFRA_ONLY_PATTERNS = [{ group: ['@aws-sdk/*'], message: INFRA_MESSAGE }];
 const ENGINE_MESSAGE = 'The engine is pure computation: no framework, database, network or file access.';
 const NODE_IO = ['fs', 'node:fs', 'fs/promises', 'node:fs/promises', 'http', 'node:http', 'https', 'node:https', 'net', 'node:net'];
 // Queue processors and listeners that still import Bull or ioredis themselves; each moves behind infra/jobs in turn.
-// The list only shrinks: a new file outside infra/ that imports them fails lint.
-const INFRA_IMPORTS_STILL_IN_DOMAINS = [
+// The list only shrinks: a new file outside infra/ that imports them fails lint, and lint-rules.test.mjs fails on an
+// entry that is gone or no longer needs its place.
+export const INFRA_IMPORTS_STILL_IN_DOMAINS = [
   'api/src/auth/accounts.processor.ts',
   'api/src/auth/auth.service.ts',
   'api/src/auth/redis-throttler.storage.ts',
   'api/src/auth/sign-in-attempts.store.ts',
-  'api/src/follows/fit-news.listener.ts',
-  'api/src/follows/fit-news.processor.ts',
   'api/src/footage/footage-media.processor.ts',
   'api/src/footage/footage.service.ts',
   'api/src/health/health.service.ts',
