@@ -81,4 +81,57 @@ describe('updating a part feature clears fields sent as null (real MariaDB)', ()
       .expect(200);
     expect(updated.body.spec).toEqual({ lengthNm: 540_000_000, compressedNm: 520_000_000, extendedNm: 570_000_000 });
   });
+
+  it('keeps a spline\'s pressure angle, fit and tolerance class through an update that does not send them', async () => {
+    const part = (
+      await creator.agent
+        .post(`${base}/parts`)
+        .send({
+          partNumber: 'FB-4',
+          title: 'coupler',
+          category: 'coupler',
+          features: [
+            {
+              name: 'spline',
+              kind: 'spline',
+              teeth: 27,
+              gender: 'internal',
+              diametralPitch: 16,
+              stubPitch: 32,
+              pressureAngle: 30,
+              splineFit: 'major',
+              splineClass: 5,
+            },
+          ],
+        })
+        .expect(201)
+    ).body;
+    const featureId = part.features[0].id;
+    const renamed = await creator.agent
+      .patch(`${base}/parts/${part.id}/features/${featureId}`)
+      .send({ name: 'output spline' })
+      .expect(200);
+    expect(renamed.body.spec).toEqual({
+      teeth: 27,
+      gender: 'internal',
+      diametralPitch: 16,
+      stubPitch: 32,
+      pressureAngle: 30,
+      fit: 'major',
+      toleranceClass: 5,
+    });
+    expect(renamed.body.shown).toMatchObject({ fit: 'major-diameter fit', toleranceClass: 'class 5' });
+
+    // Changing one of them changes that one; clearing one with null clears only that one.
+    const changed = await creator.agent
+      .patch(`${base}/parts/${part.id}/features/${featureId}`)
+      .send({ splineFit: 'side', splineClass: null })
+      .expect(200);
+    expect(changed.body.spec).toMatchObject({ pressureAngle: 30, fit: 'side' });
+    expect(changed.body.spec).not.toHaveProperty('toleranceClass');
+
+    // What is stored is what the next read gives back.
+    const reread = await creator.agent.get(`${base}/parts/${part.id}`).expect(200);
+    expect(reread.body.features[0].spec).toEqual(changed.body.spec);
+  });
 });

@@ -18,6 +18,13 @@ const DUPLICATE_ENTRY = 'ER_DUP_ENTRY';
 export const PART_PHOTO_MAX_BYTES = 15 * 1024 * 1024;
 const MAX_PHOTOS_PER_PART = 20;
 
+/**
+ * Spline spec keys stored under other names than the ones typed (`fit` is typed `splineFit`,
+ * `toleranceClass` is typed `splineClass`, apart from a diameter's ISO 286 class), so reading a spec
+ * back into input must rename them or an update would drop them.
+ */
+const SPLINE_INPUT_NAMES = { fit: 'splineFit', toleranceClass: 'splineClass' } as const;
+
 @Injectable()
 export class PartsService {
   constructor(
@@ -221,6 +228,8 @@ export class PartsService {
         input[key.slice(0, -2)] = formatLengthValue(value, unit);
       } else if (key === 'unit') {
         input.freeUnit = value;
+      } else if (feature.kind === 'spline' && key in SPLINE_INPUT_NAMES) {
+        input[SPLINE_INPUT_NAMES[key as keyof typeof SPLINE_INPUT_NAMES]] = value;
       } else {
         input[key] = value;
       }
