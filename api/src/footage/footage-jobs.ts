@@ -1,4 +1,7 @@
-/** Jobs on the media queue (infra/jobs/queues.ts); the footage media processor works them. */
+/**
+ * Job names. `process-footage` runs on the media queue (FootageMediaProcessor); `transcode-footage` on
+ * the media-transcode queue (FootageTranscodeProcessor), see infra/jobs/queues.ts for why apart.
+ */
 export const MEDIA_JOBS = {
   processFootage: 'process-footage',
   /** Web renditions, sprites and waveform; queued once probing made the footage ready. */

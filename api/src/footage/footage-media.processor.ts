@@ -10,7 +10,8 @@ import { FootageService } from './footage.service';
 /**
  * Works the media queue. Jobs live in Redis (append-only persistence), so an API restart picks up
  * waiting jobs and re-runs ones that were active; Bull retries failures with exponential backoff
- * (defaults in infra.module.ts), and after the last attempt the footage is marked failed.
+ * (defaults in infra.module.ts), and after the last attempt the footage is marked failed. Transcodes
+ * run on their own queue (FootageTranscodeProcessor, below): only probing jobs share these two slots.
  */
 @Processor(QUEUES.media)
 export class FootageMediaProcessor {
@@ -18,7 +19,6 @@ export class FootageMediaProcessor {
 
   constructor(
     @Inject(FootageProcessingService) private readonly processing: FootageProcessingService,
-    @Inject(FootageRenditionsService) private readonly renditions: FootageRenditionsService,
     @Inject(FootageService) private readonly footage: FootageService,
   ) {}
 
@@ -36,10 +36,29 @@ export class FootageMediaProcessor {
     }
   }
 
-  /**
-   * One transcode at a time per process: ffmpeg already uses every core. More throughput comes
-   * from more worker processes (worker.ts) on the media queue.
-   */
+  @OnQueueFailed()
+  async onFailed(job: Job<ProcessFootageJob>, error: Error): Promise<void> {
+    const attempts = job.opts.attempts ?? 1;
+    if (job.attemptsMade < attempts) return;
+    if (job.name !== MEDIA_JOBS.processFootage) return;
+    await this.processing.markFailed(
+      job.data.footageId,
+      `Processing failed after ${attempts} attempts: ${error.message}. Delete the footage and upload it again.`,
+    );
+  }
+}
+
+/**
+ * Works the media-transcode queue (kept in this file, beside the media queue's processor): one transcode at a time per process, because ffmpeg already uses
+ * every core. This is the queue's only handler, so its concurrency of 1 is the process's total (Bull
+ * sums the slots of all handlers on a queue). More throughput comes from more worker processes.
+ */
+@Processor(QUEUES.mediaTranscode)
+export class FootageTranscodeProcessor {
+  private readonly logger = new Logger(FootageTranscodeProcessor.name);
+
+  constructor(@Inject(FootageRenditionsService) private readonly renditions: FootageRenditionsService) {}
+
   @Process({ name: MEDIA_JOBS.transcodeFootage, concurrency: 1 })
   async transcodeFootage(job: Job<TranscodeFootageJob>): Promise<string> {
     try {
@@ -53,17 +72,9 @@ export class FootageMediaProcessor {
   }
 
   @OnQueueFailed()
-  async onFailed(job: Job<ProcessFootageJob | TranscodeFootageJob>, error: Error): Promise<void> {
+  async onFailed(job: Job<TranscodeFootageJob>, error: Error): Promise<void> {
     const attempts = job.opts.attempts ?? 1;
     if (job.attemptsMade < attempts) return;
-    if (job.name === MEDIA_JOBS.transcodeFootage) {
-      await this.renditions.markFailed(job.data.footageId, `Web versions could not be made after ${attempts} attempts: ${error.message}. The original is kept; retry later.`);
-      return;
-    }
-    if (job.name !== MEDIA_JOBS.processFootage) return;
-    await this.processing.markFailed(
-      job.data.footageId,
-      `Processing failed after ${attempts} attempts: ${error.message}. Delete the footage and upload it again.`,
-    );
+    await this.renditions.markFailed(job.data.footageId, `Web versions could not be made after ${attempts} attempts: ${error.message}. The original is kept; retry later.`);
   }
 }

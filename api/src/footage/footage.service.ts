@@ -69,6 +69,7 @@ export class FootageService implements OnApplicationBootstrap {
     @Inject(BuildsService) private readonly builds: BuildsService,
     @Inject(StorageService) private readonly storage: StorageService,
     @InjectQueue(QUEUES.media) private readonly mediaQueue: Queue<ProcessFootageJob | TranscodeFootageJob>,
+    @InjectQueue(QUEUES.mediaTranscode) private readonly transcodeQueue: Queue<TranscodeFootageJob>,
     @Inject(FootageMediaService) private readonly media: FootageMediaService,
     @Inject(FootageRenditionsService) private readonly renditions: FootageRenditionsService,
     @Inject(ConfigService) config: ConfigService<AppConfig, true>,
@@ -79,6 +80,7 @@ export class FootageService implements OnApplicationBootstrap {
   /** Footage probed before renditions existed (or whose job was lost) is queued again; job ids keep this idempotent. */
   async onApplicationBootstrap(): Promise<void> {
     try {
+      await this.dropTranscodesLeftOnMediaQueue();
       const waiting = await this.footage.find({ where: { state: 'ready', renditionsState: In(['waiting', 'processing']) }, select: { id: true } });
       for (const row of waiting) await this.enqueueRenditions(row.id);
     } catch (error) {
@@ -90,9 +92,19 @@ export class FootageService implements OnApplicationBootstrap {
   async enqueueRenditions(footageId: string): Promise<void> {
     const jobId = `transcode-footage-${footageId}`;
     // A finished or failed job with this id would make add() a no-op; a retry must run again.
-    const earlier = await this.mediaQueue.getJob(jobId);
+    const earlier = await this.transcodeQueue.getJob(jobId);
     if (earlier && ((await earlier.isCompleted()) || (await earlier.isFailed()))) await earlier.remove();
-    await this.mediaQueue.add(MEDIA_JOBS.transcodeFootage, { footageId }, { jobId, attempts: 3, backoff: { type: 'exponential', delay: 5000 } });
+    await this.transcodeQueue.add(MEDIA_JOBS.transcodeFootage, { footageId }, { jobId, attempts: 3, backoff: { type: 'exponential', delay: 5000 } });
+  }
+
+  /**
+   * Transcodes used to be queued on the media queue, which no longer has a handler for them; waiting
+   * ones are removed here and queued again on media-transcode from the footage rows just after.
+   */
+  private async dropTranscodesLeftOnMediaQueue(): Promise<void> {
+    for (const job of await this.mediaQueue.getJobs(['waiting', 'delayed', 'paused'])) {
+      if (job?.name === MEDIA_JOBS.transcodeFootage) await job.remove();
+    }
   }
 
   limits(): FootageLimitsDto {

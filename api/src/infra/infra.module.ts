@@ -32,7 +32,7 @@ import { StorageService } from './storage/storage.service';
         };
       },
     }),
-    BullModule.registerQueue({ name: QUEUES.media }, { name: QUEUES.marks }, { name: QUEUES.accounts }),
+    BullModule.registerQueue({ name: QUEUES.media }, { name: QUEUES.mediaTranscode }, { name: QUEUES.marks }, { name: QUEUES.accounts }),
   ],
   providers: [StorageService, MailService, MediaToolsService, QueueWorkersLifecycle],
   exports: [StorageService, MailService, BullModule, MediaToolsService],
