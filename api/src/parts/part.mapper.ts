@@ -2,20 +2,31 @@ import { describeFeatureSpec } from './feature-spec';
 import { PartFeature } from './entities/part-feature.entity';
 import { Part } from './entities/part.entity';
 import { photoIdOf } from '../common/uploads/photo-id';
+import type { DiameterSpec, FreeSpec, LengthSpec, SplineSpec } from './entities/part-feature.entity';
+import type { PartFeatureResponse, PartResponseDto } from './dto/part-response.dto';
 
-export function toFeatureResponse(feature: PartFeature) {
-  return {
+export function toFeatureResponse(feature: PartFeature): PartFeatureResponse {
+  const base = {
     id: feature.id,
     partId: feature.partId,
     name: feature.name,
-    kind: feature.kind,
     unit: feature.displayUnit,
-    spec: feature.spec,
     shown: describeFeatureSpec(feature.kind, feature.spec, feature.displayUnit),
   };
+  // The stored spec's shape follows the kind (toFeatureSpec writes it so); the column type cannot say which.
+  switch (feature.kind) {
+    case 'spline':
+      return { ...base, kind: 'spline', spec: feature.spec as SplineSpec };
+    case 'diameter':
+      return { ...base, kind: 'diameter', spec: feature.spec as DiameterSpec };
+    case 'length':
+      return { ...base, kind: 'length', spec: feature.spec as LengthSpec };
+    case 'free':
+      return { ...base, kind: 'free', spec: feature.spec as FreeSpec };
+  }
 }
 
-export function toPartResponse(part: Part) {
+export function toPartResponse(part: Part): PartResponseDto {
   return {
     id: part.id,
     workshopId: part.workshopId,
@@ -35,6 +46,3 @@ export function toPartResponse(part: Part) {
     updatedAt: part.updatedAt.toISOString(),
   };
 }
-
-export type PartResponse = ReturnType<typeof toPartResponse>;
-export type FeatureResponse = ReturnType<typeof toFeatureResponse>;

@@ -2355,6 +2355,221 @@ export interface components {
             /** @enum {string} */
             status?: "planning" | "in_progress" | "verified" | "archived";
         };
+        SplineSpecDto: {
+            /** @example 21 */
+            teeth: number;
+            /** @enum {string} */
+            gender: "internal" | "external";
+            /**
+             * @description ANSI B92.1 diametral pitch
+             * @example 16
+             */
+            diametralPitch?: number;
+            /** @example 32 */
+            stubPitch?: number;
+            /**
+             * @description ISO 4156 module, mm
+             * @example 1.25
+             */
+            module?: number;
+            /**
+             * @example 30
+             * @enum {number}
+             */
+            pressureAngle?: 30 | 37.5 | 45;
+            /** @enum {string} */
+            fit?: "side" | "major";
+            /**
+             * @example 5
+             * @enum {number}
+             */
+            toleranceClass?: 4 | 5 | 6 | 7;
+            /** @example 34925000 */
+            majorDiameterNm?: number;
+        };
+        SplineFeatureResponseDto: {
+            /** Format: uuid */
+            id: string;
+            /** Format: uuid */
+            partId: string;
+            /** @example input spline */
+            name: string;
+            /**
+             * @description The unit the feature is written in
+             * @enum {string}
+             */
+            unit: "mm" | "um" | "in" | "thou" | "tenths";
+            /**
+             * @description The spec's lengths written in `unit` (keys without the Nm), and for a spline its pitch, standard, angle, fit and class
+             * @example {
+             *       "majorDiameter": "1.375",
+             *       "pitch": "16/32 DP",
+             *       "standard": "ANSI B92.1"
+             *     }
+             */
+            shown: {
+                [key: string]: string;
+            };
+            /**
+             * @description discriminator enum property added by openapi-typescript
+             * @enum {string}
+             */
+            kind: "spline";
+            spec: components["schemas"]["SplineSpecDto"];
+        };
+        DiameterSpecDto: {
+            /** @enum {string} */
+            role: "hole" | "shaft";
+            /** @example 15000000 */
+            nominalNm: number;
+            /**
+             * @description ISO 286 tolerance class
+             * @example H7
+             */
+            toleranceClass?: string;
+            /** @example 15018000 */
+            maxNm?: number;
+            /** @example 15000000 */
+            minNm?: number;
+        };
+        DiameterFeatureResponseDto: {
+            /** Format: uuid */
+            id: string;
+            /** Format: uuid */
+            partId: string;
+            /** @example input spline */
+            name: string;
+            /**
+             * @description The unit the feature is written in
+             * @enum {string}
+             */
+            unit: "mm" | "um" | "in" | "thou" | "tenths";
+            /**
+             * @description The spec's lengths written in `unit` (keys without the Nm), and for a spline its pitch, standard, angle, fit and class
+             * @example {
+             *       "majorDiameter": "1.375",
+             *       "pitch": "16/32 DP",
+             *       "standard": "ANSI B92.1"
+             *     }
+             */
+            shown: {
+                [key: string]: string;
+            };
+            /**
+             * @description discriminator enum property added by openapi-typescript
+             * @enum {string}
+             */
+            kind: "diameter";
+            spec: components["schemas"]["DiameterSpecDto"];
+        };
+        LengthSpecDto: {
+            /** @example 540000000 */
+            lengthNm: number;
+            /** @example 520000000 */
+            compressedNm?: number;
+            /** @example 565000000 */
+            extendedNm?: number;
+        };
+        LengthFeatureResponseDto: {
+            /** Format: uuid */
+            id: string;
+            /** Format: uuid */
+            partId: string;
+            /** @example input spline */
+            name: string;
+            /**
+             * @description The unit the feature is written in
+             * @enum {string}
+             */
+            unit: "mm" | "um" | "in" | "thou" | "tenths";
+            /**
+             * @description The spec's lengths written in `unit` (keys without the Nm), and for a spline its pitch, standard, angle, fit and class
+             * @example {
+             *       "majorDiameter": "1.375",
+             *       "pitch": "16/32 DP",
+             *       "standard": "ANSI B92.1"
+             *     }
+             */
+            shown: {
+                [key: string]: string;
+            };
+            /**
+             * @description discriminator enum property added by openapi-typescript
+             * @enum {string}
+             */
+            kind: "length";
+            spec: components["schemas"]["LengthSpecDto"];
+        };
+        FreeSpecDto: {
+            /** @example M10 x 1.25 */
+            value: string;
+            /** @example N·m */
+            unit?: string;
+        };
+        FreeFeatureResponseDto: {
+            /** Format: uuid */
+            id: string;
+            /** Format: uuid */
+            partId: string;
+            /** @example input spline */
+            name: string;
+            /**
+             * @description The unit the feature is written in
+             * @enum {string}
+             */
+            unit: "mm" | "um" | "in" | "thou" | "tenths";
+            /**
+             * @description The spec's lengths written in `unit` (keys without the Nm), and for a spline its pitch, standard, angle, fit and class
+             * @example {
+             *       "majorDiameter": "1.375",
+             *       "pitch": "16/32 DP",
+             *       "standard": "ANSI B92.1"
+             *     }
+             */
+            shown: {
+                [key: string]: string;
+            };
+            /**
+             * @description discriminator enum property added by openapi-typescript
+             * @enum {string}
+             */
+            kind: "free";
+            spec: components["schemas"]["FreeSpecDto"];
+        };
+        PartPhotoDto: {
+            /** Format: uuid */
+            id: string;
+            /**
+             * @description Address on this API that redirects to a short-lived storage link
+             * @example /api/workshops/6f1c…/parts/0b7e…/photos/5d2a…
+             */
+            url: string;
+        };
+        PartResponseDto: {
+            /** Format: uuid */
+            id: string;
+            /** Format: uuid */
+            workshopId: string;
+            /** @example HL-2107 */
+            partNumber: string;
+            /** @example Brackwater Driveline */
+            maker: string;
+            /** @example 27-tooth motor coupler */
+            title: string;
+            /** @enum {string} */
+            category: "coupler" | "shaft" | "joint" | "bearing" | "bore" | "plate" | "boot" | "seal" | "fastener" | "other";
+            /** @enum {string} */
+            source: "new" | "remanufactured" | "used" | "original_equipment";
+            /** @example  */
+            notes: string;
+            photos: components["schemas"]["PartPhotoDto"][];
+            /** @description By name */
+            features: (components["schemas"]["SplineFeatureResponseDto"] | components["schemas"]["DiameterFeatureResponseDto"] | components["schemas"]["LengthFeatureResponseDto"] | components["schemas"]["FreeFeatureResponseDto"])[];
+            /** Format: date-time */
+            createdAt: string;
+            /** Format: date-time */
+            updatedAt: string;
+        };
         FeatureInputDto: {
             /** @example input spline */
             name: string;
@@ -3236,6 +3451,16 @@ export interface components {
              *     ]
              */
             consumables?: string[];
+            /**
+             * @description What the reader should already be able to do; null clears it
+             * @enum {string|null}
+             */
+            skillLevel?: "bench_starter" | "shop_regular" | "seasoned_fitter" | null;
+            /**
+             * @description Estimated time of the whole job, whole minutes (1–6000); null clears it
+             * @example 180
+             */
+            estimatedMinutes?: number | null;
             /** @example Fitting the 21-tooth coupler stack */
             title: string;
         };
@@ -3270,6 +3495,16 @@ export interface components {
              *     ]
              */
             consumables?: string[];
+            /**
+             * @description What the reader should already be able to do; null clears it
+             * @enum {string|null}
+             */
+            skillLevel?: "bench_starter" | "shop_regular" | "seasoned_fitter" | null;
+            /**
+             * @description Estimated time of the whole job, whole minutes (1–6000); null clears it
+             * @example 180
+             */
+            estimatedMinutes?: number | null;
             title?: string;
         };
         StepCautionDto: {
@@ -3297,6 +3532,11 @@ export interface components {
             /** @description End of the step’s span, ms (after startMs) */
             endMs?: number | null;
             caution?: components["schemas"]["StepCautionDto"] | null;
+            /**
+             * @description Estimated time of this step, whole minutes (1–1440); null clears it
+             * @example 20
+             */
+            estimatedMinutes?: number | null;
             /** @example Seat the coupler on the motor shaft */
             title: string;
         };
@@ -3320,6 +3560,11 @@ export interface components {
             /** @description End of the step’s span, ms (after startMs) */
             endMs?: number | null;
             caution?: components["schemas"]["StepCautionDto"] | null;
+            /**
+             * @description Estimated time of this step, whole minutes (1–1440); null clears it
+             * @example 20
+             */
+            estimatedMinutes?: number | null;
             title?: string;
         };
         PublishRevisionDto: {
@@ -3374,10 +3619,10 @@ export interface components {
              */
             status: "unfollowed" | "already";
             /**
-             * @description What stopped: the follow or the fit report the e-mail came through, a digest, all news from a workshop, or all fit news
+             * @description What stopped: the follow or the fit report the e-mail came through, a digest, the mail about new fit reports (members), all news from a workshop, or all fit news
              * @enum {string}
              */
-            stopped: "follow" | "report" | "digest" | "workshop" | "everything";
+            stopped: "follow" | "report" | "digest" | "fit_report_mail" | "workshop" | "everything";
             /** @description What the e-mail named: the followed workshop, build or assembly, or "your fit report" */
             label: string;
             /** @description The person's other follows that still bring news of the same assembly (closest first) */
@@ -4855,7 +5100,9 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["PartResponseDto"][];
+                };
             };
         };
     };
@@ -4878,7 +5125,9 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["PartResponseDto"];
+                };
             };
         };
     };
@@ -4898,7 +5147,9 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["PartResponseDto"];
+                };
             };
         };
     };
@@ -4942,7 +5193,9 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["PartResponseDto"];
+                };
             };
         };
     };
@@ -4965,11 +5218,14 @@ export interface operations {
             };
         };
         responses: {
+            /** @description The part with its photos */
             201: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["PartResponseDto"];
+                };
             };
         };
     };
@@ -4986,7 +5242,8 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
-            200: {
+            /** @description Redirects to a short-lived link to the photo */
+            302: {
                 headers: {
                     [name: string]: unknown;
                 };
@@ -5035,7 +5292,9 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["SplineFeatureResponseDto"] | components["schemas"]["DiameterFeatureResponseDto"] | components["schemas"]["LengthFeatureResponseDto"] | components["schemas"]["FreeFeatureResponseDto"];
+                };
             };
         };
     };
@@ -5081,7 +5340,9 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["SplineFeatureResponseDto"] | components["schemas"]["DiameterFeatureResponseDto"] | components["schemas"]["LengthFeatureResponseDto"] | components["schemas"]["FreeFeatureResponseDto"];
+                };
             };
         };
     };

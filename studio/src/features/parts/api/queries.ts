@@ -1,67 +1,31 @@
 import { keepPreviousData, queryOptions } from '@tanstack/react-query';
 import { apiRequest } from '@/lib/api-client';
-import type { LengthUnit } from '@/lib/units';
+import type { ApiSchema } from '@/lib/api-types';
 
-export const PART_CATEGORIES = ['coupler', 'shaft', 'joint', 'bearing', 'bore', 'plate', 'boot', 'seal', 'fastener', 'other'] as const;
-export type PartCategory = (typeof PART_CATEGORIES)[number];
-export const PART_SOURCES = ['new', 'remanufactured', 'used', 'original_equipment'] as const;
-export type PartSource = (typeof PART_SOURCES)[number];
-export const FEATURE_KINDS = ['spline', 'diameter', 'length', 'free'] as const;
-export type FeatureKind = (typeof FEATURE_KINDS)[number];
+type FeatureInputDto = ApiSchema<'FeatureInputDto'>;
 
-/** Lengths in integer nanometres, as the API stores them; `shown` has them written in the feature's unit. */
-export interface SplineSpec {
-  teeth: number;
-  gender: 'internal' | 'external';
-  diametralPitch?: number;
-  stubPitch?: number;
-  module?: number;
-  majorDiameterNm?: number;
-}
-export interface DiameterSpec {
-  role: 'hole' | 'shaft';
-  nominalNm: number;
-  toleranceClass?: string;
-  maxNm?: number;
-  minNm?: number;
-}
-export interface LengthSpec {
-  lengthNm: number;
-  compressedNm?: number;
-  extendedNm?: number;
-}
-export interface FreeSpec {
-  value: string;
-  unit?: string;
-}
+export type Part = ApiSchema<'PartResponseDto'>;
+/** A part feature: `kind` tells which spec it carries (lengths in integer nanometres; `shown` has them in the feature's unit). */
+export type PartFeature = Part['features'][number];
+export type SplineSpec = ApiSchema<'SplineSpecDto'>;
+export type DiameterSpec = ApiSchema<'DiameterSpecDto'>;
+export type LengthSpec = ApiSchema<'LengthSpecDto'>;
+export type FreeSpec = ApiSchema<'FreeSpecDto'>;
+export type PartCategory = Part['category'];
+export type PartSource = Part['source'];
+export type FeatureKind = PartFeature['kind'];
 
-interface FeatureBase {
-  id: string;
-  partId: string;
-  name: string;
-  unit: LengthUnit;
-  shown: Record<string, string>;
-}
-export type PartFeature =
-  | (FeatureBase & { kind: 'spline'; spec: SplineSpec })
-  | (FeatureBase & { kind: 'diameter'; spec: DiameterSpec })
-  | (FeatureBase & { kind: 'length'; spec: LengthSpec })
-  | (FeatureBase & { kind: 'free'; spec: FreeSpec });
+// The choices offered in forms and filters, in the order shown; `satisfies` keeps them within the API's enums.
+export const PART_CATEGORIES = ['coupler', 'shaft', 'joint', 'bearing', 'bore', 'plate', 'boot', 'seal', 'fastener', 'other'] as const satisfies readonly PartCategory[];
+export const PART_SOURCES = ['new', 'remanufactured', 'used', 'original_equipment'] as const satisfies readonly PartSource[];
+export const FEATURE_KINDS = ['spline', 'diameter', 'length', 'free'] as const satisfies readonly FeatureKind[];
 
-export interface Part {
-  id: string;
-  workshopId: string;
-  partNumber: string;
-  maker: string;
-  title: string;
-  category: PartCategory;
-  source: PartSource;
-  notes: string;
-  photos: { id: string; url: string }[];
-  features: PartFeature[];
-  createdAt: string;
-  updatedAt: string;
-}
+export type SplinePressureAngle = NonNullable<FeatureInputDto['pressureAngle']>;
+export type SplineFit = NonNullable<FeatureInputDto['splineFit']>;
+export type SplineClass = NonNullable<FeatureInputDto['splineClass']>;
+export const SPLINE_PRESSURE_ANGLES = [30, 37.5, 45] as const satisfies readonly SplinePressureAngle[];
+export const SPLINE_FITS = ['side', 'major'] as const satisfies readonly SplineFit[];
+export const SPLINE_CLASSES = [4, 5, 6, 7] as const satisfies readonly SplineClass[];
 
 export interface PartFilters {
   q?: string;
@@ -96,26 +60,8 @@ export interface SplineIdentifyQuery {
   resolution?: number;
 }
 
-export interface SplineCandidate {
-  designation: string;
-  standard: string;
-  /** "16/32" or "m1.25". */
-  pitch: string;
-  pressureAngle: number;
-  alsoFits: string[];
-  basicDiameter: { value: number; unit: 'in' | 'mm'; converted: { value: number; unit: 'in' | 'mm' } };
-  deviation: { value: number; unit: 'in' | 'mm' };
-  explainsReading: boolean;
-}
-
-export interface SplineIdentification {
-  teeth: number;
-  feature: 'major' | 'minor';
-  measured: { value: number; unit: 'in' | 'mm'; resolution: number };
-  candidates: SplineCandidate[];
-  pitfalls: string[];
-  rule: string;
-}
+export type SplineCandidate = ApiSchema<'SplineCandidateDto'>;
+export type SplineIdentification = ApiSchema<'SplineIdentificationDto'>;
 
 export const splineToolQueries = {
   all: () => ['spline-tools'] as const,

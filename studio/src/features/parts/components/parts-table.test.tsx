@@ -2,9 +2,10 @@ import { fireEvent, screen, within } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { stubApi } from '@/testing/api-stub';
 import { renderWithProviders } from '@/testing/render';
+import type { Part } from '../api/queries';
 import { PartsTable } from './parts-table';
 
-const PART = {
+const PART: Part = {
   id: 'p1',
   workshopId: 'w1',
   partNumber: 'HL-2107',
