@@ -146,6 +146,25 @@ describe('search: published guides for everyone, own workshops for members (real
     expect((await search(reader, { q: stepWord, vehicle: 'pickup' })).total).toBe(0);
   });
 
+  it("shows a member their own workshop's published parts and cues under the Published filter, with the public links", async () => {
+    const { owner, workshopSlug, guideSlug } = shop;
+    const publishedCues = await search(owner.agent, { q: `${cueWord} coupler`, state: 'published' });
+    expect(publishedCues.results).toHaveLength(1);
+    expect(publishedCues.results[0]).toMatchObject({ kind: 'cue', published: true, startMs: 1000, link: `/guides/${workshopSlug}/${guideSlug}?t=1.0` });
+    const publishedParts = await search(owner.agent, { q: 'SEARCHSHOP-1', kind: 'part', state: 'published' });
+    expect(publishedParts.results.map((hit) => [hit.published, hit.link])).toEqual([[true, `/guides/${workshopSlug}/${guideSlug}`]]);
+
+    // Unfiltered, the member's own records stand in for the public copies (they open the studio), each once.
+    const everything = await search(owner.agent, { q: `${cueWord} coupler` });
+    expect(everything.results.map((hit) => [hit.kind, hit.published])).toEqual([['cue', false]]);
+    const parts = await search(owner.agent, { q: 'SEARCHSHOP-1', kind: 'part' });
+    expect(parts.results.map((hit) => [hit.published, hit.link])).toEqual([[false, `/workshops/${shop.workshopId}/parts/${shop.partId}`]]);
+    // Unpublished: only the member's own records, never the public copies.
+    const own = await search(owner.agent, { q: 'SEARCHSHOP-1', kind: 'part', state: 'unpublished' });
+    expect(own.results.every((hit) => !hit.published)).toBe(true);
+    expect(own.total).toBe(1);
+  });
+
   it('refuses a query with nothing to search and out-of-range paging, naming the field', async () => {
     const empty = await reader.get('/api/search').query({ q: 'the an' }).expect(400);
     expect(empty.body.message).toMatch(/^q:/u);

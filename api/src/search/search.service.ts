@@ -45,7 +45,7 @@ const PART_NUMBER_SCORE = 1000;
  * names and the active transcript of the footage it names, in a workshop that is not disabled; a
  * withdrawn guide falls out by the join on `guides.published_revision_id`. Member kinds are limited to
  * the caller's memberships; for those workshops the public part and cue hits give way to the member
- * ones, which open the studio.
+ * ones, which open the studio, unless the caller asks for published hits only.
  */
 @Injectable()
 export class SearchService {
@@ -119,7 +119,10 @@ export class SearchService {
     const wantMember = query.state !== 'published' && memberWorkshopIds.length > 0;
     const kinds: KindQuery[] = [];
     const members = memberWorkshopIds;
-    const notMember = members.length ? `AND g.workshop_id NOT IN (${members.map(() => '?').join(', ')})` : '';
+    // Public part and cue hits of the caller's own workshops give way to the member hits only when
+    // those are searched too; under "published" they are the only copies, so they stay.
+    const replaced = wantMember ? members : [];
+    const notMember = replaced.length ? `AND g.workshop_id NOT IN (${replaced.map(() => '?').join(', ')})` : '';
     const inMember = (column: string) => `${column} IN (${members.map(() => '?').join(', ')})`;
 
     // Published guides: the revision's words, joined to a live, enabled workshop by the published revision.
@@ -151,7 +154,7 @@ export class SearchService {
           JOIN workshops w ON w.id = g.workshop_id AND w.disabled_at IS NULL
           JOIN builds b ON b.id = g.build_id
           WHERE MATCH (c.text) AGAINST (? IN BOOLEAN MODE) ${notMember} ${where.sql}`,
-        params: [text, text, ...members, ...where.params],
+        params: [text, text, ...replaced, ...where.params],
       });
     }
     if (wantPublic && (text || keys.length)) {
@@ -171,7 +174,7 @@ export class SearchService {
           JOIN workshops w ON w.id = g.workshop_id AND w.disabled_at IS NULL
           JOIN builds b ON b.id = g.build_id
           WHERE 1 = 1 ${notMember} ${where.sql}`,
-        params: [...matched.params, ...members, ...where.params],
+        params: [...matched.params, ...replaced, ...where.params],
       });
     }
     if (!wantMember) return kinds;
