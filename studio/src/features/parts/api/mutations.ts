@@ -1,7 +1,17 @@
 import { useMutation, useQueryClient, type QueryClient } from '@tanstack/react-query';
 import { apiRequest } from '@/lib/api-client';
 import type { LengthUnit } from '@/lib/units';
-import { partQueries, type FeatureKind, type Part, type PartCategory, type PartFeature, type PartSource } from './queries';
+import {
+  partQueries,
+  type FeatureKind,
+  type Part,
+  type PartCategory,
+  type PartFeature,
+  type PartSource,
+  type SplineClass,
+  type SplineFit,
+  type SplinePressureAngle,
+} from './queries';
 
 export interface PartInput {
   partNumber: string;
@@ -25,6 +35,9 @@ export interface FeatureInput {
   diametralPitch?: number | null;
   stubPitch?: number | null;
   module?: number | null;
+  pressureAngle?: SplinePressureAngle | null;
+  splineFit?: SplineFit | null;
+  splineClass?: SplineClass | null;
   majorDiameter?: string | null;
   role?: 'hole' | 'shaft';
   nominal?: string;

@@ -11,6 +11,9 @@ const BASE: FeatureFormValues = {
   diametralPitch: 16,
   stubPitch: 32,
   module: 1.25,
+  pressureAngle: 'unknown',
+  splineFit: 'unknown',
+  splineClass: 'unknown',
   majorDiameter: '',
   role: 'hole',
   nominal: '',
@@ -36,6 +39,9 @@ describe('toFeatureInput', () => {
       diametralPitch: undefined,
       stubPitch: undefined,
       module: 1.25,
+      pressureAngle: undefined,
+      splineFit: undefined,
+      splineClass: undefined,
       majorDiameter: undefined,
     });
   });
@@ -54,5 +60,19 @@ describe('toFeatureInput', () => {
       true,
     );
     expect(input).toMatchObject({ kind: 'diameter', role: 'hole', nominal: '15', toleranceClass: null, max: '15.018', min: '15.000', unit: 'mm' });
+  });
+
+  it('sends the pressure angle, fit and class as the typed values the API takes', () => {
+    const input = toFeatureInput({ ...BASE, pressureAngle: '37.5', splineFit: 'major', splineClass: '5' }, false);
+    expect(input).toMatchObject({ pressureAngle: 37.5, splineFit: 'major', splineClass: 5 });
+    expect(typeof input.pressureAngle).toBe('number');
+    expect(typeof input.splineClass).toBe('number');
+  });
+
+  it('clears a spline attribute set back to "not known" with null on an update', () => {
+    const input = toFeatureInput({ ...BASE, pressureAngle: '30', splineFit: 'unknown', splineClass: 'unknown' }, true);
+    expect(input.pressureAngle).toBe(30);
+    expect(input.splineFit).toBeNull();
+    expect(input.splineClass).toBeNull();
   });
 });

@@ -4,7 +4,17 @@ import { useState } from 'react';
 import { splitApiErrors } from '@/lib/form-errors';
 import { LENGTH_UNITS, unitLabel, type LengthUnit } from '@/lib/units';
 import type { FeatureInput } from '../api/mutations';
-import { FEATURE_KINDS, type FeatureKind, type PartFeature } from '../api/queries';
+import {
+  FEATURE_KINDS,
+  SPLINE_CLASSES,
+  SPLINE_FITS,
+  SPLINE_PRESSURE_ANGLES,
+  type FeatureKind,
+  type PartFeature,
+  type SplineClass,
+  type SplineFit,
+  type SplinePressureAngle,
+} from '../api/queries';
 import { FEATURE_KIND_LABELS } from './part-labels';
 import { SplineIdentifyOffer } from './spline-identify-offer';
 import { FormProblems } from '@/components/form-problems';
@@ -18,6 +28,9 @@ const LABELS = {
   diametralPitch: 'Diametral pitch',
   stubPitch: 'Stub pitch',
   module: 'Module',
+  pressureAngle: 'Pressure angle',
+  splineFit: 'Fit',
+  splineClass: 'Tolerance class',
   majorDiameter: 'Major diameter',
   role: 'Hole or shaft',
   nominal: 'Nominal size',
@@ -32,6 +45,8 @@ const LABELS = {
 };
 
 type PitchSystem = 'diametral' | 'module' | 'unknown';
+/** Segmented controls hold strings; "unknown" stands for a spline attribute nobody has read off a drawing yet. */
+type Known<T extends string | number> = `${T}` | 'unknown';
 type ToleranceMode = 'class' | 'limits' | 'none';
 
 export interface FeatureFormValues {
@@ -44,6 +59,9 @@ export interface FeatureFormValues {
   diametralPitch: number | string;
   stubPitch: number | string;
   module: number | string;
+  pressureAngle: Known<SplinePressureAngle>;
+  splineFit: Known<SplineFit>;
+  splineClass: Known<SplineClass>;
   majorDiameter: string;
   role: 'hole' | 'shaft';
   nominal: string;
@@ -74,6 +92,9 @@ function initialValues(feature?: PartFeature): FeatureFormValues {
     diametralPitch: '',
     stubPitch: '',
     module: '',
+    pressureAngle: 'unknown',
+    splineFit: 'unknown',
+    splineClass: 'unknown',
     majorDiameter: feature?.shown.majorDiameter ?? '',
     role: 'hole',
     nominal: feature?.shown.nominal ?? '',
@@ -96,6 +117,9 @@ function initialValues(feature?: PartFeature): FeatureFormValues {
       values.diametralPitch = feature.spec.diametralPitch ?? '';
       values.stubPitch = feature.spec.stubPitch ?? '';
       values.module = feature.spec.module ?? '';
+      values.pressureAngle = feature.spec.pressureAngle !== undefined ? `${feature.spec.pressureAngle}` : 'unknown';
+      values.splineFit = feature.spec.fit ?? 'unknown';
+      values.splineClass = feature.spec.toleranceClass !== undefined ? `${feature.spec.toleranceClass}` : 'unknown';
       break;
     case 'diameter':
       values.role = feature.spec.role;
@@ -114,6 +138,9 @@ function initialValues(feature?: PartFeature): FeatureFormValues {
 
 const text = (value: string) => (value.trim() === '' ? undefined : value.trim());
 const number = (value: number | string) => (value === '' ? undefined : Number(value));
+/** The typed choice back from its control's string, or undefined when not known. */
+const chosen = <T extends string | number>(choices: readonly T[], value: Known<T>): T | undefined =>
+  choices.find((choice) => `${choice}` === value);
 
 /**
  * The request body for the kind chosen. On an update every optional field of the kind is sent,
@@ -135,6 +162,9 @@ export function toFeatureInput(values: FeatureFormValues, editing: boolean): Fea
         diametralPitch: cleared(diametral ? number(values.diametralPitch) : undefined),
         stubPitch: cleared(diametral ? number(values.stubPitch) : undefined),
         module: cleared(metric ? number(values.module) : undefined),
+        pressureAngle: cleared(chosen(SPLINE_PRESSURE_ANGLES, values.pressureAngle)),
+        splineFit: cleared(chosen(SPLINE_FITS, values.splineFit)),
+        splineClass: cleared(chosen(SPLINE_CLASSES, values.splineClass)),
         majorDiameter: cleared(text(values.majorDiameter)),
       };
     }
@@ -256,6 +286,42 @@ export function FeatureForm({ feature, pending, onSubmit, onCancel }: FeatureFor
             {values.pitchSystem === 'module' && (
               <NumberInput label={LABELS.module} description="millimetres" min={0} decimalScale={4} {...form.getInputProps('module')} />
             )}
+            <Input.Wrapper label={LABELS.pressureAngle} description="Degrees, as the drawing or catalogue gives it" error={form.errors.pressureAngle}>
+              <SegmentedControl
+                fullWidth
+                data={[
+                  ...SPLINE_PRESSURE_ANGLES.map((angle) => ({ value: `${angle}`, label: `${angle}°` })),
+                  { value: 'unknown', label: 'Not known' },
+                ]}
+                aria-label={LABELS.pressureAngle}
+                {...form.getInputProps('pressureAngle')}
+              />
+            </Input.Wrapper>
+            <SimpleGrid cols={{ base: 1, sm: 2 }}>
+              <Input.Wrapper label={LABELS.splineFit} description="Which surfaces locate the mating parts" error={form.errors.splineFit}>
+                <SegmentedControl
+                  fullWidth
+                  data={[
+                    { value: 'side', label: 'Side fit' },
+                    { value: 'major', label: 'Major diameter' },
+                    { value: 'unknown', label: 'Not known' },
+                  ]}
+                  aria-label={LABELS.splineFit}
+                  {...form.getInputProps('splineFit')}
+                />
+              </Input.Wrapper>
+              <Input.Wrapper label={LABELS.splineClass} description="ANSI B92.1 / ISO 4156 class" error={form.errors.splineClass}>
+                <SegmentedControl
+                  fullWidth
+                  data={[
+                    ...SPLINE_CLASSES.map((value) => ({ value: `${value}`, label: `${value}` })),
+                    { value: 'unknown', label: 'Not known' },
+                  ]}
+                  aria-label={LABELS.splineClass}
+                  {...form.getInputProps('splineClass')}
+                />
+              </Input.Wrapper>
+            </SimpleGrid>
             <SimpleGrid cols={{ base: 1, sm: 2 }}>
               <TextInput label={LABELS.majorDiameter} placeholder="optional" {...form.getInputProps('majorDiameter')} />
               {unitSelect}
