@@ -1,8 +1,9 @@
 import { FitCheckEvent } from './entities/fit-check-event.entity';
 import { FitCheckEvidence } from './entities/fit-check-evidence.entity';
 import { FitCheck } from './entities/fit-check.entity';
+import type { EvidenceResponseDto, FitCheckEventResponseDto, FitCheckResponseDto } from './dto/fit-check-response.dto';
 
-export function toEvidenceResponse(evidence: FitCheckEvidence, workshopId: string) {
+export function toEvidenceResponse(evidence: FitCheckEvidence, workshopId: string): EvidenceResponseDto {
   return {
     id: evidence.id,
     kind: evidence.kind,
@@ -18,7 +19,7 @@ export function toEvidenceResponse(evidence: FitCheckEvidence, workshopId: strin
   };
 }
 
-export function toFitCheckResponse(check: FitCheck, evidence: FitCheckEvidence[] = []) {
+export function toFitCheckResponse(check: FitCheck, evidence: FitCheckEvidence[] = []): FitCheckResponseDto {
   return {
     id: check.id,
     assemblyId: check.assemblyId,
@@ -39,7 +40,7 @@ export function toFitCheckResponse(check: FitCheck, evidence: FitCheckEvidence[]
 }
 
 /** `actorName`: the member's display name; only members (and site admins) read this history, never the public page. */
-export function toFitCheckEventResponse(event: FitCheckEvent, actorNames: ReadonlyMap<string, string> = new Map()) {
+export function toFitCheckEventResponse(event: FitCheckEvent, actorNames: ReadonlyMap<string, string> = new Map()): FitCheckEventResponseDto {
   return {
     id: event.id,
     from: event.fromState,

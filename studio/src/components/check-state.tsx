@@ -3,7 +3,7 @@ import type { ApiSchema } from '@/lib/api-types';
 
 /** The fit-check states and checklist verdicts of the API (DESIGN.md vocabulary). */
 export type FitCheckState = ApiSchema<'FitCheckState'>;
-export type ChecklistVerdict = Exclude<FitCheckState, 'retired'>;
+export type ChecklistVerdict = ApiSchema<'ChecklistVerdict'>;
 
 interface StateLook {
   label: string;

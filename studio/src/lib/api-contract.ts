@@ -2888,14 +2888,91 @@ export interface components {
             footageTimeMs?: number;
             note?: string;
         };
+        /**
+         * @description The roll-up of the required checks
+         * @enum {string}
+         */
+        ChecklistVerdict: "open" | "bench_pass" | "confirmed" | "no_fit";
+        /** @enum {string} */
+        FitCheckState: "open" | "bench_pass" | "confirmed" | "no_fit" | "retired";
+        EvidenceResponseDto: {
+            /** Format: uuid */
+            id: string;
+            /** @enum {string} */
+            kind: "measurement" | "mark" | "photo";
+            /** Format: uuid */
+            measurementId: string | null;
+            /** Format: uuid */
+            markId: string | null;
+            /**
+             * @description For a photo: its address on this API, which redirects to a short-lived storage link
+             * @example /api/workshops/6f1c…/checks/2a9d…/evidence/7c3e…/photo
+             */
+            photoUrl: string | null;
+            /** @example Coupler fully engaged, motor bolted up. */
+            note: string;
+            /** Format: uuid */
+            addedBy: string | null;
+            /** Format: date-time */
+            createdAt: string;
+        };
+        FitCheckResponseDto: {
+            /** Format: uuid */
+            id: string;
+            /** Format: uuid */
+            assemblyId: string;
+            /**
+             * Format: uuid
+             * @description Set for a check derived from an interface
+             */
+            interfaceId: string | null;
+            /** @enum {string} */
+            kind: "spline_match" | "fit" | "length_window" | "manual";
+            /** @description Derived from an interface (true) or added by hand (false) */
+            derived: boolean;
+            /** @example Input spline matches the motor shaft */
+            title: string;
+            /** @example true */
+            required: boolean;
+            state: components["schemas"]["FitCheckState"];
+            /**
+             * @description The engine's last verdict for a derived check
+             * @enum {string|null}
+             */
+            outcome: "pass" | "fail" | "unknown" | null;
+            /**
+             * @description The engine's numbers for a derived check (nanometres unless a key says otherwise)
+             * @example {
+             *       "minClearanceNm": 2540,
+             *       "clearanceMeasuredNm": 12700
+             *     }
+             */
+            detail: {
+                [key: string]: unknown;
+            } | null;
+            /** @example Test-fitted with the motor bolted up; turns by hand with no bind. */
+            reason: string;
+            /** Format: uuid */
+            confirmedBy: string | null;
+            /** Format: date-time */
+            confirmedAt: string | null;
+            /** @description Oldest first */
+            evidence: components["schemas"]["EvidenceResponseDto"][];
+            /** Format: date-time */
+            updatedAt: string;
+        };
+        ChecklistResponseDto: {
+            /** @description The roll-up of the required checks */
+            verdict: components["schemas"]["ChecklistVerdict"];
+            /** @description In the order they were added */
+            checks: components["schemas"]["FitCheckResponseDto"][];
+        };
         CreateManualCheckDto: {
             /** @example Test-fitted on the vehicle: coupler engages fully */
             title: string;
             /** @default true */
             required: boolean;
         };
-        /** @enum {string} */
-        FitCheckState: "open" | "bench_pass" | "confirmed" | "no_fit" | "retired";
         TransitionDto: {
             to: components["schemas"]["FitCheckState"];
             /** @example Test-fitted with the motor bolted up; turns by hand with no bind. */
@@ -2914,6 +2991,52 @@ export interface components {
             /** @description For kind `mark`: a moment in this workshop's footage that shows the fit */
             markId?: string;
             note?: string;
+        };
+        FitCheckEventResponseDto: {
+            /** Format: uuid */
+            id: string;
+            /** @description Null for the first state */
+            from: components["schemas"]["FitCheckState"] | null;
+            to: components["schemas"]["FitCheckState"];
+            /** @example Bore re-measured after honing */
+            reason: string;
+            /**
+             * Format: uuid
+             * @description Null when the fit engine changed the state
+             */
+            actorId: string | null;
+            /**
+             * @description The member's display name; null for the fit engine
+             * @example Rowan Hale
+             */
+            actorName: string | null;
+            /** Format: date-time */
+            at: string;
+        };
+        WhatIfResponseDto: {
+            /**
+             * @description The measured clearance, nm
+             * @example 406400
+             */
+            clearanceNm: number;
+            /**
+             * @description The change in size, nm
+             * @example 10160
+             */
+            deltaNm: number;
+            /** @example 10.16 */
+            deltaUm: number;
+            /** @example 0.4 */
+            deltaThou: number;
+            /**
+             * @description Share of the clearance the change takes, %; null without a positive clearance
+             * @example 2.5
+             */
+            sharePercent: number | null;
+            /** @example 396240 */
+            remainingClearanceNm: number;
+            /** @enum {string} */
+            remainingKind: "clearance" | "interference";
         };
         AssemblyResponseDto: {
             /** Format: uuid */
@@ -5431,7 +5554,9 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["ChecklistResponseDto"];
+                };
             };
         };
     };
@@ -5455,7 +5580,9 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["FitCheckResponseDto"];
+                };
             };
         };
     };
@@ -5475,6 +5602,15 @@ export interface operations {
             };
         };
         responses: {
+            /** @description The check in its new state */
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["FitCheckResponseDto"];
+                };
+            };
             /** @description Refused, nothing stored: `already_in_state` (a repeat, e.g. a double click; `state` is the state now), `state_changed` (not in `from` any more) or `transition_refused` (the rules forbid it) */
             409: {
                 headers: {
@@ -5504,7 +5640,9 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["EvidenceResponseDto"];
+                };
             };
         };
     };
@@ -5531,7 +5669,9 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["EvidenceResponseDto"];
+                };
             };
         };
     };
@@ -5548,7 +5688,8 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
-            200: {
+            /** @description Redirects to a short-lived link to the photo */
+            302: {
                 headers: {
                     [name: string]: unknown;
                 };
@@ -5568,11 +5709,14 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Oldest first */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["FitCheckEventResponseDto"][];
+                };
             };
         };
     };
@@ -5596,7 +5740,9 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["WhatIfResponseDto"];
+                };
             };
         };
     };

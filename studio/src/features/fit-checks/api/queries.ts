@@ -1,67 +1,18 @@
 import { queryOptions } from '@tanstack/react-query';
 import { apiRequest } from '@/lib/api-client';
+import type { ApiSchema } from '@/lib/api-types';
 import type { LengthUnit } from '@/lib/units';
 
 import type { ChecklistVerdict, FitCheckState } from '@/components/check-state';
 
 export type { ChecklistVerdict, FitCheckState };
-export type CheckKind = 'spline_match' | 'fit' | 'length_window' | 'manual';
-
-export interface Evidence {
-  id: string;
-  kind: 'measurement' | 'mark' | 'photo';
-  measurementId: string | null;
-  markId: string | null;
-  photoUrl: string | null;
-  note: string;
-  addedBy: string | null;
-  createdAt: string;
-}
-
-export interface FitCheck {
-  id: string;
-  assemblyId: string;
-  interfaceId: string | null;
-  kind: CheckKind;
-  derived: boolean;
-  title: string;
-  required: boolean;
-  state: FitCheckState;
-  outcome: 'pass' | 'fail' | 'unknown' | null;
-  /** The engine's numbers for a derived check (nanometres unless a key says otherwise); read with check-detail.ts. */
-  detail: Record<string, unknown> | null;
-  reason: string;
-  confirmedBy: string | null;
-  confirmedAt: string | null;
-  evidence: Evidence[];
-  updatedAt: string;
-}
-
-export interface Checklist {
-  verdict: ChecklistVerdict;
-  checks: FitCheck[];
-}
-
-export interface FitCheckEvent {
-  id: string;
-  from: FitCheckState | null;
-  to: FitCheckState;
-  reason: string;
-  actorId: string | null;
-  /** The member's display name (members read the history; the public page never shows it); null for the fit engine. */
-  actorName: string | null;
-  at: string;
-}
-
-export interface WhatIfResult {
-  clearanceNm: number;
-  deltaNm: number;
-  deltaUm: number;
-  deltaThou: number;
-  sharePercent: number | null;
-  remainingClearanceNm: number;
-  remainingKind: 'clearance' | 'interference';
-}
+export type FitCheck = ApiSchema<'FitCheckResponseDto'>;
+export type Evidence = ApiSchema<'EvidenceResponseDto'>;
+export type Checklist = ApiSchema<'ChecklistResponseDto'>;
+/** One state change; `actorName` is the member's display name (members read the history; the public page never shows it), null for the fit engine. */
+export type FitCheckEvent = ApiSchema<'FitCheckEventResponseDto'>;
+export type WhatIfResult = ApiSchema<'WhatIfResponseDto'>;
+export type CheckKind = FitCheck['kind'];
 
 /** The assembly as the checklist needs it: which features each interface joins, with their specs. */
 export interface ChecklistFeature {

@@ -3,6 +3,7 @@ import { fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { stubApi } from '@/testing/api-stub';
 import { renderWithProviders } from '@/testing/render';
+import type { Checklist as ChecklistAnswer, FitCheck } from '../api/queries';
 import { Checklist } from './checklist';
 
 const mm = (value: number) => Math.round(value * 1_000_000);
@@ -47,7 +48,7 @@ const ASSEMBLY = {
   ],
 };
 
-const check = (overrides: Record<string, unknown>) => ({
+const check = (overrides: Partial<FitCheck> & Pick<FitCheck, 'id' | 'interfaceId' | 'kind' | 'derived' | 'title' | 'state'>): FitCheck => ({
   assemblyId: 'a1',
   required: true,
   outcome: null,
@@ -60,7 +61,7 @@ const check = (overrides: Record<string, unknown>) => ({
   ...overrides,
 });
 
-const CHECKLIST = {
+const CHECKLIST: ChecklistAnswer = {
   verdict: 'no_fit',
   checks: [
     check({

@@ -2,7 +2,7 @@ import { screen } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { stubApi } from '@/testing/api-stub';
 import { renderWithProviders } from '@/testing/render';
-import type { FitCheck } from '../api/queries';
+import type { FitCheck, FitCheckEvent } from '../api/queries';
 import { HistoryDrawer } from './history-drawer';
 
 describe('HistoryDrawer', () => {
@@ -12,11 +12,11 @@ describe('HistoryDrawer', () => {
     stubApi([
       {
         path: /^\/workshops\/w1\/checks\/c1\/history$/,
-        body: [
+        body: ([
           { id: 'e1', from: null, to: 'bench_pass', reason: 'clearance 0.019 mm measured', actorId: null, actorName: null, at: '2026-12-01T09:00:00.000Z' },
           { id: 'e2', from: 'bench_pass', to: 'confirmed', reason: 'test-fitted on the rig', actorId: 'u1', actorName: 'Quinn Marsh', at: '2026-12-02T09:00:00.000Z' },
           { id: 'e3', from: 'confirmed', to: 'open', reason: 're-opened: bore changed', actorId: 'u2', actorName: null, at: '2026-12-03T09:00:00.000Z' },
-        ],
+        ] satisfies FitCheckEvent[]),
       },
     ]);
     const check = { id: 'c1', title: 'Pilot bearing bore' } as FitCheck;

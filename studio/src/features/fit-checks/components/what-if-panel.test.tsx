@@ -2,6 +2,7 @@ import { fireEvent, screen } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { stubApi } from '@/testing/api-stub';
 import { renderWithProviders } from '@/testing/render';
+import type { WhatIfResult } from '../api/queries';
 import { WhatIfPanel } from './what-if-panel';
 
 describe('WhatIfPanel', () => {
@@ -12,7 +13,7 @@ describe('WhatIfPanel', () => {
       {
         path: /what-if\?delta=0\.0004/,
         // DESIGN.md worked example: 0.0004 in (10 160 nm) takes 2.5 % of a 0.016 in (406 400 nm) clearance.
-        body: { clearanceNm: 406_400, deltaNm: 10_160, deltaUm: 10.16, deltaThou: 0.4, sharePercent: 2.5, remainingClearanceNm: 396_240, remainingKind: 'clearance' },
+        body: { clearanceNm: 406_400, deltaNm: 10_160, deltaUm: 10.16, deltaThou: 0.4, sharePercent: 2.5, remainingClearanceNm: 396_240, remainingKind: 'clearance' } satisfies WhatIfResult,
       },
       {
         path: /what-if\?delta=-30/,
