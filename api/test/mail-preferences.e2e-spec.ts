@@ -3,7 +3,7 @@ import request from 'supertest';
 import { MailClock } from '../src/outbox/mail-clock';
 import { createTestApp } from './create-test-app';
 import { signUpAndSignIn, TestAccount, uniqueSlug } from './support/accounts';
-import { listMail, tokenFrom, waitForMail, type InboxMessage } from './support/mail-inbox';
+import { inboxSnapshot, listMail, tokenFrom, waitForMail, type InboxMessage } from './support/mail-inbox';
 
 jest.setTimeout(150_000);
 
@@ -29,13 +29,14 @@ describe('mail preferences and digests (real MariaDB, mail fake)', () => {
   let paused: TestAccount;
   let base: string;
   let workshopId: string;
+  let workshopSlug: string;
   const checkTitles = ['Coupler seats on the shaft', 'Adapter plate clears the starter', 'Shaft turns by hand'];
   const checkIds: string[] = [];
 
   beforeAll(async () => {
     app = await createTestApp();
     [owner, atOnce, daily, paused] = await Promise.all([signUpAndSignIn(app), signUpAndSignIn(app), signUpAndSignIn(app), signUpAndSignIn(app)]);
-    const workshopSlug = uniqueSlug('digest');
+    workshopSlug = uniqueSlug('digest');
     workshopId = (await owner.agent.post('/api/workshops').send({ name: 'Digest Shop', slug: workshopSlug }).expect(201)).body.id;
     base = `/api/workshops/${workshopId}`;
     const buildId = (await owner.agent.post(`${base}/builds`).send({ title: 'Digest build' }).expect(201)).body.id;
@@ -152,5 +153,67 @@ describe('mail preferences and digests (real MariaDB, mail fake)', () => {
       .expect(200);
     expect(answer.body).toMatchObject({ status: 'unfollowed', stopped: 'workshop', label: 'all fit news from Digest Shop', stillFollowing: [] });
     expect((await atOnce.agent.get('/api/follows').expect(200)).body).toEqual([]);
+  });
+
+  it('a digest’s unsubscribe link also stops the other follows it lists, one at a time, and refuses a workshop scope', async () => {
+    const digest = (await mailsTo(daily.email, /Your daily fit news/))[0];
+    const token = tokenFrom(digest, '/unsubscribe');
+    const workshopFollow = (await daily.agent.post('/api/follows').send({ targetKind: 'workshop', targetId: workshopId }).expect(201)).body;
+    const signedOut = request(app.getHttpServer());
+    const first = await signedOut.post('/api/follows/unsubscribe').send({ token }).expect(200);
+    expect(first.body).toMatchObject({ status: 'unfollowed', stopped: 'digest', label: 'your daily digest' });
+    expect(first.body.stillFollowing.map((follow: { id: string }) => follow.id)).toEqual([workshopFollow.id]);
+
+    // The page's "Stop" button beside that follow: the same digest link, with its id.
+    const stopped = await signedOut.post('/api/follows/unsubscribe').send({ token, followId: workshopFollow.id }).expect(200);
+    expect(stopped.body).toMatchObject({ status: 'unfollowed', stopped: 'follow', stillFollowing: [] });
+    const left = (await daily.agent.get('/api/follows').expect(200)).body as { id: string; delivery: string }[];
+    expect(left.map((follow) => follow.id)).not.toContain(workshopFollow.id);
+    expect(left).toEqual([expect.objectContaining({ delivery: 'paused' })]);
+    // Pressed twice, or a follow of someone else: nothing this link can stop.
+    const again = await signedOut.post('/api/follows/unsubscribe').send({ token, followId: workshopFollow.id }).expect(404);
+    expect(again.body.errors).toHaveProperty('followId');
+    const othersFollow = (await paused.agent.get('/api/follows').expect(200)).body[0];
+    await signedOut.post('/api/follows/unsubscribe').send({ token, followId: othersFollow.id }).expect(404);
+    expect((await paused.agent.get('/api/follows').expect(200)).body).toHaveLength(1);
+
+    const refused = await signedOut.post('/api/follows/unsubscribe').send({ token, scope: 'workshop' }).expect(400);
+    expect(refused.body.errors).toHaveProperty('scope');
+    const everything = await signedOut.post('/api/follows/unsubscribe').send({ token, scope: 'everything' }).expect(200);
+    expect(everything.body).toMatchObject({ status: 'unfollowed', stopped: 'everything', label: 'all fit news', stillFollowing: [] });
+    expect((await daily.agent.get('/api/follows').expect(200)).body).toEqual([]);
+  });
+
+  it('the mail telling the workshop of a new fit report carries the stop and preferences links and one-click headers', async () => {
+    const before = await inboxSnapshot(owner.email);
+    await paused.agent.post(`/api/guides/${workshopSlug}/digest-guide/fit-reports`).send({ outcome: 'fit', parts: 'DG-1 coupler' }).expect(201);
+    const told = await waitForMail(owner.email, { subject: 'New fit report on “Digest guide”: it fit', excluding: before });
+    const token = tokenFrom(told, '/unsubscribe');
+    expect(Buffer.from(token, 'base64url').length * 8).toBeGreaterThanOrEqual(128);
+    expect(told.headers?.['list-unsubscribe']).toMatch(/^<https?:\/\/[^>]+\/api\/follows\/unsubscribe\?token=[^>]+>$/);
+    expect(told.headers?.['list-unsubscribe-post']).toBe('List-Unsubscribe=One-Click');
+
+    const signedOut = request(app.getHttpServer());
+    const preferencesToken = tokenFrom(told, '/mail-preferences');
+    expect((await signedOut.get('/api/follows/preferences/link').query({ token: preferencesToken }).expect(200)).body).toMatchObject({
+      email: owner.email,
+      fitReportMail: 'at_once',
+    });
+    // The mail client's one-click POST (RFC 8058): the token in the address, the fixed body.
+    const oneClick = new URL(told.headers!['list-unsubscribe'].slice(1, -1));
+    const answer = await signedOut
+      .post(`${oneClick.pathname}${oneClick.search}`)
+      .type('form')
+      .send('List-Unsubscribe=One-Click')
+      .expect(200);
+    expect(answer.body).toMatchObject({ status: 'unfollowed', stopped: 'fit_report_mail', label: 'mail about new fit reports' });
+    expect((await owner.agent.get('/api/follows/preferences').expect(200)).body.fitReportMail).toBe('off');
+    expect((await signedOut.post('/api/follows/unsubscribe').send({ token }).expect(200)).body.status).toBe('already');
+
+    // Off means off: the next report brings the owner nothing.
+    const quiet = await inboxSnapshot(owner.email);
+    await paused.agent.post(`/api/guides/${workshopSlug}/digest-guide/fit-reports`).send({ outcome: 'no_fit', parts: 'DG-1 coupler' }).expect(201);
+    await settle();
+    expect((await mailsTo(owner.email, /New fit report/)).filter((mail) => !quiet.has(mail.id))).toHaveLength(0);
   });
 });

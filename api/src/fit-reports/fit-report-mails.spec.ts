@@ -10,6 +10,11 @@ describe('fitReportArrivedMail', () => {
     parts: 'HL-21C coupler on a 5-speed input shaft',
     vehicle: '1986 compact pickup',
     reviewUrl: 'https://studio.example.test/workshops/w1/fit-reports',
+    links: {
+      pageUrl: 'https://studio.example.test/unsubscribe?token=t1',
+      oneClickUrl: 'https://studio.example.test/api/follows/unsubscribe?token=t1',
+      preferencesUrl: 'https://studio.example.test/mail-preferences?token=t1',
+    },
   };
 
   it('says who claimed what, on which guide, with the link to review it', () => {
@@ -20,6 +25,16 @@ describe('fitReportArrivedMail', () => {
     expect(mail.text).toContain('Parts: HL-21C coupler on a 5-speed input shaft');
     expect(mail.text).toContain('Vehicle: 1986 compact pickup');
     expect(mail.text).toContain('Review the fit report: https://studio.example.test/workshops/w1/fit-reports');
+  });
+
+  it('carries the stop link, the preferences link and the one-click List-Unsubscribe headers (RFC 8058)', () => {
+    const mail = fitReportArrivedMail(input);
+    expect(mail.text).toContain('To stop mail about new fit reports, open https://studio.example.test/unsubscribe?token=t1');
+    expect(mail.text).toContain('https://studio.example.test/mail-preferences?token=t1');
+    expect(mail.headers).toEqual({
+      'List-Unsubscribe': '<https://studio.example.test/api/follows/unsubscribe?token=t1>',
+      'List-Unsubscribe-Post': 'List-Unsubscribe=One-Click',
+    });
   });
 
   it('leaves out an empty vehicle and escapes the reader’s words in the HTML part', () => {

@@ -12,6 +12,8 @@ export interface FitReportArrivedMailInput {
   vehicle: string;
   /** The workshop's Fit reports page in the studio. */
   reviewUrl: string;
+  /** Like every mail: a way to stop this kind of mail, one-click for mail clients, and the preferences page. */
+  links: { pageUrl: string; oneClickUrl: string; preferencesUrl: string };
 }
 
 /**
@@ -28,7 +30,10 @@ export function fitReportArrivedMail(input: FitReportArrivedMailInput): Outgoing
       `Parts: ${input.parts}`,
       ...(input.vehicle ? [`Vehicle: ${input.vehicle}`] : []),
       'A report is a reader’s claim, not a verified fit: tie it to a fit check and confirm it with evidence before you rely on it.',
+      `You get this because you are an owner or editor of ${input.workshopName}. To stop mail about new fit reports, open ${input.links.pageUrl}`,
+      `Choose what mail you get: ${input.links.preferencesUrl}`,
     ],
     { label: 'Review the fit report', url: input.reviewUrl },
+    { 'List-Unsubscribe': `<${input.links.oneClickUrl}>`, 'List-Unsubscribe-Post': 'List-Unsubscribe=One-Click' },
   );
 }

@@ -111,6 +111,7 @@ export class FitReportsService {
             parts: report.parts,
             vehicle: report.vehicle,
             reviewUrl: `${this.appOrigin}/workshops/${workshop.id}/fit-reports`,
+            links: await this.mailPreferences.fitReportMailLinks(member.userId),
           }),
         });
       }

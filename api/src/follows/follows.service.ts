@@ -1,4 +1,4 @@
-import { Injectable, NotFoundException } from '@nestjs/common';
+import { BadRequestException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import { In, IsNull, Not, Repository } from 'typeorm';
 import { Assembly } from '../assemblies/entities/assembly.entity';
@@ -11,6 +11,7 @@ import { WorkshopMember } from '../workshops/entities/workshop-member.entity';
 import { Workshop } from '../workshops/entities/workshop.entity';
 import { FitNewsDelivery } from './entities/fit-news-delivery.entity';
 import { MailLink } from './entities/mail-link.entity';
+import { DEFAULT_MAIL_PREFERENCE, MailPreference } from './entities/mail-preference.entity';
 import { Follow, type FollowTargetKind } from './entities/follow.entity';
 
 export interface FollowTarget {
@@ -36,6 +37,7 @@ export class FollowsService {
     @InjectRepository(Follow) private readonly follows: Repository<Follow>,
     @InjectRepository(FitNewsDelivery) private readonly deliveries: Repository<FitNewsDelivery>,
     @InjectRepository(MailLink) private readonly links: Repository<MailLink>,
+    @InjectRepository(MailPreference) private readonly preferences: Repository<MailPreference>,
     @InjectRepository(FitReport) private readonly reports: Repository<FitReport>,
     @InjectRepository(Workshop) private readonly workshops: Repository<Workshop>,
     @InjectRepository(Build) private readonly builds: Repository<Build>,
@@ -81,7 +83,7 @@ export class FollowsService {
    */
   async unsubscribe(token: string, alsoStopFollowId?: string, scope: UnsubscribeScope = 'this') {
     const delivery = await this.deliveries.findOneBy({ tokenHash: hashSecretToken(token) });
-    if (!delivery) return this.unsubscribeDigest(token);
+    if (!delivery) return this.unsubscribeByLink(token, alsoStopFollowId, scope);
     if (scope !== 'this') return this.unsubscribeWider(delivery, scope);
     if (alsoStopFollowId !== undefined) {
       const covering = await this.followsCovering(delivery);
@@ -120,16 +122,53 @@ export class FollowsService {
     };
   }
 
-  /** A digest's link: stops that digest (its follows are paused) and lists what still brings mail. */
-  private async unsubscribeDigest(token: string) {
+  /**
+   * A digest's or a fit-report mail's link. Alone it stops what sent that mail: the digest (its follows
+   * are paused) or the "new fit report" mail (turned off). With `followId` it stops one of the follows
+   * its answer listed; with scope `everything`, all of the person's fit news. A digest spans workshops,
+   * so `workshop` is refused rather than guessed.
+   */
+  private async unsubscribeByLink(token: string, followId: string | undefined, scope: UnsubscribeScope) {
     const link = await this.links.findOneBy({ tokenHash: hashSecretToken(token) });
-    if (!link?.cadence) throw new NotFoundException('This unsubscribe link is not known. Manage what you follow on your account page.');
-    const paused = await this.follows.update({ userId: link.userId, delivery: link.cadence }, { delivery: 'paused' });
+    if (!link || (link.purpose === 'digest' && !link.cadence)) {
+      throw new NotFoundException('This unsubscribe link is not known. Manage what you follow on your account page.');
+    }
+    const label = link.purpose === 'fit_report' ? 'mail about new fit reports' : `your ${link.cadence} digest`;
+    const stillFollowing = async () => this.describe(await this.follows.find({ where: { userId: link.userId, delivery: Not('paused') } }));
+    if (scope === 'workshop') {
+      const message = 'This mail is not about one workshop: stop one follow (followId) or everything (scope "everything")';
+      throw new BadRequestException({ message, errors: { scope: message } });
+    }
+    if (scope === 'everything') {
+      const removed = await this.follows.delete({ userId: link.userId });
+      const stoppedReports = await this.reports.update({ reporterId: link.userId, fitNewsStoppedAt: IsNull() }, { fitNewsStoppedAt: new Date() });
+      return {
+        status: (removed.affected ?? 0) + (stoppedReports.affected ?? 0) > 0 ? ('unfollowed' as const) : ('already' as const),
+        stopped: 'everything' as const,
+        label: 'all fit news',
+        stillFollowing: await stillFollowing(),
+      };
+    }
+    if (followId !== undefined) {
+      const removed = await this.follows.delete({ id: followId, userId: link.userId });
+      if (!removed.affected) {
+        const message = 'That follow is already stopped, or this link cannot stop it';
+        throw new NotFoundException({ message, errors: { followId: message }, code: 'reference_not_found' });
+      }
+      return { status: 'unfollowed' as const, stopped: 'follow' as const, label: 'that follow', stillFollowing: await stillFollowing() };
+    }
+    if (link.purpose === 'fit_report') {
+      const current = await this.preferences.findOneBy({ userId: link.userId });
+      const already = current?.fitReportMail === 'off';
+      if (!already) await this.preferences.save({ ...(current ?? { ...DEFAULT_MAIL_PREFERENCE, userId: link.userId }), fitReportMail: 'off' });
+      return { status: already ? ('already' as const) : ('unfollowed' as const), stopped: 'fit_report_mail' as const, label, stillFollowing: [] };
+    }
+    const paused = await this.follows.update({ userId: link.userId, delivery: link.cadence! }, { delivery: 'paused' });
     return {
       status: paused.affected ? ('unfollowed' as const) : ('already' as const),
       stopped: 'digest' as const,
-      label: `your ${link.cadence} digest`,
-      stillFollowing: await this.describe(await this.follows.find({ where: { userId: link.userId, delivery: Not('paused') } })),
+      label,
+      stillFollowing: await stillFollowing(),
     };
   }
 

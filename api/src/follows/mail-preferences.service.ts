@@ -1,7 +1,9 @@
 import { BadRequestException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import { In, Repository } from 'typeorm';
-import { hashSecretToken } from '../common/secret-token';
+import { ConfigService } from '@nestjs/config';
+import { hashSecretToken, newSecretToken } from '../common/secret-token';
+import type { AppConfig } from '../config/app-config';
 import { isTimeZone } from '../engine/digest-schedule';
 import { User } from '../users/entities/user.entity';
 import { Workshop } from '../workshops/entities/workshop.entity';
@@ -25,7 +27,26 @@ export class MailPreferencesService {
     @InjectRepository(User) private readonly users: Repository<User>,
     @InjectRepository(Workshop) private readonly workshops: Repository<Workshop>,
     private readonly followsService: FollowsService,
-  ) {}
+    config: ConfigService<AppConfig, true>,
+  ) {
+    this.appOrigin = config.get('appOrigin', { infer: true });
+  }
+
+  private readonly appOrigin: string;
+
+  /**
+   * The links of one "new fit report" mail to a member: a token of its own (kept as its SHA-256) that
+   * turns that mail off in one click, and opens the preferences page without signing in.
+   */
+  async fitReportMailLinks(userId: string): Promise<{ pageUrl: string; oneClickUrl: string; preferencesUrl: string }> {
+    const token = newSecretToken();
+    await this.links.insert({ tokenHash: hashSecretToken(token), userId, purpose: 'fit_report', cadence: null });
+    return {
+      pageUrl: `${this.appOrigin}/unsubscribe?token=${token}`,
+      oneClickUrl: `${this.appOrigin}/api/follows/unsubscribe?token=${token}`,
+      preferencesUrl: `${this.appOrigin}/mail-preferences?token=${token}`,
+    };
+  }
 
   /** The person a mail's link (fit-news delivery or digest token) was sent to. */
   async userForLink(token: string): Promise<string> {

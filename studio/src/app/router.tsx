@@ -29,6 +29,10 @@ const router = createBrowserRouter([
       { path: paths.resetPassword, lazy: async () => ({ Component: (await import('./routes/accounts')).ResetPasswordRoute }) },
       { path: paths.acceptInvitation, lazy: async () => ({ Component: (await import('./routes/accounts')).AcceptInvitationRoute }) },
       { path: paths.unsubscribe, lazy: async () => ({ Component: (await import('./routes/unsubscribe')).UnsubscribeRoute }) },
+      {
+        path: paths.mailPreferences,
+        lazy: async () => ({ Component: (await import('./routes/mail-preferences')).MailPreferencesRoute }),
+      },
       // Creator pages: signed-out visitors are sent to sign in and back (?next=). Add workshop pages here.
       {
         element: <RequireSignIn />,

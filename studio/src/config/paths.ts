@@ -66,6 +66,8 @@ export const paths = {
   acceptInvitation: '/invitations/accept',
   // The stop link in every fit-news e-mail (?token=), open to everyone.
   unsubscribe: '/unsubscribe',
+  // The preferences link in every mail (?token=), open to everyone: delivery per follow, digest hour and zone.
+  mailPreferences: '/mail-preferences',
   // Site administration.
   adminUsers: '/admin/users',
   adminWorkshops: '/admin/workshops',

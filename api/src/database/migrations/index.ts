@@ -15,6 +15,7 @@ import { Search1765440000000 } from './1765440000000-search';
 import { SearchPublicParts1765440000001 } from './1765440000001-search-public-parts';
 import { MailOutbox1765450000000 } from './1765450000000-mail-outbox';
 import { MailPreferences1765450000001 } from './1765450000001-mail-preferences';
+import { FitReportMailLinks1765460000000 } from './1765460000000-fit-report-mail-links';
 
 /** Every migration, oldest first. Listed explicitly so the same list works from src (tests) and dist. */
 // eslint-disable-next-line @typescript-eslint/no-unsafe-function-type
@@ -35,4 +36,5 @@ export const migrations: MixedList<Function> = [
   SearchPublicParts1765440000001,
   MailOutbox1765450000000,
   MailPreferences1765450000001,
+  FitReportMailLinks1765460000000,
 ];

@@ -60,10 +60,11 @@ export class UnsubscribeResultDto {
   status!: 'unfollowed' | 'already';
 
   @ApiProperty({
-    enum: ['follow', 'report', 'digest', 'workshop', 'everything'],
-    description: 'What stopped: the follow or the fit report the e-mail came through, a digest, all news from a workshop, or all fit news',
+    enum: ['follow', 'report', 'digest', 'fit_report_mail', 'workshop', 'everything'],
+    description:
+      'What stopped: the follow or the fit report the e-mail came through, a digest, the mail about new fit reports (members), all news from a workshop, or all fit news',
   })
-  stopped!: 'follow' | 'report' | 'digest' | 'workshop' | 'everything';
+  stopped!: 'follow' | 'report' | 'digest' | 'fit_report_mail' | 'workshop' | 'everything';
 
   @ApiProperty({ description: 'What the e-mail named: the followed workshop, build or assembly, or "your fit report"' })
   label!: string;

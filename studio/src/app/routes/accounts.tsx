@@ -11,6 +11,7 @@ import {
 } from '@/features/auth/components/auth-pages';
 import { MyFitReports } from '@/features/fit-reports/components/my-fit-reports';
 import { FollowingSection } from '@/features/follows/components/following-section';
+import { MailPreferencesSection } from '@/features/follows/components/mail-preferences-page';
 import { AcceptInvitationPage } from '@/features/workshops/components/accept-invitation';
 
 export const SignInRoute = SignInPage;
@@ -20,12 +21,13 @@ export const ConfirmEmailRoute = ConfirmEmailPage;
 export const ForgotPasswordRoute = ForgotPasswordPage;
 export const ResetPasswordRoute = ResetPasswordPage;
 
-/** Account settings, then what the person follows and the fit reports they sent (composed here: features do not import each other). */
+/** Account settings, then what the person follows, how its mail comes, and the fit reports they sent (composed here: features do not import each other). */
 export function AccountRoute() {
   return (
     <Stack maw={640} gap="lg">
       <AccountSettings />
       <FollowingSection />
+      <MailPreferencesSection />
       <MyFitReports />
     </Stack>
   );

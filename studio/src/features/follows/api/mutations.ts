@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '@/lib/api-client';
-import { followQueries, type Follow, type FollowTargetKind, type UnsubscribeResult } from './queries';
+import { followQueries, type Follow, type FollowTargetKind, type MailPreferences, type MailPreferencesChange, type UnsubscribeResult } from './queries';
 
 /** Waits for my follows to be read again, so a checkbox or a list never shows the old state in between. */
 function useRefreshFollows() {
@@ -34,5 +34,24 @@ export function useUnsubscribe() {
       apiRequest<UnsubscribeResult>('/follows/unsubscribe', { method: 'POST', body: followId ? { token, followId } : { token } }),
     // The person may be signed in in this browser: their list of follows changed too.
     onSuccess: () => void refresh(),
+  });
+}
+
+/**
+ * Saves mail preferences, signed in or (with a token) through a mail's link. The answer is the whole new
+ * state: it replaces what the page shows at once, then my follows are read again.
+ */
+export function useSaveMailPreferences(token?: string) {
+  const queryClient = useQueryClient();
+  const refresh = useRefreshFollows();
+  return useMutation({
+    mutationFn: (change: MailPreferencesChange) =>
+      token
+        ? apiRequest<MailPreferences>('/follows/preferences/link', { method: 'PUT', query: { token }, body: change })
+        : apiRequest<MailPreferences>('/follows/preferences', { method: 'PUT', body: change }),
+    onSuccess: (saved) => {
+      queryClient.setQueryData((token ? followQueries.preferencesByLink(token) : followQueries.preferences()).queryKey, saved);
+      void refresh();
+    },
   });
 }

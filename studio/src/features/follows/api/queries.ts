@@ -1,5 +1,6 @@
 import { queryOptions } from '@tanstack/react-query';
 import { apiRequest } from '@/lib/api-client';
+import type { ApiSchema } from '@/lib/api-types';
 
 /** Shapes of the follows routes (api/src/follows; OpenAPI at /api/docs). */
 export type FollowTargetKind = 'workshop' | 'build' | 'assembly';
@@ -29,12 +30,17 @@ export interface FollowTargets {
 /** POST /follows/unsubscribe: the e-mailed link, for anyone. */
 export interface UnsubscribeResult {
   status: 'unfollowed' | 'already';
-  /** What the e-mail came through: a follow, or the person's own fit report. */
-  stopped: 'follow' | 'report';
+  /** What stopped: the follow or fit report the mail came through, a digest, the new-fit-report mail, or wider. */
+  stopped: ApiSchema<'UnsubscribeResultDto'>['stopped'];
   label: string;
   /** The person's other follows that would still bring news of the same assembly, closest first. */
   stillFollowing: Follow[];
 }
+
+/** A person's mail settings and each follow's delivery (GET /follows/preferences, or …/preferences/link?token= signed out). */
+export type MailPreferences = ApiSchema<'MailPreferencesDto'>;
+export type MailPreferencesChange = ApiSchema<'UpdateMailPreferencesDto'>;
+export type FollowDelivery = MailPreferences['follows'][number]['delivery'];
 
 export const followQueries = {
   all: () => ['follows'] as const,
@@ -43,6 +49,20 @@ export const followQueries = {
     queryOptions({
       queryKey: [...followQueries.all(), 'mine'] as const,
       queryFn: ({ signal }) => apiRequest<Follow[]>('/follows', { signal }),
+    }),
+  /** My mail preferences, signed in. */
+  preferences: () =>
+    queryOptions({
+      queryKey: [...followQueries.all(), 'preferences'] as const,
+      queryFn: ({ signal }) => apiRequest<MailPreferences>('/follows/preferences', { signal }),
+    }),
+  /** The same, signed out, with the token of a mail's preferences link. */
+  preferencesByLink: (token: string) =>
+    queryOptions({
+      queryKey: [...followQueries.all(), 'preferences', 'link', token] as const,
+      queryFn: ({ signal }) => apiRequest<MailPreferences>('/follows/preferences/link', { signal, query: { token } }),
+      // A link that is not known stays unknown: asking again would only repeat the 404.
+      retry: false,
     }),
 };
 

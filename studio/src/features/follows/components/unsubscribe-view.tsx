@@ -81,6 +81,19 @@ function StillFollowing({ token, first }: { token: string; first: UnsubscribeRes
   );
 }
 
+/** What the link stopped, in words that claim no more than that. */
+function outcomeWords(stopped: UnsubscribeResult['stopped'], status: UnsubscribeResult['status'], label: string): string {
+  if (stopped === 'fit_report_mail') {
+    return status === 'already' ? 'Mail about new fit reports was already off.' : 'You will no longer get mail about new fit reports to your workshops.';
+  }
+  if (stopped === 'digest') {
+    return status === 'already' ? `You had already stopped ${label}.` : `We stopped ${label}: its follows are paused.`;
+  }
+  return status === 'already'
+    ? `You had already stopped fit news about ${label}. We will not send you more through it.`
+    : `You will no longer get fit news about ${label}.`;
+}
+
 function Outcome({ token, unsubscribe }: { token: string | null; unsubscribe: ReturnType<typeof useUnsubscribe> }) {
   const { user } = useSession();
   const manage = user ? (
@@ -120,12 +133,13 @@ function Outcome({ token, unsubscribe }: { token: string | null; unsubscribe: Re
     return (
       <Stack gap="sm" align="flex-start">
         <Alert color="patina" role="status" title={status === 'already' ? 'Already stopped' : 'Stopped'} w="100%" data-testid="unsubscribe-outcome">
-          {status === 'already'
-            ? `You had already stopped fit news about ${label}. We will not send you more through it.`
-            : `You will no longer get fit news about ${label}.`}
+          {outcomeWords(unsubscribe.data.stopped, status, label)}
         </Alert>
-        <StillFollowing token={token} first={unsubscribe.data} />
+        {unsubscribe.data.stopped !== 'fit_report_mail' && <StillFollowing token={token} first={unsubscribe.data} />}
         {manage}
+        <Anchor component={Link} to={`${paths.mailPreferences}?token=${encodeURIComponent(token)}`} size="sm">
+          Rather get a daily or weekly digest? Choose per follow in your mail preferences
+        </Anchor>
         <Anchor component={Link} to={paths.guideIndex} size="sm">
           Browse published guides
         </Anchor>
