@@ -32,3 +32,13 @@ export function createPlaybackClock(startMs = 0): PlaybackClock {
 export function usePlaybackMs(clock: PlaybackClock): number {
   return useSyncExternalStore(clock.subscribe, clock.getMs, clock.getMs);
 }
+
+/**
+ * Something derived from the clock's time (the playing row, whether the playhead left the view); the calling
+ * component re-renders only when that value changes (compared with `Object.is`), not on every tick.
+ * `select` may change between renders (e.g. it closes over the rows shown).
+ */
+export function usePlaybackSelect<T>(clock: PlaybackClock, select: (ms: number) => T): T {
+  const snapshot = () => select(clock.getMs());
+  return useSyncExternalStore(clock.subscribe, snapshot, snapshot);
+}

@@ -1,6 +1,6 @@
 import { infiniteQueryOptions, queryOptions } from '@tanstack/react-query';
 import { ApiError, apiRequest } from '@/lib/api-client';
-import type { CueMatch, Footage, FootageLimits, Playback, SearchResults, Transcript, TranscriptRevision, WorkshopCueMatch } from './types';
+import type { CueMatch, Footage, HitMoments, FootageLimits, Playback, SearchResults, Transcript, TranscriptRevision, WorkshopCueMatch } from './types';
 
 /** While footage is being processed (or its web renditions made) the studio asks every two seconds; otherwise it does not poll. */
 const LIVE_STATE_POLL_MS = 2_000;
@@ -73,6 +73,14 @@ export const transcriptQueries = {
         }),
       initialPageParam: 0,
       getNextPageParam: nextSearchOffset,
+      enabled: q.trim().length > 0,
+    }),
+  /** When every hit starts (all of them at once, no text), for the hit density band on the marking timeline. */
+  moments: (workshopId: string, footageId: string, q: string) =>
+    queryOptions({
+      queryKey: [...transcriptQueries.all(), 'moments', workshopId, footageId, q] as const,
+      queryFn: ({ signal }) =>
+        apiRequest<HitMoments>(`/workshops/${workshopId}/footage/${footageId}/transcript/search/moments`, { signal, query: { q } }),
       enabled: q.trim().length > 0,
     }),
   workshopSearch: (workshopId: string, q: string) =>

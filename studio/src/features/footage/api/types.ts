@@ -1,4 +1,5 @@
 /** Shapes of the footage and transcript routes (api/src/footage, api/src/transcripts; OpenAPI at /api/docs). */
+import type { ApiSchema } from '@/lib/api-types';
 
 export type FootageState = 'uploading' | 'processing' | 'ready' | 'failed';
 
@@ -114,3 +115,6 @@ export interface SearchResults<T> {
   offset: number;
   results: T[];
 }
+
+/** Where every hit of a footage's transcript search starts, in time order. */
+export type HitMoments = ApiSchema<'HitMomentsResponseDto'>;

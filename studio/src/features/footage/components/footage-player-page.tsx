@@ -1,6 +1,6 @@
 import { Alert, Anchor, Badge, Breadcrumbs, Grid, Group, Skeleton, Stack, Text, Title } from '@mantine/core';
 import { useQuery } from '@tanstack/react-query';
-import type { ComponentType } from 'react';
+import { useMemo, useState, type ComponentType } from 'react';
 import { Link } from 'react-router-dom';
 import { paths } from '@/config/paths';
 import { captionsUrl, footageQueries, transcriptQueries } from '../api/queries';
@@ -12,7 +12,8 @@ import { RenditionsStatus } from './renditions-status';
 import { TranscriptPane } from './transcript-pane';
 import { FootagePlayer } from '@/components/footage-player/footage-player';
 import { useFootagePlayer } from '@/components/footage-player/use-footage-player';
-import { usePlaybackMs, type PlaybackClock } from '@/lib/playback-clock';
+import { PlaybackTime } from '@/components/playback-time';
+import type { PlaybackClock } from '@/lib/playback-clock';
 
 export interface FootagePlayerPageProps {
   workshopId: string;
@@ -25,8 +26,10 @@ export interface FootagePlayerPageProps {
 
 /** The player as other tools see it: where it is, how long the footage is, and how to move it. */
 export interface FootagePlayerHandle {
-  currentMs: number;
-  /** The same time as a subscription, for a part that should re-render alone on each tick. */
+  /**
+   * Where the video is, as a subscription: only the parts that show the time subscribe (`usePlaybackMs`,
+   * `usePlaybackSelect`), so a time update never re-renders the page or the workspace.
+   */
   clock: PlaybackClock;
   durationMs: number | null;
   readPositionMs: () => number;
@@ -34,6 +37,8 @@ export interface FootagePlayerHandle {
   pause: () => void;
   /** Scrub previews (WebVTT thumbnails) and the audio's peaks, once the pipeline has made them. */
   media: { thumbnailsUrl: string | null; waveformUrl: string | null };
+  /** Where every hit of the transcript search starts (all of them, not one page), while there is a search. */
+  hitStartsMs?: readonly number[];
 }
 
 /** Under the marking tools the picture stays short enough that the controls below are in view. */
@@ -60,8 +65,25 @@ export function FootagePlayerPage({ workshopId, footageId, startAtMs, workspace:
   const transcript = useQuery({ ...transcriptQueries.active(workshopId, footageId), enabled: ready });
   const limits = useQuery(footageQueries.limits(workshopId));
   const player = useFootagePlayer();
-  const currentMs = usePlaybackMs(player.clock);
-  const seek = (ms: number) => player.seek(ms, { play: true });
+  // The page never reads the time itself: the badge, the playing cue and the workspace's playhead subscribe.
+  const [searchQuery, setSearchQuery] = useState('');
+  const moments = useQuery({ ...transcriptQueries.moments(workshopId, footageId, searchQuery), enabled: ready && searchQuery !== '' });
+  const hitStartsMs = searchQuery !== '' ? moments.data?.startMs : undefined;
+  const thumbnailsUrl = playback.data?.thumbnailsUrl ?? null;
+  const waveformUrl = playback.data?.waveformUrl ?? null;
+  const durationMs = footage.data?.durationMs ?? null;
+  const handle = useMemo<FootagePlayerHandle>(
+    () => ({
+      clock: player.clock,
+      durationMs,
+      readPositionMs: player.readPositionMs,
+      seek: (ms) => player.seek(ms, { play: true }),
+      pause: player.pause,
+      media: { thumbnailsUrl, waveformUrl },
+      hitStartsMs,
+    }),
+    [player, durationMs, thumbnailsUrl, waveformUrl, hitStartsMs],
+  );
 
   if (footage.isPending) return <Skeleton height={420} />;
   if (footage.isError) return <Alert color="red" title="Footage not found">{footage.error.message}</Alert>;
@@ -123,7 +145,7 @@ export function FootagePlayerPage({ workshopId, footageId, startAtMs, workspace:
             )}
             <Group gap="xs" mt="xs">
               <Badge variant="default" data-testid="player-position">
-                {formatClock(currentMs)}
+                <PlaybackTime clock={player.clock} />
               </Badge>
               {item.durationMs !== null && (
                 <Text size="xs" c="dimmed">
@@ -135,15 +157,7 @@ export function FootagePlayerPage({ workshopId, footageId, startAtMs, workspace:
               <Workspace
                 workshopId={workshopId}
                 footageId={footageId}
-                player={{
-                  currentMs,
-                  clock: player.clock,
-                  durationMs: item.durationMs,
-                  readPositionMs: player.readPositionMs,
-                  seek,
-                  pause: player.pause,
-                  media: { thumbnailsUrl: playback.data?.thumbnailsUrl ?? null, waveformUrl: playback.data?.waveformUrl ?? null },
-                }}
+                player={handle}
               />
             )}
           </Grid.Col>
@@ -157,9 +171,10 @@ export function FootagePlayerPage({ workshopId, footageId, startAtMs, workspace:
                 workshopId={workshopId}
                 footageId={footageId}
                 transcript={transcript.data}
-                currentMs={currentMs}
+                clock={player.clock}
                 transcriptMaxBytes={limits.data?.transcriptMaxBytes ?? 2_000_000}
-                onSeek={seek}
+                onSeek={handle.seek}
+                onSearchChange={setSearchQuery}
               />
             )}
           </Grid.Col>

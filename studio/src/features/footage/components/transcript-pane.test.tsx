@@ -1,6 +1,7 @@
-import { fireEvent, screen, waitFor } from '@testing-library/react';
+import { act, fireEvent, screen, waitFor } from '@testing-library/react';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { formatClock } from '@/lib/clock';
+import { createPlaybackClock } from '@/lib/playback-clock';
 import { stubApi } from '@/testing/api-stub';
 import { fakeScrollLayout } from '@/testing/fake-scroll-layout';
 import { renderWithProviders } from '@/testing/render';
@@ -52,7 +53,7 @@ describe('TranscriptPane search', () => {
     // 18 hits; the stub answers pages of 10 (the studio asks for 50), so a small list still has a second page.
     const seen = stubApi([{ path: /\/transcript\/search\?/, body: (request: { url: URL }) => searchPage({ url: withLimit(request.url, 10) }) }]);
     renderWithProviders(
-      <TranscriptPane workshopId="w1" footageId="f1" transcript={TRANSCRIPT} currentMs={0} transcriptMaxBytes={1_000_000} onSeek={() => {}} />,
+      <TranscriptPane workshopId="w1" footageId="f1" transcript={TRANSCRIPT} clock={createPlaybackClock()} transcriptMaxBytes={1_000_000} onSeek={() => {}} />,
     );
     fireEvent.change(screen.getByLabelText('Search this transcript'), { target: { value: 'spline' } });
 
@@ -102,8 +103,11 @@ describe('TranscriptPane cues', () => {
   });
   afterEach(() => vi.restoreAllMocks());
 
+  const clock = createPlaybackClock();
+  /** The pane with the video at `currentMs`: the clock moves first (as the player moves it), then the pane renders. */
   function pane(currentMs: number, onSeek: (ms: number) => void = () => {}) {
-    return <TranscriptPane workshopId="w1" footageId="f1" transcript={LONG_TRANSCRIPT} currentMs={currentMs} transcriptMaxBytes={1_000_000} onSeek={onSeek} />;
+    act(() => clock.set(currentMs));
+    return <TranscriptPane workshopId="w1" footageId="f1" transcript={LONG_TRANSCRIPT} clock={clock} transcriptMaxBytes={1_000_000} onSeek={onSeek} />;
   }
 
   it('draws only the cues in view of a 3,000-cue transcript, follows playback to the last cue, and lets the person scroll away', async () => {

@@ -1,8 +1,9 @@
 import { Anchor, Button, Group, Loader, Paper, Stack, Text, TextInput, Title, UnstyledButton } from '@mantine/core';
 import { useDebouncedValue, useDisclosure } from '@mantine/hooks';
 import { useInfiniteQuery } from '@tanstack/react-query';
-import { memo, useState } from 'react';
+import { memo, useEffect, useState } from 'react';
 import { BackToNow } from '@/components/back-to-now';
+import { usePlaybackSelect, type PlaybackClock } from '@/lib/playback-clock';
 import { useFollowingList } from '@/lib/use-follow-playback';
 import { useStableHandler } from '@/lib/use-stable-handler';
 import { downloadUrl, transcriptQueries } from '../api/queries';
@@ -22,9 +23,12 @@ export interface TranscriptPaneProps {
   workshopId: string;
   footageId: string;
   transcript: Transcript | null;
-  currentMs: number;
+  /** Where the video is; the pane re-renders only when the playing cue changes, not on every time update. */
+  clock: PlaybackClock;
   transcriptMaxBytes: number;
   onSeek: (ms: number) => void;
+  /** Told the search words once typing settles ('' when the search is cleared), e.g. to mark hits on a timeline. */
+  onSearchChange?: (query: string) => void;
 }
 
 const NO_CUES: Cue[] = [];
@@ -49,7 +53,7 @@ function activeCueRow(cues: Cue[], ms: number): number {
  * The transcript beside the player: cues that follow playback, search that jumps the player, attach and replace.
  * Only the cues in view are drawn, so a three-hour transcript costs what a short one does.
  */
-export function TranscriptPane({ workshopId, footageId, transcript, currentMs, transcriptMaxBytes, onSeek }: TranscriptPaneProps) {
+export function TranscriptPane({ workshopId, footageId, transcript, clock, transcriptMaxBytes, onSeek, onSearchChange }: TranscriptPaneProps) {
   const [attaching, { open, close }] = useDisclosure(false);
   const [query, setQuery] = useState('');
   const [debounced] = useDebouncedValue(query.trim(), 250);
@@ -61,8 +65,11 @@ export function TranscriptPane({ workshopId, footageId, transcript, currentMs, t
   const firstPage = search.data?.pages[0];
   const cues = transcript?.cues ?? NO_CUES;
   const showingCues = transcript !== null && debounced === '';
-  const active = activeCueRow(cues, currentMs);
+  const active = usePlaybackSelect(clock, (ms) => activeCueRow(cues, ms));
   const seek = useStableHandler(onSeek);
+  const reportSearch = useStableHandler((words: string) => onSearchChange?.(words));
+  const searched = transcript !== null ? debounced : '';
+  useEffect(() => reportSearch(searched), [reportSearch, searched]);
   const { following, box, rows, resume } = useFollowingList<HTMLDivElement>({
     count: cues.length,
     currentIndex: showingCues ? active : -1,

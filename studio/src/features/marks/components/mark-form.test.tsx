@@ -3,6 +3,7 @@ import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { stubApi, type StubRoute } from '@/testing/api-stub';
 import { fakeScrollLayout } from '@/testing/fake-scroll-layout';
 import { renderWithProviders } from '@/testing/render';
+import { createPlaybackClock } from '@/lib/playback-clock';
 import type { Mark } from '../api/queries';
 import { emptyLinks, MarkForm, type MarkDraft } from './mark-form';
 import { MarksList } from './marks-list';
@@ -260,7 +261,7 @@ describe('MarksList links', () => {
       mark('k3', { kind: 'check_evidence', fitCheckId: 'c2', label: 'Bolted up' }),
       mark('k4', { kind: 'caution', label: 'Stands under the truck' }),
     ];
-    renderWithProviders(<MarksList workshopId="w1" footageId="f1" marks={marks} currentMs={0} onSeek={() => {}} onEdit={() => {}} />);
+    renderWithProviders(<MarksList workshopId="w1" footageId="f1" marks={marks} clock={createPlaybackClock()} onSeek={() => {}} onEdit={() => {}} />);
     const rows = screen.getAllByTestId('mark-row');
     const linkOf = async (row: HTMLElement) => within(row).findByTestId('mark-link');
     expect((await linkOf(rows[0])).textContent).toBe('→ HL-2107');
@@ -282,7 +283,7 @@ describe('MarksList links', () => {
       ]),
     );
     const marks = [mark('k5', { kind: 'step', guideStepId: 's2' }), mark('k6', { kind: 'step', guideStepId: 's9' })];
-    renderWithProviders(<MarksList workshopId="w1" footageId="f1" marks={marks} currentMs={0} onSeek={() => {}} onEdit={() => {}} />);
+    renderWithProviders(<MarksList workshopId="w1" footageId="f1" marks={marks} clock={createPlaybackClock()} onSeek={() => {}} onEdit={() => {}} />);
     const [linked, gone] = screen.getAllByTestId('mark-row');
     const link = await within(linked).findByTestId('mark-link');
     expect(link.textContent).toBe('→ Coupler install · 2. Seat the coupler');

@@ -1,6 +1,7 @@
-import { fireEvent, screen, waitFor } from '@testing-library/react';
+import { act, fireEvent, screen, waitFor } from '@testing-library/react';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { formatClock } from '@/lib/clock';
+import { createPlaybackClock } from '@/lib/playback-clock';
 import { stubApi } from '@/testing/api-stub';
 import { fakeScrollLayout } from '@/testing/fake-scroll-layout';
 import { renderWithProviders } from '@/testing/render';
@@ -51,8 +52,12 @@ const SUGGESTIONS: MarkSuggestion[] = Array.from({ length: 289 }, (_, index) => 
   markId: null,
 }));
 
+const clock = createPlaybackClock();
+
+/** The list with the video at `currentMs`: the clock moves first (as the player moves it), then the list renders. */
 function list(currentMs: number, onSeek: (ms: number) => void = () => {}) {
-  return <MarksList workshopId="w1" footageId="f1" marks={MARKS} currentMs={currentMs} onSeek={onSeek} onEdit={() => {}} />;
+  act(() => clock.set(currentMs));
+  return <MarksList workshopId="w1" footageId="f1" marks={MARKS} clock={clock} onSeek={onSeek} onEdit={() => {}} />;
 }
 
 const rowsDrawn = () => screen.queryAllByTestId('mark-row');
@@ -112,7 +117,7 @@ describe('SuggestionsPanel at three hours', () => {
 
   it('draws only the suggestions in view of 289 and reaches the last one', async () => {
     stubApi([{ path: /\/mark-suggestions/, body: SUGGESTIONS }]);
-    renderWithProviders(<SuggestionsPanel workshopId="w1" footageId="f1" currentMs={0} onSeek={() => {}} />);
+    renderWithProviders(<SuggestionsPanel workshopId="w1" footageId="f1" clock={createPlaybackClock()} onSeek={() => {}} />);
     expect(await screen.findByText('“reading 0”')).toBeTruthy();
     expect(screen.getByText('289')).toBeTruthy();
     expect(screen.getAllByTestId('suggestion-row').length).toBeLessThan(40);

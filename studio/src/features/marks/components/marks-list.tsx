@@ -4,6 +4,7 @@ import { BackToNow } from '@/components/back-to-now';
 import { ConfirmButton } from '@/components/confirm-button';
 import { formatClock } from '@/lib/clock';
 import { notifyError } from '@/lib/notify';
+import { usePlaybackSelect, type PlaybackClock } from '@/lib/playback-clock';
 import { useFollowingList } from '@/lib/use-follow-playback';
 import { useStableHandler } from '@/lib/use-stable-handler';
 import { useRemoveMark } from '../api/mutations';
@@ -21,7 +22,7 @@ export interface MarksListProps {
   footageId: string;
   marks: Mark[];
   /** The playing moment: the last mark at or before it is highlighted and kept in view while following. */
-  currentMs: number;
+  clock: PlaybackClock;
   onSeek: (ms: number) => void;
   onEdit: (mark: Mark) => void;
 }
@@ -48,11 +49,12 @@ export function lastStartedAt(rows: readonly { startMs: number }[], ms: number):
  * the list follows playback until the person scrolls it, and a time update draws again only the rows whose
  * highlight changes.
  */
-export function MarksList({ workshopId, footageId, marks, currentMs, onSeek, onEdit }: MarksListProps) {
+export function MarksList({ workshopId, footageId, marks, clock, onSeek, onEdit }: MarksListProps) {
   const [kind, setKind] = useState<MarkKind | 'all'>('all');
   const remove = useRemoveMark(workshopId, footageId);
   const shown = useMemo(() => (kind === 'all' ? marks : marks.filter((mark) => mark.kind === kind)), [marks, kind]);
-  const active = lastStartedAt(shown, currentMs);
+  // Re-renders when the highlighted row changes, not on every time update.
+  const active = usePlaybackSelect(clock, (ms) => lastStartedAt(shown, ms));
   const seek = useStableHandler(onSeek);
   const edit = useStableHandler(onEdit);
   const removeMark = useStableHandler((mark: Mark) =>

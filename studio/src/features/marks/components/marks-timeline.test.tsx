@@ -1,6 +1,7 @@
-import { fireEvent, screen } from '@testing-library/react';
+import { act, fireEvent, screen } from '@testing-library/react';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { formatClock } from '@/lib/clock';
+import { createPlaybackClock } from '@/lib/playback-clock';
 import { renderWithProviders } from '@/testing/render';
 import type { Mark } from '../api/queries';
 import { MarksTimeline } from './marks-timeline';
@@ -32,8 +33,12 @@ const MARKS: Mark[] = Array.from({ length: 400 }, (_, index) => ({
   updatedAt: '2026-12-01T10:00:00.000Z',
 }));
 
+const clock = createPlaybackClock();
+
+/** The timeline with the video at `currentMs`: the clock moves first (as the player moves it), then it renders. */
 function timeline(currentMs: number, props: Partial<Parameters<typeof MarksTimeline>[0]> = {}) {
-  return <MarksTimeline marks={MARKS} durationMs={THREE_HOURS} currentMs={currentMs} onSeek={() => {}} {...props} />;
+  act(() => clock.set(currentMs));
+  return <MarksTimeline marks={MARKS} durationMs={THREE_HOURS} clock={clock} onSeek={() => {}} {...props} />;
 }
 
 const strip = () => screen.getByTestId('marks-timeline');
@@ -143,5 +148,11 @@ describe('MarksTimeline', () => {
     expect(formatted.length).toBeGreaterThan(0);
     expect(formatted.every((ms) => ms === THREE_HOURS)).toBe(true);
     expect(screen.getByTestId('timeline-playhead').style.left).toBe(`${(500 / THREE_HOURS) * 100}%`);
+    // Time updates alone (no new props): the strip does not render at all, only the playhead moves.
+    vi.mocked(formatClock).mockClear();
+    act(() => clock.set(750));
+    act(() => clock.set(1_000));
+    expect(formatClock).not.toHaveBeenCalled();
+    expect(screen.getByTestId('timeline-playhead').style.left).toBe(`${(1_000 / THREE_HOURS) * 100}%`);
   });
 });

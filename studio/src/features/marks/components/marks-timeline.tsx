@@ -1,7 +1,8 @@
 import { ActionIcon, Group, Text, Tooltip } from '@mantine/core';
-import { memo, useCallback, useEffect, useMemo, useRef, useState, type KeyboardEvent, type PointerEvent, type ReactNode } from 'react';
+import { memo, useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState, type KeyboardEvent, type PointerEvent, type ReactNode } from 'react';
 import { MARK_KINDS, type Mark } from '../api/queries';
 import { formatClock } from '@/lib/clock';
+import { usePlaybackSelect, type PlaybackClock } from '@/lib/playback-clock';
 import { useStableHandler } from '@/lib/use-stable-handler';
 import { KindShape } from './kind-shape';
 import { KIND_LOOK } from './mark-kinds';
@@ -34,7 +35,8 @@ const KEY_PAN = 0.25;
 export interface MarksTimelineProps {
   marks: Mark[];
   durationMs: number;
-  currentMs: number;
+  /** Where the video is: the playhead subscribes; the strip re-renders only when the view must turn to follow it. */
+  clock: PlaybackClock;
   onSeek: (ms: number) => void;
   /** Start times of the transcript search hits, drawn as a density band over the strip. */
   hitStartsMs?: readonly number[];
@@ -65,17 +67,28 @@ function useMeasuredStrip(): { strip: HTMLDivElement | null; width: number; ref:
  * keys, a sideways wheel or the minimap below; search hits shown as a density band. Only what is in view is drawn,
  * and a time update moves the playhead alone.
  */
-export function MarksTimeline({ marks, durationMs, currentMs, onSeek, hitStartsMs, renderLanes, renderHoverPreview }: MarksTimelineProps) {
+export function MarksTimeline({ marks, durationMs, clock, onSeek, hitStartsMs, renderLanes, renderHoverPreview }: MarksTimelineProps) {
   const { strip, width, ref: stripRef } = useMeasuredStrip();
   const [view, setView] = useState<TimelineView>(() => wholeView(durationMs));
   const [hoverMs, setHoverMs] = useState<number | null>(null);
-  // The view follows the playhead as it moves: adjusted while rendering, so no second pass paints a stale view.
-  const [followedMs, setFollowedMs] = useState(currentMs);
-  if (followedMs !== currentMs) {
-    setFollowedMs(currentMs);
-    const next = followPlayhead(view, followedMs, currentMs, durationMs);
-    if (next !== view) setView(next);
-  }
+  // The view follows the playhead as it moves. Listening to the clock here (not reading it while rendering) means a
+  // time update re-renders the strip only when the view turns a page; otherwise only the playhead moves.
+  const viewRef = useRef(view);
+  useLayoutEffect(() => {
+    viewRef.current = view;
+  }, [view]);
+  useEffect(() => {
+    let previousMs = clock.getMs();
+    return clock.subscribe(() => {
+      const currentMs = clock.getMs();
+      const next = followPlayhead(viewRef.current, previousMs, currentMs, durationMs);
+      previousMs = currentMs;
+      if (next !== viewRef.current) {
+        viewRef.current = next;
+        setView(next);
+      }
+    });
+  }, [clock, durationMs]);
 
   // React's wheel listener is passive; zooming must stop the page from scrolling, so listen natively.
   useEffect(() => {
@@ -107,7 +120,7 @@ export function MarksTimeline({ marks, durationMs, currentMs, onSeek, hitStartsM
   // Zooming by key or button keeps the playhead where it is, if it is in view; otherwise the middle.
   const zoomAroundPlayhead = (factor: number) =>
     setView((current) => {
-      const anchor = positionOf(currentMs, current);
+      const anchor = positionOf(clock.getMs(), current);
       return zoomView(current, factor, anchor >= 0 && anchor <= 1 ? anchor : 0.5, durationMs);
     });
   const handleSeek = useStableHandler(onSeek);
@@ -138,8 +151,6 @@ export function MarksTimeline({ marks, durationMs, currentMs, onSeek, hitStartsM
     const box = event.currentTarget.getBoundingClientRect();
     setHoverMs(timeAt(event.clientX - box.left, box.width, view));
   };
-
-  const playheadAt = positionOf(currentMs, view);
 
   return (
     <div>
@@ -187,13 +198,7 @@ export function MarksTimeline({ marks, durationMs, currentMs, onSeek, hitStartsM
       >
         {density && <DensityBand counts={density} />}
         <MarkerLayer clusters={clusters} byId={byId} top={density ? DENSITY_HEIGHT : 0} onSeek={handleSeek} onOpenCluster={handleOpenCluster} />
-        {playheadAt >= 0 && playheadAt <= 1 && (
-          <div
-            aria-hidden
-            data-testid="timeline-playhead"
-            style={{ position: 'absolute', left: `${playheadAt * 100}%`, top: 0, bottom: 0, width: 2, background: 'var(--mantine-color-red-7)', pointerEvents: 'none' }}
-          />
-        )}
+        <Playhead clock={clock} view={view} />
         {hoverMs !== null && renderHoverPreview && (
           <div style={{ position: 'absolute', left: `${positionOf(hoverMs, view) * 100}%`, bottom: '100%', transform: 'translateX(-50%)', pointerEvents: 'none', zIndex: 2 }}>
             {renderHoverPreview(hoverMs)}
@@ -201,7 +206,7 @@ export function MarksTimeline({ marks, durationMs, currentMs, onSeek, hitStartsM
         )}
       </div>
       {renderLanes?.(view)}
-      <Minimap marks={marks} durationMs={durationMs} view={view} currentMs={currentMs} onCentre={(ms) => setView((current) => centreView(current, ms, durationMs))} />
+      <Minimap marks={marks} durationMs={durationMs} view={view} clock={clock} onCentre={(ms) => setView((current) => centreView(current, ms, durationMs))} />
       <Group gap="md" mt={4}>
         {MARK_KINDS.map((kind) => (
           <Group key={kind} gap={4}>
@@ -213,6 +218,19 @@ export function MarksTimeline({ marks, durationMs, currentMs, onSeek, hitStartsM
         ))}
       </Group>
     </div>
+  );
+}
+
+/** The red line at the playing moment: the one part of the strip that re-renders on a time update. */
+function Playhead({ clock, view }: { clock: PlaybackClock; view: TimelineView }) {
+  const at = usePlaybackSelect(clock, (ms) => positionOf(ms, view));
+  if (at < 0 || at > 1) return null;
+  return (
+    <div
+      aria-hidden
+      data-testid="timeline-playhead"
+      style={{ position: 'absolute', left: `${at * 100}%`, top: 0, bottom: 0, width: 2, background: 'var(--mantine-color-red-7)', pointerEvents: 'none' }}
+    />
   );
 }
 
@@ -327,12 +345,12 @@ interface MinimapProps {
   marks: Mark[];
   durationMs: number;
   view: TimelineView;
-  currentMs: number;
+  clock: PlaybackClock;
   onCentre: (ms: number) => void;
 }
 
 /** The whole footage in a thin bar with the stretch in view outlined; press or drag on it to move the view there. */
-function Minimap({ marks, durationMs, view, currentMs, onCentre }: MinimapProps) {
+function Minimap({ marks, durationMs, view, clock, onCentre }: MinimapProps) {
   const whole = useMemo(() => wholeView(durationMs), [durationMs]);
   const ticks = useMemo(() => clusterMarks(marks, whole, 1_000, 2), [marks, whole]);
   const dragging = useRef(false);
@@ -371,18 +389,15 @@ function Minimap({ marks, durationMs, view, currentMs, onCentre }: MinimapProps)
           boxSizing: 'border-box',
         }}
       />
-      <span
-        style={{
-          position: 'absolute',
-          left: `${Math.min(1, Math.max(0, positionOf(currentMs, whole))) * 100}%`,
-          top: 0,
-          bottom: 0,
-          width: 1,
-          background: 'var(--mantine-color-red-7)',
-        }}
-      />
+      <MinimapPlayhead clock={clock} whole={whole} />
     </div>
   );
+}
+
+/** The playing moment on the minimap; subscribes alone, like the strip's playhead. */
+function MinimapPlayhead({ clock, whole }: { clock: PlaybackClock; whole: TimelineView }) {
+  const at = usePlaybackSelect(clock, (ms) => Math.min(1, Math.max(0, positionOf(ms, whole))));
+  return <span style={{ position: 'absolute', left: `${at * 100}%`, top: 0, bottom: 0, width: 1, background: 'var(--mantine-color-red-7)' }} />;
 }
 
 /** A hairline per mark (or per few, where they crowd) across the whole footage; memoised apart from the moving view. */

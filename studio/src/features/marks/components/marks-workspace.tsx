@@ -6,7 +6,8 @@ import { markQueries, type Mark, type MarkSuggestion } from '../api/queries';
 import { MARKING_SHORTCUTS, useMarkingShortcuts } from '../hooks/marking-shortcuts';
 import { ScrubFrame, useThumbnailTiles } from '@/components/scrub-preview';
 import { useWaveform, WaveformLane } from '@/components/waveform-lane';
-import { formatClock } from '@/lib/clock';
+import { PlaybackTime } from '@/components/playback-time';
+import type { PlaybackClock } from '@/lib/playback-clock';
 import { draftOf, emptyLinks, MarkForm, type MarkDraft, type SpokenReading } from './mark-form';
 import { MarksList } from './marks-list';
 import { MarksTimeline } from './marks-timeline';
@@ -14,7 +15,8 @@ import { SuggestionsPanel } from './suggestions-panel';
 
 /** What the workspace needs from the player it sits under (the footage feature's page, composed in app/routes). */
 export interface MarkingPlayer {
-  currentMs: number;
+  /** Where the video is, as a subscription: only the playhead, the pin button's time and the playing rows read it. */
+  clock: PlaybackClock;
   durationMs: number | null;
   /** Reads the video's position at this instant (more exact than the last time update). */
   readPositionMs: () => number;
@@ -22,6 +24,8 @@ export interface MarkingPlayer {
   pause: () => void;
   /** Scrub previews (WebVTT thumbnails) and the audio's peaks, once the media pipeline has made them. */
   media?: { thumbnailsUrl: string | null; waveformUrl: string | null };
+  /** Where every hit of the transcript search starts, while there is a search: drawn as a density band. */
+  hitStartsMs?: readonly number[];
 }
 
 export interface MarksWorkspaceProps {
@@ -72,15 +76,16 @@ export function MarksWorkspace({ workshopId, footageId, player }: MarksWorkspace
           key={player.durationMs}
           marks={marks.data ?? NO_MARKS}
           durationMs={player.durationMs}
-          currentMs={player.currentMs}
+          clock={player.clock}
           onSeek={player.seek}
+          hitStartsMs={player.hitStartsMs}
           renderLanes={waveform ? (view) => <WaveformLane waveform={waveform} fromMs={view.startMs} toMs={view.endMs} /> : undefined}
           renderHoverPreview={thumbnailTiles.length > 0 ? (atMs) => <ScrubFrame tiles={thumbnailTiles} atMs={atMs} /> : undefined}
         />
       )}
       <Group gap="xs">
         <Button onClick={handlers.pin} data-testid="pin-mark">
-          Pin a mark at {formatClock(player.currentMs, { tenths: true })}
+          Pin a mark at <PlaybackTime clock={player.clock} tenths />
         </Button>
         <Button variant="subtle" onClick={help.open}>
           Keys <Kbd ml={6}>?</Kbd>
@@ -90,11 +95,11 @@ export function MarksWorkspace({ workshopId, footageId, player }: MarksWorkspace
         workshopId={workshopId}
         footageId={footageId}
         marks={marks.data ?? NO_MARKS}
-        currentMs={player.currentMs}
+        clock={player.clock}
         onSeek={player.seek}
         onEdit={(mark) => setDraft(draftOf(mark))}
       />
-      <SuggestionsPanel workshopId={workshopId} footageId={footageId} currentMs={player.currentMs} onSeek={player.seek} />
+      <SuggestionsPanel workshopId={workshopId} footageId={footageId} clock={player.clock} onSeek={player.seek} />
       <MarkForm workshopId={workshopId} footageId={footageId} draft={draft} onClose={() => setDraft(null)} />
       <Modal opened={helpOpen} onClose={help.close} title="Marking keys">
         <Table>

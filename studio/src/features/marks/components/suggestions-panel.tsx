@@ -3,6 +3,7 @@ import { useQuery } from '@tanstack/react-query';
 import { memo, useState } from 'react';
 import { BackToNow } from '@/components/back-to-now';
 import { notifyDone, notifyError } from '@/lib/notify';
+import { usePlaybackSelect, type PlaybackClock } from '@/lib/playback-clock';
 import { useFollowingList } from '@/lib/use-follow-playback';
 import { useStableHandler } from '@/lib/use-stable-handler';
 import { useAcceptSuggestion, useDismissSuggestion } from '../api/mutations';
@@ -20,7 +21,7 @@ export interface SuggestionsPanelProps {
   workshopId: string;
   footageId: string;
   /** The playing moment: the last suggestion at or before it is highlighted and kept in view while following. */
-  currentMs: number;
+  clock: PlaybackClock;
   onSeek: (ms: number) => void;
 }
 
@@ -28,13 +29,14 @@ export interface SuggestionsPanelProps {
  * What the transcript miner found: accept to make the mark (and the reading), dismiss for good. Only the rows in
  * view are drawn, and the list follows playback until the person scrolls it.
  */
-export function SuggestionsPanel({ workshopId, footageId, currentMs, onSeek }: SuggestionsPanelProps) {
+export function SuggestionsPanel({ workshopId, footageId, clock, onSeek }: SuggestionsPanelProps) {
   const suggestions = useQuery(markQueries.suggestions(workshopId, footageId));
   const accept = useAcceptSuggestion(workshopId, footageId);
   const dismiss = useDismissSuggestion(workshopId, footageId);
   const [reading, setReading] = useState<MarkSuggestion | null>(null);
   const items = suggestions.data ?? NO_SUGGESTIONS;
-  const active = lastStartedAt(items, currentMs);
+  // Re-renders when the highlighted row changes, not on every time update.
+  const active = usePlaybackSelect(clock, (ms) => lastStartedAt(items, ms));
   const acceptingId = accept.isPending ? (accept.variables?.id ?? null) : null;
 
   const seek = useStableHandler(onSeek);
