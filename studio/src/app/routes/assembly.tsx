@@ -22,7 +22,7 @@ export function AssemblyRoute() {
 
   return (
     <WorkshopGate workshopId={workshopId}>
-      {() => (
+      {(workshop) => (
         <Stack gap="lg">
           <AssemblyHeader workshopId={workshopId} assemblyId={assemblyId} buildTitle={build.data?.title} />
           <Tabs
@@ -35,7 +35,11 @@ export function AssemblyRoute() {
               <Tabs.Tab value="build">Parts and interfaces</Tabs.Tab>
             </Tabs.List>
             <Tabs.Panel value="checklist" pt="md">
-              <Checklist workshopId={workshopId} assemblyId={assemblyId} />
+              <Checklist
+                workshopId={workshopId}
+                assemblyId={assemblyId}
+                canRetryFitNews={workshop.role === 'owner' && !workshop.disabled}
+              />
             </Tabs.Panel>
             <Tabs.Panel value="build" pt="md">
               <AssemblyBuilder

@@ -80,7 +80,16 @@ export function VerdictBanner({ verdict, checks }: { verdict: ChecklistVerdict; 
 }
 
 /** The verified-fit checklist of one assembly: the roll-up verdict, then each check with its numbers, picture and evidence. */
-export function Checklist({ workshopId, assemblyId }: { workshopId: string; assemblyId: string }) {
+export function Checklist({
+  workshopId,
+  assemblyId,
+  canRetryFitNews = false,
+}: {
+  workshopId: string;
+  assemblyId: string;
+  /** Owners may send a check's failed fit news again, from its history. */
+  canRetryFitNews?: boolean;
+}) {
   const checklist = useQuery(fitCheckQueries.checklist(workshopId, assemblyId));
   const assembly = useQuery(fitCheckQueries.assembly(workshopId, assemblyId));
   const readings = useQuery(fitCheckQueries.readings(workshopId));
@@ -144,7 +153,7 @@ export function Checklist({ workshopId, assemblyId }: { workshopId: string; asse
         />
       ))}
       <TransitionModal workshopId={workshopId} request={transition} onClose={() => setTransition(null)} />
-      <HistoryDrawer workshopId={workshopId} check={historyOf} onClose={() => setHistoryOf(null)} />
+      <HistoryDrawer workshopId={workshopId} check={historyOf} onClose={() => setHistoryOf(null)} canRetryFitNews={canRetryFitNews} />
     </Stack>
   );
 }
