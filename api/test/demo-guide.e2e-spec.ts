@@ -41,7 +41,7 @@ describe('demo guide (real MariaDB, Redis, S3 fake)', () => {
 
     const index = await request(app.getHttpServer()).get('/api/guides').query({ q: 'coupler stack' }).expect(200);
     const entry = index.body.find((item: { title: string; workshop: { name: string } }) => item.title === DEMO_GUIDE_TITLE && item.workshop.name === 'Harrow Lane Garage');
-    expect(entry).toMatchObject({ revision: 1, stepCount: 6 });
+    expect(entry).toMatchObject({ revision: 1, stepCount: 6, skillLevel: 'seasoned_fitter', estimatedMinutes: 180 });
 
     const view = await request(app.getHttpServer()).get(`/api${entry.path}`).expect(200);
     expect(view.body.cautions.map((caution: { level: string; topic: string }) => `${caution.level} ${caution.topic}`)).toEqual([
@@ -51,6 +51,8 @@ describe('demo guide (real MariaDB, Redis, S3 fake)', () => {
     ]);
     expect(view.body.footage).toMatchObject({ videoUrl: `/api${entry.path}/video`, captionsUrl: `/api${entry.path}/captions.vtt` });
     expect(view.body.checklist.assemblyName).toBe('21-tooth coupler stack');
+    expect(view.body.guide).toMatchObject({ skillLevel: 'seasoned_fitter', estimatedMinutes: 180 });
+    expect(view.body.steps.map((step: { estimatedMinutes: number | null }) => step.estimatedMinutes)).toEqual([30, 10, 20, 25, 35, 30]);
     expect(view.body.parts.length).toBeGreaterThan(1);
     // Steps follow the narration: each starts later than the one before.
     const starts = view.body.steps.map((step: { startMs: number }) => step.startMs);

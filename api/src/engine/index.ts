@@ -23,3 +23,4 @@ export * from './mark-suggestions';
 
 // ---- guides ----
 export * from './safety-topics';
+export * from './guide-effort';

@@ -1,5 +1,6 @@
 import { createHash } from 'node:crypto';
 import type { MarkKind } from '../marks/entities/mark.entity';
+import type { SkillLevel } from '../engine/guide-effort';
 import type { CautionLevel, SafetyTopic } from '../engine/safety-topics';
 import type { Guide } from './entities/guide.entity';
 import type { GuideStep } from './entities/guide-step.entity';
@@ -14,6 +15,9 @@ export interface GuideContent {
   safetyTopics: SafetyTopic[];
   tools: string[];
   consumables: string[];
+  /** Absent (not null) when not given, so revisions published before these fields existed keep their hash. */
+  skillLevel?: SkillLevel;
+  estimatedMinutes?: number;
   steps: GuideStepContent[];
   /** Marks tied to the steps when the revision was published. */
   stepMarks: GuideMarkContent[];
@@ -28,6 +32,8 @@ export interface GuideStepContent {
   startMs: number | null;
   endMs: number | null;
   caution: { level: CautionLevel; text: string } | null;
+  /** Absent when not given (see GuideContent.skillLevel). */
+  estimatedMinutes?: number;
 }
 
 export interface GuideMarkContent {
@@ -51,6 +57,7 @@ export function stepContent(step: GuideStep): GuideStepContent {
     startMs: step.startMs,
     endMs: step.endMs,
     caution: step.cautionLevel ? { level: step.cautionLevel, text: step.cautionText } : null,
+    ...(step.estimatedMinutes !== null ? { estimatedMinutes: step.estimatedMinutes } : {}),
   };
 }
 
@@ -64,6 +71,8 @@ export function guideContent(guide: Guide, steps: GuideStep[], stepMarks: GuideM
     safetyTopics: guide.safetyTopics,
     tools: guide.tools,
     consumables: guide.consumables,
+    ...(guide.skillLevel !== null ? { skillLevel: guide.skillLevel } : {}),
+    ...(guide.estimatedMinutes !== null ? { estimatedMinutes: guide.estimatedMinutes } : {}),
     steps: steps.map(stepContent),
     stepMarks,
   };

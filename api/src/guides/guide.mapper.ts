@@ -38,12 +38,14 @@ export function toGuideSummary(guide: Guide, state: GuideState, workshopSlug: st
     slug: guide.slug,
     ...publication(guide, state, workshopSlug),
     stepCount: state.steps.length,
+    skillLevel: guide.skillLevel,
+    estimatedMinutes: guide.estimatedMinutes,
     updatedAt: guide.updatedAt.toISOString(),
   };
 }
 
 export function toStepResponse(step: GuideStep, marks: Mark[]) {
-  return { ...stepContent(step), marks: marks.map(toMarkResponse) };
+  return { ...stepContent(step), estimatedMinutes: step.estimatedMinutes, marks: marks.map(toMarkResponse) };
 }
 
 export function toGuideResponse(
@@ -66,6 +68,8 @@ export function toGuideResponse(
     detectedSafetyTopics,
     tools: guide.tools,
     consumables: guide.consumables,
+    skillLevel: guide.skillLevel,
+    estimatedMinutes: guide.estimatedMinutes,
     ...publication(guide, state, workshopSlug),
     steps,
     createdAt: guide.createdAt.toISOString(),

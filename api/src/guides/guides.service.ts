@@ -58,6 +58,8 @@ export class GuidesService {
       safetyTopics: [],
       tools: [],
       consumables: [],
+      skillLevel: null,
+      estimatedMinutes: null,
       publishedRevisionId: null,
       createdBy: userId,
     });
@@ -108,6 +110,7 @@ export class GuidesService {
       endMs: null,
       cautionLevel: null,
       cautionText: '',
+      estimatedMinutes: null,
     });
     await this.applyStepFields(guide, step, input);
     await this.steps.save(step);
@@ -286,6 +289,8 @@ export class GuidesService {
     if (input.safetyTopics !== undefined) guide.safetyTopics = input.safetyTopics;
     if (input.tools !== undefined) guide.tools = input.tools.map((item) => item.trim());
     if (input.consumables !== undefined) guide.consumables = input.consumables.map((item) => item.trim());
+    if (input.skillLevel !== undefined) guide.skillLevel = input.skillLevel;
+    if (input.estimatedMinutes !== undefined) guide.estimatedMinutes = input.estimatedMinutes;
   }
 
   private async applyStepFields(guide: Guide, step: GuideStep, input: StepFieldsDto): Promise<void> {
@@ -297,6 +302,7 @@ export class GuidesService {
     if (input.footageId !== undefined) step.footageId = input.footageId;
     if (input.startMs !== undefined) step.startMs = input.startMs;
     if (input.endMs !== undefined) step.endMs = input.endMs;
+    if (input.estimatedMinutes !== undefined) step.estimatedMinutes = input.estimatedMinutes;
     if (step.startMs === null) {
       step.endMs = null;
     } else {

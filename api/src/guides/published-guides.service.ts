@@ -4,6 +4,7 @@ import { In, IsNull, Repository } from 'typeorm';
 import { AssembliesService } from '../assemblies/assemblies.service';
 import { Build } from '../builds/entities/build.entity';
 import { detectSafetyTopics, GUIDE_DISCLAIMER, SAFETY_TOPICS, standardCautions } from '../engine/safety-topics';
+import type { SkillLevel } from '../engine/guide-effort';
 import { formatLength } from '../engine/units';
 import { entityTagOf } from '../common/http/entity-tag';
 import { Footage } from '../footage/entities/footage.entity';
@@ -27,7 +28,7 @@ import { PublishedGuideCache, type CachedAnswer } from './published-guide-cache'
 const MEDIA_URL_TTL_SECONDS = 60 * 60;
 const INDEX_LIMIT = 50;
 /** Part of every tag: change it when the answers' shape changes, so no cache keeps the old shape. */
-const ANSWER_SHAPE = 'public-guides-2';
+const ANSWER_SHAPE = 'public-guides-3';
 
 interface PublishedGuide {
   workshop: Workshop;
@@ -100,6 +101,8 @@ export class PublishedGuidesService {
       .addSelect("JSON_VALUE(revision.content, '$.title')", 'title')
       .addSelect("JSON_LENGTH(revision.content, '$.steps')", 'stepCount')
       .addSelect("JSON_VALUE(revision.content, '$.footageId')", 'footageId')
+      .addSelect("JSON_VALUE(revision.content, '$.skillLevel')", 'skillLevel')
+      .addSelect("JSON_VALUE(revision.content, '$.estimatedMinutes')", 'estimatedMinutes')
       .orderBy('revision.published_at', 'DESC')
       .limit(INDEX_LIMIT);
     for (const [index, word] of (query ?? '').trim().split(/\s+/).filter(Boolean).slice(0, 8).entries()) {
@@ -119,6 +122,8 @@ export class PublishedGuidesService {
       title: string;
       stepCount: number;
       footageId: string | null;
+      skillLevel: SkillLevel | null;
+      estimatedMinutes: string | number | null;
     }>();
     const posters = await this.footageWithPosters(rows.map((row) => row.footageId).filter((id): id is string => !!id));
     return rows.map((row) => {
@@ -131,6 +136,8 @@ export class PublishedGuidesService {
         publishedAt: new Date(row.publishedAt).toISOString(),
         revision: Number(row.revision),
         stepCount: Number(row.stepCount),
+        skillLevel: row.skillLevel ?? null,
+        estimatedMinutes: row.estimatedMinutes === null || row.estimatedMinutes === undefined ? null : Number(row.estimatedMinutes),
         posterUrl: row.footageId && posters.has(row.footageId) ? `/api${path}/poster` : null,
         path,
       };
@@ -157,6 +164,8 @@ export class PublishedGuidesService {
         tools: content.tools,
         consumables: content.consumables,
         safetyTopics: topics,
+        skillLevel: content.skillLevel ?? null,
+        estimatedMinutes: content.estimatedMinutes ?? null,
       },
       revision: { number: revision.number, publishedAt: revision.publishedAt.toISOString(), note: revision.note },
       cautions: standardCautions(topics),
@@ -174,7 +183,7 @@ export class PublishedGuidesService {
               ...(await this.footageMedia.playbackMedia(footage, { basePath }, `${basePath}/video`)),
             }
           : null,
-      steps: content.steps,
+      steps: content.steps.map((step) => ({ ...step, estimatedMinutes: step.estimatedMinutes ?? null })),
       cues: transcript
         ? (await this.cues.find({ where: { transcriptId: transcript.id }, order: { cueIndex: 'ASC' } })).map((cue) => ({
             startMs: cue.startMs,

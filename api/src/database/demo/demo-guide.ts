@@ -20,6 +20,8 @@ import { DEMO_FOOTAGE_TITLE } from './demo-footage';
  */
 export const DEMO_GUIDE_TITLE = 'Fitting the 21-tooth coupler stack';
 const DEMO_ASSEMBLY_NAME = '21-tooth coupler stack';
+/** High-voltage isolation and readings to the tenth: not a first job. Three hours, the steps' 2 h 30 min plus set-up and clean-up. */
+const DEMO_EFFORT = { skillLevel: 'seasoned_fitter', estimatedMinutes: 180 } as const;
 
 interface DemoStep extends Omit<CreateStepDto, 'startMs' | 'endMs' | 'footageId'> {
   /** A phrase of the cue where the step starts. */
@@ -31,34 +33,40 @@ interface DemoStep extends Omit<CreateStepDto, 'startMs' | 'endMs' | 'footageId'
 const DEMO_STEPS: DemoStep[] = [
   {
     title: 'Make the truck safe to work under',
+    estimatedMinutes: 30,
     cue: 'Welcome back',
     body: '<p>Raise the pickup at the lifting points and hold it on axle stands. Isolate the traction battery and prove it dead before reaching near the motor.</p>',
     caution: { level: 'DANGER', text: 'The traction battery stays live until it is isolated and proven dead with a meter rated for it.' },
   },
   {
     title: 'Count the splines on both sides',
+    estimatedMinutes: 10,
     cue: 'First, the spline',
     body: '<p>Count the coupler’s teeth and the gearbox input shaft’s. Both must be <strong>21 teeth at 16/32 pitch</strong>; the 27-tooth catalogue coupler does not fit this shaft.</p>',
     mark: 'Counting the coupler’s 21 teeth',
   },
   {
     title: 'Seat the coupler and check end float',
+    estimatedMinutes: 20,
     cue: 'With the coupler seated',
     body: '<p>Slide the coupler onto the motor shaft by hand, never with a hammer. With it seated, a feeler gauge at the motor face should show about 0.015 in of end float.</p>',
     mark: 'Feeler gauge at the motor face',
   },
   {
     title: 'Check the pilot bearing bore against the pilot nose',
+    estimatedMinutes: 25,
     cue: 'Next, the pilot bearing bore',
     body: '<p>Measure the bore with a bore gauge and the pilot nose with a micrometer. Expect a sliding fit: H7/g6 at 15 mm gives 6 to 35 µm of clearance (ISO 286-2: H7 +18/0, g6 −6/−17), about 0.2 to 1.4 thou.</p>',
   },
   {
     title: 'Check the driveshaft sits inside its window',
+    estimatedMinutes: 35,
     cue: 'Last, the driveshaft window',
     body: '<p>Compare the slip yoke’s travel with the installed length at bump and at droop; keep at least 5 mm of plunge margin at each end.</p>',
   },
   {
     title: 'Bolt up and turn it by hand',
+    estimatedMinutes: 30,
     cue: 'Bolted up on the truck',
     body: '<p>Torque the adapter plate bolts to the figure in the motor maker’s instructions, then turn the input by hand: it should turn freely with no tight spot.</p>',
     caution: { level: 'WARNING', text: 'Keep hands clear of the coupler whenever the motor can be powered.' },
@@ -76,7 +84,8 @@ export async function loadDemoGuide(app: INestApplicationContext, { workshopId, 
   const build = (await app.get(BuildsService).list(workshopId)).find((candidate) => candidate.title === DEMO_BUILD_TITLE);
   const footage = build && (await app.get(FootageService).list(workshopId, build.id)).find((item) => item.title === DEMO_FOOTAGE_TITLE);
   if (!build || !footage?.transcript) return 'demo guide skipped: the demo footage or its transcript is missing';
-  if ((await guides.list(workshopId, build.id)).some((guide) => guide.title === DEMO_GUIDE_TITLE)) return 'demo guide already loaded';
+  const existing = (await guides.list(workshopId, build.id)).find((guide) => guide.title === DEMO_GUIDE_TITLE);
+  if (existing) return existing.skillLevel ? 'demo guide already loaded' : addDemoEffort(guides, workshopId, existing.id, creatorId);
 
   const assembly = (await app.get(AssembliesService).list(workshopId, build.id)).find((candidate) => candidate.name === DEMO_ASSEMBLY_NAME);
   const { cues } = await app.get(TranscriptsService).read(workshopId, footage.id);
@@ -90,6 +99,7 @@ export async function loadDemoGuide(app: INestApplicationContext, { workshopId, 
     safetyTopics: ['lifting', 'high_voltage', 'rotating_parts'],
     tools: ['Axle stands (pair)', 'Insulated gloves and a CAT III meter', 'Feeler gauges', 'Bore gauge, 10–18 mm', '0–25 mm outside micrometer', 'Torque wrench'],
     consumables: ['Spline grease', 'Medium-strength thread locker'],
+    ...DEMO_EFFORT,
   });
 
   const marks = app.get(MarksService);
@@ -101,6 +111,18 @@ export async function loadDemoGuide(app: INestApplicationContext, { workshopId, 
   }
   const revision = await guides.publish(workshopId, guide.id, creatorId, 'First publication of the bench and truck checks.');
   return `demo guide "${DEMO_GUIDE_TITLE}" published as revision ${revision.number} with ${DEMO_STEPS.length} steps`;
+}
+
+/** A demo guide loaded before guides had a skill level and times gets them, in a new revision. */
+async function addDemoEffort(guides: GuidesService, workshopId: string, guideId: string, creatorId: string): Promise<string> {
+  await guides.update(workshopId, guideId, DEMO_EFFORT);
+  const { steps } = await guides.describe(workshopId, guideId);
+  for (const step of steps) {
+    const estimatedMinutes = DEMO_STEPS.find((candidate) => candidate.title === step.title)?.estimatedMinutes;
+    if (estimatedMinutes) await guides.updateStep(workshopId, guideId, step.id, { estimatedMinutes });
+  }
+  const revision = await guides.publish(workshopId, guideId, creatorId, 'Added the skill level and time estimates.');
+  return `demo guide given a skill level and times in revision ${revision.number}`;
 }
 
 /**

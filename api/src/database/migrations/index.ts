@@ -16,6 +16,7 @@ import { SearchPublicParts1765440000001 } from './1765440000001-search-public-pa
 import { MailOutbox1765450000000 } from './1765450000000-mail-outbox';
 import { MailPreferences1765450000001 } from './1765450000001-mail-preferences';
 import { FitReportMailLinks1765460000000 } from './1765460000000-fit-report-mail-links';
+import { GuideEffort1765466000000 } from './1765466000000-guide-effort';
 
 /** Every migration, oldest first. Listed explicitly so the same list works from src (tests) and dist. */
 // eslint-disable-next-line @typescript-eslint/no-unsafe-function-type
@@ -37,4 +38,5 @@ export const migrations: MixedList<Function> = [
   MailOutbox1765450000000,
   MailPreferences1765450000001,
   FitReportMailLinks1765460000000,
+  GuideEffort1765466000000,
 ];

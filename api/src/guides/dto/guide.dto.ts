@@ -5,14 +5,18 @@ import {
   ArrayUnique,
   IsArray,
   IsIn,
+  IsInt,
   IsOptional,
   IsString,
   IsUUID,
   Length,
+  Max,
   MaxLength,
+  Min,
   ValidateNested,
 } from 'class-validator';
 import { NullableFootageTime, NullableUuid } from '../../common/decorators/nullable-fields.decorator';
+import { GUIDE_MINUTES_MAX, SKILL_LEVELS, STEP_MINUTES_MAX, type SkillLevel } from '../../engine/guide-effort';
 import { CAUTION_LEVELS, SAFETY_TOPICS, type CautionLevel, type SafetyTopic } from '../../engine/safety-topics';
 
 /** Rich text arrives as Tiptap HTML; the server keeps only the allowed tags (see rich-text.ts). */
@@ -55,6 +59,18 @@ export class GuideFieldsDto {
   @IsString({ each: true })
   @Length(1, LIST_ITEM_MAX, { each: true })
   consumables?: string[];
+
+  @ApiPropertyOptional({ enum: SKILL_LEVELS, nullable: true, description: 'What the reader should already be able to do; null clears it' })
+  @IsOptional()
+  @IsIn(SKILL_LEVELS, { message: `skillLevel must be one of ${SKILL_LEVELS.join(', ')}` })
+  skillLevel?: SkillLevel | null;
+
+  @ApiPropertyOptional({ type: Number, nullable: true, example: 180, description: `Estimated time of the whole job, whole minutes (1–${GUIDE_MINUTES_MAX}); null clears it` })
+  @IsOptional()
+  @IsInt({ message: 'estimatedMinutes must be a whole number of minutes' })
+  @Min(1, { message: 'estimatedMinutes must be at least 1 minute' })
+  @Max(GUIDE_MINUTES_MAX, { message: `estimatedMinutes must be at most ${GUIDE_MINUTES_MAX} minutes (100 hours)` })
+  estimatedMinutes?: number | null;
 }
 
 export class CreateGuideDto extends GuideFieldsDto {
@@ -104,6 +120,13 @@ export class StepFieldsDto {
   @ValidateNested()
   @Type(() => StepCautionDto)
   caution?: StepCautionDto | null;
+
+  @ApiPropertyOptional({ type: Number, nullable: true, example: 20, description: `Estimated time of this step, whole minutes (1–${STEP_MINUTES_MAX}); null clears it` })
+  @IsOptional()
+  @IsInt({ message: 'estimatedMinutes must be a whole number of minutes' })
+  @Min(1, { message: 'estimatedMinutes must be at least 1 minute' })
+  @Max(STEP_MINUTES_MAX, { message: `estimatedMinutes must be at most ${STEP_MINUTES_MAX} minutes (24 hours)` })
+  estimatedMinutes?: number | null;
 }
 
 export class CreateStepDto extends StepFieldsDto {

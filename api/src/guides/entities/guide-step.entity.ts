@@ -38,6 +38,10 @@ export class GuideStep {
   @Column({ name: 'caution_text', type: 'varchar', length: 1000, default: '' })
   cautionText!: string;
 
+  /** The author's estimate of this step, in minutes. */
+  @Column({ name: 'estimated_minutes', type: 'smallint', unsigned: true, nullable: true })
+  estimatedMinutes!: number | null;
+
   @CreatedAtColumn()
   createdAt!: Date;
 

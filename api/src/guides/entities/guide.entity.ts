@@ -1,5 +1,6 @@
 import { Column, Entity, Index, PrimaryColumn } from 'typeorm';
 import { CreatedAtColumn, newId, UpdatedAtColumn } from '../../common/database/columns';
+import { SKILL_LEVELS, type SkillLevel } from '../../engine/guide-effort';
 import type { SafetyTopic } from '../../engine/safety-topics';
 
 /**
@@ -46,6 +47,14 @@ export class Guide {
 
   @Column({ type: 'json' })
   consumables!: string[];
+
+  /** What the reader should already be able to do; null until the author says. */
+  @Column({ name: 'skill_level', type: 'enum', enum: SKILL_LEVELS, nullable: true })
+  skillLevel!: SkillLevel | null;
+
+  /** The author's estimate of the whole job, in minutes. */
+  @Column({ name: 'estimated_minutes', type: 'smallint', unsigned: true, nullable: true })
+  estimatedMinutes!: number | null;
 
   @Column({ name: 'published_revision_id', type: 'char', length: 36, nullable: true })
   publishedRevisionId!: string | null;

@@ -1,4 +1,5 @@
 import type { ChecklistVerdict, FitCheckState } from '@/components/check-state';
+import type { SkillLevel } from '@/lib/guide-effort';
 
 /** Shapes of the public guide routes (api/src/guides; OpenAPI at /api/docs). Anyone may read them, signed in or not. */
 
@@ -16,6 +17,9 @@ export interface PublishedGuideSummary {
   publishedAt: string;
   revision: number;
   stepCount: number;
+  /** The skill level and estimated minutes of the published revision; null when its author gave none. */
+  skillLevel: SkillLevel | null;
+  estimatedMinutes: number | null;
   posterUrl: string | null;
   path: string;
 }
@@ -35,6 +39,8 @@ export interface PublishedStep {
   startMs: number | null;
   endMs: number | null;
   caution: GuideCaution | null;
+  /** The author's estimate of the step, in minutes. */
+  estimatedMinutes: number | null;
 }
 
 export interface Cue {
@@ -124,6 +130,8 @@ export interface PublishedGuide {
     tools: string[];
     consumables: string[];
     safetyTopics: SafetyTopic[];
+    skillLevel: SkillLevel | null;
+    estimatedMinutes: number | null;
   };
   revision: { number: number; publishedAt: string; note: string };
   cautions: (GuideCaution & { topic: SafetyTopic })[];

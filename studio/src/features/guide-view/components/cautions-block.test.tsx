@@ -16,8 +16,8 @@ describe('cautions', () => {
         { level: 'WARNING', topic: 'welding', text: 'Screen the arc.' },
       ],
       steps: [
-        { id: 'late', position: 4, title: 'Spin it up', body: '', footageId: null, startMs: null, endMs: null, caution: { level: 'DANGER', text: 'Stand clear.' } },
-        { id: 'early', position: 1, title: 'Lift', body: '', footageId: null, startMs: null, endMs: null, caution: { level: 'WARNING', text: 'Chock the wheels.' } },
+        { id: 'late', position: 4, title: 'Spin it up', body: '', footageId: null, startMs: null, endMs: null, caution: { level: 'DANGER', text: 'Stand clear.' }, estimatedMinutes: null },
+        { id: 'early', position: 1, title: 'Lift', body: '', footageId: null, startMs: null, endMs: null, caution: { level: 'WARNING', text: 'Chock the wheels.' }, estimatedMinutes: null },
       ],
     });
     expect(orderedCautions(guide).map((caution) => `${caution.level} ${caution.source}`)).toEqual([

@@ -40,6 +40,14 @@ describe('FollowAlongView', () => {
     expect(track?.getAttribute('kind')).toBe('captions');
     expect(track?.hasAttribute('default')).toBe(true);
     expect(screen.getAllByTestId('guide-step')).toHaveLength(3);
+    // What the guide asks of the reader, under its title, and each step's own time where its author gave one.
+    expect(screen.getByTestId('guide-skill').textContent).toBe('Skill: Shop regular (2 of 3)');
+    expect(screen.getByTestId('guide-time').textContent).toBe('Time: about 2 h 30 min');
+    expect(screen.getAllByTestId('guide-step').map((step) => within(step).queryByTestId('step-minutes')?.textContent ?? null)).toEqual([
+      'about 20 min',
+      null,
+      'about 45 min',
+    ]);
     expect(screen.getByRole('table', { name: 'Parts' })).toBeTruthy();
     expect(screen.getByText('Trolley jack')).toBeTruthy();
     expect(screen.getByText('Thread locker, medium strength')).toBeTruthy();

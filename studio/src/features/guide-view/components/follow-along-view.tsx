@@ -20,6 +20,7 @@ import { currentStepId } from './playback';
 import { StepList } from './step-list';
 import { TranscriptPanel } from './transcript-panel';
 import { formatDate } from '@/lib/dates';
+import { GuideEffort } from '@/components/guide-effort';
 
 
 /** The tab's title names the guide while it is open (and on the printout's header line). */
@@ -87,6 +88,7 @@ export function GuideDocument({
               Revision {revision.number} · published {formatDate(revision.publishedAt)}
               {revision.note ? ` · ${revision.note}` : ''}
             </Text>
+            <GuideEffort skillLevel={guide.skillLevel} estimatedMinutes={guide.estimatedMinutes} steps={data.steps} />
           </div>
         </Group>
         <Text size="xs" className={classes.printOnly}>

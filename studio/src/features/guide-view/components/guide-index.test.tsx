@@ -13,6 +13,8 @@ const CARD = {
   publishedAt: '2026-03-02T10:00:00.000Z',
   revision: 2,
   stepCount: 5,
+  skillLevel: 'seasoned_fitter',
+  estimatedMinutes: 180,
   posterUrl: '/api/guides/harrow-lane-garage/motor-to-gearbox-coupler/poster',
   path: '/guides/harrow-lane-garage/motor-to-gearbox-coupler',
 };
@@ -29,6 +31,8 @@ describe('GuideIndex', () => {
     expect(within(card).getByText('Harrow Lane Garage')).toBeTruthy();
     expect(within(card).getByText('Build: Motor-to-gearbox coupler')).toBeTruthy();
     expect(within(card).getByText(`Revision 2 · ${formatDate('2026-03-02T10:00:00.000Z')} · 5 steps`)).toBeTruthy();
+    expect(within(card).getByTestId('guide-skill').textContent).toBe('Skill: Seasoned fitter (3 of 3)');
+    expect(within(card).getByTestId('guide-time').textContent).toBe('Time: about 3 h');
   });
 
   it('asks the API with the search once typing pauses', async () => {

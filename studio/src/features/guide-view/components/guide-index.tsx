@@ -8,6 +8,7 @@ import { guideViewQueries } from '../api/queries';
 import type { PublishedGuideSummary } from '../api/types';
 import classes from './guide-view.module.css';
 import { formatDate } from '@/lib/dates';
+import { GuideEffort } from '@/components/guide-effort';
 
 
 function GuideCard({ guide }: { guide: PublishedGuideSummary }) {
@@ -42,6 +43,7 @@ function GuideCard({ guide }: { guide: PublishedGuideSummary }) {
           Revision {guide.revision} · {formatDate(guide.publishedAt)} · {guide.stepCount}{' '}
           {guide.stepCount === 1 ? 'step' : 'steps'}
         </Text>
+        <GuideEffort skillLevel={guide.skillLevel} estimatedMinutes={guide.estimatedMinutes} size="xs" />
       </Stack>
     </Card>
   );

@@ -6,6 +6,7 @@ import { CautionPanel } from './caution-panel';
 import classes from './guide-view.module.css';
 import { MARK_LOOK, MarkShape } from './marks-strip';
 import { formatClock } from '@/lib/clock';
+import { StepMinutes } from '@/components/guide-effort';
 import { isInMainVideo } from './playback';
 
 export interface StepListProps {
@@ -81,6 +82,7 @@ export function StepList({ steps, marks, mainFootageId, currentStepId, onSeek }:
                     </Title>
                     <Group gap="xs" mt={2}>
                       <StepTime step={step} mainFootageId={mainFootageId} onSeek={onSeek} />
+                      <StepMinutes minutes={step.estimatedMinutes} size="sm" />
                       {isCurrent && (
                         <Badge size="sm" variant="filled" className={classes.noPrint} data-testid="step-now">
                           Playing now

@@ -13,6 +13,8 @@ export function testGuide(overrides: Partial<PublishedGuide> = {}): PublishedGui
       tools: ['Trolley jack', 'Axle stands', 'Micrometer 0–25 mm'],
       consumables: ['Thread locker, medium strength'],
       safetyTopics: ['lifting', 'high_voltage'],
+      skillLevel: 'shop_regular',
+      estimatedMinutes: 150,
     },
     revision: { number: 3, publishedAt: '2026-03-02T10:00:00.000Z', note: 'Longer driveshaft' },
     cautions: [
@@ -30,7 +32,7 @@ export function testGuide(overrides: Partial<PublishedGuide> = {}): PublishedGui
       captionsUrl: '/api/guides/harrow-lane-garage/motor-to-gearbox-coupler/captions',
     },
     steps: [
-      { id: 's1', position: 1, title: 'Lift the cab', body: '<p>Jack at the marked points.</p>', footageId: 'f1', startMs: 0, endMs: null, caution: null },
+      { id: 's1', position: 1, title: 'Lift the cab', body: '<p>Jack at the marked points.</p>', footageId: 'f1', startMs: 0, endMs: null, caution: null, estimatedMinutes: 20 },
       {
         id: 's2',
         position: 2,
@@ -40,8 +42,9 @@ export function testGuide(overrides: Partial<PublishedGuide> = {}): PublishedGui
         startMs: 8_000,
         endMs: null,
         caution: { level: 'CAUTION', text: 'The coupler edge is sharp; wear gloves.' },
+        estimatedMinutes: null,
       },
-      { id: 's3', position: 3, title: 'Torque the bolts', body: '', footageId: null, startMs: null, endMs: null, caution: null },
+      { id: 's3', position: 3, title: 'Torque the bolts', body: '', footageId: null, startMs: null, endMs: null, caution: null, estimatedMinutes: 45 },
     ],
     cues: [
       { startMs: 0, endMs: 4_000, text: 'First we lift the cab onto stands.' },

@@ -1,3 +1,5 @@
+import type { SkillLevel } from '@/lib/guide-effort';
+
 /** Shapes of the guide editor routes (api/src/guides; OpenAPI at /api/docs). */
 
 export const SAFETY_TOPICS = ['lifting', 'rotating_parts', 'high_voltage', 'welding', 'pressing'] as const;
@@ -33,6 +35,7 @@ export interface GuideStep {
   startMs: number | null;
   endMs: number | null;
   caution: Caution | null;
+  estimatedMinutes: number | null;
   marks: StepMark[];
 }
 
@@ -55,6 +58,8 @@ export interface Guide {
   detectedSafetyTopics: SafetyTopic[];
   tools: string[];
   consumables: string[];
+  skillLevel: SkillLevel | null;
+  estimatedMinutes: number | null;
   status: 'draft' | 'published';
   hasUnpublishedChanges: boolean;
   publishedRevision: PublishedRevision | null;
@@ -72,6 +77,8 @@ export interface GuideSummary {
   status: Guide['status'];
   hasUnpublishedChanges: boolean;
   stepCount: number;
+  skillLevel: SkillLevel | null;
+  estimatedMinutes: number | null;
   publishedRevision: PublishedRevision | null;
   publicPath: string | null;
   updatedAt: string;
@@ -90,6 +97,8 @@ export interface GuideInput {
   safetyTopics: SafetyTopic[];
   tools: string[];
   consumables: string[];
+  skillLevel: SkillLevel | null;
+  estimatedMinutes: number | null;
 }
 
 export interface StepInput {
@@ -99,6 +108,7 @@ export interface StepInput {
   startMs: number | null;
   endMs: number | null;
   caution: Caution | null;
+  estimatedMinutes: number | null;
 }
 
 /** Only what the pickers need from the footage and assemblies routes. */

@@ -1,4 +1,4 @@
-import { Badge, Button, Checkbox, Group, Paper, Select, Stack, TagsInput, Text, TextInput, Title } from '@mantine/core';
+import { Badge, Button, Checkbox, Group, NumberInput, Paper, Select, Stack, TagsInput, Text, TextInput, Title } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
@@ -10,6 +10,8 @@ import { SAFETY_TOPICS, type Guide, type GuideInput, type SafetyTopic } from '..
 import { SAFETY_TOPIC_LABELS } from './guide-labels';
 import { RichTextField } from './rich-text-field';
 import { FormProblems } from '@/components/form-problems';
+import { formatMinutes, GUIDE_MINUTES_MAX, SKILL_LEVELS, SKILL_LEVEL_WORDS } from '@/lib/guide-effort';
+import { checkMinutes, minutesFrom } from './effort-fields';
 
 const FIELD_LABELS: Record<keyof GuideInput, string> = {
   title: 'Title',
@@ -19,6 +21,8 @@ const FIELD_LABELS: Record<keyof GuideInput, string> = {
   safetyTopics: 'Safety topics',
   tools: 'Tools',
   consumables: 'Consumables',
+  skillLevel: 'Skill level',
+  estimatedMinutes: 'Estimated time',
 };
 
 const ITEM_MAX = 120;
@@ -33,6 +37,8 @@ function valuesOf(guide: Guide): GuideInput {
     safetyTopics: guide.safetyTopics,
     tools: guide.tools,
     consumables: guide.consumables,
+    skillLevel: guide.skillLevel,
+    estimatedMinutes: guide.estimatedMinutes,
   };
 }
 
@@ -49,6 +55,8 @@ function changedFields(values: GuideInput, guide: Guide): Partial<GuideInput> {
   if (!sameList([...values.safetyTopics].sort(), [...saved.safetyTopics].sort())) changes.safetyTopics = values.safetyTopics;
   if (!sameList(values.tools, saved.tools)) changes.tools = values.tools;
   if (!sameList(values.consumables, saved.consumables)) changes.consumables = values.consumables;
+  if (values.skillLevel !== saved.skillLevel) changes.skillLevel = values.skillLevel;
+  if (values.estimatedMinutes !== saved.estimatedMinutes) changes.estimatedMinutes = values.estimatedMinutes;
   return changes;
 }
 
@@ -70,6 +78,7 @@ export function GuideDetailsForm({ workshopId, guide }: { workshopId: string; gu
       title: (value) => (value.trim() ? (value.trim().length > 200 ? 'Keep the title under 200 characters' : null) : 'The guide needs a title'),
       tools: checkItems('tools'),
       consumables: checkItems('consumables'),
+      estimatedMinutes: checkMinutes(GUIDE_MINUTES_MAX),
     },
   });
   const changes = changedFields(form.values, guide);
@@ -157,6 +166,32 @@ export function GuideDetailsForm({ workshopId, guide }: { workshopId: string; gu
               data={(assemblies.data ?? []).map((item) => ({ value: item.id, label: item.name }))}
               clearable
               {...form.getInputProps('assemblyId')}
+            />
+          </Group>
+          <Group grow align="flex-start">
+            <Select
+              label="Skill level"
+              description={form.values.skillLevel ? SKILL_LEVEL_WORDS[form.values.skillLevel].description : 'What a reader should already be able to do.'}
+              placeholder="Not said"
+              clearable
+              data={SKILL_LEVELS.map((level, index) => ({ value: level, label: `${SKILL_LEVEL_WORDS[level].label} (${index + 1} of ${SKILL_LEVELS.length})` }))}
+              {...form.getInputProps('skillLevel')}
+            />
+            <NumberInput
+              label="Estimated time, minutes"
+              description={
+                form.values.estimatedMinutes && Number.isInteger(form.values.estimatedMinutes) && form.values.estimatedMinutes >= 1
+                  ? `The whole job: ${formatMinutes(form.values.estimatedMinutes)}`
+                  : 'The whole job, from first step to clean-up.'
+              }
+              placeholder="e.g. 180"
+              min={1}
+              max={GUIDE_MINUTES_MAX}
+              allowDecimal={false}
+              allowNegative={false}
+              {...form.getInputProps('estimatedMinutes')}
+              value={form.values.estimatedMinutes ?? ''}
+              onChange={(value) => form.setFieldValue('estimatedMinutes', minutesFrom(value))}
             />
           </Group>
           <Checkbox.Group

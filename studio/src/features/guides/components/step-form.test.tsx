@@ -54,7 +54,33 @@ describe('StepForm', () => {
       startMs: 62_500,
       endMs: 90_000,
       caution: { level: 'WARNING', text: 'Use a transmission jack.' },
+      estimatedMinutes: null,
     });
+  });
+
+  it('sends the step’s time in whole minutes, says it in hours and minutes, and refuses one out of range before asking', async () => {
+    const { requests, onDone } = renderForm();
+    fireEvent.change(screen.getByLabelText(/^Title/), { target: { value: 'Press the bearing' } });
+    const minutes = screen.getByLabelText(/^Time for this step, minutes/);
+    fireEvent.change(minutes, { target: { value: '1500' } });
+    await submit('Add step');
+    expect(await screen.findByText('At most 1440 minutes (24 h)')).toBeTruthy();
+    expect(requests.some((request) => request.method === 'POST')).toBe(false);
+    fireEvent.change(minutes, { target: { value: '75' } });
+    expect(screen.getByText('About 1 h 15 min')).toBeTruthy();
+    await submit('Add step');
+    await waitFor(() => expect(onDone).toHaveBeenCalled());
+    expect(requests.find((request) => request.method === 'POST')?.body).toMatchObject({ title: 'Press the bearing', estimatedMinutes: 75 });
+  });
+
+  it('clears a step’s time with null when the field is emptied', async () => {
+    const { requests, onDone } = renderForm({ step: aStep({ id: 's1', position: 1, title: 'Press the bearing', estimatedMinutes: 30 }) });
+    const minutes = screen.getByLabelText(/^Time for this step, minutes/) as HTMLInputElement;
+    expect(minutes.value).toBe('30');
+    fireEvent.change(minutes, { target: { value: '' } });
+    await submit('Save step');
+    await waitFor(() => expect(onDone).toHaveBeenCalled());
+    expect(requests.find((request) => request.method === 'PATCH')?.body).toMatchObject({ estimatedMinutes: null });
   });
 
   it('takes the player’s current time', async () => {

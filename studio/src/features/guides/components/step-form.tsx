@@ -1,4 +1,4 @@
-import { Button, Group, Paper, Select, Stack, Text, TextInput, Textarea } from '@mantine/core';
+import { Button, Group, NumberInput, Paper, Select, Stack, Text, TextInput, Textarea } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
 import { splitApiErrors } from '@/lib/form-errors';
@@ -9,6 +9,8 @@ import { RichTextField } from './rich-text-field';
 import { formatClock } from '@/lib/clock';
 import { parseStepTime } from './step-time';
 import { FormProblems } from '@/components/form-problems';
+import { formatMinutes, STEP_MINUTES_MAX } from '@/lib/guide-effort';
+import { checkMinutes, minutesFrom } from './effort-fields';
 
 const FIELD_LABELS = {
   title: 'Title',
@@ -19,6 +21,7 @@ const FIELD_LABELS = {
   'caution.level': 'Caution',
   'caution.text': 'Caution text',
   caution: 'Caution',
+  estimatedMinutes: 'Time for this step',
 } as const;
 
 const TIME_HINT = 'Write the time as m:ss or m:ss.s, e.g. 1:15.3';
@@ -31,6 +34,7 @@ interface StepValues {
   end: string;
   cautionLevel: CautionLevel | null;
   cautionText: string;
+  estimatedMinutes: number | null;
 }
 
 function valuesOf(step: GuideStep | null, mainFootageId: string | null): StepValues {
@@ -42,6 +46,7 @@ function valuesOf(step: GuideStep | null, mainFootageId: string | null): StepVal
     end: step?.endMs != null ? formatClock(step.endMs, { tenths: true }) : '',
     cautionLevel: step?.caution?.level ?? null,
     cautionText: step?.caution?.text ?? '',
+    estimatedMinutes: step?.estimatedMinutes ?? null,
   };
 }
 
@@ -89,6 +94,7 @@ export function StepForm({ workshopId, guideId, step, mainFootage, readPositionM
         if (!value.trim()) return 'Say what the danger is and how to avoid it';
         return value.trim().length > 1000 ? 'Keep the caution under 1,000 characters' : null;
       },
+      estimatedMinutes: checkMinutes(STEP_MINUTES_MAX),
     },
   });
 
@@ -111,6 +117,7 @@ export function StepForm({ workshopId, guideId, step, mainFootage, readPositionM
         startMs,
         endMs: startMs === null ? null : endMs,
         caution: values.cautionLevel ? { level: values.cautionLevel, text: values.cautionText.trim() } : null,
+        estimatedMinutes: values.estimatedMinutes,
       },
       {
         onSuccess: onDone,
@@ -124,6 +131,7 @@ export function StepForm({ workshopId, guideId, step, mainFootage, readPositionM
             end: endError,
             cautionLevel: split.fields['caution.level'] ?? split.fields.caution,
             cautionText: split.fields['caution.text'],
+            estimatedMinutes: split.fields.estimatedMinutes,
           });
           setGeneral(split.general);
         },
@@ -184,6 +192,23 @@ export function StepForm({ workshopId, guideId, step, mainFootage, readPositionM
               Choose the guide’s main footage above to anchor steps to a moment in the video.
             </Text>
           )}
+          <NumberInput
+            label="Time for this step, minutes (optional)"
+            description={
+              form.values.estimatedMinutes && Number.isInteger(form.values.estimatedMinutes) && form.values.estimatedMinutes >= 1
+                ? `About ${formatMinutes(form.values.estimatedMinutes)}`
+                : 'Readers see it beside the step.'
+            }
+            placeholder="e.g. 20"
+            w={260}
+            min={1}
+            max={STEP_MINUTES_MAX}
+            allowDecimal={false}
+            allowNegative={false}
+            {...form.getInputProps('estimatedMinutes')}
+            value={form.values.estimatedMinutes ?? ''}
+            onChange={(value) => form.setFieldValue('estimatedMinutes', minutesFrom(value))}
+          />
           <Group align="flex-start" gap="xs" wrap="wrap">
             <Select
               label="Caution"

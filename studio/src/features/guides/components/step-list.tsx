@@ -7,6 +7,7 @@ import type { GuideStep } from '../api/types';
 import { CautionNote } from './caution-note';
 import { MARK_KIND_NAMES } from './guide-labels';
 import { formatClock } from '@/lib/clock';
+import { StepMinutes } from '@/components/guide-effort';
 
 export interface StepListProps {
   workshopId: string;
@@ -95,6 +96,7 @@ export function StepList({ workshopId, guideId, steps, mainFootageId, onSeek, on
                       <Title order={4} fz="md">
                         {step.title}
                       </Title>
+                      <StepMinutes minutes={step.estimatedMinutes} />
                     </Group>
                     {step.startMs !== null && (
                       <StepMoment step={step} mainFootageId={mainFootageId} onSeek={onSeek} />

@@ -2,7 +2,7 @@ import type { Guide, GuideStep } from '../api/types';
 
 /** Invented guide data for the component tests (Harrow Lane Garage's coupler build). */
 export function aStep(overrides: Partial<GuideStep> & Pick<GuideStep, 'id' | 'position' | 'title'>): GuideStep {
-  return { body: '', footageId: null, startMs: null, endMs: null, caution: null, marks: [], ...overrides };
+  return { body: '', footageId: null, startMs: null, endMs: null, caution: null, estimatedMinutes: null, marks: [], ...overrides };
 }
 
 export function aGuide(overrides: Partial<Guide> = {}): Guide {
@@ -19,6 +19,8 @@ export function aGuide(overrides: Partial<Guide> = {}): Guide {
     detectedSafetyTopics: [],
     tools: [],
     consumables: [],
+    skillLevel: null,
+    estimatedMinutes: null,
     status: 'draft',
     hasUnpublishedChanges: false,
     publishedRevision: null,
