@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '@/lib/api-client';
-import { workshopQueries, type Invitation, type Member, type MemberRole, type Workshop } from './queries';
+import { workshopQueries, type Invitation, type MediaSettings, type Member, type MemberRole, type Workshop } from './queries';
 
 export interface WorkshopInput {
   name: string;
@@ -52,6 +52,15 @@ export function useRemoveLogo(workshopId: string) {
   return useMutation({
     mutationFn: () => apiRequest<null>(`/workshops/${workshopId}/logo`, { method: 'DELETE' }),
     onSuccess: invalidate,
+  });
+}
+
+/** Owners only; the answer is the setting as stored, so the cache takes it without a refetch. */
+export function useUpdateMediaSettings(workshopId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (input: MediaSettings) => apiRequest<MediaSettings>(`/workshops/${workshopId}/media-settings`, { method: 'PUT', body: input }),
+    onSuccess: (settings) => queryClient.setQueryData(workshopQueries.mediaSettings(workshopId).queryKey, settings),
   });
 }
 

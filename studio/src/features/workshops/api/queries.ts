@@ -1,5 +1,6 @@
 import { queryOptions } from '@tanstack/react-query';
 import { apiRequest } from '@/lib/api-client';
+import type { ApiSchema } from '@/lib/api-types';
 
 export type MemberRole = 'owner' | 'editor';
 
@@ -14,6 +15,9 @@ export interface Workshop {
   role: MemberRole | 'admin' | null;
   createdAt: string;
 }
+
+/** Whether uploaded originals stay in storage once their web versions are made. */
+export type MediaSettings = ApiSchema<'MediaSettingsDto'>;
 
 export interface Member {
   userId: string;
@@ -60,6 +64,11 @@ export const workshopQueries = {
       queryKey: [...workshopQueries.all(), 'detail', workshopId, 'new-fit-reports'] as const,
       queryFn: ({ signal }) => apiRequest<unknown[]>(`/workshops/${workshopId}/fit-reports`, { signal, query: { status: 'new' } }),
       select: (reports) => reports.length,
+    }),
+  mediaSettings: (workshopId: string) =>
+    queryOptions({
+      queryKey: [...workshopQueries.all(), 'detail', workshopId, 'media-settings'] as const,
+      queryFn: ({ signal }) => apiRequest<MediaSettings>(`/workshops/${workshopId}/media-settings`, { signal }),
     }),
   members: (workshopId: string) =>
     queryOptions({

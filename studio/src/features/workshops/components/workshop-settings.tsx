@@ -7,6 +7,7 @@ import { splitApiErrors } from '@/lib/form-errors';
 import { notifyDone, notifyError } from '@/lib/notify';
 import { useDeleteWorkshop, useRemoveLogo, useUpdateWorkshop, useUploadLogo } from '../api/mutations';
 import type { Workshop } from '../api/queries';
+import { MediaSettingsPanel } from './media-settings-panel';
 import { WorkshopGate } from './workshop-gate';
 import { WorkshopHeader } from './workshop-header';
 import { FormProblems } from '@/components/form-problems';
@@ -174,6 +175,14 @@ function Settings({ workshop }: { workshop: Workshop }) {
           </Title>
           <LogoPanel workshop={workshop} readOnly={readOnly} />
         </Paper>
+        {workshop.role === 'owner' && (
+          <Paper withBorder p="lg" radius="md">
+            <Title order={3} size="h4" mb="sm">
+              Footage storage
+            </Title>
+            <MediaSettingsPanel workshop={workshop} />
+          </Paper>
+        )}
         {workshop.role === 'owner' && (
           <Paper withBorder p="lg" radius="md" style={{ borderColor: 'var(--mantine-color-red-6)' }}>
             <Title order={3} size="h4" mb="sm">
