@@ -1,5 +1,6 @@
 import { queryOptions } from '@tanstack/react-query';
 import { ApiError, apiRequest } from '@/lib/api-client';
+import type { ApiSchema } from '@/lib/api-types';
 import type { PublishedGuide, PublishedGuideSummary } from './types';
 
 /**
@@ -8,6 +9,23 @@ import type { PublishedGuide, PublishedGuideSummary } from './types';
  * the API answers with a 304 from one query while nothing changed.
  */
 const REVALIDATE = 'no-cache';
+
+/** A window of a published guide's transcript: the cues asked for, and how many the whole transcript has. */
+export type CueWindow = ApiSchema<'CueWindowResponseDto'>;
+export type WindowCue = ApiSchema<'CueDto'>;
+
+/** Cues a row window holds: a few screenfuls of the transcript list. */
+export const CUE_PAGE_SIZE = 100;
+/** The stretch of time one "what is playing" window covers. */
+export const CUE_SLICE_MS = 60_000;
+/** The most cues the API gives in one window. */
+const CUE_WINDOW_MAX = 500;
+/** The cues windows are the same for everyone and cached a minute by the API; a reader need not ask again sooner. */
+const CUE_STALE_MS = 60_000;
+
+function cuesPath(workshopSlug: string, guideSlug: string): string {
+  return `/guides/${encodeURIComponent(workshopSlug)}/${encodeURIComponent(guideSlug)}/cues`;
+}
 
 /**
  * The public side of guides. Its root key is not the editor's (`['guides']`), so a reader's cache and a
@@ -20,6 +38,41 @@ export const guideViewQueries = {
       queryKey: [...guideViewQueries.all(), 'list', { q }] as const,
       queryFn: ({ signal }) => apiRequest<PublishedGuideSummary[]>('/guides', { signal, query: { q: q || undefined }, cache: REVALIDATE }),
       placeholderData: (previous) => previous,
+    }),
+  /** Rows `page × CUE_PAGE_SIZE` onwards of the transcript: what a scrolled list shows. Page 0 also gives the total. */
+  cuePage: (workshopSlug: string, guideSlug: string, page: number) =>
+    queryOptions({
+      queryKey: [...guideViewQueries.all(), 'cues', workshopSlug, guideSlug, 'page', page] as const,
+      queryFn: ({ signal }) =>
+        apiRequest<CueWindow>(cuesPath(workshopSlug, guideSlug), { signal, query: { fromIndex: page * CUE_PAGE_SIZE, limit: CUE_PAGE_SIZE } }),
+      staleTime: CUE_STALE_MS,
+      // No transcript (404) stays so.
+      retry: (failureCount, error) => !(error instanceof ApiError && error.status === 404) && failureCount < 2,
+    }),
+  /** The cues playing during one slice of time (`slice × CUE_SLICE_MS` on): which row plays now. */
+  cueSlice: (workshopSlug: string, guideSlug: string, slice: number) =>
+    queryOptions({
+      queryKey: [...guideViewQueries.all(), 'cues', workshopSlug, guideSlug, 'slice', slice] as const,
+      queryFn: ({ signal }) =>
+        apiRequest<CueWindow>(cuesPath(workshopSlug, guideSlug), { signal, query: { fromMs: slice * CUE_SLICE_MS, toMs: (slice + 1) * CUE_SLICE_MS } }),
+      staleTime: CUE_STALE_MS,
+    }),
+  /** Every cue, fetched in the largest windows the API gives: only once the reader searches the transcript. */
+  allCues: (workshopSlug: string, guideSlug: string) =>
+    queryOptions({
+      queryKey: [...guideViewQueries.all(), 'cues', workshopSlug, guideSlug, 'all'] as const,
+      queryFn: async ({ signal }) => {
+        const cues: WindowCue[] = [];
+        let total = Infinity;
+        while (cues.length < total) {
+          const window = await apiRequest<CueWindow>(cuesPath(workshopSlug, guideSlug), { signal, query: { fromIndex: cues.length, limit: CUE_WINDOW_MAX } });
+          total = window.total;
+          if (window.cues.length === 0) break;
+          cues.push(...window.cues);
+        }
+        return cues;
+      },
+      staleTime: CUE_STALE_MS,
     }),
   detail: (workshopSlug: string, guideSlug: string) =>
     queryOptions({

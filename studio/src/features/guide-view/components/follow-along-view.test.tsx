@@ -1,6 +1,6 @@
-import { fireEvent, screen, within } from '@testing-library/react';
+import { fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
-import { stubApi } from '@/testing/api-stub';
+import { stubApi, type StubRoute } from '@/testing/api-stub';
 import { fakeScrollLayout } from '@/testing/fake-scroll-layout';
 import { renderWithProviders } from '@/testing/render';
 import { FollowAlongView } from './follow-along-view';
@@ -8,6 +8,22 @@ import { testGuide } from './test-guide';
 import { formatDate } from '@/lib/dates';
 
 const GUIDE_PATH = /^\/guides\/harrow-lane-garage\/motor-to-gearbox-coupler$/;
+
+/** The guide's answer, and its transcript a window at a time as the public cues route gives it. */
+function guideRoutes(guide: ReturnType<typeof testGuide>): StubRoute[] {
+  const cues = guide.cues.map((cue, index) => ({ index, ...cue }));
+  return [
+    { path: GUIDE_PATH, body: guide },
+    {
+      path: /^\/guides\/harrow-lane-garage\/motor-to-gearbox-coupler\/cues\?/,
+      body: ({ url }: { url: URL }) => {
+        const number = (name: string) => Number(url.searchParams.get(name));
+        if (url.searchParams.has('fromMs')) return { total: cues.length, cues: cues.filter((cue) => cue.endMs > number('fromMs') && cue.startMs < number('toMs')) };
+        return { total: cues.length, cues: cues.slice(number('fromIndex'), number('fromIndex') + number('limit')) };
+      },
+    },
+  ];
+}
 
 function renderGuide() {
   return renderWithProviders(<FollowAlongView workshopSlug="harrow-lane-garage" guideSlug="motor-to-gearbox-coupler" />);
@@ -29,7 +45,7 @@ describe('FollowAlongView', () => {
   afterEach(() => vi.restoreAllMocks());
 
   it('lays out the guide: revision, cautions first, video with captions, steps, transcript, checklist, parts and supplies', async () => {
-    const requests = stubApi([{ path: GUIDE_PATH, body: testGuide() }]);
+    const requests = stubApi(guideRoutes(testGuide()));
     renderGuide();
     expect(await screen.findByRole('heading', { level: 1, name: 'Fitting the motor-to-gearbox coupler' })).toBeTruthy();
     expect(screen.getByTestId('guide-revision').textContent).toBe(`Revision 3 · published ${formatDate('2026-03-02T10:00:00.000Z')} · Longer driveshaft`);
@@ -51,11 +67,17 @@ describe('FollowAlongView', () => {
     expect(screen.getByRole('table', { name: 'Parts' })).toBeTruthy();
     expect(screen.getByText('Trolley jack')).toBeTruthy();
     expect(screen.getByText('Thread locker, medium strength')).toBeTruthy();
-    expect(requests.map((request) => request.url.pathname)).toEqual(['/api/guides/harrow-lane-garage/motor-to-gearbox-coupler']);
+    // The guide's answer, then its transcript in windows: the first rows, and the minute playing now.
+    await screen.findAllByTestId('transcript-cue');
+    expect(requests.map((request) => `${request.url.pathname}${request.url.search}`)).toEqual([
+      '/api/guides/harrow-lane-garage/motor-to-gearbox-coupler',
+      '/api/guides/harrow-lane-garage/motor-to-gearbox-coupler/cues?fromIndex=0&limit=100',
+      '/api/guides/harrow-lane-garage/motor-to-gearbox-coupler/cues?fromMs=0&toMs=60000',
+    ]);
   });
 
   it('highlights the playing step and cue, and a step’s time seeks the video', async () => {
-    stubApi([{ path: GUIDE_PATH, body: testGuide() }]);
+    stubApi(guideRoutes(testGuide()));
     renderGuide();
     const video = (await screen.findByTestId('guide-video')) as HTMLVideoElement;
     const steps = screen.getAllByTestId('guide-step');
@@ -66,7 +88,7 @@ describe('FollowAlongView', () => {
     expect(screen.getByTestId('now-playing').textContent).toBe('Step 1 of 3 · from 0:00Lift the cab');
     expect(within(steps[0]).getByText('Playing now')).toBeTruthy();
     expect(steps[1].getAttribute('aria-current')).toBeNull();
-    expect(screen.getAllByTestId('transcript-cue')[0].getAttribute('aria-current')).toBe('time');
+    await waitFor(() => expect(screen.getAllByTestId('transcript-cue')[0].getAttribute('aria-current')).toBe('time'));
 
     fireEvent.click(screen.getByRole('button', { name: 'Play step 2 from 0:08' }));
     expect(video.currentTime).toBe(8);
@@ -79,10 +101,11 @@ describe('FollowAlongView', () => {
   });
 
   it('searches the transcript and plays from a found cue', async () => {
-    stubApi([{ path: GUIDE_PATH, body: testGuide() }]);
+    stubApi(guideRoutes(testGuide()));
     renderGuide();
     const video = (await screen.findByTestId('guide-video')) as HTMLVideoElement;
-    fireEvent.change(screen.getByRole('searchbox', { name: 'Search the transcript' }), { target: { value: 'Spigot' } });
+    fireEvent.change(await screen.findByRole('searchbox', { name: 'Search the transcript' }), { target: { value: 'Spigot' } });
+    await screen.findByText('1 of 3 cues mention “Spigot”');
     const cues = await screen.findAllByTestId('transcript-cue');
     expect(cues).toHaveLength(1);
     expect(cues[0].textContent).toMatch(/0:12.*fifteen thousandths/);
@@ -92,7 +115,7 @@ describe('FollowAlongView', () => {
   });
 
   it('seeks from check evidence and from the marks under the video', async () => {
-    stubApi([{ path: GUIDE_PATH, body: testGuide() }]);
+    stubApi(guideRoutes(testGuide()));
     renderGuide();
     const video = (await screen.findByTestId('guide-video')) as HTMLVideoElement;
     fireEvent.click(screen.getByRole('button', { name: 'Watch the evidence at 0:09: Slides on by hand' }));
@@ -104,7 +127,7 @@ describe('FollowAlongView', () => {
   });
 
   it('the Print button opens the browser’s print dialog (what goes on paper is checked in the browser journey)', async () => {
-    stubApi([{ path: GUIDE_PATH, body: testGuide() }]);
+    stubApi(guideRoutes(testGuide()));
     const printSpy = vi.spyOn(window, 'print').mockImplementation(() => {});
     renderGuide();
     fireEvent.click(await screen.findByRole('button', { name: 'Print' }));
@@ -112,7 +135,7 @@ describe('FollowAlongView', () => {
   });
 
   it('without a video, lists the steps with their times and no player', async () => {
-    stubApi([{ path: GUIDE_PATH, body: testGuide({ footage: null, cues: [], marks: [] }) }]);
+    stubApi(guideRoutes(testGuide({ footage: null, cues: [], marks: [] })));
     renderGuide();
     await screen.findAllByTestId('guide-step');
     expect(screen.queryByTestId('guide-video')).toBeNull();

@@ -119,7 +119,7 @@ export function GuideDocument({
         </div>
         {footage && (
           <div className={classes.areaTranscript}>
-            <TranscriptPanel cues={data.cues} currentMs={player.currentMs} onSeek={player.seek} />
+            <TranscriptPanel workshopSlug={workshop.slug} guideSlug={guide.slug} currentMs={player.currentMs} onSeek={player.seek} />
           </div>
         )}
       </div>

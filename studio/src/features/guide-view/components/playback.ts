@@ -66,16 +66,16 @@ export function searchWords(query: string): string[] {
     .filter((word) => word !== '');
 }
 
-export interface CueMatch {
+export interface CueMatch<C extends Cue = Cue> {
   /** The cue's index in the full transcript (for highlighting the playing cue among results). */
   index: number;
-  cue: Cue;
+  cue: C;
 }
 
 /** The cues holding every word of the search (anywhere in a word: "thou" finds "thousandths"); all cues for an empty search. */
-export function filterCues(cues: readonly Cue[], query: string): CueMatch[] {
+export function filterCues<C extends Cue>(cues: readonly C[], query: string): CueMatch<C>[] {
   const words = searchWords(query);
-  const matches: CueMatch[] = [];
+  const matches: CueMatch<C>[] = [];
   cues.forEach((cue, index) => {
     const text = fold(cue.text);
     if (words.every((word) => text.includes(word))) matches.push({ index, cue });

@@ -1,6 +1,7 @@
 import { fireEvent, screen, waitFor } from '@testing-library/react';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { formatClock } from '@/lib/clock';
+import { stubApi } from '@/testing/api-stub';
 import { fakeScrollLayout } from '@/testing/fake-scroll-layout';
 import { renderWithProviders } from '@/testing/render';
 import type { Cue } from '../api/types';
@@ -18,6 +19,25 @@ const CUES: Cue[] = Array.from({ length: 40 }, (_, index) => ({ startMs: index *
 const LONG_CUES: Cue[] = Array.from({ length: 3_000 }, (_, index) => ({ startMs: index * 3_600, endMs: index * 3_600 + 3_000, text: `Long cue ${index}` }));
 
 const BOX_HEIGHT = 300;
+const SOURCE = { workshopSlug: 'harrow-lane', guideSlug: 'coupler-fit' };
+
+/** Answers the public cues windows from `cues` as the API does: by time (fromMs, toMs) or by position (fromIndex, limit). */
+function stubCues(cues: Cue[]) {
+  const indexed = cues.map((cue, index) => ({ index, ...cue }));
+  return stubApi([
+    {
+      path: /^\/guides\/harrow-lane\/coupler-fit\/cues\?/,
+      body: ({ url }: { url: URL }) => {
+        const number = (name: string) => Number(url.searchParams.get(name));
+        if (url.searchParams.has('fromMs')) {
+          return { total: indexed.length, cues: indexed.filter((cue) => cue.endMs > number('fromMs') && cue.startMs < number('toMs')).slice(0, 500) };
+        }
+        const fromIndex = number('fromIndex');
+        return { total: indexed.length, cues: indexed.slice(fromIndex, fromIndex + (number('limit') || 100)) };
+      },
+    },
+  ]);
+}
 
 function cueBox(): HTMLElement {
   return screen.getByTestId('guide-transcript').querySelector('ul')?.parentElement as HTMLElement;
@@ -38,16 +58,17 @@ describe('TranscriptPanel following playback', () => {
   afterEach(() => vi.restoreAllMocks());
 
   it('keeps the playing cue in view until the reader scrolls, then offers to go back to now', async () => {
-    const { rerender } = renderWithProviders(<TranscriptPanel cues={CUES} currentMs={200_000} onSeek={() => {}} />);
-    // Cue 20 is below the box: the box scrolls it to a third of the way down (300 / 3).
-    await waitFor(() => expect(playingCueDepth()).toBe(BOX_HEIGHT / 3));
+    stubCues(CUES);
+    const { rerender } = renderWithProviders(<TranscriptPanel {...SOURCE} currentMs={200_000} onSeek={() => {}} />);
+    // Cue 20 is below the box: the box scrolls it to a third of the way down (300 / 3), once its windows arrive.
+    await waitFor(() => expect(playingCueDepth()).toBe(BOX_HEIGHT / 3), { timeout: 5_000 });
     expect(screen.getByRole('button', { current: 'time' }).textContent).toContain('Cue 20');
     expect(screen.queryByRole('button', { name: 'Back to now' })).toBeNull();
     const movesByList = layout.moves.length;
     expect(movesByList).toBeGreaterThan(0);
 
     layout.scrollByHand(cueBox(), 0);
-    rerender(<TranscriptPanel cues={CUES} currentMs={300_000} onSeek={() => {}} />);
+    rerender(<TranscriptPanel {...SOURCE} currentMs={300_000} onSeek={() => {}} />);
     // The reader scrolled: playback moved on to cue 30 but the box stays where the reader put it.
     fireEvent.click(await screen.findByRole('button', { name: 'Back to now' }));
     expect(layout.moves.length).toBeGreaterThan(movesByList);
@@ -58,13 +79,14 @@ describe('TranscriptPanel following playback', () => {
   });
 
   it('stays where the reader put it while playback moves on', async () => {
-    const { rerender } = renderWithProviders(<TranscriptPanel cues={CUES} currentMs={200_000} onSeek={() => {}} />);
+    stubCues(CUES);
+    const { rerender } = renderWithProviders(<TranscriptPanel {...SOURCE} currentMs={200_000} onSeek={() => {}} />);
     await waitFor(() => expect(playingCueDepth()).toBe(BOX_HEIGHT / 3));
     layout.scrollByHand(cueBox(), 40);
     await waitFor(() => expect(screen.getByRole('button', { name: 'Back to now' })).toBeTruthy());
     const moves = layout.moves.length;
-    rerender(<TranscriptPanel cues={CUES} currentMs={300_000} onSeek={() => {}} />);
-    rerender(<TranscriptPanel cues={CUES} currentMs={390_000} onSeek={() => {}} />);
+    rerender(<TranscriptPanel {...SOURCE} currentMs={300_000} onSeek={() => {}} />);
+    rerender(<TranscriptPanel {...SOURCE} currentMs={390_000} onSeek={() => {}} />);
     await new Promise((resolve) => setTimeout(resolve, 50));
     expect(layout.moves.length).toBe(moves);
     expect(cueBox().scrollTop).toBe(40);
@@ -72,8 +94,10 @@ describe('TranscriptPanel following playback', () => {
 
   it('draws only the cues in view of a 3,000-cue transcript, and reaches the last cue', async () => {
     const seeks: number[] = [];
-    const { rerender } = renderWithProviders(<TranscriptPanel cues={LONG_CUES} currentMs={0} onSeek={(ms) => seeks.push(ms)} />);
-    expect(screen.getByTestId('transcript-count').textContent).toBe('3000 cues');
+    const requests = stubCues(LONG_CUES);
+    const { rerender } = renderWithProviders(<TranscriptPanel {...SOURCE} currentMs={0} onSeek={(ms) => seeks.push(ms)} />);
+    expect(await screen.findByText('3000 cues')).toBeTruthy();
+    await screen.findByRole('button', { name: /Long cue 0$/ });
     const drawn = screen.getAllByTestId('transcript-cue').length;
     // A 300 px box shows 8 rows of 40 px; with the rows kept above and below it stays far under 3,000.
     expect(drawn).toBeGreaterThan(0);
@@ -83,8 +107,9 @@ describe('TranscriptPanel following playback', () => {
     expect(screen.getAllByRole('listitem')[0].getAttribute('aria-setsize')).toBe('3000');
 
     // Following playback to the end of the session brings the last cue in.
-    rerender(<TranscriptPanel cues={LONG_CUES} currentMs={2_999 * 3_600 + 1_000} onSeek={(ms) => seeks.push(ms)} />);
-    const last = await screen.findByRole('button', { name: /Long cue 2999/ });
+    rerender(<TranscriptPanel {...SOURCE} currentMs={2_999 * 3_600 + 1_000} onSeek={(ms) => seeks.push(ms)} />);
+    // The playing minute's window names the row; the row's own window follows.
+    const last = await screen.findByRole('button', { name: /Long cue 2999/ }, { timeout: 5_000 });
     expect(last.getAttribute('aria-current')).toBe('time');
     expect(screen.getAllByTestId('transcript-cue').length).toBeLessThan(40);
     fireEvent.click(last);
@@ -94,18 +119,50 @@ describe('TranscriptPanel following playback', () => {
     layout.scrollByHand(cueBox(), 0);
     expect(await screen.findByRole('button', { name: /Long cue 0$/ })).toBeTruthy();
     expect(screen.queryByRole('button', { name: /Long cue 2999/ })).toBeNull();
+
+    // Only windows were asked for: rows by the hundred, the playing minute by time; never the whole transcript.
+    const windows = requests.map((request) => request.url.searchParams);
+    expect(windows.every((query) => (query.has('fromMs') ? Number(query.get('toMs')) - Number(query.get('fromMs')) === 60_000 : Number(query.get('limit')) === 100))).toBe(true);
+    expect(new Set(windows.filter((query) => query.has('fromIndex')).map((query) => query.get('fromIndex')))).toEqual(new Set(['0', '2900']));
+  });
+
+  it('fetches the whole transcript only to search it, and finds cues anywhere in the three hours', async () => {
+    const requests = stubCues(LONG_CUES);
+    renderWithProviders(<TranscriptPanel {...SOURCE} currentMs={0} onSeek={() => {}} />);
+    await screen.findByText('3000 cues');
+    expect(requests.some((request) => request.url.searchParams.get('limit') === '500')).toBe(false);
+    fireEvent.change(screen.getByRole('searchbox', { name: 'Search the transcript' }), { target: { value: 'cue 2999' } });
+    expect(await screen.findByText('1 of 3000 cues mention “cue 2999”')).toBeTruthy();
+    // The found words are highlighted, each its own element.
+    expect((await screen.findByTestId('transcript-cue')).textContent).toBe('2:59:56Long cue 2999');
+    // Six windows of 500 make the 3,000 cues.
+    expect(requests.filter((request) => request.url.searchParams.get('limit') === '500').map((request) => request.url.searchParams.get('fromIndex'))).toEqual([
+      '0',
+      '500',
+      '1000',
+      '1500',
+      '2000',
+      '2500',
+    ]);
+  });
+
+  it('says when the video has no transcript', async () => {
+    stubApi([{ path: /\/cues\?/, status: 404, body: { statusCode: 404, message: 'This guide has no transcript' } }]);
+    renderWithProviders(<TranscriptPanel {...SOURCE} currentMs={0} onSeek={() => {}} />);
+    expect(await screen.findByText('This video has no transcript.')).toBeTruthy();
   });
 
   it('draws again only the cue that stops playing and the one that starts as the video plays on', async () => {
-    const { rerender } = renderWithProviders(<TranscriptPanel cues={CUES} currentMs={200_000} onSeek={() => {}} />);
+    stubCues(CUES);
+    const { rerender } = renderWithProviders(<TranscriptPanel {...SOURCE} currentMs={200_000} onSeek={() => {}} />);
     await waitFor(() => expect(playingCueDepth()).toBe(BOX_HEIGHT / 3));
     // Let the list settle (the scroll's last frames) before counting.
     await new Promise((resolve) => setTimeout(resolve, 100));
     vi.mocked(formatClock).mockClear();
     // A new function each time, as a player passes: the rows still do not draw again for it.
-    rerender(<TranscriptPanel cues={CUES} currentMs={205_000} onSeek={() => {}} />);
+    rerender(<TranscriptPanel {...SOURCE} currentMs={205_000} onSeek={() => {}} />);
     expect(formatClock).not.toHaveBeenCalled();
-    rerender(<TranscriptPanel cues={CUES} currentMs={210_000} onSeek={() => {}} />);
+    rerender(<TranscriptPanel {...SOURCE} currentMs={210_000} onSeek={() => {}} />);
     expect(vi.mocked(formatClock).mock.calls.map(([ms]) => ms).sort()).toEqual([200_000, 210_000]);
     expect(screen.getByRole('button', { current: 'time' }).textContent).toContain('Cue 21');
   });

@@ -1,39 +1,60 @@
 import { Group, Highlight, Paper, Stack, Text, TextInput, Title, UnstyledButton } from '@mantine/core';
+import { useQueries, useQuery } from '@tanstack/react-query';
 import { memo, useCallback, useDeferredValue, useMemo, useState } from 'react';
 import { BackToNow } from '@/components/back-to-now';
+import { ApiError } from '@/lib/api-client';
 import { useFollowingList } from '@/lib/use-follow-playback';
 import { useStableHandler } from '@/lib/use-stable-handler';
+import { CUE_PAGE_SIZE, CUE_SLICE_MS, guideViewQueries, type WindowCue } from '../api/queries';
 import type { Cue } from '../api/types';
 import classes from './guide-view.module.css';
 import { formatClock } from '@/lib/clock';
 import { currentCueIndex, filterCues, searchWords } from './playback';
 
 export interface TranscriptPanelProps {
-  cues: Cue[];
+  /** Whose transcript: the published guide's, read a window at a time from `/api/guides/:workshop/:guide/cues`. */
+  workshopSlug: string;
+  guideSlug: string;
   currentMs: number;
   onSeek: (ms: number) => void;
 }
+
+/** The guide's video has no transcript (the cues route answers 404). */
+const isMissing = (error: Error) => error instanceof ApiError && error.status === 404;
 
 /** A guess at one cue's height (one line of small text and its padding); each drawn row is measured. */
 const CUE_ROW_ESTIMATE_PX = 30;
 
 /**
  * What is said in the video: the cue playing now stands out; a search keeps the cues holding every word; a click
- * plays from there. Only the cues in view are drawn, so a three-hour transcript costs what a short one does.
+ * plays from there. The transcript arrives a window at a time: the rows in view (pages of CUE_PAGE_SIZE cues as the
+ * list scrolls) and the minute playing now (to know which row plays), so a three-hour transcript costs a reader
+ * what a short one does. Only a search fetches every cue, once.
  */
-export function TranscriptPanel({ cues, currentMs, onSeek }: TranscriptPanelProps) {
+export function TranscriptPanel({ workshopSlug, guideSlug, currentMs, onSeek }: TranscriptPanelProps) {
   const [query, setQuery] = useState('');
   // Filtering a long transcript on every key press must not hold up typing.
   const deferredQuery = useDeferredValue(query);
   const words = useMemo(() => searchWords(deferredQuery), [deferredQuery]);
-  const matches = useMemo(() => filterCues(cues, deferredQuery), [cues, deferredQuery]);
-  const current = currentCueIndex(cues, currentMs);
   const searching = words.length > 0;
+
+  const first = useQuery(guideViewQueries.cuePage(workshopSlug, guideSlug, 0));
+  const total = first.data?.total ?? 0;
+  const playingSlice = useQuery({ ...guideViewQueries.cueSlice(workshopSlug, guideSlug, Math.floor(currentMs / CUE_SLICE_MS)), enabled: total > 0 });
+  const current = useMemo(() => {
+    const cues = playingSlice.data?.cues ?? [];
+    const at = currentCueIndex(cues, currentMs);
+    return at === -1 ? -1 : cues[at].index;
+  }, [playingSlice.data, currentMs]);
+  const everything = useQuery({ ...guideViewQueries.allCues(workshopSlug, guideSlug), enabled: searching && total > 0 });
+  const matches = useMemo(() => (searching && everything.data ? filterCues(everything.data, deferredQuery) : null), [searching, everything.data, deferredQuery]);
+
+  const count = searching ? (matches?.length ?? 0) : total;
   const seek = useStableHandler(onSeek);
   // A row keeps its cue's measured height when a search changes which cues are rows.
-  const rowKey = useCallback((row: number) => matches[row].index, [matches]);
+  const rowKey = useCallback((row: number) => (matches ? matches[row].cue.index : row), [matches]);
   const { following, box, rows, resume } = useFollowingList<HTMLDivElement>({
-    count: matches.length,
+    count,
     // Without a search the rows are the whole transcript, so a cue's index is its row.
     currentIndex: searching ? -1 : current,
     estimateRowHeight: CUE_ROW_ESTIMATE_PX,
@@ -41,15 +62,39 @@ export function TranscriptPanel({ cues, currentMs, onSeek }: TranscriptPanelProp
     place: 'third',
   });
 
+  // The pages holding the rows drawn now (and page 0, which is always held for the total).
+  const drawn = rows.getVirtualItems();
+  const pages = searching ? [] : [...new Set(drawn.map((row) => Math.floor(row.index / CUE_PAGE_SIZE)))].filter((page) => page > 0);
+  const pageAnswers = useQueries({ queries: pages.map((page) => guideViewQueries.cuePage(workshopSlug, guideSlug, page)) });
+  const cueAtRow = (row: number): WindowCue | null => {
+    if (matches) return matches[row]?.cue ?? null;
+    const page = Math.floor(row / CUE_PAGE_SIZE);
+    const answer = page === 0 ? first.data : pageAnswers[pages.indexOf(page)]?.data;
+    return answer?.cues[row - page * CUE_PAGE_SIZE] ?? null;
+  };
+
+  if (first.isPending) {
+    return (
+      <Paper withBorder p="md" component="section" aria-labelledby="guide-transcript-heading" className={classes.transcript} data-testid="guide-transcript">
+        <Title order={2} size="h4" id="guide-transcript-heading">
+          Transcript
+        </Title>
+        <Text size="sm" c="dimmed">
+          Loading the transcript…
+        </Text>
+      </Paper>
+    );
+  }
+
   return (
     <Paper withBorder p="md" component="section" aria-labelledby="guide-transcript-heading" className={classes.transcript} data-testid="guide-transcript">
       <Stack gap="sm">
         <Title order={2} size="h4" id="guide-transcript-heading">
           Transcript
         </Title>
-        {cues.length === 0 ? (
-          <Text size="sm" c="dimmed">
-            This video has no transcript.
+        {total === 0 ? (
+          <Text size="sm" c={first.isError && !isMissing(first.error) ? 'red' : 'dimmed'}>
+            {first.isError && !isMissing(first.error) ? 'The transcript could not be loaded.' : 'This video has no transcript.'}
           </Text>
         ) : (
           <>
@@ -62,14 +107,20 @@ export function TranscriptPanel({ cues, currentMs, onSeek }: TranscriptPanelProp
             />
             <Group justify="space-between" gap="xs">
               <Text size="xs" c="dimmed" aria-live="polite" data-testid="transcript-count">
-                {searching ? `${matches.length} of ${cues.length} cues mention “${deferredQuery.trim()}”` : `${cues.length} cues`}
+                {!searching
+                  ? `${total} cues`
+                  : matches
+                    ? `${matches.length} of ${total} cues mention “${deferredQuery.trim()}”`
+                    : everything.isError
+                      ? 'The transcript could not be searched.'
+                      : 'Searching the transcript…'}
               </Text>
               {!searching && !following && <BackToNow onClick={resume} />}
             </Group>
             <div ref={box} className={classes.cueBox}>
               <ul className={classes.plainList} style={{ height: rows.getTotalSize(), position: 'relative' }}>
-                {rows.getVirtualItems().map((row) => {
-                  const { index, cue } = matches[row.index];
+                {drawn.map((row) => {
+                  const cue = cueAtRow(row.index);
                   return (
                     <li
                       key={row.key}
@@ -77,10 +128,17 @@ export function TranscriptPanel({ cues, currentMs, onSeek }: TranscriptPanelProp
                       ref={rows.measureElement}
                       className={classes.cueRow}
                       style={{ transform: `translateY(${row.start}px)` }}
-                      aria-setsize={matches.length}
+                      aria-setsize={count}
                       aria-posinset={row.index + 1}
                     >
-                      <GuideCue cue={cue} current={index === current} words={searching ? words : null} onSeek={seek} />
+                      {cue ? (
+                        <GuideCue cue={cue} current={cue.index === current} words={searching ? words : null} onSeek={seek} />
+                      ) : (
+                        // The row's window is on its way: a placeholder of one line's height, so the list does not jump.
+                        <Text size="sm" c="dimmed" className={classes.cue} data-testid="transcript-cue-loading">
+                          …
+                        </Text>
+                      )}
                     </li>
                   );
                 })}
