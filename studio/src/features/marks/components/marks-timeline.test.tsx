@@ -67,6 +67,10 @@ describe('MarksTimeline', () => {
     expect(marksDrawn()).toBe(400);
     // One row: every marker sits at the same height.
     expect(new Set(Array.from(markers, (marker) => marker.style.top)).size).toBe(1);
+    // The minimap shows a hairline for each of the 400 marks, all in one path element.
+    const ticks = screen.getByTestId('timeline-minimap-ticks');
+    expect(ticks.querySelectorAll('*')).toHaveLength(1);
+    expect(ticks.querySelector('path')?.getAttribute('d')?.match(/M/g)).toHaveLength(400);
   });
 
   it('zooms in with the wheel around the pointer, down to seconds, where every mark stands alone', () => {
