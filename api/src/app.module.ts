@@ -14,6 +14,7 @@ import { UsersModule } from './users/users.module';
 import { WorkshopsModule } from './workshops/workshops.module';
 import { AssembliesModule } from './assemblies/assemblies.module';
 import { BuildsModule } from './builds/builds.module';
+import { DeletionImpactModule } from './deletion-impact/deletion-impact.module';
 import { FitChecksModule } from './fit-checks/fit-checks.module';
 import { FitReportsModule } from './fit-reports/fit-reports.module';
 import { FitFinderModule } from './fit-finder/fit-finder.module';
@@ -48,6 +49,7 @@ import { TranscriptsModule } from './transcripts/transcripts.module';
     AdminModule,
     ToolsModule,
     BuildsModule,
+    DeletionImpactModule,
     PartsModule,
     MeasurementsModule,
     FitChecksModule,

@@ -594,6 +594,54 @@ export interface paths {
         patch: operations["BuildsController_update"];
         trace?: never;
     };
+    "/api/workshops/{workshopId}/builds/{buildId}/deletion-impact": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["DeletionImpactController_build"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/assemblies/{assemblyId}/deletion-impact": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["DeletionImpactController_assembly"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/footage/{footageId}/deletion-impact": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["DeletionImpactController_footage"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/workshops/{workshopId}/parts": {
         parameters: {
             query?: never;
@@ -2355,6 +2403,30 @@ export interface components {
             /** @enum {string} */
             status?: "planning" | "in_progress" | "verified" | "archived";
         };
+        DeletionImpactItemDto: {
+            /**
+             * @description What kind of thing
+             * @example fitChecks
+             */
+            key: string;
+            /** @example 4 */
+            count: number;
+            /**
+             * @description The count in words, as the studio shows it
+             * @example 4 fit checks
+             */
+            text: string;
+            /**
+             * @description Deleted with it, or kept but no longer pointing at it
+             * @enum {string}
+             */
+            effect: "deleted" | "unlinked";
+        };
+        DeletionImpactDto: {
+            /** @example Coupler install */
+            name: string;
+            items: components["schemas"]["DeletionImpactItemDto"][];
+        };
         SplineSpecDto: {
             /** @example 21 */
             teeth: number;
@@ -3057,6 +3129,56 @@ export interface components {
             name: string;
             notes?: string;
         };
+        AssemblyPlacementDto: {
+            /** @example input side */
+            position: string;
+            /** @example 0 */
+            sortOrder: number;
+            part: components["schemas"]["PartResponseDto"];
+        };
+        InterfaceResponseDto: {
+            /** Format: uuid */
+            id: string;
+            /** @enum {string} */
+            kind: "spline" | "bore_shaft" | "length_window";
+            /** @example Motor shaft into coupler */
+            name: string;
+            /** Format: uuid */
+            featureAId: string;
+            /** Format: uuid */
+            featureBId: string | null;
+            /**
+             * @description The unit lengths are shown in (feature A’s)
+             * @enum {string}
+             */
+            unit: "mm" | "um" | "in" | "thou" | "tenths";
+            installedMinNm: number | null;
+            installedMaxNm: number | null;
+            marginNm: number | null;
+            /** @example 412.0 */
+            installedMin: string | null;
+            /** @example 418.5 */
+            installedMax: string | null;
+            /** @example 3.0 */
+            margin: string | null;
+        };
+        AssemblyDetailDto: {
+            /** Format: uuid */
+            id: string;
+            /** Format: uuid */
+            buildId: string;
+            /** @example 21-tooth coupler with the long driveshaft */
+            name: string;
+            /** @example  */
+            notes: string;
+            /** Format: date-time */
+            createdAt: string;
+            /** Format: date-time */
+            updatedAt: string;
+            /** @description By sortOrder, then position */
+            parts: components["schemas"]["AssemblyPlacementDto"][];
+            interfaces: components["schemas"]["InterfaceResponseDto"][];
+        };
         UpdateAssemblyDto: {
             /** @example 21-tooth coupler with the long driveshaft */
             name?: string;
@@ -3098,32 +3220,6 @@ export interface components {
              * @example 5
              */
             margin?: string;
-        };
-        InterfaceResponseDto: {
-            /** Format: uuid */
-            id: string;
-            /** @enum {string} */
-            kind: "spline" | "bore_shaft" | "length_window";
-            /** @example Motor shaft into coupler */
-            name: string;
-            /** Format: uuid */
-            featureAId: string;
-            /** Format: uuid */
-            featureBId: string | null;
-            /**
-             * @description The unit lengths are shown in (feature A’s)
-             * @enum {string}
-             */
-            unit: "mm" | "um" | "in" | "thou" | "tenths";
-            installedMinNm: number | null;
-            installedMaxNm: number | null;
-            marginNm: number | null;
-            /** @example 412.0 */
-            installedMin: string | null;
-            /** @example 418.5 */
-            installedMax: string | null;
-            /** @example 3.0 */
-            margin: string | null;
         };
         UpdateInterfaceDto: {
             /** @enum {string} */
@@ -3453,6 +3549,40 @@ export interface components {
             /** @description Matching cues of the workshop's active transcripts, best first */
             results: components["schemas"]["WorkshopCueMatchDto"][];
         };
+        MarkResponseDto: {
+            /** Format: uuid */
+            id: string;
+            /** Format: uuid */
+            footageId: string;
+            /**
+             * @description Where it starts in the footage, ms
+             * @example 95000
+             */
+            startMs: number;
+            /**
+             * @description Null for a moment rather than a span
+             * @example 101500
+             */
+            endMs: number | null;
+            /** @enum {string} */
+            kind: "part" | "measurement" | "check_evidence" | "step" | "caution" | "note";
+            /** Format: uuid */
+            partId: string | null;
+            /** Format: uuid */
+            measurementId: string | null;
+            /** Format: uuid */
+            fitCheckId: string | null;
+            /** Format: uuid */
+            guideStepId: string | null;
+            /** @example Pilot bore on the bore gauge */
+            label: string;
+            /** Format: uuid */
+            createdBy: string | null;
+            /** Format: date-time */
+            createdAt: string;
+            /** Format: date-time */
+            updatedAt: string;
+        };
         CreateMarkDto: {
             /**
              * Format: uuid
@@ -3520,6 +3650,54 @@ export interface components {
             kind?: "part" | "measurement" | "check_evidence" | "step" | "caution" | "note";
             label?: string;
         };
+        MarkSuggestionResponseDto: {
+            /** Format: uuid */
+            id: string;
+            /** Format: uuid */
+            footageId: string;
+            /**
+             * Format: uuid
+             * @description The transcript revision it was mined from
+             */
+            transcriptId: string | null;
+            /**
+             * @description The cue it was heard in
+             * @example 12
+             */
+            cueIndex: number;
+            /** @example 95000 */
+            startMs: number;
+            /** @example 98200 */
+            endMs: number;
+            /** @enum {string} */
+            kind: "measurement" | "part";
+            /**
+             * @description What was said
+             * @example fifteen thousandths of an inch
+             */
+            phrase: string;
+            /**
+             * @description The spoken amount as decimal text in `unit`
+             * @example 0.015
+             */
+            value: string | null;
+            /** @enum {string|null} */
+            unit: "mm" | "um" | "in" | null;
+            /** @example 0.381 */
+            millimetres: number | null;
+            /**
+             * Format: uuid
+             * @description For kind `part`: the part whose number was said
+             */
+            partId: string | null;
+            /** @enum {string} */
+            status: "pending" | "accepted" | "dismissed";
+            /**
+             * Format: uuid
+             * @description The mark made when it was accepted
+             */
+            markId: string | null;
+        };
         AcceptSuggestionDto: {
             /** @description Measurement suggestions: the part feature measured (or interfaceId) */
             featureId?: string;
@@ -3542,6 +3720,12 @@ export interface components {
             resolution?: string;
             /** @description The mark's label (defaults to the spoken phrase) */
             label?: string;
+        };
+        AcceptedSuggestionResponseDto: {
+            suggestion: components["schemas"]["MarkSuggestionResponseDto"];
+            mark: components["schemas"]["MarkResponseDto"];
+            /** @description The reading recorded from a spoken measurement */
+            measurement: components["schemas"]["MeasurementResponseDto"] | null;
         };
         CreateGuideDto: {
             /**
@@ -3837,6 +4021,80 @@ export interface components {
             /** @example 1986 compact pickup, 4x2 */
             vehicle?: string;
             notes?: string;
+        };
+        FitReportCheckDto: {
+            /** Format: uuid */
+            id: string;
+            /** @example Test-fitted on the vehicle: coupler engages fully */
+            title: string;
+            state: components["schemas"]["FitCheckState"];
+            /** @example 21-tooth coupler */
+            assemblyName: string;
+        };
+        FitReportGuideDto: {
+            /** @example Swapping the motor coupler */
+            title: string;
+            /**
+             * @description The public guide's path in the studio
+             * @example /guides/hollow-lane-garage/swapping-the-motor-coupler
+             */
+            path: string;
+        };
+        FitReportBuildDto: {
+            /** Format: uuid */
+            id: string;
+            /** @example Van conversion drive line */
+            title: string;
+        };
+        FitReportWorkshopDto: {
+            /** @example Hollow Lane Garage */
+            name: string;
+            /** @example hollow-lane-garage */
+            slug: string;
+        };
+        FitReportReporterDto: {
+            /** @example Rowan Hale */
+            displayName: string;
+        };
+        FitReportPhotoDto: {
+            /** Format: uuid */
+            id: string;
+            /**
+             * @description Address on this API (the reporter's or the workshop's route) that redirects to a short-lived storage link
+             * @example /api/fit-reports/3b1f…/photos/9e2c…
+             */
+            url: string;
+        };
+        FitReportResponseDto: {
+            /** Format: uuid */
+            id: string;
+            /** @enum {string} */
+            outcome: "fit" | "no_fit";
+            /** @example HL-2107 coupler with the DS-540 shaft */
+            parts: string;
+            /** @example 2009 panel van, 2.2 diesel */
+            vehicle: string;
+            /** @example Slid on by hand, no play. */
+            notes: string;
+            /** @enum {string} */
+            status: "new" | "investigating" | "verified" | "declined";
+            /**
+             * @description The workshop's word to the reporter
+             * @example
+             */
+            creatorNote: string;
+            /** @description The fit check that verifies the claim */
+            fitCheck: components["schemas"]["FitReportCheckDto"] | null;
+            /** @description Null once the guide is deleted or its workshop is gone */
+            guide: components["schemas"]["FitReportGuideDto"] | null;
+            build: components["schemas"]["FitReportBuildDto"];
+            workshop: components["schemas"]["FitReportWorkshopDto"];
+            reporter: components["schemas"]["FitReportReporterDto"];
+            photos: components["schemas"]["FitReportPhotoDto"][];
+            /** Format: date-time */
+            createdAt: string;
+            /** Format: date-time */
+            updatedAt: string;
         };
         UpdateFitReportDto: {
             /** @enum {string} */
@@ -5200,6 +5458,93 @@ export interface operations {
             };
         };
     };
+    DeletionImpactController_build: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                buildId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["DeletionImpactDto"];
+                };
+            };
+            /** @description No such build in this workshop */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    DeletionImpactController_assembly: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                assemblyId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["DeletionImpactDto"];
+                };
+            };
+            /** @description No such assembly in this workshop */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    DeletionImpactController_footage: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopId: string;
+                footageId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["DeletionImpactDto"];
+                };
+            };
+            /** @description No such footage in this workshop */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
     PartsController_list: {
         parameters: {
             query?: {
@@ -5810,7 +6155,9 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["AssemblyDetailDto"];
+                };
             };
         };
     };
@@ -6760,11 +7107,14 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description By start time */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["MarkResponseDto"][];
+                };
             };
         };
     };
@@ -6788,7 +7138,9 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["MarkResponseDto"];
+                };
             };
         };
     };
@@ -6834,7 +7186,9 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["MarkResponseDto"];
+                };
             };
         };
     };
@@ -6863,7 +7217,9 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["MarkSuggestionResponseDto"][];
+                };
             };
         };
     };
@@ -6888,7 +7244,9 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["AcceptedSuggestionResponseDto"];
+                };
             };
         };
     };
@@ -6909,7 +7267,9 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["MarkSuggestionResponseDto"];
+                };
             };
         };
     };
@@ -7814,6 +8174,14 @@ export interface operations {
             };
         };
         responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["FitReportResponseDto"];
+                };
+            };
             /** @description More than 10 reports from this person in the last hour */
             429: {
                 headers: {
@@ -7832,11 +8200,14 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description The caller's own reports, newest first */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["FitReportResponseDto"][];
+                };
             };
         };
     };
@@ -7858,11 +8229,14 @@ export interface operations {
             };
         };
         responses: {
+            /** @description The report with its photos */
             201: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["FitReportResponseDto"];
+                };
             };
         };
     };
@@ -7878,7 +8252,8 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
-            200: {
+            /** @description Redirects to a short-lived link to the photo */
+            302: {
                 headers: {
                     [name: string]: unknown;
                 };
@@ -7899,11 +8274,14 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Newest first */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["FitReportResponseDto"][];
+                };
             };
         };
     };
@@ -7927,7 +8305,9 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["FitReportResponseDto"];
+                };
             };
         };
     };
@@ -7944,7 +8324,8 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
-            200: {
+            /** @description Redirects to a short-lived link to the photo */
+            302: {
                 headers: {
                     [name: string]: unknown;
                 };

@@ -28,6 +28,15 @@ export function useCreateAssembly(workshopId: string, buildId: string) {
   });
 }
 
+export function useRenameAssembly(workshopId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: ({ assemblyId, name }: { assemblyId: string; name: string }) =>
+      apiRequest<Assembly>(`/workshops/${workshopId}/assemblies/${assemblyId}`, { method: 'PATCH', body: { name } }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: assemblyQueries.all() }),
+  });
+}
+
 export function useDeleteAssembly(workshopId: string) {
   const queryClient = useQueryClient();
   return useMutation({

@@ -7,7 +7,9 @@ import { Link, useNavigate } from 'react-router-dom';
 import { paths } from '@/config/paths';
 import { splitApiErrors } from '@/lib/form-errors';
 import { useWorkshopReadOnly } from '@/lib/workshop-access';
-import { useCreateAssembly } from '../api/mutations';
+import { DeleteWithImpact } from '@/components/delete-with-impact';
+import { RenameButton } from '@/components/rename-button';
+import { useCreateAssembly, useDeleteAssembly, useRenameAssembly } from '../api/mutations';
 import { assemblyQueries } from '../api/queries';
 import { FormProblems } from '@/components/form-problems';
 
@@ -15,6 +17,8 @@ import { FormProblems } from '@/components/form-problems';
 export function AssembliesList({ workshopId, buildId }: { workshopId: string; buildId: string }) {
   const assemblies = useQuery(assemblyQueries.list(workshopId, buildId));
   const createAssembly = useCreateAssembly(workshopId, buildId);
+  const renameAssembly = useRenameAssembly(workshopId);
+  const deleteAssembly = useDeleteAssembly(workshopId);
   const [creating, createForm] = useDisclosure(false);
   const [general, setGeneral] = useState<string[]>([]);
   const navigate = useNavigate();
@@ -75,10 +79,35 @@ export function AssembliesList({ workshopId, buildId }: { workshopId: string; bu
         <Text c="dimmed">No assemblies yet. An assembly is one combination of parts you want to prove.</Text>
       )}
       {assemblies.data?.map((assembly) => (
-        <Card key={assembly.id} withBorder padding="sm">
-          <Anchor component={Link} to={paths.assembly.to(workshopId, assembly.id)} fw={600}>
-            {assembly.name}
-          </Anchor>
+        <Card key={assembly.id} withBorder padding="sm" data-testid="assembly-card">
+          <Group justify="space-between" wrap="nowrap" align="flex-start">
+            <Anchor component={Link} to={paths.assembly.to(workshopId, assembly.id)} fw={600}>
+              {assembly.name}
+            </Anchor>
+            {!readOnly && (
+              <Group gap={4} wrap="nowrap">
+                <RenameButton
+                  size="compact-xs"
+                  what="assembly"
+                  label="Name"
+                  current={assembly.name}
+                  maxLength={200}
+                  aria-label={`Rename ${assembly.name}`}
+                  onRename={(name) => renameAssembly.mutateAsync({ assemblyId: assembly.id, name })}
+                />
+                <DeleteWithImpact
+                  size="compact-xs"
+                  what="assembly"
+                  name={assembly.name}
+                  aria-label={`Delete ${assembly.name}`}
+                  impactPath={`/workshops/${workshopId}/assemblies/${assembly.id}/deletion-impact`}
+                  onDelete={() => deleteAssembly.mutateAsync(assembly.id)}
+                >
+                  Delete
+                </DeleteWithImpact>
+              </Group>
+            )}
+          </Group>
           {assembly.notes && (
             <Text size="sm" c="dimmed" lineClamp={2}>
               {assembly.notes}

@@ -24,3 +24,11 @@ export function useUpdateBuild(workshopId: string, buildId: string) {
     },
   });
 }
+
+export function useDeleteBuild(workshopId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (buildId: string) => apiRequest<null>(`/workshops/${workshopId}/builds/${buildId}`, { method: 'DELETE' }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: buildQueries.lists() }),
+  });
+}

@@ -1,8 +1,11 @@
 import { Alert, Anchor, Breadcrumbs, Group, Select, Skeleton, Stack, Text, Title } from '@mantine/core';
 import { useQuery } from '@tanstack/react-query';
-import { Link } from 'react-router-dom';
+import { Link, useNavigate } from 'react-router-dom';
+import { DeleteWithImpact } from '@/components/delete-with-impact';
+import { RenameButton } from '@/components/rename-button';
 import { paths } from '@/config/paths';
-import { useUpdateBuild } from '../api/mutations';
+import { useWorkshopReadOnly } from '@/lib/workshop-access';
+import { useDeleteBuild, useUpdateBuild } from '../api/mutations';
 import { BUILD_STATUSES, buildQueries, type BuildStatus } from '../api/queries';
 import { BUILD_STATUS_LABELS } from './build-labels';
 
@@ -10,6 +13,9 @@ import { BUILD_STATUS_LABELS } from './build-labels';
 export function BuildHeader({ workshopId, buildId }: { workshopId: string; buildId: string }) {
   const build = useQuery(buildQueries.detail(workshopId, buildId));
   const updateBuild = useUpdateBuild(workshopId, buildId);
+  const deleteBuild = useDeleteBuild(workshopId);
+  const readOnly = useWorkshopReadOnly();
+  const navigate = useNavigate();
 
   if (build.isPending) return <Skeleton height={90} />;
   if (build.isError) return <Alert color="red" title="Build not found">{build.error.message}</Alert>;
@@ -25,6 +31,28 @@ export function BuildHeader({ workshopId, buildId }: { workshopId: string; build
         <div>
           <Title order={2}>{build.data.title}</Title>
           {build.data.vehicle && <Text c="dimmed">{build.data.vehicle}</Text>}
+          {!readOnly && (
+            <Group gap={4} mt={4}>
+              <RenameButton
+                size="compact-sm"
+                what="build"
+                label="Title"
+                current={build.data.title}
+                maxLength={200}
+                onRename={(title) => updateBuild.mutateAsync({ title })}
+              />
+              <DeleteWithImpact
+                size="compact-sm"
+                what="build"
+                name={build.data.title}
+                impactPath={`/workshops/${workshopId}/builds/${buildId}/deletion-impact`}
+                onDelete={async () => {
+                  await deleteBuild.mutateAsync(buildId);
+                  navigate(paths.builds.to(workshopId));
+                }}
+              />
+            </Group>
+          )}
         </div>
         <Select
           label="Status"

@@ -1,4 +1,5 @@
-import { screen } from '@testing-library/react';
+import { act, fireEvent, screen, waitFor, within } from '@testing-library/react';
+import { stubApi } from '@/testing/api-stub';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { renderWithProviders } from '@/testing/render';
 import type { Footage } from '../api/types';
@@ -45,5 +46,31 @@ describe('FootageCard', () => {
     renderWithProviders(<FootageCard footage={UPLOADING} uploadingHere onResume={() => undefined} />);
     expect(screen.getByTestId('footage-state').textContent).toBe('Uploading');
     expect(screen.queryByRole('button', { name: 'Resume: choose the file' })).toBeNull();
+  });
+
+  it('a ready footage is renamed in a dialog, and deleting it says first which guides lose their video', async () => {
+    const ready: Footage = { ...UPLOADING, state: 'ready', upload: null, durationMs: 60_000 };
+    const requests = stubApi([
+      { method: 'PATCH', path: /^\/workshops\/w1\/footage\/f1$/, body: ({ body }: { body: unknown }) => ({ ...ready, ...(body as object) }) },
+      { path: /^\/workshops\/w1\/footage\/f1\/deletion-impact$/, body: { name: ready.title, items: [{ key: 'guides', count: 1, effect: 'unlinked', text: '1 guide loses its video' }] } },
+      { method: 'DELETE', path: /^\/workshops\/w1\/footage\/f1$/, status: 204, body: null },
+    ]);
+    renderWithProviders(<FootageCard footage={ready} uploadingHere={false} onResume={() => undefined} />);
+    fireEvent.click(screen.getByRole('button', { name: 'Rename Pilot bore check' }));
+    const rename = await screen.findByRole('dialog', { name: 'Rename the footage' });
+    fireEvent.change(within(rename).getByLabelText('Title'), { target: { value: 'Pilot bore, second check' } });
+    await act(async () => {
+      fireEvent.click(within(rename).getByRole('button', { name: 'Save' }));
+    });
+    await waitFor(() => expect(requests.find((request) => request.method === 'PATCH')?.body).toEqual({ title: 'Pilot bore, second check' }));
+
+    fireEvent.click(screen.getByRole('button', { name: 'Delete Pilot bore check' }));
+    const ask = await screen.findByRole('dialog', { name: 'Delete the footage “Pilot bore check”?' });
+    expect(await within(ask).findByText('1 guide loses its video')).toBeTruthy();
+    expect(requests.some((request) => request.method === 'DELETE')).toBe(false);
+    await act(async () => {
+      fireEvent.click(within(ask).getByRole('button', { name: 'Delete footage' }));
+    });
+    await waitFor(() => expect(requests.some((request) => request.method === 'DELETE' && request.url.pathname === '/api/workshops/w1/footage/f1')).toBe(true));
   });
 });

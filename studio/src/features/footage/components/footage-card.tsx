@@ -1,10 +1,12 @@
 import { Anchor, AspectRatio, Badge, Box, Button, Card, FileButton, Group, Image, Progress, Stack, Text } from '@mantine/core';
 import { Link } from 'react-router-dom';
 import { ConfirmButton } from '@/components/confirm-button';
+import { DeleteWithImpact } from '@/components/delete-with-impact';
+import { RenameButton } from '@/components/rename-button';
 import { paths } from '@/config/paths';
 import { notifyError } from '@/lib/notify';
 import { useWorkshopReadOnly } from '@/lib/workshop-access';
-import { useDeleteFootage } from '../api/mutations';
+import { useDeleteFootage, useRenameFootage } from '../api/mutations';
 import type { Footage } from '../api/types';
 import { FootageStateBadge } from './footage-state-badge';
 import { formatClock } from '@/lib/clock';
@@ -43,6 +45,7 @@ function PosterArea({ footage, uploadingHere }: { footage: Footage; uploadingHer
 /** One footage of a build: poster, length, size and its state as it changes. */
 export function FootageCard({ footage, uploadingHere, onResume }: FootageCardProps) {
   const deleteFootage = useDeleteFootage(footage.workshopId);
+  const renameFootage = useRenameFootage(footage.workshopId, footage.id);
   const playerPath = paths.footage.to(footage.workshopId, footage.id);
   const readOnly = useWorkshopReadOnly();
   const interrupted = footage.state === 'uploading' && !uploadingHere && footage.upload !== null;
@@ -110,22 +113,42 @@ export function FootageCard({ footage, uploadingHere, onResume }: FootageCardPro
         )}
         {!uploadingHere && !readOnly && (
           <Group gap="xs" justify="flex-end">
-            <ConfirmButton
-              size="xs"
-              variant="subtle"
-              color="red"
-              question={footage.state === 'uploading' ? `Cancel the upload of “${footage.title}”?` : `Delete “${footage.title}”?`}
-              detail={
-                footage.state === 'uploading'
-                  ? 'The parts sent so far are discarded and the footage is removed.'
-                  : 'The video, its poster frame and its transcripts are deleted for good.'
-              }
-              confirmLabel={footage.state === 'uploading' ? 'Cancel upload' : 'Delete footage'}
-              onConfirm={handleDelete}
-              loading={deleteFootage.isPending}
-            >
-              {footage.state === 'uploading' ? 'Cancel upload' : 'Delete'}
-            </ConfirmButton>
+            {footage.state === 'uploading' ? (
+              <ConfirmButton
+                size="xs"
+                variant="subtle"
+                color="red"
+                question={`Cancel the upload of “${footage.title}”?`}
+                detail="The parts sent so far are discarded and the footage is removed."
+                confirmLabel="Cancel upload"
+                onConfirm={handleDelete}
+                loading={deleteFootage.isPending}
+              >
+                Cancel upload
+              </ConfirmButton>
+            ) : (
+              <>
+                <RenameButton
+                  size="xs"
+                  what="footage"
+                  label="Title"
+                  current={footage.title}
+                  maxLength={200}
+                  aria-label={`Rename ${footage.title}`}
+                  onRename={(title) => renameFootage.mutateAsync(title)}
+                />
+                <DeleteWithImpact
+                  size="xs"
+                  what="footage"
+                  name={footage.title}
+                  aria-label={`Delete ${footage.title}`}
+                  impactPath={`/workshops/${footage.workshopId}/footage/${footage.id}/deletion-impact`}
+                  onDelete={() => deleteFootage.mutateAsync(footage.id)}
+                >
+                  Delete
+                </DeleteWithImpact>
+              </>
+            )}
           </Group>
         )}
       </Stack>
