@@ -6,6 +6,7 @@ import type { SessionUser } from '../common/types/access-context';
 import { AssembliesService } from './assemblies.service';
 import { toAssemblyResponse, toInterfaceResponse } from './assembly.mapper';
 import {
+  AssemblyDetailDto,
   AssemblyResponseDto,
   CreateAssemblyDto,
   CreateInterfaceDto,
@@ -39,7 +40,8 @@ export class AssembliesController {
 
   /** The assembly with its parts (and their features) and interfaces. */
   @Get('assemblies/:assemblyId')
-  detail(@Param('workshopId', ParseUUIDPipe) workshopId: string, @Param('assemblyId', ParseUUIDPipe) assemblyId: string) {
+  @ApiOkResponse({ type: AssemblyDetailDto })
+  detail(@Param('workshopId', ParseUUIDPipe) workshopId: string, @Param('assemblyId', ParseUUIDPipe) assemblyId: string): Promise<AssemblyDetailDto> {
     return this.assemblies.detail(workshopId, assemblyId);
   }
 

@@ -9,7 +9,7 @@ import type { DiameterSpec } from '../parts/entities/part-feature.entity';
 import { PartFeature } from '../parts/entities/part-feature.entity';
 import { PartsService } from '../parts/parts.service';
 import { toAssemblyDetail } from './assembly.mapper';
-import { CreateAssemblyDto, CreateInterfaceDto, PlacePartDto, UpdateAssemblyDto, UpdateInterfaceDto } from './dto/assembly.dto';
+import { AssemblyDetailDto, CreateAssemblyDto, CreateInterfaceDto, PlacePartDto, UpdateAssemblyDto, UpdateInterfaceDto } from './dto/assembly.dto';
 import { AssemblyInterface } from './entities/assembly-interface.entity';
 import { AssemblyPart } from './entities/assembly-part.entity';
 import { Assembly } from './entities/assembly.entity';
@@ -44,7 +44,7 @@ export class AssembliesService {
     return assembly;
   }
 
-  async detail(workshopId: string, assemblyId: string) {
+  async detail(workshopId: string, assemblyId: string): Promise<AssemblyDetailDto> {
     const assembly = await this.get(workshopId, assemblyId);
     const placements = await this.placements.find({ where: { assemblyId } });
     const parts = await Promise.all(placements.map((placement) => this.parts.get(workshopId, placement.partId)));

@@ -1,7 +1,7 @@
 import { formatLengthValue, type LengthUnit } from '../engine/units';
 import { toPartResponse } from '../parts/part.mapper';
 import { Part } from '../parts/entities/part.entity';
-import type { AssemblyResponseDto, InterfaceResponseDto } from './dto/assembly.dto';
+import type { AssemblyDetailDto, AssemblyResponseDto, InterfaceResponseDto } from './dto/assembly.dto';
 import { AssemblyInterface } from './entities/assembly-interface.entity';
 import { AssemblyPart } from './entities/assembly-part.entity';
 import { Assembly } from './entities/assembly.entity';
@@ -40,7 +40,7 @@ export function toAssemblyDetail(
   placements: AssemblyPart[],
   parts: Part[],
   interfaces: { assemblyInterface: AssemblyInterface; unit: LengthUnit }[],
-) {
+): AssemblyDetailDto {
   return {
     ...toAssemblyResponse(assembly),
     parts: placements

@@ -14,6 +14,7 @@ import { photoIdOf } from '../common/uploads/photo-id';
 import { User } from '../users/entities/user.entity';
 import { Workshop } from '../workshops/entities/workshop.entity';
 import type { CreateFitReportDto, UpdateFitReportDto } from './dto/fit-report.dto';
+import type { FitReportResponseDto } from './dto/fit-report-response.dto';
 import { FitReport, type FitReportStatus } from './entities/fit-report.entity';
 import { referenceNotFound } from '../common/http/field-errors';
 import type { AppConfig } from '../config/app-config';
@@ -58,7 +59,7 @@ export class FitReportsService {
     this.appOrigin = config.get('appOrigin', { infer: true });
   }
 
-  async create(reporterId: string, workshopSlug: string, guideSlug: string, input: CreateFitReportDto) {
+  async create(reporterId: string, workshopSlug: string, guideSlug: string, input: CreateFitReportDto): Promise<FitReportResponseDto> {
     const workshop = await this.workshops.findOneBy({ slug: workshopSlug, disabledAt: IsNull() });
     const guide = workshop ? await this.guides.findOneBy({ workshopId: workshop.id, slug: guideSlug, publishedRevisionId: Not(IsNull()) }) : null;
     if (!workshop || !guide) throw new NotFoundException('This guide is not published.');
@@ -121,7 +122,7 @@ export class FitReportsService {
   }
 
   /** Stores a photo (PNG, JPEG or WebP, checked by content) with the reporter's own report. */
-  async addPhoto(reporterId: string, reportId: string, file: UploadedFileLike | undefined) {
+  async addPhoto(reporterId: string, reportId: string, file: UploadedFileLike | undefined): Promise<FitReportResponseDto> {
     const report = await this.reports.findOneBy({ id: reportId, reporterId });
     if (!report) throw new NotFoundException('Fit report not found');
     if (!OPEN_STATUSES.includes(report.status)) throw new BadRequestException('This report has been decided; it takes no more photos.');
@@ -134,17 +135,17 @@ export class FitReportsService {
     return (await this.describe([report], { kind: 'reporter' }))[0];
   }
 
-  async mine(reporterId: string) {
+  async mine(reporterId: string): Promise<FitReportResponseDto[]> {
     const reports = await this.reports.find({ where: { reporterId }, order: { createdAt: 'DESC' } });
     return this.describe(reports, { kind: 'reporter' });
   }
 
-  async listForWorkshop(workshopId: string, status?: FitReportStatus) {
+  async listForWorkshop(workshopId: string, status?: FitReportStatus): Promise<FitReportResponseDto[]> {
     const reports = await this.reports.find({ where: { workshopId, ...(status ? { status } : {}) }, order: { createdAt: 'DESC' } });
     return this.describe(reports, { kind: 'workshop', workshopId });
   }
 
-  async update(workshopId: string, reportId: string, input: UpdateFitReportDto) {
+  async update(workshopId: string, reportId: string, input: UpdateFitReportDto): Promise<FitReportResponseDto> {
     const report = await this.reports.findOneBy({ id: reportId, workshopId });
     if (!report) throw new NotFoundException('Fit report not found');
     if (input.fitCheckId !== undefined) {
@@ -177,7 +178,7 @@ export class FitReportsService {
     return this.storage.presignedGetUrl(key, 300);
   }
 
-  private async describe(reports: FitReport[], viewer: Viewer) {
+  private async describe(reports: FitReport[], viewer: Viewer): Promise<FitReportResponseDto[]> {
     if (reports.length === 0) return [];
     const ids = <K extends keyof FitReport>(key: K) => [...new Set(reports.map((report) => report[key]).filter((id): id is NonNullable<FitReport[K]> => !!id))] as string[];
     const [guides, builds, workshops, checks, reporters] = await Promise.all([

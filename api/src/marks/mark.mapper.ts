@@ -2,8 +2,9 @@ import { toMeasurementResponse } from '../measurements/measurement.mapper';
 import { Measurement } from '../measurements/entities/measurement.entity';
 import { Mark } from './entities/mark.entity';
 import { MarkSuggestion } from './entities/mark-suggestion.entity';
+import type { AcceptedSuggestionResponseDto, MarkResponseDto, MarkSuggestionResponseDto } from './dto/mark-response.dto';
 
-export function toMarkResponse(mark: Mark) {
+export function toMarkResponse(mark: Mark): MarkResponseDto {
   return {
     id: mark.id,
     footageId: mark.footageId,
@@ -21,7 +22,7 @@ export function toMarkResponse(mark: Mark) {
   };
 }
 
-export function toSuggestionResponse(suggestion: MarkSuggestion) {
+export function toSuggestionResponse(suggestion: MarkSuggestion): MarkSuggestionResponseDto {
   return {
     id: suggestion.id,
     footageId: suggestion.footageId,
@@ -40,7 +41,7 @@ export function toSuggestionResponse(suggestion: MarkSuggestion) {
   };
 }
 
-export function toAcceptedResponse(result: { suggestion: MarkSuggestion; mark: Mark; measurement: Measurement | null }) {
+export function toAcceptedResponse(result: { suggestion: MarkSuggestion; mark: Mark; measurement: Measurement | null }): AcceptedSuggestionResponseDto {
   return {
     suggestion: toSuggestionResponse(result.suggestion),
     mark: toMarkResponse(result.mark),

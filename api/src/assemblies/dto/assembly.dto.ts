@@ -2,6 +2,7 @@ import { ApiProperty, ApiPropertyOptional, PartialType } from '@nestjs/swagger';
 import { IsIn, IsInt, IsOptional, IsString, IsUUID, Length, Matches, Max, MaxLength, Min, ValidateIf } from 'class-validator';
 import { LENGTH_UNITS, type LengthUnit } from '../../engine/units';
 import { INTERFACE_KINDS, type InterfaceKind } from '../entities/assembly-interface.entity';
+import { PartResponseDto } from '../../parts/dto/part-response.dto';
 
 const LENGTH = /^\s*(\d+(\.\d*)?|\.\d+)(\s+\d+\/\d+)?\s*$|^\s*\d+\/\d+\s*$/;
 
@@ -101,4 +102,16 @@ export class InterfaceResponseDto {
   @ApiProperty({ type: String, nullable: true, example: '412.0' }) installedMin!: string | null;
   @ApiProperty({ type: String, nullable: true, example: '418.5' }) installedMax!: string | null;
   @ApiProperty({ type: String, nullable: true, example: '3.0' }) margin!: string | null;
+}
+
+export class AssemblyPlacementDto {
+  @ApiProperty({ example: 'input side' }) position!: string;
+  @ApiProperty({ example: 0 }) sortOrder!: number;
+  @ApiProperty({ type: PartResponseDto }) part!: PartResponseDto;
+}
+
+/** The assembly with its parts (and their features) and interfaces. */
+export class AssemblyDetailDto extends AssemblyResponseDto {
+  @ApiProperty({ type: [AssemblyPlacementDto], description: 'By sortOrder, then position' }) parts!: AssemblyPlacementDto[];
+  @ApiProperty({ type: [InterfaceResponseDto] }) interfaces!: InterfaceResponseDto[];
 }

@@ -1,20 +1,19 @@
 import { queryOptions } from '@tanstack/react-query';
 import { apiRequest } from '@/lib/api-client';
+import type { ApiSchema } from '@/lib/api-types';
 import type { LengthUnit } from '@/lib/units';
 
-export const INTERFACE_KINDS = ['spline', 'bore_shaft', 'length_window'] as const;
-export type InterfaceKind = (typeof INTERFACE_KINDS)[number];
+export type Assembly = ApiSchema<'AssemblyResponseDto'>;
+export type AssemblyInterface = ApiSchema<'InterfaceResponseDto'>;
+export type InterfaceKind = AssemblyInterface['kind'];
+/** The kinds in the order the form offers them; `satisfies` keeps them within the API's enum. */
+export const INTERFACE_KINDS = ['spline', 'bore_shaft', 'length_window'] as const satisfies readonly InterfaceKind[];
 
-export interface Assembly {
-  id: string;
-  buildId: string;
-  name: string;
-  notes: string;
-  createdAt: string;
-  updatedAt: string;
-}
-
-/** The part features an interface can join, as the assembly detail carries them. */
+/**
+ * The part features an interface can join, as the assembly detail carries them (ApiSchema<'AssemblyDetailDto'>), read
+ * loosely: the interface pickers compare gender and role without narrowing by kind. The detail query reads the generated
+ * type and returns it as this one, so a change of the API's shape that no longer fits fails the type check.
+ */
 export interface FeatureInfo {
   id: string;
   partId: string;
@@ -25,8 +24,11 @@ export interface FeatureInfo {
     teeth?: number;
     gender?: 'internal' | 'external';
     role?: 'hole' | 'shaft';
-    toleranceClass?: string;
+    /** A diameter's ISO 286 class ("H7"), or a spline's class number (4 to 7). */
+    toleranceClass?: string | number;
     nominalNm?: number;
+    /** The other kinds' fields (lengths, free values), which the pickers do not read. */
+    [other: string]: unknown;
   };
   shown: Record<string, string>;
 }
@@ -38,21 +40,6 @@ export interface PartInfo {
   title: string;
   category: string;
   features: FeatureInfo[];
-}
-
-export interface AssemblyInterface {
-  id: string;
-  kind: InterfaceKind;
-  name: string;
-  featureAId: string;
-  featureBId: string | null;
-  unit: LengthUnit;
-  installedMinNm: number | null;
-  installedMaxNm: number | null;
-  marginNm: number | null;
-  installedMin: string | null;
-  installedMax: string | null;
-  margin: string | null;
 }
 
 export interface AssemblyDetail extends Assembly {
@@ -71,7 +58,8 @@ export const assemblyQueries = {
   detail: (workshopId: string, assemblyId: string) =>
     queryOptions({
       queryKey: [...assemblyQueries.all(), 'detail', workshopId, assemblyId] as const,
-      queryFn: ({ signal }) => apiRequest<AssemblyDetail>(`/workshops/${workshopId}/assemblies/${assemblyId}`, { signal }),
+      queryFn: async ({ signal }): Promise<AssemblyDetail> =>
+        apiRequest<ApiSchema<'AssemblyDetailDto'>>(`/workshops/${workshopId}/assemblies/${assemblyId}`, { signal }),
     }),
   /** The workshop's parts, to choose from when placing one. */
   partChoices: (workshopId: string) =>

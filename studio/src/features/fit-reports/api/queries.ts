@@ -1,35 +1,15 @@
 import { queryOptions } from '@tanstack/react-query';
 import { apiRequest } from '@/lib/api-client';
+import type { ApiSchema } from '@/lib/api-types';
 
-/** Shapes of the fit-report routes (api/src/fit-reports; OpenAPI at /api/docs). */
-export const FIT_REPORT_STATUSES = ['new', 'investigating', 'verified', 'declined'] as const;
-export type FitReportStatus = (typeof FIT_REPORT_STATUSES)[number];
-export type FitReportOutcome = 'fit' | 'no_fit';
-export type CheckState = 'open' | 'bench_pass' | 'confirmed' | 'no_fit' | 'retired';
-
-export interface FitReportPhoto {
-  id: string;
-  /** A same-origin API path that redirects to storage (usable as an <img src>). */
-  url: string;
-}
-
-export interface FitReport {
-  id: string;
-  outcome: FitReportOutcome;
-  parts: string;
-  vehicle: string;
-  notes: string;
-  status: FitReportStatus;
-  creatorNote: string;
-  fitCheck: { id: string; title: string; state: CheckState; assemblyName: string } | null;
-  guide: { title: string; path: string } | null;
-  build: { id: string; title: string };
-  workshop: { name: string; slug: string };
-  reporter: { displayName: string };
-  photos: FitReportPhoto[];
-  createdAt: string;
-  updatedAt: string;
-}
+export type FitReport = ApiSchema<'FitReportResponseDto'>;
+/** A photo's `url` is a same-origin API path that redirects to storage (usable as an <img src>). */
+export type FitReportPhoto = ApiSchema<'FitReportPhotoDto'>;
+export type FitReportStatus = FitReport['status'];
+export type FitReportOutcome = FitReport['outcome'];
+export type CheckState = ApiSchema<'FitCheckState'>;
+/** The statuses in the order the review offers them; `satisfies` keeps them within the API's enum. */
+export const FIT_REPORT_STATUSES = ['new', 'investigating', 'verified', 'declined'] as const satisfies readonly FitReportStatus[];
 
 export interface NewFitReport {
   outcome: FitReportOutcome;

@@ -1,5 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '@/lib/api-client';
+import type { ApiSchema } from '@/lib/api-types';
 import { markQueries, type Mark, type MarkKind, type MarkSuggestion } from './queries';
 
 export interface MarkInput {
@@ -63,7 +64,7 @@ export function useRecordReading(workshopId: string) {
   const refresh = useRefresh(true);
   return useMutation({
     mutationFn: (input: ReadingInput) =>
-      apiRequest<{ id: string; shown: string; footageTimeMs: number | null }>(`/workshops/${workshopId}/measurements`, {
+      apiRequest<ApiSchema<'MeasurementResponseDto'>>(`/workshops/${workshopId}/measurements`, {
         method: 'POST',
         body: input,
       }),
@@ -83,10 +84,10 @@ export function useAcceptSuggestion(workshopId: string, footageId: string) {
   const refresh = useRefresh(true);
   return useMutation({
     mutationFn: ({ id, ...input }: AcceptInput & { id: string }) =>
-      apiRequest<{ mark: Mark; measurement: { id: string; shown: string; footageTimeMs: number } | null }>(
-        `${base(workshopId, footageId)}/mark-suggestions/${id}/accept`,
-        { method: 'POST', body: input },
-      ),
+      apiRequest<ApiSchema<'AcceptedSuggestionResponseDto'>>(`${base(workshopId, footageId)}/mark-suggestions/${id}/accept`, {
+        method: 'POST',
+        body: input,
+      }),
     onSuccess: refresh,
   });
 }

@@ -1,42 +1,14 @@
 import { queryOptions } from '@tanstack/react-query';
 import { ApiError, apiRequest } from '@/lib/api-client';
 import type { FitCheckState } from '@/components/check-state';
+import type { ApiSchema } from '@/lib/api-types';
 
-/** Shapes of the marks routes (api/src/marks; OpenAPI at /api/docs). */
-export const MARK_KINDS = ['part', 'measurement', 'check_evidence', 'step', 'caution', 'note'] as const;
-export type MarkKind = (typeof MARK_KINDS)[number];
-
-export interface Mark {
-  id: string;
-  footageId: string;
-  startMs: number;
-  endMs: number | null;
-  kind: MarkKind;
-  partId: string | null;
-  measurementId: string | null;
-  fitCheckId: string | null;
-  guideStepId: string | null;
-  label: string;
-  createdBy: string | null;
-  createdAt: string;
-  updatedAt: string;
-}
-
-export interface MarkSuggestion {
-  id: string;
-  footageId: string;
-  cueIndex: number;
-  startMs: number;
-  endMs: number;
-  kind: 'measurement' | 'part';
-  phrase: string;
-  value: string | null;
-  unit: 'mm' | 'um' | 'in' | null;
-  millimetres: number | null;
-  partId: string | null;
-  status: 'pending' | 'accepted' | 'dismissed';
-  markId: string | null;
-}
+export type Mark = ApiSchema<'MarkResponseDto'>;
+export type MarkKind = Mark['kind'];
+/** The kinds in the order the form offers them; `satisfies` keeps them within the API's enum. */
+export const MARK_KINDS = ['part', 'measurement', 'check_evidence', 'step', 'caution', 'note'] as const satisfies readonly MarkKind[];
+/** A suggestion as the studio reads it (it never needs the transcript revision it was mined from). */
+export type MarkSuggestion = Omit<ApiSchema<'MarkSuggestionResponseDto'>, 'transcriptId'>;
 
 /** Only what the link pickers need from the parts, measurements, assemblies, fit-check and guide routes. */
 export interface PartChoice {
