@@ -1,11 +1,12 @@
 import { BadRequestException, Body, Controller, Delete, Get, HttpCode, Inject, Param, ParseUUIDPipe, Patch, Post, Put, Query, Res } from '@nestjs/common';
-import { ApiNoContentResponse, ApiNotFoundResponse, ApiOkResponse, ApiTags } from '@nestjs/swagger';
+import { ApiCreatedResponse, ApiNoContentResponse, ApiNotFoundResponse, ApiOkResponse, ApiTags } from '@nestjs/swagger';
 import type { Response } from 'express';
 import { Public, SignedIn } from '../common/decorators/access.decorator';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import type { SessionUser } from '../common/types/access-context';
 import { CreateFollowDto, UnsubscribeBodyDto, UnsubscribeQueryDto, UnsubscribeResultDto } from './dto/follow.dto';
 import { FollowDeliveryDto, MailLinkQueryDto, MailPreferencesDto, UpdateMailPreferencesDto } from './dto/mail-preferences.dto';
+import { FollowResponseDto } from './dto/follow-response.dto';
 import { FollowsService } from './follows.service';
 import { MailPreferencesService } from './mail-preferences.service';
 
@@ -20,14 +21,21 @@ export class FollowsController {
 
   @Get()
   @SignedIn()
-  list(@CurrentUser() user: SessionUser) {
+  @ApiOkResponse({ type: [FollowResponseDto], description: "The caller's follows" })
+  list(@CurrentUser() user: SessionUser): Promise<FollowResponseDto[]> {
     return this.follows.list(user.id);
   }
 
   @Post()
   @SignedIn()
+  @ApiCreatedResponse({ type: FollowResponseDto, description: 'A new follow' })
+  @ApiOkResponse({ type: FollowResponseDto, description: 'Already followed: the existing follow, unchanged' })
   @ApiNotFoundResponse({ description: 'The target is neither in a published guide nor in one of your workshops' })
-  async follow(@CurrentUser() user: SessionUser, @Body() body: CreateFollowDto, @Res({ passthrough: true }) response: Response) {
+  async follow(
+    @CurrentUser() user: SessionUser,
+    @Body() body: CreateFollowDto,
+    @Res({ passthrough: true }) response: Response,
+  ): Promise<FollowResponseDto> {
     const { follow, created } = await this.follows.follow(user.id, body.targetKind, body.targetId);
     response.status(created ? 201 : 200);
     return follow;

@@ -13,6 +13,7 @@ import { FitNewsDelivery } from './entities/fit-news-delivery.entity';
 import { MailLink } from './entities/mail-link.entity';
 import { DEFAULT_MAIL_PREFERENCE, MailPreference } from './entities/mail-preference.entity';
 import { Follow, type FollowTargetKind } from './entities/follow.entity';
+import type { FollowResponseDto } from './dto/follow-response.dto';
 
 export interface FollowTarget {
   kind: FollowTargetKind;
@@ -46,13 +47,13 @@ export class FollowsService {
     @InjectRepository(WorkshopMember) private readonly members: Repository<WorkshopMember>,
   ) {}
 
-  async list(userId: string) {
+  async list(userId: string): Promise<FollowResponseDto[]> {
     const follows = await this.follows.find({ where: { userId }, order: { createdAt: 'DESC' } });
     return this.describe(follows);
   }
 
   /** Following twice gives back the first follow; `created` says which happened. */
-  async follow(userId: string, kind: FollowTargetKind, targetId: string) {
+  async follow(userId: string, kind: FollowTargetKind, targetId: string): Promise<{ follow: FollowResponseDto; created: boolean }> {
     const target = await this.target(kind, targetId);
     if (!target || !(await this.mayFollow(userId, target))) {
       throw new NotFoundException({ message: NOTHING_TO_FOLLOW, errors: { targetId: NOTHING_TO_FOLLOW }, code: 'reference_not_found' });
@@ -229,7 +230,7 @@ export class FollowsService {
     return this.guides.existsBy({ assemblyId: target.id, ...published });
   }
 
-  private async describe(follows: Follow[]) {
+  private async describe(follows: Follow[]): Promise<FollowResponseDto[]> {
     const workshopIds = [...new Set(follows.map((follow) => follow.workshopId))];
     const workshops = workshopIds.length ? await this.workshops.findBy({ id: In(workshopIds) }) : [];
     return Promise.all(

@@ -8,7 +8,7 @@ import {
   ApiUnprocessableEntityResponse,
 } from '@nestjs/swagger';
 import { Public } from '../common/decorators/access.decorator';
-import { FitQueryDto } from './dto/fit-query.dto';
+import { FitLimitsDto, FitQueryDto } from './dto/fit-query.dto';
 import { SplineDimensionsDto, SplineDimensionsQueryDto, SplineIdentificationDto, SplineIdentifyQueryDto } from './dto/spline-query.dto';
 import { ExtractMeasurementsDto, ParseTranscriptDto } from './dto/text-input.dto';
 import { ExtractedMeasurementsDto, ParsedTranscriptDto } from './dto/text-output.dto';
@@ -29,7 +29,8 @@ export class ToolsController {
   ) {}
 
   @Get('fits')
-  fits(@Query() query: FitQueryDto) {
+  @ApiOkResponse({ type: FitLimitsDto })
+  fits(@Query() query: FitQueryDto): FitLimitsDto {
     return this.tools.calculateFit(query);
   }
 

@@ -1,11 +1,11 @@
 import { BadRequestException, Injectable } from '@nestjs/common';
 import { fitLimits, identifySpline, parseSplinePitch, splineBasicDimensions, toNanometres, UnitError } from '../engine';
-import { FitQueryDto } from './dto/fit-query.dto';
+import { FitLimitsDto, FitQueryDto } from './dto/fit-query.dto';
 import { SplineDimensionsQueryDto, SplineIdentifyQueryDto } from './dto/spline-query.dto';
 
 @Injectable()
 export class ToolsService {
-  calculateFit(query: FitQueryDto) {
+  calculateFit(query: FitQueryDto): FitLimitsDto {
     const sizeMm = toNanometres(query.size, query.unit) / 1_000_000;
     return fitLimits({ sizeMm, hole: query.hole, shaft: query.shaft }, { jsRounding: query.jsRounding });
   }

@@ -2183,6 +2183,51 @@ export interface components {
             page: number;
             pageSize: number;
         };
+        FitDeviationsDto: {
+            /**
+             * @description Upper deviation (ES for a hole, es for a shaft), µm
+             * @example 21
+             */
+            upper: number;
+            /**
+             * @description Lower deviation (EI for a hole, ei for a shaft), µm
+             * @example 0
+             */
+            lower: number;
+        };
+        FitClearanceDto: {
+            /**
+             * @description Largest hole minus smallest shaft, µm
+             * @example 41
+             */
+            max: number;
+            /**
+             * @description Smallest hole minus largest shaft, µm; negative means interference
+             * @example 7
+             */
+            min: number;
+        };
+        FitConventionDto: {
+            /** @enum {string} */
+            jsRounding: "none" | "even";
+            /** @example js/JS = ±IT/2 exactly, as in the current ISO 286-2 tables */
+            description: string;
+        };
+        FitLimitsDto: {
+            hole: components["schemas"]["FitDeviationsDto"];
+            /**
+             * @example {
+             *       "upper": -7,
+             *       "lower": -20
+             *     }
+             */
+            shaft: components["schemas"]["FitDeviationsDto"];
+            clearance: components["schemas"]["FitClearanceDto"];
+            /** @enum {string} */
+            kind: "clearance" | "transition" | "interference";
+            /** @description Which js/JS convention the numbers follow */
+            convention: components["schemas"]["FitConventionDto"];
+        };
         ConvertedLengthDto: {
             /** @example 34.925 */
             value: number;
@@ -3884,6 +3929,33 @@ export interface components {
             /** @description The cues in the window, in order (at most 500) */
             cues: components["schemas"]["CueDto"][];
         };
+        FollowWorkshopDto: {
+            /** @example Hollow Lane Garage */
+            name: string;
+            /** @example hollow-lane-garage */
+            slug: string;
+        };
+        FollowResponseDto: {
+            /** Format: uuid */
+            id: string;
+            /** @enum {string} */
+            targetKind: "workshop" | "build" | "assembly";
+            /** Format: uuid */
+            targetId: string;
+            /**
+             * @description The workshop's, build's or assembly's name; (removed) once it is gone
+             * @example Van conversion drive line
+             */
+            label: string;
+            /**
+             * @description How its fit news is mailed
+             * @enum {string}
+             */
+            delivery: "at_once" | "daily" | "weekly" | "paused";
+            workshop: components["schemas"]["FollowWorkshopDto"];
+            /** Format: date-time */
+            createdAt: string;
+        };
         CreateFollowDto: {
             /** @enum {string} */
             targetKind: "workshop" | "build" | "assembly";
@@ -5163,7 +5235,9 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["FitLimitsDto"];
+                };
             };
             /** @description Too many calculator requests from this address; wait a minute */
             429: {
@@ -7906,11 +7980,14 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description The caller's follows */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["FollowResponseDto"][];
+                };
             };
         };
     };
@@ -7927,6 +8004,24 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Already followed: the existing follow, unchanged */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["FollowResponseDto"];
+                };
+            };
+            /** @description A new follow */
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["FollowResponseDto"];
+                };
+            };
             /** @description The target is neither in a published guide nor in one of your workshops */
             404: {
                 headers: {

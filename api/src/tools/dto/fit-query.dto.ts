@@ -1,6 +1,7 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { IsIn, IsNumber, IsOptional, IsPositive, Matches } from 'class-validator';
 import { NumberFromText } from '../../common/decorators/number-from-text.decorator';
+import type { Clearance, FitConvention, FitKind, FitLimits, JsRounding, Limits } from '../../engine/fits';
 
 export class FitQueryDto {
   @ApiProperty({ example: 25, description: 'Nominal size, in `unit`' })
@@ -29,4 +30,28 @@ export class FitQueryDto {
   @IsOptional()
   @IsIn(['none', 'even'], { message: 'jsRounding must be none or even' })
   jsRounding: 'none' | 'even' = 'none';
+}
+
+export class FitDeviationsDto implements Limits {
+  @ApiProperty({ example: 21, description: 'Upper deviation (ES for a hole, es for a shaft), µm' }) upper!: number;
+  @ApiProperty({ example: 0, description: 'Lower deviation (EI for a hole, ei for a shaft), µm' }) lower!: number;
+}
+
+export class FitClearanceDto implements Clearance {
+  @ApiProperty({ example: 41, description: 'Largest hole minus smallest shaft, µm' }) max!: number;
+  @ApiProperty({ example: 7, description: 'Smallest hole minus largest shaft, µm; negative means interference' }) min!: number;
+}
+
+export class FitConventionDto implements FitConvention {
+  @ApiProperty({ enum: ['none', 'even'] }) jsRounding!: JsRounding;
+  @ApiProperty({ example: 'js/JS = ±IT/2 exactly, as in the current ISO 286-2 tables' }) description!: string;
+}
+
+/** ISO 286 limits of a hole and a shaft class at one size (H7/g6 at 25 mm in the examples). */
+export class FitLimitsDto implements FitLimits {
+  @ApiProperty({ type: FitDeviationsDto }) hole!: FitDeviationsDto;
+  @ApiProperty({ type: FitDeviationsDto, example: { upper: -7, lower: -20 } }) shaft!: FitDeviationsDto;
+  @ApiProperty({ type: FitClearanceDto }) clearance!: FitClearanceDto;
+  @ApiProperty({ enum: ['clearance', 'transition', 'interference'] }) kind!: FitKind;
+  @ApiProperty({ type: FitConventionDto, description: 'Which js/JS convention the numbers follow' }) convention!: FitConventionDto;
 }

@@ -1,5 +1,6 @@
 import { queryOptions } from '@tanstack/react-query';
 import { apiRequest } from '@/lib/api-client';
+import type { ApiSchema } from '@/lib/api-types';
 
 export interface FitQuery {
   size: string;
@@ -11,14 +12,7 @@ export interface FitQuery {
 }
 
 /** Deviations and clearances in µm; a negative clearance minimum means the parts may interfere. */
-export interface FitAnswer {
-  hole: { upper: number; lower: number };
-  shaft: { upper: number; lower: number };
-  clearance: { max: number; min: number };
-  kind: 'clearance' | 'transition' | 'interference';
-  /** Which js/JS convention the numbers follow, in words (the API states it in every answer). */
-  convention: { jsRounding: 'none' | 'even'; description: string };
-}
+export type FitAnswer = ApiSchema<'FitLimitsDto'>;
 
 export interface SplineQuery {
   teeth: string;

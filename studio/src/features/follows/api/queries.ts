@@ -2,18 +2,8 @@ import { queryOptions } from '@tanstack/react-query';
 import { apiRequest } from '@/lib/api-client';
 import type { ApiSchema } from '@/lib/api-types';
 
-/** Shapes of the follows routes (api/src/follows; OpenAPI at /api/docs). */
-export type FollowTargetKind = 'workshop' | 'build' | 'assembly';
-
-export interface Follow {
-  id: string;
-  targetKind: FollowTargetKind;
-  targetId: string;
-  /** The workshop's, build's or assembly's name as the follower sees it. */
-  label: string;
-  workshop: { name: string; slug: string };
-  createdAt: string;
-}
+export type Follow = ApiSchema<'FollowResponseDto'>;
+export type FollowTargetKind = Follow['targetKind'];
 
 export interface FollowTarget {
   id: string;

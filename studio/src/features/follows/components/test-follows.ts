@@ -22,6 +22,7 @@ export function testFollow(overrides: Partial<Follow> = {}): Follow {
     targetKind: 'assembly',
     targetId: 'a1',
     label: '21-tooth coupler stack',
+    delivery: 'at_once',
     workshop: { name: 'Harrow Lane Garage', slug: 'harrow-lane-garage' },
     createdAt: '2026-03-04T10:00:00.000Z',
     ...overrides,
