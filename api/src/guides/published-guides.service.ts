@@ -14,6 +14,7 @@ import { StorageService } from '../infra/storage/storage.service';
 import { Mark } from '../marks/entities/mark.entity';
 import { Measurement } from '../measurements/entities/measurement.entity';
 import { Transcript } from '../transcripts/entities/transcript.entity';
+import { User } from '../users/entities/user.entity';
 import { TranscriptCue } from '../transcripts/entities/transcript-cue.entity';
 import type { CueWindowQueryDto, CueWindowResponseDto } from '../transcripts/dto/transcript.dto';
 import { TranscriptsService } from '../transcripts/transcripts.service';
@@ -28,7 +29,7 @@ import { PublishedGuideCache, type CachedAnswer } from './published-guide-cache'
 const MEDIA_URL_TTL_SECONDS = 60 * 60;
 const INDEX_LIMIT = 50;
 /** Part of every tag: change it when the answers' shape changes, so no cache keeps the old shape. */
-const ANSWER_SHAPE = 'public-guides-3';
+const ANSWER_SHAPE = 'public-guides-4';
 
 interface PublishedGuide {
   workshop: Workshop;
@@ -54,6 +55,7 @@ export class PublishedGuidesService {
     @InjectRepository(TranscriptCue) private readonly cues: Repository<TranscriptCue>,
     @InjectRepository(Mark) private readonly marks: Repository<Mark>,
     @InjectRepository(Measurement) private readonly measurements: Repository<Measurement>,
+    @InjectRepository(User) private readonly users: Repository<User>,
     private readonly fitChecks: FitChecksService,
     private readonly assemblies: AssembliesService,
     private readonly transcriptsService: TranscriptsService,
@@ -151,7 +153,7 @@ export class PublishedGuidesService {
     const footage = content.footageId ? await this.footage.findOneBy({ id: content.footageId, workshopId: workshop.id }) : null;
     const transcript = footage ? await this.transcripts.findOneBy({ footageId: footage.id, isActive: true }) : null;
     const basePath = `/api${publicGuidePath(workshop.slug, guide.slug)}`;
-    const checklist = content.assemblyId ? await this.checklist(workshop.id, content.assemblyId, footage?.id ?? null, basePath) : null;
+    const checklist = content.assemblyId ? await this.checklist(workshop, content.assemblyId, footage?.id ?? null, basePath) : null;
     const parts = content.assemblyId ? await this.parts(workshop.id, content.assemblyId) : [];
     return {
       workshop: { name: workshop.name, slug: workshop.slug },
@@ -272,7 +274,8 @@ export class PublishedGuidesService {
   }
 
   /** The live checklist with evidence a viewer can follow; evidence marks in the guide's footage seek the video. */
-  private async checklist(workshopId: string, assemblyId: string, footageId: string | null, basePath: string) {
+  private async checklist(workshop: Workshop, assemblyId: string, footageId: string | null, basePath: string) {
+    const workshopId = workshop.id;
     const assembly = await this.assemblies.get(workshopId, assemblyId).catch(() => null);
     if (!assembly) return null;
     const { verdict, items } = await this.fitChecks.checklist(workshopId, assemblyId);
@@ -284,6 +287,9 @@ export class PublishedGuidesService {
     const marks = markWhere.length ? await this.marks.find({ where: markWhere }) : [];
     const measurementIds = evidence.map((item) => item.measurementId).filter((id): id is string => !!id);
     const measurements = measurementIds.length ? await this.measurements.findBy({ id: In(measurementIds) }) : [];
+    // Members' names reach readers only where the workshop chose to show them.
+    const confirmerIds = workshop.showMemberNames ? [...new Set(items.map(({ check }) => check.confirmedBy).filter((id): id is string => !!id))] : [];
+    const confirmers = confirmerIds.length ? await this.users.find({ where: { id: In(confirmerIds) }, select: { id: true, displayName: true } }) : [];
     const checks = items
       .filter(({ check }) => check.state !== 'retired')
       .map(({ check, evidence: items }) => ({
@@ -293,6 +299,7 @@ export class PublishedGuidesService {
         required: check.required,
         detail: typeof check.detail?.summary === 'string' ? check.detail.summary : check.reason || null,
         confirmedAt: check.confirmedAt?.toISOString() ?? null,
+        confirmedBy: (check.confirmedBy && confirmers.find((user) => user.id === check.confirmedBy)?.displayName) || null,
         evidence: items.map((item) => {
           if (item.kind === 'mark') {
             const mark = marks.find((candidate) => candidate.id === item.markId);

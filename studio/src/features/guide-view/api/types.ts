@@ -72,6 +72,8 @@ export interface PublishedCheck {
   required: boolean;
   detail: string | null;
   confirmedAt: string | null;
+  /** The member who confirmed it, only where the workshop shows member names; otherwise null. */
+  confirmedBy: string | null;
   evidence: CheckEvidence[];
 }
 

@@ -3,6 +3,7 @@ import { describe, expect, it, vi } from 'vitest';
 import { renderWithProviders } from '@/testing/render';
 import { ChecklistPanel } from './checklist-panel';
 import { testGuide } from './test-guide';
+import { formatDate } from '@/lib/dates';
 
 const checklist = testGuide().checklist!;
 
@@ -20,6 +21,16 @@ describe('ChecklistPanel', () => {
     expect(shapes).toEqual(['confirmed', 'bench_pass', 'open', 'no_fit', 'retired']);
     expect(within(rows[3]).getByText('Optional: does not decide the verdict')).toBeTruthy();
     expect(screen.getByTestId('checklist-verdict').textContent).toMatch(/^Passes on the bench/);
+  });
+
+  it('names who confirmed a check only when the answer carries a name (the workshop shows member names)', () => {
+    const named = { ...checklist, checks: checklist.checks.map((check, index) => (index === 0 ? { ...check, confirmedBy: 'Quinn Marsh' } : check)) };
+    const { unmount } = renderWithProviders(<ChecklistPanel checklist={named} onSeek={() => {}} />);
+    const when = formatDate('2026-03-01T09:00:00.000Z');
+    expect(within(screen.getAllByTestId('guide-check')[0]).getByText(`Confirmed ${when} by Quinn Marsh`)).toBeTruthy();
+    unmount();
+    renderWithProviders(<ChecklistPanel checklist={checklist} onSeek={() => {}} />);
+    expect(within(screen.getAllByTestId('guide-check')[0]).getByText(`Confirmed ${when}`)).toBeTruthy();
   });
 
   it('turns evidence with a time into a link that moves the video there', () => {

@@ -84,6 +84,7 @@ export function ChecklistPanel({ checklist, onSeek }: ChecklistPanelProps) {
                   {check.confirmedAt && (
                     <Text size="xs" c="dimmed">
                       Confirmed {formatDate(check.confirmedAt)}
+                      {check.confirmedBy ? ` by ${check.confirmedBy}` : ''}
                     </Text>
                   )}
                 </div>
