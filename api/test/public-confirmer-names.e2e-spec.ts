@@ -38,5 +38,9 @@ describe('public guide: who confirmed a check, only where the workshop shows mem
     await owner.agent.patch(base).send({ showMemberNames: true }).expect(200);
     const shown = (await request(app.getHttpServer()).get(path).expect(200)).body;
     expect(shown.checklist.checks[0]).toMatchObject({ state: 'confirmed', confirmedBy: 'Rowan Fettle' });
+
+    // Turned off again within the same second: the names go at once (the answer's tag carries the setting).
+    await owner.agent.patch(base).send({ showMemberNames: false }).expect(200);
+    expect((await request(app.getHttpServer()).get(path).expect(200)).body.checklist.checks[0].confirmedBy).toBeNull();
   });
 });

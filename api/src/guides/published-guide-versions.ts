@@ -42,6 +42,7 @@ export const PUBLISHED_GUIDE_VERSION_SQL = `
 SELECT
   g.published_revision_id AS revisionId,
   w.updated_at AS workshopAt,
+  w.show_member_names AS showMemberNames,
   b.id AS buildId,
   b.updated_at AS buildAt,
   f.id AS footageId,
