@@ -6,6 +6,7 @@ import type { GuideRevision } from './entities/guide-revision.entity';
 import type { GuideStep } from './entities/guide-step.entity';
 import type { Guide } from './entities/guide.entity';
 import { stepContent, type GuideContent } from './guide-content';
+import type { GuideResponseDto, GuideRevisionResponseDto, GuideStepResponseDto, GuideSummaryDto } from './dto/guide-response.dto';
 
 /** A draft's steps and content, with the revision it is compared to. */
 export interface GuideState {
@@ -30,7 +31,7 @@ function publication(guide: Guide, state: GuideState, workshopSlug: string) {
   };
 }
 
-export function toGuideSummary(guide: Guide, state: GuideState, workshopSlug: string) {
+export function toGuideSummary(guide: Guide, state: GuideState, workshopSlug: string): GuideSummaryDto {
   return {
     id: guide.id,
     buildId: guide.buildId,
@@ -44,17 +45,17 @@ export function toGuideSummary(guide: Guide, state: GuideState, workshopSlug: st
   };
 }
 
-export function toStepResponse(step: GuideStep, marks: Mark[]) {
+export function toStepResponse(step: GuideStep, marks: Mark[]): GuideStepResponseDto {
   return { ...stepContent(step), estimatedMinutes: step.estimatedMinutes, marks: marks.map(toMarkResponse) };
 }
 
 export function toGuideResponse(
   guide: Guide,
   state: GuideState,
-  steps: ReturnType<typeof toStepResponse>[],
+  steps: GuideStepResponseDto[],
   detectedSafetyTopics: SafetyTopic[],
   workshopSlug: string,
-) {
+): GuideResponseDto {
   return {
     id: guide.id,
     workshopId: guide.workshopId,
@@ -77,7 +78,7 @@ export function toGuideResponse(
   };
 }
 
-export function toRevisionResponse(revision: Pick<GuideRevision, 'number' | 'note' | 'publishedAt'>, publisher: User | null) {
+export function toRevisionResponse(revision: Pick<GuideRevision, 'number' | 'note' | 'publishedAt'>, publisher: User | null): GuideRevisionResponseDto {
   return {
     number: revision.number,
     note: revision.note,

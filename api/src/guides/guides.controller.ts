@@ -1,5 +1,5 @@
 import { Body, Controller, Delete, Get, HttpCode, Inject, Param, ParseUUIDPipe, Patch, Post, Put, Query } from '@nestjs/common';
-import { ApiNoContentResponse, ApiTags, ApiUnprocessableEntityResponse } from '@nestjs/swagger';
+import { ApiCreatedResponse, ApiNoContentResponse, ApiOkResponse, ApiTags, ApiUnprocessableEntityResponse } from '@nestjs/swagger';
 import { WorkshopEditor } from '../common/decorators/access.decorator';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import type { SessionUser } from '../common/types/access-context';
@@ -12,6 +12,13 @@ import {
   UpdateGuideDto,
   UpdateStepDto,
 } from './dto/guide.dto';
+import {
+  GuideResponseDto,
+  GuideRevisionResponseDto,
+  GuideStepChoiceDto,
+  GuideStepResponseDto,
+  GuideSummaryDto,
+} from './dto/guide-response.dto';
 import { GuidesService } from './guides.service';
 
 /** Writing, ordering and publishing a build's guides. Workshop editors and owners only. */
@@ -22,37 +29,42 @@ export class GuidesController {
   constructor(@Inject(GuidesService) private readonly guides: GuidesService) {}
 
   @Get('builds/:buildId/guides')
-  list(@Param('workshopId', ParseUUIDPipe) workshopId: string, @Param('buildId', ParseUUIDPipe) buildId: string) {
+  @ApiOkResponse({ type: [GuideSummaryDto] })
+  list(@Param('workshopId', ParseUUIDPipe) workshopId: string, @Param('buildId', ParseUUIDPipe) buildId: string): Promise<GuideSummaryDto[]> {
     return this.guides.list(workshopId, buildId);
   }
 
   @Post('builds/:buildId/guides')
+  @ApiCreatedResponse({ type: GuideResponseDto })
   create(
     @Param('workshopId', ParseUUIDPipe) workshopId: string,
     @Param('buildId', ParseUUIDPipe) buildId: string,
     @CurrentUser() user: SessionUser,
     @Body() body: CreateGuideDto,
-  ) {
+  ): Promise<GuideResponseDto> {
     return this.guides.create(workshopId, buildId, user.id, body);
   }
 
   /** Steps a mark can be tied to (for the marking workspace). */
   @Get('guide-steps')
-  stepChoices(@Param('workshopId', ParseUUIDPipe) workshopId: string, @Query() query: GuideStepsQueryDto) {
+  @ApiOkResponse({ type: [GuideStepChoiceDto] })
+  stepChoices(@Param('workshopId', ParseUUIDPipe) workshopId: string, @Query() query: GuideStepsQueryDto): Promise<GuideStepChoiceDto[]> {
     return this.guides.stepChoices(workshopId, query.footageId);
   }
 
   @Get('guides/:guideId')
-  get(@Param('workshopId', ParseUUIDPipe) workshopId: string, @Param('guideId', ParseUUIDPipe) guideId: string) {
+  @ApiOkResponse({ type: GuideResponseDto })
+  get(@Param('workshopId', ParseUUIDPipe) workshopId: string, @Param('guideId', ParseUUIDPipe) guideId: string): Promise<GuideResponseDto> {
     return this.guides.describe(workshopId, guideId);
   }
 
   @Patch('guides/:guideId')
+  @ApiOkResponse({ type: GuideResponseDto })
   update(
     @Param('workshopId', ParseUUIDPipe) workshopId: string,
     @Param('guideId', ParseUUIDPipe) guideId: string,
     @Body() body: UpdateGuideDto,
-  ) {
+  ): Promise<GuideResponseDto> {
     return this.guides.update(workshopId, guideId, body);
   }
 
@@ -64,31 +76,34 @@ export class GuidesController {
   }
 
   @Post('guides/:guideId/steps')
+  @ApiCreatedResponse({ type: GuideStepResponseDto })
   addStep(
     @Param('workshopId', ParseUUIDPipe) workshopId: string,
     @Param('guideId', ParseUUIDPipe) guideId: string,
     @Body() body: CreateStepDto,
-  ) {
+  ): Promise<GuideStepResponseDto> {
     return this.guides.addStep(workshopId, guideId, body);
   }
 
   /** Declared before steps/:stepId so "order" is not read as a step id. */
   @Put('guides/:guideId/steps/order')
+  @ApiOkResponse({ type: GuideResponseDto, description: 'The guide with its steps in the new order' })
   reorderSteps(
     @Param('workshopId', ParseUUIDPipe) workshopId: string,
     @Param('guideId', ParseUUIDPipe) guideId: string,
     @Body() body: ReorderStepsDto,
-  ) {
+  ): Promise<GuideResponseDto> {
     return this.guides.reorderSteps(workshopId, guideId, body.stepIds);
   }
 
   @Patch('guides/:guideId/steps/:stepId')
+  @ApiOkResponse({ type: GuideStepResponseDto })
   updateStep(
     @Param('workshopId', ParseUUIDPipe) workshopId: string,
     @Param('guideId', ParseUUIDPipe) guideId: string,
     @Param('stepId', ParseUUIDPipe) stepId: string,
     @Body() body: UpdateStepDto,
-  ) {
+  ): Promise<GuideStepResponseDto> {
     return this.guides.updateStep(workshopId, guideId, stepId, body);
   }
 
@@ -103,18 +118,20 @@ export class GuidesController {
   }
 
   @Post('guides/:guideId/revisions')
+  @ApiCreatedResponse({ type: GuideRevisionResponseDto, description: 'The new revision (publishedBy is not filled in here)' })
   @ApiUnprocessableEntityResponse({ description: 'The guide has no steps yet' })
   publish(
     @Param('workshopId', ParseUUIDPipe) workshopId: string,
     @Param('guideId', ParseUUIDPipe) guideId: string,
     @CurrentUser() user: SessionUser,
     @Body() body: PublishRevisionDto,
-  ) {
+  ): Promise<GuideRevisionResponseDto> {
     return this.guides.publish(workshopId, guideId, user.id, body.note);
   }
 
   @Get('guides/:guideId/revisions')
-  revisions(@Param('workshopId', ParseUUIDPipe) workshopId: string, @Param('guideId', ParseUUIDPipe) guideId: string) {
+  @ApiOkResponse({ type: [GuideRevisionResponseDto], description: 'Newest first' })
+  revisions(@Param('workshopId', ParseUUIDPipe) workshopId: string, @Param('guideId', ParseUUIDPipe) guideId: string): Promise<GuideRevisionResponseDto[]> {
     return this.guides.listRevisions(workshopId, guideId);
   }
 

@@ -16,6 +16,13 @@ import { Guide } from './entities/guide.entity';
 import { contentHash, guideContent, guideSearchText, plainText, type GuideMarkContent } from './guide-content';
 import { toGuideResponse, toGuideSummary, toRevisionResponse, toStepResponse, type GuideState } from './guide.mapper';
 import { sanitizeRichText, slugFromTitle } from './rich-text';
+import type {
+  GuideResponseDto,
+  GuideRevisionResponseDto,
+  GuideStepChoiceDto,
+  GuideStepResponseDto,
+  GuideSummaryDto,
+} from './dto/guide-response.dto';
 
 const SLUG_ATTEMPTS = 20;
 
@@ -39,14 +46,14 @@ export class GuidesService {
 
   // ---- guides ----
 
-  async list(workshopId: string, buildId: string) {
+  async list(workshopId: string, buildId: string): Promise<GuideSummaryDto[]> {
     await this.builds.get(workshopId, buildId);
     const guides = await this.guides.find({ where: { workshopId, buildId }, order: { createdAt: 'DESC' } });
     const workshop = await this.workshopOf(workshopId);
     return Promise.all(guides.map(async (guide) => toGuideSummary(guide, await this.stateOf(guide), workshop.slug)));
   }
 
-  async create(workshopId: string, buildId: string, userId: string, input: CreateGuideDto) {
+  async create(workshopId: string, buildId: string, userId: string, input: CreateGuideDto): Promise<GuideResponseDto> {
     await this.builds.get(workshopId, buildId);
     const guide = this.guides.create({
       workshopId,
@@ -68,7 +75,7 @@ export class GuidesService {
     return this.describe(workshopId, guide.id);
   }
 
-  async describe(workshopId: string, guideId: string) {
+  async describe(workshopId: string, guideId: string): Promise<GuideResponseDto> {
     const guide = await this.get(workshopId, guideId);
     const workshop = await this.workshopOf(workshopId);
     const state = await this.stateOf(guide);
@@ -78,7 +85,7 @@ export class GuidesService {
     return toGuideResponse(guide, state, steps, detected, workshop.slug);
   }
 
-  async update(workshopId: string, guideId: string, input: UpdateGuideDto) {
+  async update(workshopId: string, guideId: string, input: UpdateGuideDto): Promise<GuideResponseDto> {
     const guide = await this.get(workshopId, guideId);
     const retitled = input.title !== undefined && input.title.trim() !== guide.title;
     if (input.title !== undefined) guide.title = input.title.trim();
@@ -97,7 +104,7 @@ export class GuidesService {
 
   // ---- steps ----
 
-  async addStep(workshopId: string, guideId: string, input: CreateStepDto) {
+  async addStep(workshopId: string, guideId: string, input: CreateStepDto): Promise<GuideStepResponseDto> {
     const guide = await this.get(workshopId, guideId);
     const last = await this.steps.maximum('position', { guideId });
     const step = this.steps.create({
@@ -118,7 +125,7 @@ export class GuidesService {
     return toStepResponse(step, []);
   }
 
-  async updateStep(workshopId: string, guideId: string, stepId: string, input: UpdateStepDto) {
+  async updateStep(workshopId: string, guideId: string, stepId: string, input: UpdateStepDto): Promise<GuideStepResponseDto> {
     const guide = await this.get(workshopId, guideId);
     const step = await this.stepOf(guide, stepId);
     if (input.title !== undefined) step.title = input.title.trim();
@@ -143,7 +150,7 @@ export class GuidesService {
     await this.touch(guide);
   }
 
-  async reorderSteps(workshopId: string, guideId: string, stepIds: string[]) {
+  async reorderSteps(workshopId: string, guideId: string, stepIds: string[]): Promise<GuideResponseDto> {
     const guide = await this.get(workshopId, guideId);
     const current = await this.steps.find({ where: { guideId }, select: { id: true } });
     const known = new Set(current.map((step) => step.id));
@@ -161,7 +168,7 @@ export class GuidesService {
   }
 
   /** Steps a mark can be tied to; with a footage, the steps anchored in it. */
-  async stepChoices(workshopId: string, footageId?: string) {
+  async stepChoices(workshopId: string, footageId?: string): Promise<GuideStepChoiceDto[]> {
     const query = this.steps
       .createQueryBuilder('step')
       .innerJoin(Guide, 'guide', 'guide.id = step.guide_id')
@@ -177,7 +184,7 @@ export class GuidesService {
 
   // ---- publishing ----
 
-  async publish(workshopId: string, guideId: string, userId: string, note: string | undefined) {
+  async publish(workshopId: string, guideId: string, userId: string, note: string | undefined): Promise<GuideRevisionResponseDto> {
     const guide = await this.get(workshopId, guideId);
     const state = await this.stateOf(guide);
     if (state.steps.length === 0) {
@@ -209,7 +216,7 @@ export class GuidesService {
     return toRevisionResponse(revision, null);
   }
 
-  async listRevisions(workshopId: string, guideId: string) {
+  async listRevisions(workshopId: string, guideId: string): Promise<GuideRevisionResponseDto[]> {
     await this.get(workshopId, guideId);
     const revisions = await this.revisions.find({
       where: { guideId },

@@ -3772,6 +3772,39 @@ export interface components {
             /** @description The reading recorded from a spoken measurement */
             measurement: components["schemas"]["MeasurementResponseDto"] | null;
         };
+        GuidePublishedRevisionDto: {
+            /** @example 2 */
+            number: number;
+            /** Format: date-time */
+            publishedAt: string;
+            /** @example Added the boot clamp step */
+            note: string;
+        };
+        GuideSummaryDto: {
+            /** @enum {string} */
+            status: "draft" | "published";
+            /** @description The draft differs from the published revision */
+            hasUnpublishedChanges: boolean;
+            publishedRevision: components["schemas"]["GuidePublishedRevisionDto"] | null;
+            /** @example /guides/hollow-lane-garage/swapping-the-motor-coupler */
+            publicPath: string | null;
+            /** Format: uuid */
+            id: string;
+            /** Format: uuid */
+            buildId: string;
+            /** @example Swapping the motor coupler */
+            title: string;
+            /** @example swapping-the-motor-coupler */
+            slug: string;
+            /** @example 6 */
+            stepCount: number;
+            /** @enum {string|null} */
+            skillLevel: "bench_starter" | "shop_regular" | "seasoned_fitter" | null;
+            /** @example 90 */
+            estimatedMinutes: number | null;
+            /** Format: date-time */
+            updatedAt: string;
+        };
         CreateGuideDto: {
             /**
              * @description HTML (sanitised)
@@ -3815,6 +3848,102 @@ export interface components {
             estimatedMinutes?: number | null;
             /** @example Fitting the 21-tooth coupler stack */
             title: string;
+        };
+        GuideCautionDto: {
+            /** @enum {string} */
+            level: "DANGER" | "WARNING" | "CAUTION" | "NOTICE";
+            /** @example Support the shaft before pulling the coupler; it drops when it clears the spline. */
+            text: string;
+        };
+        GuideStepResponseDto: {
+            /** Format: uuid */
+            id: string;
+            /** @example 1 */
+            position: number;
+            /** @example Pull the old coupler */
+            title: string;
+            /**
+             * @description Cleaned rich text (HTML)
+             * @example <p>Back off the clamp bolt two turns.</p>
+             */
+            body: string;
+            /** Format: uuid */
+            footageId: string | null;
+            /** @example 95000 */
+            startMs: number | null;
+            /** @example 131000 */
+            endMs: number | null;
+            caution: components["schemas"]["GuideCautionDto"] | null;
+            /** @example 15 */
+            estimatedMinutes: number | null;
+            /** @description Marks tied to this step */
+            marks: components["schemas"]["MarkResponseDto"][];
+        };
+        GuideResponseDto: {
+            /** @enum {string} */
+            status: "draft" | "published";
+            /** @description The draft differs from the published revision */
+            hasUnpublishedChanges: boolean;
+            publishedRevision: components["schemas"]["GuidePublishedRevisionDto"] | null;
+            /** @example /guides/hollow-lane-garage/swapping-the-motor-coupler */
+            publicPath: string | null;
+            /** Format: uuid */
+            id: string;
+            /** Format: uuid */
+            workshopId: string;
+            /** Format: uuid */
+            buildId: string;
+            /** @example Swapping the motor coupler */
+            title: string;
+            /** @example swapping-the-motor-coupler */
+            slug: string;
+            /** @example Fit a 21-tooth coupler to the motor shaft and check it engages fully. */
+            summary: string;
+            /** Format: uuid */
+            footageId: string | null;
+            /** Format: uuid */
+            assemblyId: string | null;
+            /** @description Chosen by the creator */
+            safetyTopics: ("lifting" | "rotating_parts" | "high_voltage" | "welding" | "pressing")[];
+            /** @description Found in the guide's text, for the creator to consider */
+            detectedSafetyTopics: ("lifting" | "rotating_parts" | "high_voltage" | "welding" | "pressing")[];
+            /**
+             * @example [
+             *       "13 mm socket",
+             *       "soft-faced mallet"
+             *     ]
+             */
+            tools: string[];
+            /**
+             * @example [
+             *       "anti-seize"
+             *     ]
+             */
+            consumables: string[];
+            /** @enum {string|null} */
+            skillLevel: "bench_starter" | "shop_regular" | "seasoned_fitter" | null;
+            /** @example 90 */
+            estimatedMinutes: number | null;
+            /** @description By position */
+            steps: components["schemas"]["GuideStepResponseDto"][];
+            /** Format: date-time */
+            createdAt: string;
+            /** Format: date-time */
+            updatedAt: string;
+        };
+        GuideStepChoiceDto: {
+            /** Format: uuid */
+            id: string;
+            /** Format: uuid */
+            guideId: string;
+            /** @example Swapping the motor coupler */
+            guideTitle: string;
+            /** @example 1 */
+            position: number;
+            /** @example Pull the old coupler */
+            title: string;
+            /** @example 95000 */
+            startMs: number | null;
         };
         UpdateGuideDto: {
             /**
@@ -3922,6 +4051,20 @@ export interface components {
         PublishRevisionDto: {
             /** @example Added the runout reading to step 3. */
             note?: string;
+        };
+        GuideRevisionPublisherDto: {
+            /** @example Rowan Hale */
+            displayName: string;
+        };
+        GuideRevisionResponseDto: {
+            /** @example 2 */
+            number: number;
+            /** @example Added the boot clamp step */
+            note: string;
+            /** Format: date-time */
+            publishedAt: string;
+            /** @description Null when the publisher has no account any more, and in the answer to publishing */
+            publishedBy: components["schemas"]["GuideRevisionPublisherDto"] | null;
         };
         CueWindowResponseDto: {
             /** @description How many cues the whole transcript has (to size a list before its rows arrive) */
@@ -7363,7 +7506,9 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["GuideSummaryDto"][];
+                };
             };
         };
     };
@@ -7387,7 +7532,9 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["GuideResponseDto"];
+                };
             };
         };
     };
@@ -7409,7 +7556,9 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["GuideStepChoiceDto"][];
+                };
             };
         };
     };
@@ -7429,7 +7578,9 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["GuideResponseDto"];
+                };
             };
         };
     };
@@ -7474,7 +7625,9 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["GuideResponseDto"];
+                };
             };
         };
     };
@@ -7498,7 +7651,9 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["GuideStepResponseDto"];
+                };
             };
         };
     };
@@ -7518,11 +7673,14 @@ export interface operations {
             };
         };
         responses: {
+            /** @description The guide with its steps in the new order */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["GuideResponseDto"];
+                };
             };
         };
     };
@@ -7568,7 +7726,9 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["GuideStepResponseDto"];
+                };
             };
         };
     };
@@ -7584,11 +7744,14 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Newest first */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["GuideRevisionResponseDto"][];
+                };
             };
         };
     };
@@ -7608,6 +7771,15 @@ export interface operations {
             };
         };
         responses: {
+            /** @description The new revision (publishedBy is not filled in here) */
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["GuideRevisionResponseDto"];
+                };
+            };
             /** @description The guide has no steps yet */
             422: {
                 headers: {

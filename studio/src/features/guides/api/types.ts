@@ -1,92 +1,23 @@
+import type { ApiSchema } from '@/lib/api-types';
 import type { SkillLevel } from '@/lib/guide-effort';
 
 /** Shapes of the guide editor routes (api/src/guides; OpenAPI at /api/docs). */
 
-export const SAFETY_TOPICS = ['lifting', 'rotating_parts', 'high_voltage', 'welding', 'pressing'] as const;
-export type SafetyTopic = (typeof SAFETY_TOPICS)[number];
+export type SafetyTopic = ApiSchema<'GuideResponseDto'>['safetyTopics'][number];
+export const SAFETY_TOPICS = ['lifting', 'rotating_parts', 'high_voltage', 'welding', 'pressing'] as const satisfies readonly SafetyTopic[];
 
 /** The ANSI Z535 signal words, most severe first. */
-export const CAUTION_LEVELS = ['DANGER', 'WARNING', 'CAUTION', 'NOTICE'] as const;
-export type CautionLevel = (typeof CAUTION_LEVELS)[number];
+export type CautionLevel = ApiSchema<'GuideCautionDto'>['level'];
+export const CAUTION_LEVELS = ['DANGER', 'WARNING', 'CAUTION', 'NOTICE'] as const satisfies readonly CautionLevel[];
 
-export interface Caution {
-  level: CautionLevel;
-  text: string;
-}
-
-/** A mark linked to a step (the mark JSON of GET .../marks; only what the editor shows). */
-export interface StepMark {
-  id: string;
-  footageId: string;
-  kind: string;
-  label: string;
-  startMs: number;
-  endMs: number | null;
-}
-
-export interface GuideStep {
-  id: string;
-  /** 1-based. */
-  position: number;
-  title: string;
-  /** Sanitised HTML from the server; may be ''. */
-  body: string;
-  footageId: string | null;
-  startMs: number | null;
-  endMs: number | null;
-  caution: Caution | null;
-  estimatedMinutes: number | null;
-  marks: StepMark[];
-}
-
-export interface PublishedRevision {
-  number: number;
-  publishedAt: string;
-  note: string;
-}
-
-export interface Guide {
-  id: string;
-  workshopId: string;
-  buildId: string;
-  title: string;
-  slug: string;
-  summary: string;
-  footageId: string | null;
-  assemblyId: string | null;
-  safetyTopics: SafetyTopic[];
-  detectedSafetyTopics: SafetyTopic[];
-  tools: string[];
-  consumables: string[];
-  skillLevel: SkillLevel | null;
-  estimatedMinutes: number | null;
-  status: 'draft' | 'published';
-  hasUnpublishedChanges: boolean;
-  publishedRevision: PublishedRevision | null;
-  publicPath: string | null;
-  steps: GuideStep[];
-  createdAt: string;
-  updatedAt: string;
-}
-
-export interface GuideSummary {
-  id: string;
-  buildId: string;
-  title: string;
-  slug: string;
-  status: Guide['status'];
-  hasUnpublishedChanges: boolean;
-  stepCount: number;
-  skillLevel: SkillLevel | null;
-  estimatedMinutes: number | null;
-  publishedRevision: PublishedRevision | null;
-  publicPath: string | null;
-  updatedAt: string;
-}
-
-export interface Revision extends PublishedRevision {
-  publishedBy: { displayName: string } | null;
-}
+export type Guide = ApiSchema<'GuideResponseDto'>;
+export type GuideStep = ApiSchema<'GuideStepResponseDto'>;
+export type Caution = ApiSchema<'GuideCautionDto'>;
+/** A mark linked to a step (the marks routes' own shape). */
+export type StepMark = GuideStep['marks'][number];
+export type PublishedRevision = ApiSchema<'GuidePublishedRevisionDto'>;
+export type GuideSummary = ApiSchema<'GuideSummaryDto'>;
+export type Revision = ApiSchema<'GuideRevisionResponseDto'>;
 
 /** What the editor sends for a guide's details (PATCH takes any of them). */
 export interface GuideInput {
