@@ -35,7 +35,8 @@ export interface LinkAssembly {
   buildId: string;
   buildTitle: string;
   interfaces: { id: string; name: string }[];
-  checks: { id: string; title: string; state: FitCheckState }[];
+  /** In the order they were added; `interfaceId` is set on a check derived from an interface. */
+  checks: { id: string; title: string; state: FitCheckState; interfaceId: string | null }[];
 }
 /** GET /workshops/:id/guide-steps (the guides contract). */
 export interface GuideStepChoice {
@@ -57,7 +58,7 @@ async function fetchLinkAssemblies(workshopId: string, signal: AbortSignal): Pro
         assemblies.map(async (assembly): Promise<LinkAssembly> => {
           const [detail, checklist] = await Promise.all([
             apiRequest<{ interfaces: { id: string; name: string }[] }>(`/workshops/${workshopId}/assemblies/${assembly.id}`, { signal }),
-            apiRequest<{ checks: { id: string; title: string; state: FitCheckState }[] }>(
+            apiRequest<{ checks: { id: string; title: string; state: FitCheckState; interfaceId: string | null }[] }>(
               `/workshops/${workshopId}/assemblies/${assembly.id}/checklist`,
               { signal },
             ),
@@ -68,7 +69,7 @@ async function fetchLinkAssemblies(workshopId: string, signal: AbortSignal): Pro
             buildId: build.id,
             buildTitle: build.title,
             interfaces: detail.interfaces.map(({ id, name }) => ({ id, name })),
-            checks: checklist.checks.map(({ id, title, state }) => ({ id, title, state })),
+            checks: checklist.checks.map(({ id, title, state, interfaceId }) => ({ id, title, state, interfaceId: interfaceId ?? null })),
           };
         }),
       );

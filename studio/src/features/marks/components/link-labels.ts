@@ -63,9 +63,23 @@ export function fitCheckChoices(assemblies: LinkAssembly[], buildId: string | un
   return buildFirst(assemblies, buildId)
     .map((assembly) => ({
       group: assembly.buildId === buildId ? assembly.name : `${assembly.name} (${assembly.buildTitle})`,
-      items: assembly.checks.map((check) => ({ value: check.id, label: `${check.title} · ${CHECK_STATE_WORDS[check.state]}` })),
+      items: assembly.checks.map((check) => ({ value: check.id, label: `${check.title}${twinNote(check, assembly)} · ${CHECK_STATE_WORDS[check.state]}` })),
     }))
     .filter((group) => group.items.length > 0);
+}
+
+/**
+ * What tells a check from another of the same title in its assembly: the interface it was derived from
+ * (or "added by hand"), and, if that is shared too, its place among them in the order they were added.
+ */
+function twinNote(check: LinkAssembly['checks'][number], assembly: LinkAssembly): string {
+  const sameTitle = assembly.checks.filter((other) => other.title.trim().toLowerCase() === check.title.trim().toLowerCase());
+  if (sameTitle.length < 2) return '';
+  const origin = (candidate: LinkAssembly['checks'][number]) =>
+    candidate.interfaceId ? `at ${assembly.interfaces.find((item) => item.id === candidate.interfaceId)?.name ?? 'an interface'}` : 'added by hand';
+  const sameOrigin = sameTitle.filter((other) => origin(other) === origin(check));
+  const place = sameOrigin.length > 1 ? `, ${sameOrigin.indexOf(check) + 1} of ${sameOrigin.length}` : '';
+  return ` (${origin(check)}${place})`;
 }
 
 /** Readings grouped: those linked to this footage first, each named with its subject. */
