@@ -76,12 +76,14 @@ export class PublishedGuidesController {
   /** Redirects to a short-lived storage link (seekable with HTTP Range), so a <video> can point here. */
   @Get(':workshopSlug/:guideSlug/video')
   @Redirect()
+  @ApiResponse({ status: 302, description: 'Redirects to a short-lived link to the footage' })
   async video(@Param('workshopSlug') workshopSlug: string, @Param('guideSlug') guideSlug: string) {
     return { url: await this.published.videoUrl(workshopSlug, guideSlug), statusCode: 302 };
   }
 
   @Get(':workshopSlug/:guideSlug/poster')
   @Redirect()
+  @ApiResponse({ status: 302, description: 'Redirects to a short-lived link to the poster image' })
   async poster(@Param('workshopSlug') workshopSlug: string, @Param('guideSlug') guideSlug: string) {
     return { url: await this.published.posterUrl(workshopSlug, guideSlug), statusCode: 302 };
   }
@@ -102,6 +104,7 @@ export class PublishedGuidesController {
   @Get(':workshopSlug/:guideSlug/captions.vtt')
   @Header('Cache-Control', 'public, max-age=60')
   @ApiProduces('text/vtt')
+  @ApiOkResponse({ type: String, description: "The guide's captions as a WebVTT file, for a `<track>` element" })
   async captions(
     @Param('workshopSlug') workshopSlug: string,
     @Param('guideSlug') guideSlug: string,

@@ -115,7 +115,7 @@ export class TranscriptsController {
   @Get('footage/:footageId/transcript/webvtt')
   @Header('Cache-Control', 'no-store')
   @ApiProduces('text/vtt')
-  @ApiOkResponse({ description: 'The transcript as a WebVTT file, for a `<track>` element or a download' })
+  @ApiOkResponse({ type: String, description: 'The transcript as a WebVTT file, for a `<track>` element or a download' })
   async exportWebVtt(
     @Param('workshopId', ParseUUIDPipe) workshopId: string,
     @Param('footageId', ParseUUIDPipe) footageId: string,

@@ -7218,7 +7218,9 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "text/vtt": string;
+                };
             };
         };
     };
@@ -7899,7 +7901,8 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
-            200: {
+            /** @description Redirects to a short-lived link to the footage */
+            302: {
                 headers: {
                     [name: string]: unknown;
                 };
@@ -7919,7 +7922,8 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
-            200: {
+            /** @description Redirects to a short-lived link to the poster image */
+            302: {
                 headers: {
                     [name: string]: unknown;
                 };
@@ -7968,11 +7972,14 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description The guide's captions as a WebVTT file, for a `<track>` element */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "text/vtt": string;
+                };
             };
         };
     };
