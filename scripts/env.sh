@@ -9,7 +9,9 @@ fw_profile_env() {
     dev) offset=0 ;;
     # FW_TEST_SLOT=1..9 gives a test profile of its own (ports and data apart), so several people working in one
     # tree can run e2e tests side by side; npm test and CI use the plain test profile.
-    test) offset=$((${FW_TEST_SLOT:-0} ? 30 + ${FW_TEST_SLOT:-0} : 10)) ;;
+    # Slots take offsets 41–49: the app port (3000 + 10 × offset, 3410–3490) then lies above every slot's
+    # MariaDB port (3307 + offset, 3348–3356), and the mail fake's SMTP ports (1066–1074) below its web ports.
+    test) offset=$((${FW_TEST_SLOT:-0} ? 40 + ${FW_TEST_SLOT:-0} : 10)) ;;
     # npm run test:faults: its own MariaDB, Redis, fakes and API processes, which the fault tests stop on purpose.
     faults) offset=20 ;;
     *) echo "unknown profile $profile" >&2; return 1 ;;
