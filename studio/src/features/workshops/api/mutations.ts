@@ -29,7 +29,7 @@ function useInvalidateWorkshop(workshopId: string) {
 export function useUpdateWorkshop(workshopId: string) {
   const invalidate = useInvalidateWorkshop(workshopId);
   return useMutation({
-    mutationFn: (input: Partial<WorkshopInput>) =>
+    mutationFn: (input: Partial<WorkshopInput & { showMemberNames: boolean }>) =>
       apiRequest<Workshop>(`/workshops/${workshopId}`, { method: 'PATCH', body: input }),
     onSuccess: invalidate,
   });

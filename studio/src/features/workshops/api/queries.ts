@@ -14,6 +14,8 @@ export interface Workshop {
   /** The caller's role; `admin` is a site admin reading without being a member. */
   role: MemberRole | 'admin' | null;
   createdAt: string;
+  /** Members' names may appear on public pages (who confirmed a fit); off by default. */
+  showMemberNames: boolean;
 }
 
 /** Whether uploaded originals stay in storage once their web versions are made. */

@@ -16,6 +16,7 @@ const workshop: Workshop = {
   disabled: false,
   role: 'owner',
   createdAt: '2026-12-01T00:00:00.000Z',
+  showMemberNames: false,
 };
 
 describe('DeleteWorkshopPanel', () => {

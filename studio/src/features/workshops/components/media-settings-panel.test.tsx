@@ -17,6 +17,7 @@ const OWNER_VIEW: Workshop = {
   disabled: false,
   role: 'owner',
   createdAt: '2026-12-01T00:00:00.000Z',
+  showMemberNames: false,
 };
 
 const SETTINGS_PATH = /^\/workshops\/w1\/media-settings$/;
@@ -87,7 +88,7 @@ describe('the workshop settings page: footage storage', () => {
     const requests = renderPageAs('editor');
     expect(await screen.findByRole('heading', { name: 'Details' })).toBeTruthy();
     expect(screen.queryByRole('heading', { name: 'Footage storage' })).toBeNull();
-    expect(screen.queryByRole('switch')).toBeNull();
+    expect(screen.queryByRole('switch', { name: KEEP })).toBeNull();
     expect(requests.some((request) => request.url.pathname.endsWith('/media-settings'))).toBe(false);
   });
 });

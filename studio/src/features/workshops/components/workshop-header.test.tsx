@@ -14,6 +14,7 @@ const WORKSHOP: Workshop = {
   disabled: false,
   role: 'owner',
   createdAt: '2026-12-01T00:00:00.000Z',
+  showMemberNames: false,
 };
 
 describe('WorkshopHeader', () => {

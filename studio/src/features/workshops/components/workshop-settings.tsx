@@ -8,6 +8,7 @@ import { notifyDone, notifyError } from '@/lib/notify';
 import { useDeleteWorkshop, useRemoveLogo, useUpdateWorkshop, useUploadLogo } from '../api/mutations';
 import type { Workshop } from '../api/queries';
 import { MediaSettingsPanel } from './media-settings-panel';
+import { PublicNamesPanel } from './public-names-panel';
 import { WorkshopGate } from './workshop-gate';
 import { WorkshopHeader } from './workshop-header';
 import { FormProblems } from '@/components/form-problems';
@@ -174,6 +175,12 @@ function Settings({ workshop }: { workshop: Workshop }) {
             Logo
           </Title>
           <LogoPanel workshop={workshop} readOnly={readOnly} />
+        </Paper>
+        <Paper withBorder p="lg" radius="md">
+          <Title order={3} size="h4" mb="sm">
+            Public pages
+          </Title>
+          <PublicNamesPanel workshop={workshop} />
         </Paper>
         {workshop.role === 'owner' && (
           <Paper withBorder p="lg" radius="md">
