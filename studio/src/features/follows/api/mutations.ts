@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '@/lib/api-client';
-import { followQueries, type Follow, type FollowTargetKind, type MailPreferences, type MailPreferencesChange, type UnsubscribeResult } from './queries';
+import { followQueries, type Follow, type FollowTargetKind, type MailPreferences, type MailPreferencesChange, type UnsubscribeResult, type UnsubscribeScope } from './queries';
 
 /** Waits for my follows to be read again, so a checkbox or a list never shows the old state in between. */
 function useRefreshFollows() {
@@ -30,8 +30,12 @@ export function useUnsubscribe() {
   const refresh = useRefreshFollows();
   return useMutation({
     // With a followId: stop one of the other follows the first answer listed, with the same link.
-    mutationFn: ({ token, followId }: { token: string; followId?: string }) =>
-      apiRequest<UnsubscribeResult>('/follows/unsubscribe', { method: 'POST', body: followId ? { token, followId } : { token } }),
+    // With a scope: stop every follow in the mail's workshop, or all fit news, with the same link.
+    mutationFn: ({ token, followId, scope }: { token: string; followId?: string; scope?: UnsubscribeScope }) =>
+      apiRequest<UnsubscribeResult>('/follows/unsubscribe', {
+        method: 'POST',
+        body: { token, ...(followId ? { followId } : {}), ...(scope ? { scope } : {}) },
+      }),
     // The person may be signed in in this browser: their list of follows changed too.
     onSuccess: () => void refresh(),
   });

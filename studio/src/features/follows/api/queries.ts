@@ -27,6 +27,9 @@ export interface UnsubscribeResult {
   stillFollowing: Follow[];
 }
 
+/** How far an unsubscribe link reaches: what sent the mail (default), its workshop, or all fit news. */
+export type UnsubscribeScope = NonNullable<ApiSchema<'UnsubscribeBodyDto'>['scope']>;
+
 /** A person's mail settings and each follow's delivery (GET /follows/preferences, or …/preferences/link?token= signed out). */
 export type MailPreferences = ApiSchema<'MailPreferencesDto'>;
 export type MailPreferencesChange = ApiSchema<'UpdateMailPreferencesDto'>;

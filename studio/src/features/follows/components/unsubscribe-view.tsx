@@ -5,7 +5,7 @@ import { paths } from '@/config/paths';
 import { ApiError } from '@/lib/api-client';
 import { useSession } from '@/lib/session';
 import { useUnsubscribe } from '../api/mutations';
-import type { UnsubscribeResult } from '../api/queries';
+import type { UnsubscribeResult, UnsubscribeScope } from '../api/queries';
 import { KIND_IN_WORDS } from './follow-words';
 
 /**
@@ -81,6 +81,80 @@ function StillFollowing({ token, first }: { token: string; first: UnsubscribeRes
   );
 }
 
+/** A wider stop's outcome, claiming no more than the answer says. */
+function widerWords({ stopped, status, label }: UnsubscribeResult): string {
+  if (status === 'already') return `Nothing more to stop: ${label} was already stopped.`;
+  return stopped === 'workshop'
+    ? `We stopped ${label}: its follows and the news of your fit reports there.`
+    : 'We stopped all fit news: every follow and the news of your fit reports.';
+}
+
+/** The API's reason as a sentence, whatever punctuation it came with. */
+function asSentence(message: string): string {
+  const trimmed = message.trim();
+  return /[.!?]$/.test(trimmed) ? trimmed : `${trimmed}.`;
+}
+
+/**
+ * Wider one-click stops with the same link, offered only where the link allows them: a followed
+ * item's or a fit report's mail may stop everything from its workshop; every link may stop all fit
+ * news (a digest or the new-fit-report mail spans workshops, so the API refuses "workshop" for them).
+ * Each stop's outcome stays on the page, so a later failure never hides what already stopped.
+ */
+function WiderStops({
+  token,
+  first,
+  done,
+  onStopped,
+}: {
+  token: string;
+  first: UnsubscribeResult;
+  done: UnsubscribeResult[];
+  onStopped: (result: UnsubscribeResult) => void;
+}) {
+  const wider = useUnsubscribe();
+  const [asked, setAsked] = useState<UnsubscribeScope | null>(null);
+  const stoppedEverything = done.some((result) => result.stopped === 'everything');
+  const offerWorkshop = (first.stopped === 'follow' || first.stopped === 'report') && done.length === 0;
+  const offerEverything = !stoppedEverything;
+  // The first answer names no workshop itself; the follows it lists are all in the mail's workshop.
+  const workshopName = first.stillFollowing.find((follow) => follow.workshop.name)?.workshop.name ?? 'this workshop';
+  const stop = (scope: UnsubscribeScope) => {
+    setAsked(scope);
+    wider.mutate({ token, scope }, { onSuccess: onStopped });
+  };
+
+  return (
+    <Stack gap="xs" w="100%" data-testid="wider-stops">
+      {done.map((result) => (
+        <Alert key={result.stopped} color="patina" role="status" data-testid={`wider-outcome-${result.stopped}`}>
+          {widerWords(result)}
+        </Alert>
+      ))}
+      {(offerWorkshop || offerEverything) && (
+        <>
+          <Text size="sm">Or stop more at once:</Text>
+          <Group gap="xs">
+            {offerWorkshop && (
+              <Button size="xs" variant="default" loading={wider.isPending && asked === 'workshop'} disabled={wider.isPending} onClick={() => stop('workshop')}>
+                Stop all fit news from {workshopName}
+              </Button>
+            )}
+            <Button size="xs" variant="default" loading={wider.isPending && asked === 'everything'} disabled={wider.isPending} onClick={() => stop('everything')}>
+              Stop all fit news
+            </Button>
+          </Group>
+        </>
+      )}
+      {wider.isError && (
+        <Alert color="red" role="alert" title="Nothing more was stopped">
+          {asSentence(wider.error.message)}
+        </Alert>
+      )}
+    </Stack>
+  );
+}
+
 /** What the link stopped, in words that claim no more than that. */
 function outcomeWords(stopped: UnsubscribeResult['stopped'], status: UnsubscribeResult['status'], label: string): string {
   if (stopped === 'fit_report_mail') {
@@ -96,6 +170,7 @@ function outcomeWords(stopped: UnsubscribeResult['stopped'], status: Unsubscribe
 
 function Outcome({ token, unsubscribe }: { token: string | null; unsubscribe: ReturnType<typeof useUnsubscribe> }) {
   const { user } = useSession();
+  const [widerDone, setWiderDone] = useState<UnsubscribeResult[]>([]);
   const manage = user ? (
     <Anchor component={Link} to={paths.account} size="sm">
       See everything you follow in your account
@@ -135,7 +210,9 @@ function Outcome({ token, unsubscribe }: { token: string | null; unsubscribe: Re
         <Alert color="patina" role="status" title={status === 'already' ? 'Already stopped' : 'Stopped'} w="100%" data-testid="unsubscribe-outcome">
           {outcomeWords(unsubscribe.data.stopped, status, label)}
         </Alert>
-        {unsubscribe.data.stopped !== 'fit_report_mail' && <StillFollowing token={token} first={unsubscribe.data} />}
+        {/* A wider stop took every follow the list named with it. */}
+        {unsubscribe.data.stopped !== 'fit_report_mail' && widerDone.length === 0 && <StillFollowing token={token} first={unsubscribe.data} />}
+        <WiderStops token={token} first={unsubscribe.data} done={widerDone} onStopped={(result) => setWiderDone((before) => [...before, result])} />
         {manage}
         <Anchor component={Link} to={`${paths.mailPreferences}?token=${encodeURIComponent(token)}`} size="sm">
           Rather get a daily or weekly digest? Choose per follow in your mail preferences
