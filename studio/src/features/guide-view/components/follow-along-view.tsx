@@ -16,7 +16,6 @@ import classes from './guide-view.module.css';
 import { MarksStrip } from './marks-strip';
 import { NowPlaying } from './now-playing';
 import { PartsPanel, SuppliesPanel } from './parts-panel';
-import { currentStepId } from './playback';
 import { StepList } from './step-list';
 import { TranscriptPanel } from './transcript-panel';
 import { formatDate } from '@/lib/dates';
@@ -58,9 +57,11 @@ export function GuideDocument({
   startAtMs?: number;
 }) {
   const { guide, workshop, revision, footage } = data;
+  // The document never reads the time: the step list, the line under the video, the marks' playhead and the
+  // transcript listen to the clock themselves, so playing the video does not draw the whole guide again.
   const player = useGuidePlayer();
   useGuideTitle(guide.title);
-  const playing = currentStepId(data.steps, player.currentMs, footage?.id ?? null);
+  const mainFootageId = footage?.id ?? null;
   const seek = footage ? player.seek : undefined;
 
   return (
@@ -106,20 +107,20 @@ export function GuideDocument({
           // On a phone this area stays at the top while the page scrolls, with the playing step under the video.
           <div className={classes.areaVideo} data-testid="guide-player">
             <GuideVideo footage={footage} player={player} startAtMs={startAtMs} />
-            <NowPlaying step={data.steps.find((step) => step.id === playing) ?? null} stepCount={data.steps.length} />
+            <NowPlaying steps={data.steps} mainFootageId={mainFootageId} clock={player.clock} />
           </div>
         )}
         {footage && footage.durationMs !== null && (
           <div className={classes.areaMarks}>
-            <MarksStrip marks={data.marks} durationMs={footage.durationMs} currentMs={player.currentMs} onSeek={player.seek} />
+            <MarksStrip marks={data.marks} durationMs={footage.durationMs} clock={player.clock} onSeek={player.seek} />
           </div>
         )}
         <div className={classes.areaSteps}>
-          <StepList steps={data.steps} marks={data.marks} mainFootageId={footage?.id ?? null} currentStepId={playing} onSeek={player.seek} />
+          <StepList steps={data.steps} marks={data.marks} mainFootageId={mainFootageId} clock={player.clock} onSeek={player.seek} />
         </div>
         {footage && (
           <div className={classes.areaTranscript}>
-            <TranscriptPanel workshopSlug={workshop.slug} guideSlug={guide.slug} currentMs={player.currentMs} onSeek={player.seek} />
+            <TranscriptPanel workshopSlug={workshop.slug} guideSlug={guide.slug} clock={player.clock} onSeek={player.seek} />
           </div>
         )}
       </div>

@@ -3,6 +3,7 @@ import { SAFETY_ALERT_SHAPE } from '@/components/signal-word';
 import type { GuideMark, MarkKind } from '../api/types';
 import classes from './guide-view.module.css';
 import { formatClock } from '@/lib/clock';
+import { usePlaybackMs, type PlaybackClock } from '@/lib/playback-clock';
 
 /** Each kind has its own shape (a path in a 12×12 box) and name, as in the creator's player, so the strip reads without colour. */
 export const MARK_LOOK: Record<MarkKind, { name: string; shape: string; colour: string }> = {
@@ -48,12 +49,19 @@ export function laneMarks(marks: readonly GuideMark[], durationMs: number): { ma
 export interface MarksStripProps {
   marks: GuideMark[];
   durationMs: number;
-  currentMs: number;
+  /** The video's clock: only the playhead listens to it, so a time update moves the line and redraws no mark. */
+  clock: PlaybackClock;
   onSeek: (ms: number) => void;
 }
 
+/** Where the video is along the strip; the one part of the strip that re-renders as the video plays. */
+function Playhead({ clock, durationMs }: { clock: PlaybackClock; durationMs: number }) {
+  const currentMs = usePlaybackMs(clock);
+  return <div aria-hidden className={classes.playhead} data-testid="guide-marks-playhead" style={{ left: `${Math.min(100, (currentMs / durationMs) * 100)}%` }} />;
+}
+
 /** The small timeline under the video: each mark the guide uses as its kind's shape; a click plays from there. */
-export function MarksStrip({ marks, durationMs, currentMs, onSeek }: MarksStripProps) {
+export function MarksStrip({ marks, durationMs, clock, onSeek }: MarksStripProps) {
   if (marks.length === 0 || !(durationMs > 0)) return null;
   const placed = laneMarks(marks, durationMs);
   const lanes = Math.max(1, ...placed.map((item) => item.lane + 1));
@@ -66,7 +74,7 @@ export function MarksStrip({ marks, durationMs, currentMs, onSeek }: MarksStripP
         className={classes.marksTrack}
         style={{ height: lanes * LANE_HEIGHT + 8 }}
       >
-        <div aria-hidden className={classes.playhead} style={{ left: `${Math.min(100, (currentMs / durationMs) * 100)}%` }} />
+        <Playhead clock={clock} durationMs={durationMs} />
         {placed.map(({ mark, x, lane }) => {
           const name = `${lookOf(mark.kind).name} at ${formatClock(mark.startMs)}${mark.label ? `: ${mark.label}` : ''}`;
           return (

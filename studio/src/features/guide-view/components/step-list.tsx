@@ -1,7 +1,11 @@
 import { Badge, Group, Paper, Stack, Text, Title, Typography, UnstyledButton } from '@mantine/core';
+import { memo, useMemo } from 'react';
 import { BackToNow } from '@/components/back-to-now';
+import type { PlaybackClock } from '@/lib/playback-clock';
 import { useFollowPlayback } from '@/lib/use-follow-playback';
+import { useStableHandler } from '@/lib/use-stable-handler';
 import type { GuideMark, PublishedStep } from '../api/types';
+import { usePlayingStepId } from '../hooks/use-playing-step';
 import { CautionPanel } from './caution-panel';
 import classes from './guide-view.module.css';
 import { MARK_LOOK, MarkShape } from './marks-strip';
@@ -13,9 +17,12 @@ export interface StepListProps {
   steps: PublishedStep[];
   marks: GuideMark[];
   mainFootageId: string | null;
-  currentStepId: string | null;
+  /** The video's clock: the list finds the playing step itself and draws again only when another one starts. */
+  clock: PlaybackClock;
   onSeek: (ms: number) => void;
 }
+
+const NO_MARKS: GuideMark[] = [];
 
 function StepTime({ step, mainFootageId, onSeek }: { step: PublishedStep; mainFootageId: string | null; onSeek: (ms: number) => void }) {
   if (step.startMs === null) return null;
@@ -44,10 +51,21 @@ function StepTime({ step, mainFootageId, onSeek }: { step: PublishedStep; mainFo
 }
 
 /** The steps in order; the one playing now stands out (a bar, a badge and aria-current, not colour alone). */
-export function StepList({ steps, marks, mainFootageId, currentStepId, onSeek }: StepListProps) {
+export function StepList({ steps, marks, mainFootageId, clock, onSeek }: StepListProps) {
   // The playing step stays in view while the list scrolls on its own beside the video; the page never jumps.
   const { following, box, currentRow, resume } = useFollowPlayback<HTMLOListElement>('top');
-  const ordered = [...steps].sort((a, b) => a.position - b.position);
+  const playingId = usePlayingStepId(clock, steps, mainFootageId);
+  const ordered = useMemo(() => [...steps].sort((a, b) => a.position - b.position), [steps]);
+  // Each step's marks, worked out once, so a step that keeps playing (or not) keeps the same props.
+  const marksByStep = useMemo(() => {
+    const byStep = new Map<string, GuideMark[]>();
+    for (const mark of marks) {
+      if (mark.stepId === null) continue;
+      byStep.set(mark.stepId, [...(byStep.get(mark.stepId) ?? []), mark]);
+    }
+    return byStep;
+  }, [marks]);
+  const seek = useStableHandler(onSeek);
 
   return (
     <Paper withBorder p="md" component="section" aria-labelledby="guide-steps-heading" className={classes.stepsPanel} data-testid="guide-steps">
@@ -59,64 +77,86 @@ export function StepList({ steps, marks, mainFootageId, currentStepId, onSeek }:
       </Group>
       <ol ref={box} className={classes.stepList}>
         {ordered.map((step) => {
-          const isCurrent = step.id === currentStepId;
-          const stepMarks = marks.filter((mark) => mark.stepId === step.id);
+          const isCurrent = step.id === playingId;
           return (
-            <li
+            <StepRow
               key={step.id}
-              ref={isCurrent ? currentRow : undefined}
-              className={classes.step}
-              data-current={isCurrent || undefined}
-              aria-current={isCurrent ? 'step' : undefined}
-              data-testid="guide-step"
-            >
-              <Stack gap={6}>
-                <Group gap="xs" wrap="nowrap" align="flex-start">
-                  <span className={classes.stepNumber} aria-hidden="true">
-                    {step.position}
-                  </span>
-                  <div style={{ flex: 1, minWidth: 0 }}>
-                    <Title order={3} size="h5">
-                      <span className={classes.visuallyHidden}>Step {step.position}: </span>
-                      {step.title}
-                    </Title>
-                    <Group gap="xs" mt={2}>
-                      <StepTime step={step} mainFootageId={mainFootageId} onSeek={onSeek} />
-                      <StepMinutes minutes={step.estimatedMinutes} size="sm" />
-                      {isCurrent && (
-                        <Badge size="sm" variant="filled" className={classes.noPrint} data-testid="step-now">
-                          Playing now
-                        </Badge>
-                      )}
-                    </Group>
-                  </div>
-                </Group>
-                {step.caution && <CautionPanel level={step.caution.level} text={step.caution.text} compact />}
-                {step.body && (
-                  <Typography className={classes.stepBody}>
-                    {/* The server sanitises step bodies (a short allow-list of tags) before they reach any reader. */}
-                    <div dangerouslySetInnerHTML={{ __html: step.body }} />
-                  </Typography>
-                )}
-                {stepMarks.length > 0 && (
-                  <ul className={classes.markChips} aria-label={`Marks in step ${step.position}`}>
-                    {stepMarks.map((mark) => (
-                      <li key={mark.id}>
-                        <button type="button" className={classes.markChip} onClick={() => onSeek(mark.startMs)}>
-                          <MarkShape kind={mark.kind} size={10} />
-                          <span className={classes.visuallyHidden}>{MARK_LOOK[mark.kind]?.name ?? 'Mark'} </span>
-                          <span className={classes.timeText}>{formatClock(mark.startMs)}</span>
-                          <span>{mark.label || MARK_LOOK[mark.kind]?.name}</span>
-                        </button>
-                      </li>
-                    ))}
-                  </ul>
-                )}
-              </Stack>
-            </li>
+              step={step}
+              marks={marksByStep.get(step.id) ?? NO_MARKS}
+              mainFootageId={mainFootageId}
+              current={isCurrent}
+              rowRef={isCurrent ? currentRow : undefined}
+              onSeek={seek}
+            />
           );
         })}
       </ol>
     </Paper>
   );
 }
+
+interface StepRowProps {
+  step: PublishedStep;
+  marks: GuideMark[];
+  mainFootageId: string | null;
+  current: boolean;
+  rowRef: ((node: HTMLElement | null) => void) | undefined;
+  onSeek: (ms: number) => void;
+}
+
+/** One step; memoised, so when another step starts playing only the step that stops and the one that starts draw again. */
+const StepRow = memo(function StepRow({ step, marks, mainFootageId, current, rowRef, onSeek }: StepRowProps) {
+  return (
+    <li
+      ref={rowRef}
+      className={classes.step}
+      data-current={current || undefined}
+      aria-current={current ? 'step' : undefined}
+      data-testid="guide-step"
+    >
+      <Stack gap={6}>
+        <Group gap="xs" wrap="nowrap" align="flex-start">
+          <span className={classes.stepNumber} aria-hidden="true">
+            {step.position}
+          </span>
+          <div style={{ flex: 1, minWidth: 0 }}>
+            <Title order={3} size="h5">
+              <span className={classes.visuallyHidden}>Step {step.position}: </span>
+              {step.title}
+            </Title>
+            <Group gap="xs" mt={2}>
+              <StepTime step={step} mainFootageId={mainFootageId} onSeek={onSeek} />
+              <StepMinutes minutes={step.estimatedMinutes} size="sm" />
+              {current && (
+                <Badge size="sm" variant="filled" className={classes.noPrint} data-testid="step-now">
+                  Playing now
+                </Badge>
+              )}
+            </Group>
+          </div>
+        </Group>
+        {step.caution && <CautionPanel level={step.caution.level} text={step.caution.text} compact />}
+        {step.body && (
+          <Typography className={classes.stepBody}>
+            {/* The server sanitises step bodies (a short allow-list of tags) before they reach any reader. */}
+            <div dangerouslySetInnerHTML={{ __html: step.body }} />
+          </Typography>
+        )}
+        {marks.length > 0 && (
+          <ul className={classes.markChips} aria-label={`Marks in step ${step.position}`}>
+            {marks.map((mark) => (
+              <li key={mark.id}>
+                <button type="button" className={classes.markChip} onClick={() => onSeek(mark.startMs)}>
+                  <MarkShape kind={mark.kind} size={10} />
+                  <span className={classes.visuallyHidden}>{MARK_LOOK[mark.kind]?.name ?? 'Mark'} </span>
+                  <span className={classes.timeText}>{formatClock(mark.startMs)}</span>
+                  <span>{mark.label || MARK_LOOK[mark.kind]?.name}</span>
+                </button>
+              </li>
+            ))}
+          </ul>
+        )}
+      </Stack>
+    </li>
+  );
+});

@@ -1,6 +1,7 @@
-import { fireEvent, screen, waitFor } from '@testing-library/react';
+import { act, fireEvent, screen, waitFor } from '@testing-library/react';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { formatClock } from '@/lib/clock';
+import { createPlaybackClock, type PlaybackClock } from '@/lib/playback-clock';
 import { stubApi } from '@/testing/api-stub';
 import { fakeScrollLayout } from '@/testing/fake-scroll-layout';
 import { renderWithProviders } from '@/testing/render';
@@ -39,6 +40,14 @@ function stubCues(cues: Cue[]) {
   ]);
 }
 
+let clock: PlaybackClock;
+
+/** The panel with the video at `ms`: the clock moves first (as the player moves it), then the panel renders. */
+function panelAt(ms: number, onSeek: (ms: number) => void = () => {}) {
+  act(() => clock.set(ms));
+  return <TranscriptPanel {...SOURCE} clock={clock} onSeek={onSeek} />;
+}
+
 function cueBox(): HTMLElement {
   return screen.getByTestId('guide-transcript').querySelector('ul')?.parentElement as HTMLElement;
 }
@@ -54,12 +63,13 @@ describe('TranscriptPanel following playback', () => {
   let layout: ReturnType<typeof fakeScrollLayout>;
   beforeEach(() => {
     layout = fakeScrollLayout({ boxHeight: BOX_HEIGHT, rowHeight: 40 });
+    clock = createPlaybackClock();
   });
   afterEach(() => vi.restoreAllMocks());
 
   it('keeps the playing cue in view until the reader scrolls, then offers to go back to now', async () => {
     stubCues(CUES);
-    const { rerender } = renderWithProviders(<TranscriptPanel {...SOURCE} currentMs={200_000} onSeek={() => {}} />);
+    const { rerender } = renderWithProviders(panelAt(200_000));
     // Cue 20 is below the box: the box scrolls it to a third of the way down (300 / 3), once its windows arrive.
     await waitFor(() => expect(playingCueDepth()).toBe(BOX_HEIGHT / 3), { timeout: 5_000 });
     expect(screen.getByRole('button', { current: 'time' }).textContent).toContain('Cue 20');
@@ -68,7 +78,7 @@ describe('TranscriptPanel following playback', () => {
     expect(movesByList).toBeGreaterThan(0);
 
     layout.scrollByHand(cueBox(), 0);
-    rerender(<TranscriptPanel {...SOURCE} currentMs={300_000} onSeek={() => {}} />);
+    rerender(panelAt(300_000));
     // The reader scrolled: playback moved on to cue 30 but the box stays where the reader put it.
     fireEvent.click(await screen.findByRole('button', { name: 'Back to now' }));
     expect(layout.moves.length).toBeGreaterThan(movesByList);
@@ -80,13 +90,13 @@ describe('TranscriptPanel following playback', () => {
 
   it('stays where the reader put it while playback moves on', async () => {
     stubCues(CUES);
-    const { rerender } = renderWithProviders(<TranscriptPanel {...SOURCE} currentMs={200_000} onSeek={() => {}} />);
+    const { rerender } = renderWithProviders(panelAt(200_000));
     await waitFor(() => expect(playingCueDepth()).toBe(BOX_HEIGHT / 3));
     layout.scrollByHand(cueBox(), 40);
     await waitFor(() => expect(screen.getByRole('button', { name: 'Back to now' })).toBeTruthy());
     const moves = layout.moves.length;
-    rerender(<TranscriptPanel {...SOURCE} currentMs={300_000} onSeek={() => {}} />);
-    rerender(<TranscriptPanel {...SOURCE} currentMs={390_000} onSeek={() => {}} />);
+    rerender(panelAt(300_000));
+    rerender(panelAt(390_000));
     await new Promise((resolve) => setTimeout(resolve, 50));
     expect(layout.moves.length).toBe(moves);
     expect(cueBox().scrollTop).toBe(40);
@@ -95,7 +105,7 @@ describe('TranscriptPanel following playback', () => {
   it('draws only the cues in view of a 3,000-cue transcript, and reaches the last cue', async () => {
     const seeks: number[] = [];
     const requests = stubCues(LONG_CUES);
-    const { rerender } = renderWithProviders(<TranscriptPanel {...SOURCE} currentMs={0} onSeek={(ms) => seeks.push(ms)} />);
+    const { rerender } = renderWithProviders(panelAt(0, (ms) => seeks.push(ms)));
     expect(await screen.findByText('3000 cues')).toBeTruthy();
     await screen.findByRole('button', { name: /Long cue 0$/ });
     const drawn = screen.getAllByTestId('transcript-cue').length;
@@ -107,7 +117,7 @@ describe('TranscriptPanel following playback', () => {
     expect(screen.getAllByRole('listitem')[0].getAttribute('aria-setsize')).toBe('3000');
 
     // Following playback to the end of the session brings the last cue in.
-    rerender(<TranscriptPanel {...SOURCE} currentMs={2_999 * 3_600 + 1_000} onSeek={(ms) => seeks.push(ms)} />);
+    rerender(panelAt(2_999 * 3_600 + 1_000, (ms) => seeks.push(ms)));
     // The playing minute's window names the row; the row's own window follows.
     const last = await screen.findByRole('button', { name: /Long cue 2999/ }, { timeout: 5_000 });
     expect(last.getAttribute('aria-current')).toBe('time');
@@ -128,7 +138,7 @@ describe('TranscriptPanel following playback', () => {
 
   it('fetches the whole transcript only to search it, and finds cues anywhere in the three hours', async () => {
     const requests = stubCues(LONG_CUES);
-    renderWithProviders(<TranscriptPanel {...SOURCE} currentMs={0} onSeek={() => {}} />);
+    renderWithProviders(panelAt(0));
     await screen.findByText('3000 cues');
     expect(requests.some((request) => request.url.searchParams.get('limit') === '500')).toBe(false);
     fireEvent.change(screen.getByRole('searchbox', { name: 'Search the transcript' }), { target: { value: 'cue 2999' } });
@@ -148,21 +158,21 @@ describe('TranscriptPanel following playback', () => {
 
   it('says when the video has no transcript', async () => {
     stubApi([{ path: /\/cues\?/, status: 404, body: { statusCode: 404, message: 'This guide has no transcript' } }]);
-    renderWithProviders(<TranscriptPanel {...SOURCE} currentMs={0} onSeek={() => {}} />);
+    renderWithProviders(panelAt(0));
     expect(await screen.findByText('This video has no transcript.')).toBeTruthy();
   });
 
   it('draws again only the cue that stops playing and the one that starts as the video plays on', async () => {
     stubCues(CUES);
-    const { rerender } = renderWithProviders(<TranscriptPanel {...SOURCE} currentMs={200_000} onSeek={() => {}} />);
+    const { rerender } = renderWithProviders(panelAt(200_000));
     await waitFor(() => expect(playingCueDepth()).toBe(BOX_HEIGHT / 3));
     // Let the list settle (the scroll's last frames) before counting.
     await new Promise((resolve) => setTimeout(resolve, 100));
     vi.mocked(formatClock).mockClear();
     // A new function each time, as a player passes: the rows still do not draw again for it.
-    rerender(<TranscriptPanel {...SOURCE} currentMs={205_000} onSeek={() => {}} />);
+    rerender(panelAt(205_000));
     expect(formatClock).not.toHaveBeenCalled();
-    rerender(<TranscriptPanel {...SOURCE} currentMs={210_000} onSeek={() => {}} />);
+    rerender(panelAt(210_000));
     expect(vi.mocked(formatClock).mock.calls.map(([ms]) => ms).sort()).toEqual([200_000, 210_000]);
     expect(screen.getByRole('button', { current: 'time' }).textContent).toContain('Cue 21');
   });

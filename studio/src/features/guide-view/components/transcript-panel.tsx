@@ -3,6 +3,7 @@ import { useQueries, useQuery } from '@tanstack/react-query';
 import { memo, useCallback, useDeferredValue, useMemo, useState } from 'react';
 import { BackToNow } from '@/components/back-to-now';
 import { ApiError } from '@/lib/api-client';
+import { usePlaybackSelect, type PlaybackClock } from '@/lib/playback-clock';
 import { useFollowingList } from '@/lib/use-follow-playback';
 import { useStableHandler } from '@/lib/use-stable-handler';
 import { CUE_PAGE_SIZE, CUE_SLICE_MS, guideViewQueries, type WindowCue } from '../api/queries';
@@ -15,7 +16,11 @@ export interface TranscriptPanelProps {
   /** Whose transcript: the published guide's, read a window at a time from `/api/guides/:workshop/:guide/cues`. */
   workshopSlug: string;
   guideSlug: string;
-  currentMs: number;
+  /**
+   * The video's clock. The panel listens for the playing minute and the playing cue only, so it draws again when
+   * another cue starts (and then only the two rows that change), not on every time update.
+   */
+  clock: PlaybackClock;
   onSeek: (ms: number) => void;
 }
 
@@ -31,7 +36,7 @@ const CUE_ROW_ESTIMATE_PX = 30;
  * list scrolls) and the minute playing now (to know which row plays), so a three-hour transcript costs a reader
  * what a short one does. Only a search fetches every cue, once.
  */
-export function TranscriptPanel({ workshopSlug, guideSlug, currentMs, onSeek }: TranscriptPanelProps) {
+export function TranscriptPanel({ workshopSlug, guideSlug, clock, onSeek }: TranscriptPanelProps) {
   const [query, setQuery] = useState('');
   // Filtering a long transcript on every key press must not hold up typing.
   const deferredQuery = useDeferredValue(query);
@@ -40,12 +45,14 @@ export function TranscriptPanel({ workshopSlug, guideSlug, currentMs, onSeek }: 
 
   const first = useQuery(guideViewQueries.cuePage(workshopSlug, guideSlug, 0));
   const total = first.data?.total ?? 0;
-  const playingSlice = useQuery({ ...guideViewQueries.cueSlice(workshopSlug, guideSlug, Math.floor(currentMs / CUE_SLICE_MS)), enabled: total > 0 });
-  const current = useMemo(() => {
-    const cues = playingSlice.data?.cues ?? [];
-    const at = currentCueIndex(cues, currentMs);
-    return at === -1 ? -1 : cues[at].index;
-  }, [playingSlice.data, currentMs]);
+  const playingMinute = usePlaybackSelect(clock, (ms) => Math.floor(ms / CUE_SLICE_MS));
+  const playingSlice = useQuery({ ...guideViewQueries.cueSlice(workshopSlug, guideSlug, playingMinute), enabled: total > 0 });
+  const sliceCues = playingSlice.data?.cues;
+  const current = usePlaybackSelect(clock, (ms) => {
+    if (!sliceCues) return -1;
+    const at = currentCueIndex(sliceCues, ms);
+    return at === -1 ? -1 : sliceCues[at].index;
+  });
   const everything = useQuery({ ...guideViewQueries.allCues(workshopSlug, guideSlug), enabled: searching && total > 0 });
   const matches = useMemo(() => (searching && everything.data ? filterCues(everything.data, deferredQuery) : null), [searching, everything.data, deferredQuery]);
 
