@@ -91,6 +91,8 @@ export class FootageRenditionsService {
     try {
       const media = await this.makeRenditions(footage, workDir);
       await this.storeFolder(workDir, prefix);
+      // Ready and "original dropped" are one change, so no reader sees ready footage still claiming its original.
+      const dropOriginal = !(await this.keepOriginals(footage.workshopId));
       const finished = await this.footage.update(
         { id: footage.id, renditionsState: 'processing' },
         {
@@ -100,6 +102,7 @@ export class FootageRenditionsService {
           renditionsReason: null,
           renditionsProgressAt: new Date(),
           renditionsMedia: media,
+          ...(dropOriginal ? { originalKept: false } : {}),
         },
       );
       if (!finished.affected) {
@@ -107,7 +110,7 @@ export class FootageRenditionsService {
         await this.storage.deletePrefix(prefix);
         return 'skipped';
       }
-      await this.dropOriginalIfAsked(footage);
+      if (dropOriginal) await this.deleteOriginal(footage);
       return 'ready';
     } catch (error) {
       if (!(error instanceof UnreadableSourceError)) throw error;
@@ -224,10 +227,13 @@ export class FootageRenditionsService {
     await runLimited(playlists, 4, put);
   }
 
-  private async dropOriginalIfAsked(footage: Footage): Promise<void> {
-    if (await this.keepOriginals(footage.workshopId)) return;
-    await this.storage.deleteObject(footage.objectKey);
-    await this.footage.update({ id: footage.id }, { originalKept: false });
+  /** After the row says the original is gone: a failed delete leaves an object no row points to, never a row pointing at nothing. */
+  private async deleteOriginal(footage: Footage): Promise<void> {
+    try {
+      await this.storage.deleteObject(footage.objectKey);
+    } catch (error: unknown) {
+      this.logger.warn(`footage ${footage.id}: the original ${footage.objectKey} was not deleted: ${String(error)}`);
+    }
   }
 }
 
