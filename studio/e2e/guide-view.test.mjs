@@ -166,6 +166,8 @@ test('a signed-out reader finds the guide, follows it beside the video, searches
   await page.getByRole('searchbox', { name: 'Search the transcript' }).fill('spigot');
   await page.getByTestId('transcript-count').filter({ hasText: '1 of 4 cues mention “spigot”' }).waitFor();
   const found = page.getByTestId('transcript-cue');
+  // The list is virtual: its rows are drawn a frame after the count, so wait for the row before counting.
+  await found.filter({ hasText: 'spigot' }).first().waitFor();
   assert.equal(await found.count(), 1);
   await found.first().click();
   await page.waitForFunction(() => {
