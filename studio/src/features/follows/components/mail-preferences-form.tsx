@@ -112,6 +112,7 @@ export function MailPreferencesForm({
                     <Table.Td>
                       <NativeSelect
                         size="xs"
+                        miw="13rem"
                         aria-label={`Delivery for ${follow.label}`}
                         value={follow.delivery}
                         data={Object.entries(DELIVERY_WORDS).map(([value, label]) => ({ value, label }))}
