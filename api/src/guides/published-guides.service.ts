@@ -15,7 +15,6 @@ import { Mark } from '../marks/entities/mark.entity';
 import { Measurement } from '../measurements/entities/measurement.entity';
 import { Transcript } from '../transcripts/entities/transcript.entity';
 import { User } from '../users/entities/user.entity';
-import { TranscriptCue } from '../transcripts/entities/transcript-cue.entity';
 import type { CueWindowQueryDto, CueWindowResponseDto } from '../transcripts/dto/transcript.dto';
 import { TranscriptsService } from '../transcripts/transcripts.service';
 import { Workshop } from '../workshops/entities/workshop.entity';
@@ -29,7 +28,7 @@ import { PublishedGuideCache, type CachedAnswer } from './published-guide-cache'
 const MEDIA_URL_TTL_SECONDS = 60 * 60;
 const INDEX_LIMIT = 50;
 /** Part of every tag: change it when the answers' shape changes, so no cache keeps the old shape. */
-const ANSWER_SHAPE = 'public-guides-4';
+const ANSWER_SHAPE = 'public-guides-5';
 
 interface PublishedGuide {
   workshop: Workshop;
@@ -52,7 +51,6 @@ export class PublishedGuidesService {
     @InjectRepository(Build) private readonly builds: Repository<Build>,
     @InjectRepository(Footage) private readonly footage: Repository<Footage>,
     @InjectRepository(Transcript) private readonly transcripts: Repository<Transcript>,
-    @InjectRepository(TranscriptCue) private readonly cues: Repository<TranscriptCue>,
     @InjectRepository(Mark) private readonly marks: Repository<Mark>,
     @InjectRepository(Measurement) private readonly measurements: Repository<Measurement>,
     @InjectRepository(User) private readonly users: Repository<User>,
@@ -186,13 +184,6 @@ export class PublishedGuidesService {
             }
           : null,
       steps: content.steps.map((step) => ({ ...step, estimatedMinutes: step.estimatedMinutes ?? null })),
-      cues: transcript
-        ? (await this.cues.find({ where: { transcriptId: transcript.id }, order: { cueIndex: 'ASC' } })).map((cue) => ({
-            startMs: cue.startMs,
-            endMs: cue.endMs,
-            text: cue.text,
-          }))
-        : [],
       parts,
       checklist: checklist?.view ?? null,
       // What a signed-in reader may follow from here (POST /api/follows).

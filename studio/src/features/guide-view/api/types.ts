@@ -140,7 +140,6 @@ export interface PublishedGuide {
   disclaimer: string;
   footage: GuideFootage | null;
   steps: PublishedStep[];
-  cues: Cue[];
   parts: GuidePart[];
   checklist: PublishedChecklist | null;
   marks: GuideMark[];

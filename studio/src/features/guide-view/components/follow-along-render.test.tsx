@@ -4,7 +4,7 @@ import { stubApi } from '@/testing/api-stub';
 import { fakeScrollLayout } from '@/testing/fake-scroll-layout';
 import { renderWithProviders } from '@/testing/render';
 import { FollowAlongView } from './follow-along-view';
-import { testGuide } from './test-guide';
+import { TEST_CUES, testGuide } from './test-guide';
 
 // Counts how often each part of the public guide runs, whoever asks it to (the document passing new props or the
 // part's own subscription to the video's clock). Called as plain functions, so their hooks count as the wrapper's.
@@ -82,7 +82,7 @@ vi.mock('./transcript-panel', async (importOriginal) => {
 });
 
 const guide = testGuide();
-const CUES = guide.cues.map((cue, index) => ({ index, ...cue }));
+const CUES = TEST_CUES.map((cue, index) => ({ index, ...cue }));
 
 function renderGuide() {
   stubApi([

@@ -4,14 +4,14 @@ import { stubApi, type StubRoute } from '@/testing/api-stub';
 import { fakeScrollLayout } from '@/testing/fake-scroll-layout';
 import { renderWithProviders } from '@/testing/render';
 import { FollowAlongView } from './follow-along-view';
-import { testGuide } from './test-guide';
+import { TEST_CUES, testGuide } from './test-guide';
 import { formatDate } from '@/lib/dates';
 
 const GUIDE_PATH = /^\/guides\/harrow-lane-garage\/motor-to-gearbox-coupler$/;
 
 /** The guide's answer, and its transcript a window at a time as the public cues route gives it. */
-function guideRoutes(guide: ReturnType<typeof testGuide>): StubRoute[] {
-  const cues = guide.cues.map((cue, index) => ({ index, ...cue }));
+function guideRoutes(guide: ReturnType<typeof testGuide>, transcript = TEST_CUES): StubRoute[] {
+  const cues = transcript.map((cue, index) => ({ index, ...cue }));
   return [
     { path: GUIDE_PATH, body: guide },
     {
@@ -135,7 +135,7 @@ describe('FollowAlongView', () => {
   });
 
   it('without a video, lists the steps with their times and no player', async () => {
-    stubApi(guideRoutes(testGuide({ footage: null, cues: [], marks: [] })));
+    stubApi(guideRoutes(testGuide({ footage: null, marks: [] }), []));
     renderGuide();
     await screen.findAllByTestId('guide-step');
     expect(screen.queryByTestId('guide-video')).toBeNull();

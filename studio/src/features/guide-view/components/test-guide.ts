@@ -1,4 +1,11 @@
-import type { PublishedGuide } from '../api/types';
+import type { Cue, PublishedGuide } from '../api/types';
+
+/** The test guide's transcript, as the public cues route gives it a window at a time (never in the guide's answer). */
+export const TEST_CUES: Cue[] = [
+  { startMs: 0, endMs: 4_000, text: 'First we lift the cab onto stands.' },
+  { startMs: 8_000, endMs: 11_000, text: 'The coupler slides on the twenty-one tooth spline.' },
+  { startMs: 12_000, endMs: 15_000, text: 'Spigot bore is fifteen thousandths over.' },
+];
 
 /** An invented published guide (Harrow Lane Garage's demo build) for component tests. */
 export function testGuide(overrides: Partial<PublishedGuide> = {}): PublishedGuide {
@@ -45,11 +52,6 @@ export function testGuide(overrides: Partial<PublishedGuide> = {}): PublishedGui
         estimatedMinutes: null,
       },
       { id: 's3', position: 3, title: 'Torque the bolts', body: '', footageId: null, startMs: null, endMs: null, caution: null, estimatedMinutes: 45 },
-    ],
-    cues: [
-      { startMs: 0, endMs: 4_000, text: 'First we lift the cab onto stands.' },
-      { startMs: 8_000, endMs: 11_000, text: 'The coupler slides on the twenty-one tooth spline.' },
-      { startMs: 12_000, endMs: 15_000, text: 'Spigot bore is fifteen thousandths over.' },
     ],
     parts: [{ partNumber: 'HL-2107', maker: 'Brackwater Drive', title: 'Coupler, 21-tooth', category: 'coupler', position: 'motor side' }],
     checklist: {
