@@ -44,6 +44,10 @@ describe('accounts (real MariaDB, Redis and mail fake)', () => {
     const link = linkFrom(mail, '/verify-email');
     expect(link.origin).toBe(process.env.APP_ORIGIN);
     expect(mail.text).toContain('Hello Rowan Avery');
+    // Transactional: no unsubscribe header, but it says why it came and where the account's mail is managed.
+    expect(mail.text).toContain('Why you got this: this address was used to create a Fitwright account.');
+    expect(mail.text).toContain(`Your account and the mail Fitwright sends you: ${process.env.APP_ORIGIN}/account`);
+    expect(mail.headers?.['list-unsubscribe']).toBeUndefined();
 
     const verified = await browser.post('/api/auth/verify-email').send({ token: link.searchParams.get('token') }).expect(200);
     expect(verified.body.user).toMatchObject({ email, displayName: 'Rowan Avery', emailVerified: true, isAdmin: false });
@@ -240,7 +244,13 @@ describe('accounts (real MariaDB, Redis and mail fake)', () => {
       const account = await signUpAndSignIn(app);
       const browser = await browserAgent(app);
       await browser.post('/api/auth/password/forgot').send({ email: account.email }).expect(202);
-      const token = tokenFrom(await waitForMail(account.email, { subject: /new Fitwright password/ }), '/reset-password');
+      const mail = await waitForMail(account.email, { subject: /new Fitwright password/ });
+      // A reset is sent only when asked: nothing to unsubscribe from, and the mail says so and links the account page.
+      expect(mail.text).toContain('Why you got this: a password reset was asked for this address on the sign-in page.');
+      expect(mail.text).toContain('so there is nothing to unsubscribe from');
+      expect(mail.html).toContain(`${process.env.APP_ORIGIN}/account`);
+      expect(mail.headers?.['list-unsubscribe']).toBeUndefined();
+      const token = tokenFrom(mail, '/reset-password');
       await db.query('UPDATE email_tokens SET expires_at = NOW(3) - INTERVAL 1 MINUTE WHERE token_hash = ?', [sha256(token)]);
       await browser.post('/api/auth/password/reset').send({ token, password: 'a brand new password' }).expect(400);
     });

@@ -190,7 +190,14 @@ describe('authorization matrix: every route × anonymous, non-member, editor, ow
     const unguarded = expressApiRoutes(app).filter((route) => !discovered.has(route));
     expect(unguarded).toEqual([]);
     // The routes this issue adds are among them.
-    for (const route of ['POST /api/auth/login', 'GET /api/workshops/:workshopId/members', 'GET /api/admin/users']) {
+    for (const route of [
+      'POST /api/auth/login',
+      'GET /api/workshops/:workshopId/members',
+      'GET /api/admin/users',
+      // The build page's fit-news record (editors read, owners retry).
+      'GET /api/workshops/:workshopId/builds/:buildId/fit-news',
+      'POST /api/workshops/:workshopId/builds/:buildId/fit-news/retry',
+    ]) {
       expect(discovered).toContain(route);
     }
   });

@@ -30,6 +30,7 @@ describe('mail preferences and digests (real MariaDB, mail fake)', () => {
   let base: string;
   let workshopId: string;
   let workshopSlug: string;
+  let buildId: string;
   const checkTitles = ['Coupler seats on the shaft', 'Adapter plate clears the starter', 'Shaft turns by hand'];
   const checkIds: string[] = [];
 
@@ -39,7 +40,7 @@ describe('mail preferences and digests (real MariaDB, mail fake)', () => {
     workshopSlug = uniqueSlug('digest');
     workshopId = (await owner.agent.post('/api/workshops').send({ name: 'Digest Shop', slug: workshopSlug }).expect(201)).body.id;
     base = `/api/workshops/${workshopId}`;
-    const buildId = (await owner.agent.post(`${base}/builds`).send({ title: 'Digest build' }).expect(201)).body.id;
+    buildId = (await owner.agent.post(`${base}/builds`).send({ title: 'Digest build' }).expect(201)).body.id;
     const part = (
       await owner.agent
         .post(`${base}/parts`)
@@ -119,6 +120,27 @@ describe('mail preferences and digests (real MariaDB, mail fake)', () => {
     // A follower is not a member: the record is the workshop's.
     await atOnce.agent.get(`${base}/checks/${checkIds[0]}/fit-news`).expect(404);
     expect((await owner.agent.post(`${base}/checks/${checkIds[0]}/fit-news/retry`).expect(200)).body[0]).toMatchObject({ told: 1, failed: 0 });
+  });
+
+  it('the build page’s record sums the news of every check of the build, latest change first', async () => {
+    const record = (await owner.agent.get(`${base}/builds/${buildId}/fit-news`).expect(200)).body;
+    expect(record).toMatchObject({ buildId, followersTold: 1, told: 3, pending: 0, failed: 0, inDigests: 3, uncertain: 0 });
+    expect(record.checks.map((check: { checkId: string }) => check.checkId)).toEqual([...checkIds].reverse());
+    expect(record.checks[0]).toMatchObject({
+      checkTitle: checkTitles[2],
+      assemblyName: 'Digest stack',
+      changes: 1,
+      lastChangeTo: 'confirmed',
+      told: 1,
+      inDigests: 1,
+      uncertain: 0,
+    });
+    expect(Date.parse(record.firstSentAt)).toBeLessThanOrEqual(Date.parse(record.lastSentAt));
+    // The workshop's record: a follower who is not a member does not see it; an unknown build is 404 naming it.
+    await atOnce.agent.get(`${base}/builds/${buildId}/fit-news`).expect(404);
+    const unknown = await owner.agent.get(`${base}/builds/00000000-0000-4000-8000-000000000000/fit-news`).expect(404);
+    expect(unknown.body).toMatchObject({ code: 'build_not_found', errors: { buildId: expect.any(String) } });
+    expect((await owner.agent.post(`${base}/builds/${buildId}/fit-news/retry`).expect(200)).body).toMatchObject({ told: 3, failed: 0 });
   });
 
   it('preferences and unsubscribe links work signed out, with tokens of at least 128 bits', async () => {

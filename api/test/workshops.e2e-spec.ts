@@ -125,6 +125,9 @@ describe('workshops, members and invitations (real MariaDB, S3 fake, mail fake)'
       const mail = await waitForMail(email, { subject: /invited you/ });
       expect(linkFrom(mail, '/invitations/accept').origin).toBe(process.env.APP_ORIGIN);
       expect(mail.subject).toBe('Rowan Avery invited you to Harrow Lane Garage on Fitwright');
+      // Sent to an address with no account: it says who entered the address and why, and where mail is managed.
+      expect(mail.text).toContain('Why you got this: Rowan Avery entered this address to invite you to "Harrow Lane Garage".');
+      expect(mail.text).toContain(`Your account and the mail Fitwright sends you: ${process.env.APP_ORIGIN}/account`);
 
       const preview = await request(app.getHttpServer()).get('/api/invitations/lookup').query({ token }).expect(200);
       expect(preview.body).toMatchObject({ email, role: 'editor', status: 'pending', invitedBy: 'Rowan Avery', workshop: { id: workshopId } });

@@ -80,7 +80,7 @@ export class AuthService {
     const passwordHash = await hashPassword(dto.password);
     const existing = await this.users.findByEmail(email);
     if (existing) {
-      await this.mail.send({ kind: 'account', mail: accountExistsMail(email, this.link('/sign-in'), this.link('/forgot-password')) });
+      await this.mail.send({ kind: 'account', mail: accountExistsMail(email, this.link('/sign-in'), this.link('/forgot-password'), this.link('/account')) });
       return;
     }
     let user: User;
@@ -88,7 +88,7 @@ export class AuthService {
       user = await this.users.create({ email, passwordHash, displayName: dto.displayName });
     } catch (error) {
       if (!isDuplicateKey(error)) throw error;
-      await this.mail.send({ kind: 'account', mail: accountExistsMail(email, this.link('/sign-in'), this.link('/forgot-password')) });
+      await this.mail.send({ kind: 'account', mail: accountExistsMail(email, this.link('/sign-in'), this.link('/forgot-password'), this.link('/account')) });
       return;
     }
     await this.sendVerification(user);
@@ -170,7 +170,7 @@ export class AuthService {
     const user = await this.users.findByEmail(email);
     if (!user || user.disabledAt) return false;
     const token = await this.tokens.issue(user.id, 'reset-password');
-    await this.mail.send({ kind: 'account', mail: resetPasswordMail(user.email, this.link('/reset-password', token)) });
+    await this.mail.send({ kind: 'account', mail: resetPasswordMail(user.email, this.link('/reset-password', token), this.link('/account')) });
     return true;
   }
 
@@ -183,7 +183,7 @@ export class AuthService {
     user.emailVerifiedAt ??= new Date();
     await this.users.save(user);
     await this.sessions.endAllFor(user.id);
-    await this.mail.send({ kind: 'account', mail: passwordChangedMail(user.email) });
+    await this.mail.send({ kind: 'account', mail: passwordChangedMail(user.email, this.link('/account')) });
   }
 
   async changePassword(sessionUser: SessionUser, dto: ChangePasswordDto, request: Request): Promise<void> {
@@ -197,7 +197,7 @@ export class AuthService {
     user.passwordHash = await hashPassword(dto.newPassword);
     await this.users.save(user);
     await this.sessions.endAllFor(user.id, request);
-    await this.mail.send({ kind: 'account', mail: passwordChangedMail(user.email) });
+    await this.mail.send({ kind: 'account', mail: passwordChangedMail(user.email, this.link('/account')) });
   }
 
   /** E-mails a confirmation link to the new address; the address changes only when it is followed. */
@@ -214,11 +214,11 @@ export class AuthService {
       });
     }
     if (await this.users.findByEmail(newEmail)) {
-      await this.mail.send({ kind: 'account', mail: emailTakenMail(newEmail) });
+      await this.mail.send({ kind: 'account', mail: emailTakenMail(newEmail, this.link('/account')) });
       return;
     }
     const token = await this.tokens.issue(user.id, 'change-email', newEmail);
-    await this.mail.send({ kind: 'account', mail: changeEmailMail(newEmail, this.link('/confirm-email', token)) });
+    await this.mail.send({ kind: 'account', mail: changeEmailMail(newEmail, this.link('/confirm-email', token), this.link('/account')) });
   }
 
   async confirmEmailChange(token: string): Promise<SessionUser> {
@@ -234,14 +234,14 @@ export class AuthService {
       if (!isDuplicateKey(error)) throw error;
       throw new ConflictException('Another account took this address in the meantime; nothing was changed.');
     }
-    await this.mail.send({ kind: 'account', mail: emailChangedMail(oldEmail, user.email) });
+    await this.mail.send({ kind: 'account', mail: emailChangedMail(oldEmail, user.email, this.link('/account')) });
     this.logger.log(`user ${user.id} changed e-mail address`);
     return toSessionUser(user);
   }
 
   private async sendVerification(user: User): Promise<void> {
     const token = await this.tokens.issue(user.id, 'verify-email');
-    await this.mail.send({ kind: 'account', mail: verifyEmailMail(user.email, user.displayName, this.link('/verify-email', token)) });
+    await this.mail.send({ kind: 'account', mail: verifyEmailMail(user.email, user.displayName, this.link('/verify-email', token), this.link('/account')) });
   }
 
   /** ADMIN_EMAILS names the first admins; an address counts only once its owner has verified it. */

@@ -18,7 +18,7 @@ import { FitChecksModule } from '../fit-checks/fit-checks.module';
 import { Follow } from './entities/follow.entity';
 import { DigestsService } from './digests.service';
 import { FitNewsService } from './fit-news.service';
-import { FitNewsRecordController } from './fit-news-record.controller';
+import { BuildFitNewsRecordController, FitNewsRecordController } from './fit-news-record.controller';
 import { FitNewsRecordService } from './fit-news-record.service';
 import { FollowsController } from './follows.controller';
 import { FollowsService } from './follows.service';
@@ -29,7 +29,7 @@ import { MailPreferencesService } from './mail-preferences.service';
     TypeOrmModule.forFeature([Follow, FitNewsDelivery, MailPreference, DigestItem, MailLink, FitReport, Workshop, WorkshopMember, Build, Assembly, Guide, User, FitCheckEvidence, Mark, Measurement]),
     FitChecksModule,
   ],
-  controllers: [FollowsController, FitNewsRecordController],
+  controllers: [FollowsController, FitNewsRecordController, BuildFitNewsRecordController],
   providers: [FollowsService, FitNewsService, DigestsService, MailPreferencesService, FitNewsRecordService],
   exports: [FollowsService, MailPreferencesService],
 })

@@ -66,8 +66,13 @@ export function backoffMs(attempts: number): number {
  * concurrency under a per-minute cap counted across processes, and marks each sent only after the
  * server accepted it.
  *
- * Exactly once up to one window: a process that dies after the server accepted a message and before
- * its row says sent leaves it claimed; when the lease lapses it is sent again, with the same Message-ID.
+ * Exactly once up to one window, which is named and counted: each send is written down as started
+ * (`attempt_started_at`, under a live lease) before the message goes to the server, and the mark is
+ * cleared with the recorded answer. A process that dies (or loses the database) between the server's 250
+ * and that record leaves the mark; when its lease lapses the next claim counts the delivery as uncertain
+ * (`uncertain_attempts`) and sends it again with the same Message-ID. SMTP has no way to ask a server
+ * whether it holds a message, so that repeat cannot be avoided without risking a loss; every other path
+ * (a lapsed lease, the database away before the send, the server away) sends nothing twice.
  */
 @Injectable()
 export class MailRelay implements OnApplicationBootstrap, OnModuleDestroy {
@@ -184,17 +189,27 @@ export class MailRelay implements OnApplicationBootstrap, OnModuleDestroy {
     const started = Date.now();
     const queue = [...claimed];
     let connectionDown = false;
+    let databaseDown = false;
+    // Records of accepted messages, written while the connection goes on to its next message (awaited below).
+    const records: Promise<void>[] = [];
     const work = async () => {
       for (let next = queue.shift(); next; next = queue.shift()) {
+        // Without the database nothing can be written down, so nothing is sent; the claims lapse unmarked.
+        if (databaseDown) continue;
         if (connectionDown || this.stopping || Date.now() - started > SEND_WINDOW_MS) {
           await this.release(next.id, connectionDown ? 2000 : 0);
           continue;
         }
-        const down = await this.deliver(next);
+        const begun = await this.startAttempt(next.id).catch(() => undefined);
+        if (begun === undefined) databaseDown = true;
+        if (!begun) continue; // the database is away, or the lease lapsed and another relay has it
+        const down = await this.deliver(next, records);
         if (down) connectionDown = true;
       }
     };
     await Promise.all(Array.from({ length: this.settings.concurrency }, work));
+    await Promise.all(records);
+    if (databaseDown) throw new Error('the database went away while sending; unsent claims lapse and are sent by the next claim');
     return claimed.length;
   }
 
@@ -212,10 +227,13 @@ export class MailRelay implements OnApplicationBootstrap, OnModuleDestroy {
       )) as { id: string }[];
       if (!rows.length) return [];
       const found = rows.map((row) => row.id);
-      await manager.query(`UPDATE mail_deliveries SET lease_owner = ?, lease_until = NOW(3) + INTERVAL ${LEASE_MS / 1000} SECOND WHERE id IN (?)`, [
-        this.owner,
-        found,
-      ]);
+      // A delivery still marked as started was being sent when its relay died: the server may hold it already.
+      await manager.query(
+        `UPDATE mail_deliveries SET lease_owner = ?, lease_until = NOW(3) + INTERVAL ${LEASE_MS / 1000} SECOND,
+           uncertain_attempts = uncertain_attempts + (attempt_started_at IS NOT NULL), attempt_started_at = NULL
+          WHERE id IN (?)`,
+        [this.owner, found],
+      );
       return found;
     });
     if (!ids.length) return [];
@@ -225,8 +243,20 @@ export class MailRelay implements OnApplicationBootstrap, OnModuleDestroy {
     )) as DueDelivery[];
   }
 
+  /**
+   * Writes down that this claimed delivery is about to go to the server, while the lease is still live.
+   * False when the lease lapsed (another relay may have it now): then this process must not send it.
+   */
+  private async startAttempt(id: string): Promise<boolean> {
+    const result = (await this.dataSource.query(
+      'UPDATE mail_deliveries SET attempt_started_at = NOW(3) WHERE id = ? AND lease_owner = ? AND lease_until > NOW(3)',
+      [id, this.owner],
+    )) as { affectedRows?: number };
+    return (result.affectedRows ?? 0) === 1;
+  }
+
   /** Sends one claimed delivery; returns true when the SMTP server could not be reached at all. */
-  private async deliver(delivery: DueDelivery): Promise<boolean> {
+  private async deliver(delivery: DueDelivery, records: Promise<void>[]): Promise<boolean> {
     const messageId = messageIdFor(delivery.idempotency_key, this.mail.messageIdDomain);
     try {
       const accepted = await this.mail.send(
@@ -239,7 +269,14 @@ export class MailRelay implements OnApplicationBootstrap, OnModuleDestroy {
         },
         messageId,
       );
-      await this.markSent(delivery.id, accepted.reply);
+      // Started at once, not awaited here: the connection's next message needs only its own start mark, so
+      // the record of this one overlaps that send instead of adding a round trip per message. Should the
+      // record fail for the whole lease, the start mark stays and the next claim counts it as uncertain.
+      records.push(
+        this.markSent(delivery.id, accepted.reply).catch((error: unknown) =>
+          this.logger.warn(`mail ${delivery.id} was accepted but could not be recorded as sent: ${error instanceof Error ? error.message : String(error)}`),
+        ),
+      );
       return false;
     } catch (error) {
       const refusal = error instanceof SmtpRefusal ? error : new SmtpRefusal(String(error), undefined, false);
@@ -247,7 +284,7 @@ export class MailRelay implements OnApplicationBootstrap, OnModuleDestroy {
       const givenUp = refusal.permanent || attempts >= MAX_ATTEMPTS;
       await this.dataSource.query(
         `UPDATE mail_deliveries SET state = ?, attempts = ?, smtp_reply = ?, next_attempt_at = NOW(3) + INTERVAL ? SECOND,
-           lease_owner = NULL, lease_until = NULL WHERE id = ? AND lease_owner = ?`,
+           lease_owner = NULL, lease_until = NULL, attempt_started_at = NULL WHERE id = ? AND lease_owner = ?`,
         [givenUp ? 'failed' : 'pending', attempts, refusal.message.slice(0, 500), backoffMs(attempts) / 1000, delivery.id, this.owner],
       );
       if (givenUp) this.logger.warn(`mail ${delivery.id} not delivered after ${attempts} attempt(s): ${refusal.message}`);
@@ -267,9 +304,9 @@ export class MailRelay implements OnApplicationBootstrap, OnModuleDestroy {
     for (let wait = 250; ; wait = Math.min(wait * 2, 2_000)) {
       try {
         await this.dataSource.query(
-          `UPDATE mail_deliveries SET state = 'sent', sent_at = NOW(3), attempts = attempts + 1, smtp_reply = ?, body_text = '', body_html = NULL,
-             lease_owner = NULL, lease_until = NULL WHERE id = ? AND lease_owner = ?`,
-          [reply, id, this.owner],
+          `UPDATE mail_deliveries SET state = 'sent', sent_at = NOW(3), sent_by = ?, attempts = attempts + 1, smtp_reply = ?, body_text = '', body_html = NULL,
+             lease_owner = NULL, lease_until = NULL, attempt_started_at = NULL WHERE id = ? AND lease_owner = ?`,
+          [this.owner, reply, id, this.owner],
         );
         return;
       } catch (error) {

@@ -1,3 +1,4 @@
+import { accountMailFooter } from '../auth/auth-mails';
 import {
   ConflictException,
   ForbiddenException,
@@ -94,6 +95,11 @@ export class InvitationsService {
               `${inviter.displayName} invited you to join the workshop "${workshop.name}" on Fitwright as ${roleWords}.`,
               `Accept the invitation (the link works for 7 days): ${url}`,
               `If you have no Fitwright account yet, create one with this address (${email}) and then accept.`,
+              // Transactional, not a list: it says why it came and where mail is managed instead of offering an unsubscribe.
+              ...accountMailFooter(
+                `${inviter.displayName} entered this address to invite you to "${workshop.name}". An invitation comes only when a workshop member sends one; if you do not want it, ignore it and it lapses in 7 days.`,
+                `${this.appOrigin}/account`,
+              ),
               '— Fitwright',
             ].join('\n\n'),
           },

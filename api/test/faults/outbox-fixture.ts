@@ -68,6 +68,17 @@ export interface FanOutCount {
   delivered: number;
 }
 
+/** Copies the server accepted per follower, for the followers with more than one. */
+export function copiesOf(recorded: RecordedMail[], subject: string, followers: string[]): Map<string, number> {
+  const wanted = new Set(followers);
+  const copies = new Map<string, number>();
+  for (const mail of recorded) {
+    if (mail.subject !== subject) continue;
+    for (const to of mail.to) if (wanted.has(to)) copies.set(to, (copies.get(to) ?? 0) + 1);
+  }
+  return new Map([...copies].filter(([, count]) => count > 1));
+}
+
 export function countFanOut(recorded: RecordedMail[], subject: string, followers: string[]): FanOutCount {
   const copies = new Map<string, RecordedMail[]>();
   for (const mail of recorded) {
@@ -131,6 +142,25 @@ export class FanOutFixture {
     const checkId = (await this.owner.post(`${this.base}/assemblies/${this.assemblyId}/checks`).send({ title }).expect(201)).body.id as string;
     await this.owner.post(`${this.base}/checks/${checkId}/transitions`).send({ to: 'no_fit', reason: 'Fault test', from: 'open' }).expect(201);
     return `No fit: ${title}`;
+  }
+
+  /**
+   * The change's deliveries the relay claimed again after an unfinished attempt (started, answer never
+   * recorded): the only ones that may reach the server twice. Recipient → how many such re-claims.
+   */
+  uncertain(subject: string): Map<string, number> {
+    const rows = this.mariadb.sql(
+      `SELECT recipient, uncertain_attempts FROM mail_deliveries WHERE kind = 'fit-news' AND subject = '${subject.replace(/'/g, "''")}' AND uncertain_attempts > 0`,
+    );
+    return new Map(rows.filter((row) => row.length === 2).map(([recipient, count]) => [recipient.toLowerCase(), Number(count)]));
+  }
+
+  /** How many deliveries of the change each relay process recorded as sent (process id → count). */
+  sentBy(subject: string): Map<string, number> {
+    const rows = this.mariadb.sql(
+      `SELECT sent_by, COUNT(*) FROM mail_deliveries WHERE kind = 'fit-news' AND subject = '${subject.replace(/'/g, "''")}' AND state = 'sent' GROUP BY sent_by`,
+    );
+    return new Map(rows.filter((row) => row.length === 2).map(([owner, count]) => [owner, Number(count)]));
   }
 
   /** Deliveries the outbox still has to send (or gave up on). */

@@ -17,6 +17,7 @@ import { MailOutbox1765450000000 } from './1765450000000-mail-outbox';
 import { MailPreferences1765450000001 } from './1765450000001-mail-preferences';
 import { FitReportMailLinks1765460000000 } from './1765460000000-fit-report-mail-links';
 import { GuideEffort1765466000000 } from './1765466000000-guide-effort';
+import { MailAttempts1765470000000 } from './1765470000000-mail-attempts';
 
 /** Every migration, oldest first. Listed explicitly so the same list works from src (tests) and dist. */
 // eslint-disable-next-line @typescript-eslint/no-unsafe-function-type
@@ -39,4 +40,5 @@ export const migrations: MixedList<Function> = [
   MailPreferences1765450000001,
   FitReportMailLinks1765460000000,
   GuideEffort1765466000000,
+  MailAttempts1765470000000,
 ];

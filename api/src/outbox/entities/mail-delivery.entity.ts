@@ -61,12 +61,27 @@ export class MailDelivery {
   @Column({ name: 'lease_until', type: 'datetime', precision: 3, nullable: true })
   leaseUntil!: Date | null;
 
+  /**
+   * Set just before the message is handed to the SMTP server, cleared when the answer is recorded. Still
+   * set when the delivery is claimed again: its relay died mid-send, so the server may already hold it.
+   */
+  @Column({ name: 'attempt_started_at', type: 'datetime', precision: 3, nullable: true })
+  attemptStartedAt!: Date | null;
+
+  /** How many times it was claimed again after an unfinished attempt: each a send that may have gone twice (same Message-ID). */
+  @Column({ name: 'uncertain_attempts', type: 'int', default: 0 })
+  uncertainAttempts!: number;
+
   /** The SMTP server's last answer: its acceptance, or why it refused. */
   @Column({ name: 'smtp_reply', type: 'varchar', length: 500, nullable: true })
   smtpReply!: string | null;
 
   @Column({ name: 'sent_at', type: 'datetime', precision: 3, nullable: true })
   sentAt!: Date | null;
+
+  /** The relay process that recorded the send (two workers share a fan-out; the tests count by it). */
+  @Column({ name: 'sent_by', type: 'char', length: 36, nullable: true })
+  sentBy!: string | null;
 
   @CreatedAtColumn()
   createdAt!: Date;
