@@ -90,7 +90,9 @@ export function session(baseUrl) {
     if (!response.ok) throw new Error(`${method} ${path}: ${response.status} ${text}`);
     return text ? JSON.parse(text) : null;
   };
-  return { request, get: (path) => request('GET', path), post: (path, body) => request('POST', path, body), put: (path, body) => request('PUT', path, body), delete: (path) => request('DELETE', path) };
+  // The headers a browser of this session sends on a read (for autocannon, which keeps no cookies itself).
+  const readHeaders = () => ({ 'x-forwarded-for': clientIp, cookie: [...cookies].map(([key, value]) => `${key}=${value}`).join('; ') });
+  return { request, readHeaders, get: (path) => request('GET', path), post: (path, body) => request('POST', path, body), put: (path, body) => request('PUT', path, body), delete: (path) => request('DELETE', path) };
 }
 
 async function waitForMail(to, subject) {

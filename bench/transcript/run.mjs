@@ -16,6 +16,7 @@ const require = createRequire(`${root}api/package.json`);
 const { parseSync } = require('subtitle');
 const { parseTranscript } = require(`${root}api/dist/engine/transcript-formats.js`);
 const mysql = require('mysql2/promise');
+const Redis = require('ioredis');
 
 const CUES = 3000;
 const HOURS = 3;
@@ -121,14 +122,29 @@ async function main() {
     const reference = median(Array.from({ length: PARSE_RUNS }, () => time(() => parseSync(text)).ms));
     const engine = median(Array.from({ length: PARSE_RUNS }, () => time(() => parseTranscript(text, 'auto')).ms));
 
-    // Parse + store through the API: each run stores a new revision of 3,000 cues.
-    await session.put(`${base}/transcript`, { text, format: 'auto' });
+    // Parse + store through the API: each run stores a new revision of 3,000 cues. Each stored revision queues a
+    // mining job (marks suggested from the cues), which the same API process works after answering; the next run
+    // waits for it, outside the timing, so a run measures the import alone, as the baseline's runs do.
+    const redis = new Redis({ host: process.env.REDIS_HOST, port: Number(process.env.REDIS_PORT), password: process.env.REDIS_PASSWORD });
+    const minedAfter = async (transcript) => {
+      const key = `${process.env.QUEUE_PREFIX}:marks:mine-transcript-${transcript.id}`;
+      for (const deadline = Date.now() + 120_000; !(await redis.hget(key, 'finishedOn')); ) {
+        if (Date.now() > deadline || (await redis.hget(key, 'failedReason'))) throw new Error(`the mining job ${key} did not finish`);
+        await new Promise((resolve) => setTimeout(resolve, 50));
+      }
+    };
     const stored = [];
-    for (let run = 0; run < API_RUNS; run += 1) {
-      const started = performance.now();
-      const transcript = await session.put(`${base}/transcript`, { text, format: 'auto' });
-      stored.push(performance.now() - started);
-      if (transcript.cueCount !== CUES) throw new Error(`the API stored ${transcript.cueCount} cues`);
+    try {
+      await minedAfter(await session.put(`${base}/transcript`, { text, format: 'auto' }));
+      for (let run = 0; run < API_RUNS; run += 1) {
+        const started = performance.now();
+        const transcript = await session.put(`${base}/transcript`, { text, format: 'auto' });
+        stored.push(performance.now() - started);
+        if (transcript.cueCount !== CUES) throw new Error(`the API stored ${transcript.cueCount} cues`);
+        await minedAfter(transcript);
+      }
+    } finally {
+      redis.disconnect();
     }
     const apiMs = median(stored);
 
