@@ -1,4 +1,4 @@
-import { ValidationPipe } from '@nestjs/common';
+import { Logger, ValidationPipe } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { Reflector } from '@nestjs/core';
 import { NestExpressApplication } from '@nestjs/platform-express';
@@ -9,6 +9,7 @@ import expressStaticGzip from 'express-static-gzip';
 import type { IncomingMessage } from 'node:http';
 import type { NextFunction, Request, Response } from 'express';
 import { existsSync } from 'node:fs';
+import { readFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import helmet from 'helmet';
 import { AppConfig } from './config/app-config';
@@ -20,6 +21,8 @@ import { RejectControlCharactersPipe } from './common/pipes/control-characters';
 import { ObjectBodyPipe } from './common/pipes/object-body.pipe';
 import { validationException } from './common/pipes/validation-errors';
 import { buildOpenApiDocument } from './openapi/openapi-document';
+import { PublicPageShellService } from './guides/public-page-shell.service';
+import { shellPageOf, withPageShell } from './guides/public-page-shell';
 
 /** Everything main.ts and the e2e tests share, so tests exercise the app as it is served. */
 export function configureApp(app: NestExpressApplication): void {
@@ -100,10 +103,22 @@ function serveStudio(app: NestExpressApplication, dist: string): void {
     }),
   );
   const indexHtml = join(dist, 'index.html');
+  const shells = app.get(PublicPageShellService, { strict: false });
+  const logger = new Logger('StudioPages');
   app.use((request: Request, response: Response, next: NextFunction) => {
     const isPageRequest = request.method === 'GET' && !request.path.startsWith('/api');
     if (!isPageRequest) return next();
     response.setHeader('Cache-Control', 'no-cache');
-    response.sendFile(indexHtml);
+    const page = shellPageOf(request.path, request.query);
+    if (!page) return response.sendFile(indexHtml);
+    // A public guide page arrives with its title, cautions and poster drawn, before the JavaScript.
+    void Promise.all([shells.shellFor(page), readFile(indexHtml, 'utf8')]).then(
+      ([shell, html]) => (shell ? response.type('html').send(withPageShell(html, shell)) : response.sendFile(indexHtml)),
+      (error: unknown) => {
+        // The shell is an extra: without it (Redis or the database away) the page still loads and says what is wrong.
+        logger.warn(`No page shell for ${request.path}: ${error instanceof Error ? error.message : String(error)}`);
+        response.sendFile(indexHtml);
+      },
+    );
   });
 }

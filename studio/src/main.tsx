@@ -5,8 +5,11 @@ import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import { AppProvider } from './app/provider';
 import { AppRouter } from './app/router';
+import { holdPageShell } from './lib/page-shell';
 
-createRoot(document.getElementById('root')!).render(
+const root = document.getElementById('root')!;
+holdPageShell(root);
+createRoot(root).render(
   <StrictMode>
     <AppProvider>
       <AppRouter />

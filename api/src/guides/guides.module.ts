@@ -24,6 +24,7 @@ import { PublishedGuidesController } from './published-guides.controller';
 import { PublishedGuideMediaService } from './published-guide-media.service';
 import { PublishedGuidesService } from './published-guides.service';
 import { PublishedTranscriptController } from './published-transcript.controller';
+import { PublicPageShellService } from './public-page-shell.service';
 
 @Module({
   imports: [
@@ -35,7 +36,8 @@ import { PublishedTranscriptController } from './published-transcript.controller
     FootageModule,
   ],
   controllers: [GuidesController, PublishedGuidesController, PublishedTranscriptController],
-  providers: [GuidesService, PublishedGuidesService, PublishedGuideMediaService, PublishedGuideCache, publishedGuideStoreProvider],
-  exports: [GuidesService],
+  providers: [GuidesService, PublishedGuidesService, PublishedGuideMediaService, PublishedGuideCache, publishedGuideStoreProvider, PublicPageShellService],
+  // The shell service serves the studio's page for public guide paths (app.setup.ts).
+  exports: [GuidesService, PublicPageShellService],
 })
 export class GuidesModule {}

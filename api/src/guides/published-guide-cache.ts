@@ -77,6 +77,18 @@ export class PublishedGuideCache implements EntitySubscriberInterface, OnApplica
     return { gzippedJson };
   }
 
+  /**
+   * A page's server-rendered shell for the state `tag` names, as JSON text (built once per state, like the answer
+   * it is made from; a new state has a new tag, so shells never need forgetting either).
+   */
+  async page(tag: string, build: () => Promise<object>): Promise<object> {
+    const stored = await this.store.getBlob(`page:${tag}`);
+    if (stored) return JSON.parse(stored.toString('utf8')) as object;
+    const page = await build();
+    await this.store.setBlob(`page:${tag}`, Buffer.from(JSON.stringify(page), 'utf8'));
+    return page;
+  }
+
   afterInsert(event: InsertEvent<unknown>) {
     return this.touched(event.metadata, event.queryRunner);
   }

@@ -20,6 +20,7 @@ import { StepList } from './step-list';
 import { TranscriptPanel } from './transcript-panel';
 import { formatDate } from '@/lib/dates';
 import { GuideEffort } from '@/components/guide-effort';
+import { useReleasePageShell } from '@/lib/page-shell';
 
 
 /** The tab's title names the guide while it is open (and on the printout's header line). */
@@ -173,6 +174,8 @@ export function FollowAlongView({
   startAtMs?: number;
 }) {
   const guide = useQuery(guideViewQueries.detail(workshopSlug, guideSlug));
+  // The server's first paint of this page stays until the guide (or its failure) can take its place.
+  useReleasePageShell(!guide.isPending);
   if (guide.isPending) {
     return (
       <Stack gap="md" aria-label="Loading the guide">

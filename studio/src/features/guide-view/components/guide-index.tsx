@@ -9,6 +9,7 @@ import type { PublishedGuideSummary } from '../api/types';
 import classes from './guide-view.module.css';
 import { formatDate } from '@/lib/dates';
 import { GuideEffort } from '@/components/guide-effort';
+import { useReleasePageShell } from '@/lib/page-shell';
 
 
 function GuideCard({ guide }: { guide: PublishedGuideSummary }) {
@@ -55,6 +56,7 @@ export function GuideIndex() {
   const q = params.get('q')?.trim() ?? '';
   const [typed, setTyped] = useState(q);
   const guides = useQuery(guideViewQueries.list(q));
+  useReleasePageShell(!guides.isPending);
 
   // The address holds the search (so it can be shared), updated once typing pauses.
   const applySearch = useDebouncedCallback((value: string) => {
