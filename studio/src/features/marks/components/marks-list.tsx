@@ -68,19 +68,22 @@ export function MarksList({ workshopId, footageId, marks, clock, onSeek, onEdit 
   });
 
   return (
-    <Paper withBorder p="md">
+    <Paper withBorder p="md" data-testid="marks-panel">
       <Stack gap="sm">
         <Group justify="space-between">
           <Title order={4}>Marks</Title>
           {!following && shown.length > 0 && <BackToNow onClick={resume} />}
         </Group>
-        <SegmentedControl
-          size="xs"
-          aria-label="Show marks of kind"
-          value={kind}
-          onChange={(next) => setKind(next as MarkKind | 'all')}
-          data={[{ value: 'all', label: 'All' }, ...MARK_KINDS.map((value) => ({ value, label: KIND_LOOK[value].name }))]}
-        />
+        {/* Seven kinds do not fit a phone's width: the strip scrolls sideways rather than squeezing the words. */}
+        <div className={classes.kindFilter} data-testid="mark-kind-filter">
+          <SegmentedControl
+            size="xs"
+            aria-label="Show marks of kind"
+            value={kind}
+            onChange={(next) => setKind(next as MarkKind | 'all')}
+            data={[{ value: 'all', label: 'All' }, ...MARK_KINDS.map((value) => ({ value, label: KIND_LOOK[value].name }))]}
+          />
+        </div>
         {shown.length === 0 && (
           <Text size="sm" c="dimmed">
             {marks.length === 0 ? 'No marks yet. Press M while the video plays, or use “Pin a mark”.' : 'No marks of this kind.'}
@@ -122,30 +125,28 @@ interface MarkRowProps {
 const MarkRow = memo(function MarkRow({ workshopId, footageId, mark, onSeek, onEdit, onRemove }: MarkRowProps) {
   const at = formatClock(mark.startMs, { tenths: true });
   return (
-    <Group justify="space-between" wrap="nowrap" data-testid="mark-row">
-      <Group gap="xs" wrap="nowrap" align="flex-start" style={{ minWidth: 0 }}>
-        <UnstyledButton onClick={() => onSeek(mark.startMs)} aria-label={`Jump to ${at}`}>
-          <Text size="sm" ff="monospace">
-            {at}
-          </Text>
-        </UnstyledButton>
-        <Group gap="xs" wrap="nowrap" h={22} style={{ flex: 'none' }}>
-          <KindShape kind={mark.kind} />
-          <Text size="sm" fw={500} style={{ whiteSpace: 'nowrap' }}>
-            {KIND_LOOK[mark.kind].name}
-          </Text>
-        </Group>
-        {/* The label as written, and under it what the mark links to. */}
-        <Stack gap={0} style={{ minWidth: 0 }}>
-          {mark.label && (
-            <Text size="sm" lineClamp={1}>
-              {mark.label}
-            </Text>
-          )}
-          <MarkLink workshopId={workshopId} footageId={footageId} mark={mark} />
-        </Stack>
+    <div className={classes.markRow} data-testid="mark-row">
+      <UnstyledButton className={classes.time} onClick={() => onSeek(mark.startMs)} aria-label={`Jump to ${at}`}>
+        <Text size="sm" ff="monospace" data-testid="mark-time">
+          {at}
+        </Text>
+      </UnstyledButton>
+      <Group className={classes.kind} gap="xs" wrap="nowrap" h={22}>
+        <KindShape kind={mark.kind} />
+        <Text size="sm" fw={500} style={{ whiteSpace: 'nowrap' }}>
+          {KIND_LOOK[mark.kind].name}
+        </Text>
       </Group>
-      <Group gap={4} wrap="nowrap">
+      {/* The label as written (whole, wrapping between words), and under it what the mark links to. */}
+      <Stack className={classes.text} gap={0}>
+        {mark.label && (
+          <Text size="sm" data-testid="mark-label">
+            {mark.label}
+          </Text>
+        )}
+        <MarkLink workshopId={workshopId} footageId={footageId} mark={mark} />
+      </Stack>
+      <Group className={classes.actions} gap={4} wrap="nowrap">
         <Button size="compact-xs" variant="default" onClick={() => onEdit(mark)}>
           Edit
         </Button>
@@ -161,6 +162,6 @@ const MarkRow = memo(function MarkRow({ workshopId, footageId, mark, onSeek, onE
           Remove
         </ConfirmButton>
       </Group>
-    </Group>
+    </div>
   );
 });

@@ -58,7 +58,7 @@ export function SuggestionsPanel({ workshopId, footageId, clock, onSeek }: Sugge
   });
 
   return (
-    <Paper withBorder p="md">
+    <Paper withBorder p="md" data-testid="suggestions-panel">
       <Stack gap="sm">
         <Group justify="space-between">
           <Title order={4}>Suggested from the transcript</Title>
@@ -141,23 +141,30 @@ interface SuggestionRowProps {
 /** One suggestion; memoised, so the playing moment moving on does not draw it again. */
 const SuggestionRow = memo(function SuggestionRow({ suggestion, accepting, onSeek, onAccept, onDismiss }: SuggestionRowProps) {
   return (
-    <Group justify="space-between" wrap="nowrap" data-testid="suggestion-row">
-      <Group gap="xs" wrap="nowrap">
-        <Button size="compact-xs" variant="subtle" ff="monospace" onClick={() => onSeek(suggestion.startMs)}>
-          {formatClock(suggestion.startMs, { tenths: true })}
-        </Button>
+    <div className={classes.suggestionRow} data-testid="suggestion-row">
+      <Button
+        className={classes.time}
+        size="compact-xs"
+        variant="subtle"
+        ff="monospace"
+        onClick={() => onSeek(suggestion.startMs)}
+        data-testid="suggestion-time"
+      >
+        {formatClock(suggestion.startMs, { tenths: true })}
+      </Button>
+      <span className={classes.kind}>
         <KindShape kind={suggestion.kind} />
-        <Text size="sm">
-          “{suggestion.phrase}”
-          {suggestion.kind === 'measurement' && (
-            <Text span c="dimmed" size="sm">
-              {' '}
-              = {suggestion.value} {suggestion.unit}
-            </Text>
-          )}
-        </Text>
-      </Group>
-      <Group gap={4} wrap="nowrap">
+      </span>
+      <Text className={classes.text} size="sm" data-testid="suggestion-phrase">
+        “{suggestion.phrase}”
+        {suggestion.kind === 'measurement' && (
+          <Text span c="dimmed" size="sm">
+            {' '}
+            = {suggestion.value} {suggestion.unit}
+          </Text>
+        )}
+      </Text>
+      <Group className={classes.actions} gap={4} wrap="nowrap">
         <Button size="compact-xs" onClick={() => onAccept(suggestion)} loading={accepting}>
           Accept
         </Button>
@@ -165,7 +172,7 @@ const SuggestionRow = memo(function SuggestionRow({ suggestion, accepting, onSee
           Dismiss
         </Button>
       </Group>
-    </Group>
+    </div>
   );
 });
 
