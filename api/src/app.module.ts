@@ -20,6 +20,7 @@ import { FitReportsModule } from './fit-reports/fit-reports.module';
 import { FitFinderModule } from './fit-finder/fit-finder.module';
 import { FollowsModule } from './follows/follows.module';
 import { FootageModule } from './footage/footage.module';
+import { GuideRevisionsModule } from './guide-revisions/guide-revisions.module';
 import { GuidesModule } from './guides/guides.module';
 import { MarksModule } from './marks/marks.module';
 import { MeasurementsModule } from './measurements/measurements.module';
@@ -58,6 +59,7 @@ import { TranscriptsModule } from './transcripts/transcripts.module';
     TranscriptsModule,
     MarksModule,
     GuidesModule,
+    GuideRevisionsModule,
     FollowsModule,
     FitReportsModule,
     FitFinderModule,

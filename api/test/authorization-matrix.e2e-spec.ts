@@ -197,6 +197,12 @@ describe('authorization matrix: every route × anonymous, non-member, editor, ow
       // The build page's fit-news record (editors read, owners retry).
       'GET /api/workshops/:workshopId/builds/:buildId/fit-news',
       'POST /api/workshops/:workshopId/builds/:buildId/fit-news/retry',
+      // Published revisions and the reader's last-read record.
+      'GET /api/guides/:workshopSlug/:guideSlug/revisions',
+      'GET /api/guides/:workshopSlug/:guideSlug/revisions/compare',
+      'GET /api/guides/:workshopSlug/:guideSlug/revisions/:number',
+      'GET /api/guides/:workshopSlug/:guideSlug/reading',
+      'PUT /api/guides/:workshopSlug/:guideSlug/reading',
     ]) {
       expect(discovered).toContain(route);
     }

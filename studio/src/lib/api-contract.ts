@@ -1698,6 +1698,70 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/guides/{workshopSlug}/{guideSlug}/revisions": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["GuideRevisionsController_list"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/guides/{workshopSlug}/{guideSlug}/revisions/compare": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["GuideRevisionsController_compare"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/guides/{workshopSlug}/{guideSlug}/revisions/{number}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["GuideRevisionsController_revision"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/guides/{workshopSlug}/{guideSlug}/reading": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["GuideRevisionsController_reading"];
+        put: operations["GuideRevisionsController_recordReading"];
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/follows": {
         parameters: {
             query?: never;
@@ -1804,6 +1868,38 @@ export interface paths {
         get?: never;
         put?: never;
         post: operations["FitNewsRecordController_retry"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/builds/{buildId}/fit-news": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["BuildFitNewsRecordController_forBuild"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/workshops/{workshopId}/builds/{buildId}/fit-news/retry": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["BuildFitNewsRecordController_retry"];
         delete?: never;
         options?: never;
         head?: never;
@@ -4072,6 +4168,181 @@ export interface components {
             /** @description The cues in the window, in order (at most 500) */
             cues: components["schemas"]["CueDto"][];
         };
+        PublicRevisionGuideRefDto: {
+            workshopName: string;
+            workshopSlug: string;
+            guideSlug: string;
+            /** @description The title of the revision readers see today */
+            title: string;
+        };
+        PublicRevisionSummaryDto: {
+            /** @example 2 */
+            number: number;
+            /** Format: date-time */
+            publishedAt: string;
+            /** @example Added the boot clamp step */
+            note: string;
+            /** @description The revision readers see today */
+            current: boolean;
+        };
+        PublicRevisionListDto: {
+            guide: components["schemas"]["PublicRevisionGuideRefDto"];
+            /** @example 4 */
+            currentRevision: number;
+            /** @description Newest first; never a revision newer than the one published */
+            revisions: components["schemas"]["PublicRevisionSummaryDto"][];
+        };
+        RevisionRefDto: {
+            number: number;
+            /** Format: date-time */
+            publishedAt: string;
+            note: string;
+        };
+        /** @enum {string} */
+        RevisionGuideField: "title" | "summary" | "tools" | "consumables";
+        /**
+         * @description Words both revisions have, or only the newer (added) or the older (removed)
+         * @enum {string}
+         */
+        TextPieceChange: "same" | "added" | "removed";
+        TextPieceDto: {
+            /** @description Words both revisions have, or only the newer (added) or the older (removed) */
+            change: components["schemas"]["TextPieceChange"];
+            text: string;
+        };
+        GuideFieldChangeDto: {
+            field: components["schemas"]["RevisionGuideField"];
+            before: string;
+            after: string;
+            /** @description For tools and consumables: one piece per item */
+            pieces: components["schemas"]["TextPieceDto"][];
+        };
+        PlacedStepDto: {
+            /** Format: uuid */
+            id: string;
+            title: string;
+            /** @description Its number in the revision that has it */
+            number: number;
+        };
+        MovedStepDto: {
+            /** Format: uuid */
+            id: string;
+            title: string;
+            fromNumber: number;
+            toNumber: number;
+        };
+        /**
+         * @description moment: where the step starts in the video; time: its estimate
+         * @enum {string}
+         */
+        RevisionStepField: "title" | "body" | "caution" | "moment" | "time";
+        StepFieldChangeDto: {
+            /** @description moment: where the step starts in the video; time: its estimate */
+            field: components["schemas"]["RevisionStepField"];
+            /** @description Plain text in the older revision */
+            before: string;
+            after: string;
+            pieces: components["schemas"]["TextPieceDto"][];
+        };
+        ChangedStepDto: {
+            /** Format: uuid */
+            id: string;
+            title: string;
+            fromNumber: number;
+            toNumber: number;
+            changes: components["schemas"]["StepFieldChangeDto"][];
+        };
+        ChecklistStateChangeDto: {
+            /** Format: uuid */
+            id: string;
+            title: string;
+            required: boolean;
+            /** @description Null when the check was not on the checklist then */
+            before: components["schemas"]["FitCheckState"] | null;
+            after: components["schemas"]["FitCheckState"] | null;
+            changed: boolean;
+        };
+        RevisionCompareDto: {
+            guide: components["schemas"]["PublicRevisionGuideRefDto"];
+            currentRevision: number;
+            from: components["schemas"]["RevisionRefDto"];
+            to: components["schemas"]["RevisionRefDto"];
+            /** @description The guide’s own title, summary, tools and consumables */
+            guideChanges: components["schemas"]["GuideFieldChangeDto"][];
+            added: components["schemas"]["PlacedStepDto"][];
+            removed: components["schemas"]["PlacedStepDto"][];
+            /** @description Steps taken out of their order (the fewest that explain the new order) */
+            moved: components["schemas"]["MovedStepDto"][];
+            changed: components["schemas"]["ChangedStepDto"][];
+            /** @description Steps in both, in order, with the same words */
+            unchangedCount: number;
+            /** @description Each check’s state when each revision was published */
+            checklist: components["schemas"]["ChecklistStateChangeDto"][];
+        };
+        RevisionCautionDto: {
+            /** @enum {string} */
+            level: "DANGER" | "WARNING" | "CAUTION" | "NOTICE";
+            text: string;
+        };
+        PublicRevisionStepDto: {
+            /**
+             * Format: uuid
+             * @description Stable across revisions
+             */
+            id: string;
+            /**
+             * @description Counted from 1 in reading order
+             * @example 1
+             */
+            number: number;
+            title: string;
+            /** @description Sanitized rich text as published */
+            body: string;
+            caution: components["schemas"]["RevisionCautionDto"] | null;
+            startMs: number | null;
+            endMs: number | null;
+            estimatedMinutes: number | null;
+        };
+        RevisionCheckDto: {
+            /** Format: uuid */
+            id: string;
+            title: string;
+            required: boolean;
+            /** @description The state when this revision was published */
+            state: components["schemas"]["FitCheckState"];
+        };
+        PublicRevisionDto: {
+            /** @example 2 */
+            number: number;
+            /** Format: date-time */
+            publishedAt: string;
+            note: string;
+            /**
+             * @description The revision readers see today; also how many revisions there are
+             * @example 4
+             */
+            currentRevision: number;
+            guide: components["schemas"]["PublicRevisionGuideRefDto"];
+            /** @description The title this revision had */
+            title: string;
+            summary: string;
+            tools: string[];
+            consumables: string[];
+            /** @enum {string|null} */
+            skillLevel: "bench_starter" | "shop_regular" | "seasoned_fitter" | null;
+            estimatedMinutes: number | null;
+            steps: components["schemas"]["PublicRevisionStepDto"][];
+            /** @description The verified-fit checklist as it stood when this revision was published (retired checks left out) */
+            checklist: components["schemas"]["RevisionCheckDto"][];
+        };
+        GuideReadingDto: {
+            /** @example 4 */
+            currentRevision: number;
+            /** @description The revision this reader last opened; null if never */
+            lastReadRevision: number | null;
+            /** Format: date-time */
+            lastReadAt: string | null;
+        };
         FollowWorkshopDto: {
             /** @example Hollow Lane Garage */
             name: string;
@@ -4227,6 +4498,46 @@ export interface components {
             lastSentAt: string | null;
             /** @description What the refusing mail servers answered (addresses are not shown) */
             refusals: string[];
+        };
+        CheckFitNewsSummaryDto: {
+            checkId: string;
+            checkTitle: string;
+            assemblyId: string;
+            assemblyName: string;
+            /** @description Changes of the check that were news (confirmed, no fit) */
+            changes: number;
+            /**
+             * @description What the latest news change was
+             * @enum {string}
+             */
+            lastChangeTo: "confirmed" | "no_fit";
+            lastChangedAt: string;
+            /** @description Mails the followers’ servers accepted (one per follower per change) */
+            told: number;
+            /** @description Mails not sent yet (or being tried again) */
+            pending: number;
+            /** @description Mails refused or given up on */
+            failed: number;
+            /** @description Changes waiting in followers’ daily or weekly digests */
+            inDigests: number;
+            /** @description Mails whose relay stopped between handing them over and recording the answer: sent again with the same Message-ID, so a follower may hold two copies */
+            uncertain: number;
+            firstSentAt: string | null;
+            lastSentAt: string | null;
+        };
+        BuildFitNewsRecordDto: {
+            buildId: string;
+            /** @description Different people told about at least one change of the build’s checks */
+            followersTold: number;
+            told: number;
+            pending: number;
+            failed: number;
+            inDigests: number;
+            uncertain: number;
+            firstSentAt: string | null;
+            lastSentAt: string | null;
+            /** @description Checks with at least one news change, latest change first */
+            checks: components["schemas"]["CheckFitNewsSummaryDto"][];
         };
         CreateFitReportDto: {
             /** @enum {string} */
@@ -4423,7 +4734,10 @@ export interface components {
         SearchKindCountDto: {
             /** @enum {string} */
             kind: "guide" | "part" | "cue" | "build" | "footage" | "mark" | "fit_check" | "draft_guide";
+            /** @description Hits of this kind, at most 1000; with capped, a lower bound */
             count: number;
+            /** @description True when there may be more than count (show "1,000+"): the count stopped at its cap or at the best-ranked matches read */
+            capped: boolean;
         };
         SnippetSegmentDto: {
             /** @description Plain text: draw it as text, never as HTML */
@@ -4466,6 +4780,8 @@ export interface components {
             partNumbers: string[];
             /** @description Hits of the asked kind (or of every kind) in all; results holds at most `limit` */
             total: number;
+            /** @description True when total is a lower bound (a count it adds up is capped): show it as "1,000+" */
+            totalCapped: boolean;
             offset: number;
             limit: number;
             /** @description Hits per kind under the other filters, for the kind chips */
@@ -8150,6 +8466,174 @@ export interface operations {
             };
         };
     };
+    GuideRevisionsController_list: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopSlug: string;
+                guideSlug: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["PublicRevisionListDto"];
+                };
+            };
+            /** @description No such guide, or it is not published */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    GuideRevisionsController_compare: {
+        parameters: {
+            query: {
+                /** @description The older revision (any published revision number) */
+                from: number;
+                /** @description The newer revision */
+                to: number;
+            };
+            header?: never;
+            path: {
+                workshopSlug: string;
+                guideSlug: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["RevisionCompareDto"];
+                };
+            };
+            /** @description from or to missing or not a whole number */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description The guide is not published, or it has no such revision (errors names from or to) */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    GuideRevisionsController_revision: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopSlug: string;
+                guideSlug: string;
+                number: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The revision as published, read-only, with the checklist as it stood then */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["PublicRevisionDto"];
+                };
+            };
+            /** @description number is not a whole number from 1 */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description The guide is not published, or it has no such revision */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    GuideRevisionsController_reading: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopSlug: string;
+                guideSlug: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The revision this reader last opened, beside the current one */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["GuideReadingDto"];
+                };
+            };
+            /** @description No such guide, or it is not published */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    GuideRevisionsController_recordReading: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                workshopSlug: string;
+                guideSlug: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description Recorded: this reader has opened the current revision */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["GuideReadingDto"];
+                };
+            };
+            /** @description No such guide, or it is not published */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
     FollowsController_list: {
         parameters: {
             query?: never;
@@ -8432,6 +8916,62 @@ export interface operations {
             };
         };
     };
+    BuildFitNewsRecordController_forBuild: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                buildId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["BuildFitNewsRecordDto"];
+                };
+            };
+            /** @description No such build in this workshop */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    BuildFitNewsRecordController_retry: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                buildId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["BuildFitNewsRecordDto"];
+                };
+            };
+            /** @description No such build in this workshop */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
     FitReportsController_create: {
         parameters: {
             query?: never;
@@ -8678,6 +9218,8 @@ export interface operations {
                 workshop?: string;
                 /** @description published: public hits only; unpublished: your own workshop records only */
                 state?: "published" | "unpublished";
+                /** @description Only hits with a fit check in this state: published guides whose assembly has such a check, and (members) their fit checks in it. Kinds that carry no check (builds, footage, marks, drafts, a member's own parts and cues) give no hits under it */
+                checkState?: "open" | "bench_pass" | "confirmed" | "no_fit";
                 /** @description Words the build's vehicle must contain */
                 vehicle?: string;
                 offset?: number;

@@ -18,6 +18,7 @@ import { MailPreferences1765450000001 } from './1765450000001-mail-preferences';
 import { FitReportMailLinks1765460000000 } from './1765460000000-fit-report-mail-links';
 import { GuideEffort1765466000000 } from './1765466000000-guide-effort';
 import { MailAttempts1765470000000 } from './1765470000000-mail-attempts';
+import { GuideReads1765480000000 } from './1765480000000-guide-reads';
 
 /** Every migration, oldest first. Listed explicitly so the same list works from src (tests) and dist. */
 // eslint-disable-next-line @typescript-eslint/no-unsafe-function-type
@@ -41,4 +42,5 @@ export const migrations: MixedList<Function> = [
   FitReportMailLinks1765460000000,
   GuideEffort1765466000000,
   MailAttempts1765470000000,
+  GuideReads1765480000000,
 ];
