@@ -1,0 +1,118 @@
+import { Alert, Button, Group, Skeleton, Stack, Table, Text, Title } from '@mantine/core';
+import { useQuery } from '@tanstack/react-query';
+import { formatDateTime } from '@/lib/dates';
+import { buildFitNewsQuery, useRetryBuildFitNews, type BuildFitNewsRecord } from '../api/fit-news';
+
+const CHANGE_LABELS: Record<string, string> = { confirmed: 'Confirmed', no_fit: 'No fit' };
+
+function count(n: number, one: string, many = `${one}s`): string {
+  return `${n} ${n === 1 ? one : many}`;
+}
+
+function when(first: string | null, last: string | null): string {
+  if (!first) return '—';
+  return last && last !== first ? `${formatDateTime(first)} – ${formatDateTime(last)}` : formatDateTime(first);
+}
+
+/** The build's totals in one sentence: people told, and what is still pending, failed, in digests or uncertain. */
+function summary(record: BuildFitNewsRecord): string {
+  const parts = [`${count(record.followersTold, 'follower')} told about changes of ${count(record.checks.length, 'check')} (${count(record.told, 'mail')})`];
+  if (record.pending) parts.push(`${record.pending} pending`);
+  if (record.failed) parts.push(`${record.failed} failed`);
+  if (record.inDigests) parts.push(`${record.inDigests} in digests`);
+  if (record.uncertain) parts.push(`${record.uncertain} possibly sent twice`);
+  return parts.join(' · ');
+}
+
+/**
+ * The build page's delivery record of fit news: how many followers were told about its checks'
+ * changes and when, per check; pending and failed counts; owners send failed mail again.
+ */
+export function BuildFitNews({ workshopId, buildId, canRetry }: { workshopId: string; buildId: string; canRetry: boolean }) {
+  const record = useQuery(buildFitNewsQuery(workshopId, buildId));
+  const retry = useRetryBuildFitNews(workshopId, buildId);
+
+  return (
+    <Stack gap="sm" component="section" aria-labelledby="build-fit-news-title">
+      <Title order={3} id="build-fit-news-title">
+        Fit news to followers
+      </Title>
+      {record.isPending && <Skeleton height={60} />}
+      {record.isError && (
+        <Alert color="red" title="The fit-news record could not be read">
+          {record.error.message}
+        </Alert>
+      )}
+      {record.isSuccess && record.data.checks.length === 0 && (
+        <Text c="dimmed" size="sm">
+          No check of this build has been confirmed or found not to fit yet, so no fit news has gone out.
+        </Text>
+      )}
+      {record.isSuccess && record.data.checks.length > 0 && (
+        <>
+          <Text size="sm" data-testid="build-fit-news-summary">
+            {summary(record.data)}
+            {record.data.firstSentAt && <> · sent {when(record.data.firstSentAt, record.data.lastSentAt)}</>}
+          </Text>
+          {(record.data.failed > 0 || retry.isError) && (
+            <Alert color="yellow" role="status" title={`${count(record.data.failed, 'fit-news mail')} of this build failed`} data-testid="build-fit-news-failed">
+              <Group gap="sm" justify="space-between" align="center">
+                <Text size="sm">
+                  {canRetry
+                    ? 'The followers’ mail servers refused them or we gave up trying. Send them again once the cause is mended; paused addresses are left out.'
+                    : 'The followers’ mail servers refused them or we gave up trying. A workshop owner can send them again.'}
+                </Text>
+                {canRetry && (
+                  <Button size="xs" loading={retry.isPending} onClick={() => retry.mutate()}>
+                    Retry failed
+                  </Button>
+                )}
+              </Group>
+              {retry.isError && (
+                <Text size="sm" c="red" role="alert" mt="xs">
+                  {retry.error.message}
+                </Text>
+              )}
+            </Alert>
+          )}
+          <Table striped withTableBorder aria-label="Fit news per check">
+            <Table.Thead>
+              <Table.Tr>
+                <Table.Th>Check</Table.Th>
+                <Table.Th>Assembly</Table.Th>
+                <Table.Th>Latest change</Table.Th>
+                <Table.Th>Told</Table.Th>
+                <Table.Th>Pending</Table.Th>
+                <Table.Th>Failed</Table.Th>
+                <Table.Th>In digests</Table.Th>
+                <Table.Th>Sent</Table.Th>
+              </Table.Tr>
+            </Table.Thead>
+            <Table.Tbody>
+              {record.data.checks.map((check) => (
+                <Table.Tr key={check.checkId}>
+                  <Table.Td>{check.checkTitle}</Table.Td>
+                  <Table.Td>{check.assemblyName}</Table.Td>
+                  <Table.Td>
+                    {CHANGE_LABELS[check.lastChangeTo] ?? check.lastChangeTo}, {formatDateTime(check.lastChangedAt)}
+                    {check.changes > 1 && (
+                      <Text span size="xs" c="dimmed">
+                        {' '}
+                        ({check.changes} news changes)
+                      </Text>
+                    )}
+                  </Table.Td>
+                  <Table.Td>{check.told}</Table.Td>
+                  <Table.Td>{check.pending}</Table.Td>
+                  <Table.Td>{check.failed}</Table.Td>
+                  <Table.Td>{check.inDigests}</Table.Td>
+                  <Table.Td>{when(check.firstSentAt, check.lastSentAt)}</Table.Td>
+                </Table.Tr>
+              ))}
+            </Table.Tbody>
+          </Table>
+        </>
+      )}
+    </Stack>
+  );
+}
