@@ -32,7 +32,7 @@ async function readPart(handle, partNumber, partSize) {
   return buffer;
 }
 
-/** The studio's path, from Node: 4 parts in flight, each signed by the API, sent to storage, then recorded. */
+/** The studio's path, from Node: 4 parts in flight, signed by the API in batches, sent to storage, then recorded. */
 async function uploadThroughApp({ api, workshopId, buildId }) {
   const started = performance.now();
   const created = await api.post(`/workshops/${workshopId}/builds/${buildId}/footage`, {
@@ -46,19 +46,37 @@ async function uploadThroughApp({ api, workshopId, buildId }) {
   const handle = await open(file, 'r');
   const waiting = Array.from({ length: partCount }, (_, index) => index + 1);
   const signed = new Map();
+  // As in the studio: one signing request at a time, shared by whoever waits for it, and the next batch asked for
+  // while fewer signed parts wait than there are slots, so no slot waits a round trip for its link.
+  let signing = null;
+  const signBatch = (first) => {
+    const batch = [...first, ...waiting.filter((number) => !first.includes(number) && !signed.has(number))].slice(0, 16);
+    signing = api.post(`${base}/part-urls`, { partNumbers: batch }).then(({ urls }) => {
+      for (const { partNumber: number, url } of urls) signed.set(number, url);
+    });
+    const current = signing;
+    const clear = () => {
+      if (signing === current) signing = null;
+    };
+    current.then(clear, clear);
+    return current;
+  };
+  const urlFor = async (partNumber) => {
+    if (!signed.has(partNumber) && signing) await signing;
+    if (!signed.has(partNumber)) await signBatch([partNumber]);
+    const ready = waiting.filter((number) => signed.has(number)).length;
+    if (!signing && ready < CONCURRENCY && ready < waiting.length) signBatch([]).catch(() => {});
+    return signed.get(partNumber);
+  };
   // As in the studio: a part's slot is free as soon as storage has the bytes; its ETag is recorded alongside.
   const recording = [];
   const worker = async () => {
     for (let partNumber = waiting.shift(); partNumber !== undefined; partNumber = waiting.shift()) {
-      if (!signed.has(partNumber)) {
-        // Sign the next batch of parts in one request, as the studio does.
-        const batch = [partNumber, ...waiting.slice(0, 15)];
-        const { urls } = await api.post(`${base}/part-urls`, { partNumbers: batch });
-        for (const { partNumber: number, url } of urls) signed.set(number, url);
-      }
+      const url = await urlFor(partNumber);
       const body = await readPart(handle, partNumber, partSizeBytes);
-      const response = await fetch(signed.get(partNumber), { method: 'PUT', body });
+      const response = await fetch(url, { method: 'PUT', body });
       if (!response.ok) throw new Error(`part ${partNumber}: storage answered ${response.status}`);
+      signed.delete(partNumber);
       const recorded = api.put(`${base}/parts/${partNumber}`, { etag: response.headers.get('etag') });
       recorded.catch(() => {}); // reported by the Promise.all below
       recording.push(recorded);

@@ -118,6 +118,39 @@ describe('MultipartUpload', () => {
     expect(upload.getSnapshot().phase).toBe('done');
   });
 
+  it('signs each part once, one request at a time, and asks for the next batch before the parts in flight run out', async () => {
+    const storage = fakeStorage();
+    const events: string[] = [];
+    const calls: number[][] = [];
+    let signing = 0;
+    let overlapped = false;
+    const sign = storage.signParts;
+    storage.signParts = async (partNumbers) => {
+      events.push(`sign ${partNumbers[0]}`);
+      calls.push(partNumbers);
+      signing += 1;
+      if (signing > 1) overlapped = true;
+      const answer = await sign(partNumbers);
+      signing -= 1;
+      return answer;
+    };
+    const put = storage.putPart;
+    storage.putPart = async (url, body, onProgress, signal) => {
+      events.push(`put ${url.split('/').pop()}`);
+      return put(url, body, onProgress, signal);
+    };
+    const upload = new MultipartUpload(file(40 * PART), { footageId: 'f1', partSizeBytes: PART, partCount: 40, completedParts: [] }, storage);
+    upload.start();
+    await settle();
+    expect(upload.getSnapshot().phase).toBe('done');
+    // Every part signed exactly once (four slots starting together used to send four overlapping batches).
+    expect(calls.flat().sort((a, b) => a - b)).toEqual(Array.from({ length: 40 }, (_, index) => index + 1));
+    expect(overlapped).toBe(false);
+    // The batch from part 17 on was asked for while the first batch's last parts were still to be sent.
+    expect(events.indexOf('sign 17')).toBeGreaterThan(-1);
+    expect(events.indexOf('sign 17')).toBeLessThan(events.indexOf('put 16'));
+  });
+
   it('resumes from the parts the server already has (after a reload)', async () => {
     const storage = fakeStorage();
     const upload = new MultipartUpload(file(30), { footageId: 'f1', partSizeBytes: PART, partCount: 4, completedParts: [1, 3] }, storage);

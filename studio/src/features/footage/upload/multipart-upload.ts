@@ -102,6 +102,8 @@ export class MultipartUpload {
   /** Parts storage has whose ETag the API has not taken yet: recorded again, never sent again. */
   private readonly unrecorded = new Map<number, string>();
   private readonly signed = new Map<number, { url: string; expiresAt: number }>();
+  /** The signing request on its way, if any. */
+  private signing: Promise<void> | null = null;
   private readonly listeners = new Set<() => void>();
   private readonly samples: { at: number; bytes: number }[] = [];
   private consecutiveFailures = 0;
@@ -214,18 +216,45 @@ export class MultipartUpload {
   }
 
   private async urlFor(partNumber: number): Promise<string> {
+    // Someone else's batch may be on its way with this part in it: wait for it rather than sign the same parts twice.
+    if (!this.usableUrl(partNumber) && this.signing) await this.signing;
+    if (!this.usableUrl(partNumber)) await this.signBatch([partNumber]);
+    const url = this.usableUrl(partNumber);
+    if (!url) throw new Error(`the server did not sign part ${partNumber}`);
+    this.signAhead();
+    return url;
+  }
+
+  private usableUrl(partNumber: number): string | null {
     const cached = this.signed.get(partNumber);
-    if (cached && cached.expiresAt - this.options.now() > URL_MARGIN_MS) return cached.url;
-    // Sign this part and the next few waiting ones in one request.
-    const batch = [partNumber, ...this.pending().filter((number) => number !== partNumber && !this.signed.has(number))].slice(
-      0,
-      SIGN_BATCH,
-    );
-    const { urls, expiresAt } = await this.transport.signParts(batch);
-    for (const { partNumber: number, url } of urls) this.signed.set(number, { url, expiresAt: Date.parse(expiresAt) });
-    const signed = this.signed.get(partNumber);
-    if (!signed) throw new Error(`the server did not sign part ${partNumber}`);
-    return signed.url;
+    return cached && cached.expiresAt - this.options.now() > URL_MARGIN_MS ? cached.url : null;
+  }
+
+  /** Signs `first` and the next waiting parts in one request; one request at a time, shared by whoever waits. */
+  private signBatch(first: number[]): Promise<void> {
+    const batch = [...first, ...this.pending().filter((number) => !first.includes(number) && !this.usableUrl(number))].slice(0, SIGN_BATCH);
+    const signing = this.transport.signParts(batch).then(({ urls, expiresAt }) => {
+      for (const { partNumber: number, url } of urls) this.signed.set(number, { url, expiresAt: Date.parse(expiresAt) });
+    });
+    this.signing = signing;
+    const clear = () => {
+      if (this.signing === signing) this.signing = null;
+    };
+    signing.then(clear, clear);
+    return signing;
+  }
+
+  /**
+   * Signs the next batch while parts are still being sent, once fewer signed parts wait than there are slots: a
+   * part's slot then never waits a round trip to the API for its link (it did at every batch boundary).
+   */
+  private signAhead(): void {
+    if (this.signing || this.phase !== 'uploading') return;
+    const waiting = this.pending();
+    const ready = waiting.filter((number) => this.usableUrl(number)).length;
+    if (ready >= this.options.concurrency || ready === waiting.length) return;
+    // A failure here is not reported: the part that needs the link asks again and reports it.
+    this.signBatch([]).catch(() => {});
   }
 
   private partBlob(partNumber: number): Blob {
