@@ -6,6 +6,7 @@ import { Link } from 'react-router-dom';
 import { ConfirmButton } from '@/components/confirm-button';
 import { paths } from '@/config/paths';
 import { notifyError } from '@/lib/notify';
+import { useWorkshopReadOnly } from '@/lib/workshop-access';
 import { useRemoveInterface, useRemovePlacedPart } from '../api/mutations';
 import { assemblyQueries, type AssemblyInterface } from '../api/queries';
 import { featureLabel, featureSummary, INTERFACE_KIND_LABELS } from './interface-choices';
@@ -57,6 +58,8 @@ export function AssemblyBuilder({ workshopId, assemblyId, renderInterfaceReading
   const removePart = useRemovePlacedPart(workshopId, assemblyId);
   const removeInterface = useRemoveInterface(workshopId, assemblyId);
   const [addingInterface, interfaceForm] = useDisclosure(false);
+  // A site admin (not a member) or a disabled workshop reads the assembly without the controls that would fail.
+  const readOnly = useWorkshopReadOnly();
 
   if (assembly.isPending) return <Skeleton height={240} />;
   if (assembly.isError) return <Alert color="red" title="Assembly could not be loaded">{assembly.error.message}</Alert>;
@@ -76,7 +79,7 @@ export function AssemblyBuilder({ workshopId, assemblyId, renderInterfaceReading
                   <Table.Th>Position</Table.Th>
                   <Table.Th>Part</Table.Th>
                   <Table.Th>Features</Table.Th>
-                  <Table.Th aria-label="Actions" />
+                  {!readOnly && <Table.Th aria-label="Actions" />}
                 </Table.Tr>
               </Table.Thead>
               <Table.Tbody>
@@ -96,35 +99,37 @@ export function AssemblyBuilder({ workshopId, assemblyId, renderInterfaceReading
                           : part.features.map((feature) => `${feature.name} (${featureSummary(feature) || feature.kind})`).join('; ')}
                       </Text>
                     </Table.Td>
-                    <Table.Td>
-                      <Button
-                        size="compact-xs"
-                        variant="subtle"
-                        color="red"
-                        onClick={() => removePart.mutate(part.id, { onError: (error) => notifyError('The part stays in the assembly', error) })}
-                      >
-                        Take out
-                      </Button>
-                    </Table.Td>
+                    {!readOnly && (
+                      <Table.Td>
+                        <Button
+                          size="compact-xs"
+                          variant="subtle"
+                          color="red"
+                          onClick={() => removePart.mutate(part.id, { onError: (error) => notifyError('The part stays in the assembly', error) })}
+                        >
+                          Take out
+                        </Button>
+                      </Table.Td>
+                    )}
                   </Table.Tr>
                 ))}
               </Table.Tbody>
             </Table>
           </Table.ScrollContainer>
         )}
-        <PlacePartForm workshopId={workshopId} assembly={data} />
+        {!readOnly && <PlacePartForm workshopId={workshopId} assembly={data} />}
       </Stack>
 
       <Stack gap="sm">
         <Group justify="space-between">
           <Title order={3}>Interfaces</Title>
-          {!addingInterface && (
+          {!addingInterface && !readOnly && (
             <Button onClick={interfaceForm.open} disabled={data.parts.length === 0}>
               Add interface
             </Button>
           )}
         </Group>
-        {addingInterface && (
+        {addingInterface && !readOnly && (
           <Card withBorder>
             <InterfaceForm workshopId={workshopId} assembly={data} onDone={interfaceForm.close} />
           </Card>
@@ -154,6 +159,7 @@ export function AssemblyBuilder({ workshopId, assemblyId, renderInterfaceReading
                   </Text>
                 )}
               </div>
+              {!readOnly && (
               <ConfirmButton
                 size="compact-xs"
                 variant="subtle"
@@ -169,6 +175,7 @@ export function AssemblyBuilder({ workshopId, assemblyId, renderInterfaceReading
               >
                 Remove
               </ConfirmButton>
+              )}
             </Group>
             {renderInterfaceReadings && assemblyInterface.kind === 'bore_shaft' && (
               <div style={{ marginTop: 12 }}>{renderInterfaceReadings(assemblyInterface)}</div>

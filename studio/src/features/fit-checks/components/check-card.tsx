@@ -11,6 +11,7 @@ import { WhatIfPanel } from './what-if-panel';
 import { useAddPhotoEvidence } from '../api/mutations';
 import { notifyError } from '@/lib/notify';
 import { formatDate } from '@/lib/dates';
+import { useWorkshopReadOnly } from '@/lib/workshop-access';
 
 const KIND_LABELS: Record<FitCheck['kind'], string> = {
   spline_match: 'Computed: spline match',
@@ -53,6 +54,8 @@ export function CheckCard(props: CheckCardProps) {
   const [attaching, attachForm] = useDisclosure(false);
   const [askingWhatIf, whatIf] = useDisclosure(false);
   const addPhoto = useAddPhotoEvidence(workshopId);
+  // Site admins (not members) and disabled workshops read the check: evidence and state changes would be refused.
+  const readOnly = useWorkshopReadOnly();
   const { summary, reasons } = checkSummary(check);
   const look = STATE_LOOK[check.state];
   const assemblyInterface = assembly.interfaces.find((candidate) => candidate.id === check.interfaceId);
@@ -139,7 +142,7 @@ export function CheckCard(props: CheckCardProps) {
             </List>
           )}
         </div>
-        {attaching && (
+        {attaching && !readOnly && (
           <EvidenceForm workshopId={workshopId} check={check} choices={props.readingChoices} onDone={attachForm.close} />
         )}
         {askingWhatIf && assemblyInterface && (
@@ -147,12 +150,12 @@ export function CheckCard(props: CheckCardProps) {
         )}
 
         <Group gap="xs" wrap="wrap">
-          {!attaching && check.state !== 'retired' && (
+          {!readOnly && !attaching && check.state !== 'retired' && (
             <Button size="xs" variant="light" onClick={attachForm.open}>
               Attach a reading as evidence
             </Button>
           )}
-          {check.state !== 'retired' && (
+          {!readOnly && check.state !== 'retired' && (
             <FileButton
               accept="image/png,image/jpeg,image/webp"
               onChange={(file) =>
@@ -167,7 +170,8 @@ export function CheckCard(props: CheckCardProps) {
               )}
             </FileButton>
           )}
-          {actionsFor(check).map((to) => (
+          {!readOnly &&
+            actionsFor(check).map((to) => (
             <Button
               key={to}
               size="xs"

@@ -3,6 +3,7 @@ import { fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { stubApi } from '@/testing/api-stub';
 import { renderWithProviders } from '@/testing/render';
+import { WorkshopAccessProvider } from '@/lib/workshop-access';
 import type { Checklist as ChecklistAnswer, FitCheck } from '../api/queries';
 import { Checklist } from './checklist';
 
@@ -125,7 +126,7 @@ const READINGS = {
   summary: null,
 };
 
-function show() {
+function show(readOnly = false) {
   const requests = stubApi([
     { path: /^\/workshops\/w1\/assemblies\/a1\/checklist$/, body: CHECKLIST },
     { path: /^\/workshops\/w1\/assemblies\/a1$/, body: ASSEMBLY },
@@ -139,15 +140,33 @@ function show() {
     },
   ]);
   renderWithProviders(
-    <>
+    <WorkshopAccessProvider readOnly={readOnly}>
       <Notifications />
       <Checklist workshopId="w1" assemblyId="a1" />
-    </>,
+    </WorkshopAccessProvider>,
   );
   return requests;
 }
 
 describe('Checklist', () => {
+  it('read-only (a site admin, or a disabled workshop): the checks and their evidence, no control that changes them', async () => {
+    show(true);
+    const card = await screen.findByLabelText('Check: Test-fitted on the vehicle');
+    expect(within(card).getByText('Test-fitted on the vehicle')).toBeTruthy();
+    expect(screen.queryByRole('button', { name: 'Add a check by hand' })).toBeNull();
+    expect(screen.queryAllByRole('button', { name: 'Attach a reading as evidence' })).toHaveLength(0);
+    expect(screen.queryAllByRole('button', { name: 'Attach a photo' })).toHaveLength(0);
+    expect(screen.queryAllByRole('button', { name: /^Confirm/ })).toHaveLength(0);
+    // Reading the history and asking "what if" change nothing, so they stay.
+    expect(screen.getAllByRole('button', { name: 'History' })).toHaveLength(4);
+  });
+
+  it('a member sees the controls that change checks', async () => {
+    show();
+    expect(await screen.findByRole('button', { name: 'Add a check by hand' })).toBeTruthy();
+    expect(screen.getAllByRole('button', { name: 'Attach a photo' }).length).toBeGreaterThan(0);
+  });
+
   afterEach(() => vi.restoreAllMocks());
 
   it('shows the roll-up verdict and each state as a shape and words', async () => {

@@ -12,6 +12,7 @@ import { HistoryDrawer } from './history-drawer';
 import { ManualCheckForm } from './manual-check-form';
 import { TransitionModal, type TransitionRequest } from './transition-modal';
 import { formatDate } from '@/lib/dates';
+import { useWorkshopReadOnly } from '@/lib/workshop-access';
 
 const DEVIATION_UNITS = [
   { value: 'um' as const, label: 'µm' },
@@ -95,6 +96,7 @@ export function Checklist({
   const readings = useQuery(fitCheckQueries.readings(workshopId));
   const [deviationUnit, setDeviationUnit] = useState<DeviationUnit>('um');
   const [adding, manualForm] = useDisclosure(false);
+  const readOnly = useWorkshopReadOnly();
   const [transition, setTransition] = useState<TransitionRequest | null>(null);
   const [historyOf, setHistoryOf] = useState<FitCheck | null>(null);
 
@@ -120,7 +122,7 @@ export function Checklist({
         <Title order={3}>Verified-fit checklist</Title>
         <Group gap="md">
           <UnitToggle label="Tolerance axis in" value={deviationUnit} options={DEVIATION_UNITS} onChange={setDeviationUnit} />
-          {!adding && (
+          {!adding && !readOnly && (
             <Button variant="light" onClick={manualForm.open}>
               Add a check by hand
             </Button>
@@ -128,7 +130,7 @@ export function Checklist({
         </Group>
       </Group>
       <VerdictBanner verdict={checklist.data.verdict} checks={checklist.data.checks} />
-      {adding && (
+      {adding && !readOnly && (
         <Card withBorder>
           <ManualCheckForm workshopId={workshopId} assemblyId={assemblyId} onDone={manualForm.close} />
         </Card>

@@ -5,6 +5,7 @@ import { createPlaybackClock } from '@/lib/playback-clock';
 import { stubApi } from '@/testing/api-stub';
 import { fakeScrollLayout } from '@/testing/fake-scroll-layout';
 import { renderWithProviders } from '@/testing/render';
+import { WorkshopAccessProvider } from '@/lib/workshop-access';
 import type { Mark, MarkSuggestion } from '../api/queries';
 import { lastStartedAt, MarksList } from './marks-list';
 import { SuggestionsPanel } from './suggestions-panel';
@@ -123,6 +124,34 @@ describe('SuggestionsPanel at three hours', () => {
     expect(screen.getAllByTestId('suggestion-row').length).toBeLessThan(40);
     layout.scrollByHand(screen.getByTestId('suggestions'), 289 * 34);
     expect(await screen.findByText('“reading 288”')).toBeTruthy();
+  }, 20_000);
+});
+
+describe('marks and suggestions read-only (a site admin, or a disabled workshop)', () => {
+  beforeEach(() => {
+    fakeScrollLayout({ boxHeight: BOX_HEIGHT, rowHeight: ROW_HEIGHT });
+  });
+  afterEach(() => vi.restoreAllMocks());
+
+  it('lists marks and suggestions without Edit, Remove, Accept or Dismiss; a member keeps them', async () => {
+    stubApi([{ path: /\/mark-suggestions/, body: SUGGESTIONS.slice(0, 3) }]);
+    const panels = (readOnly: boolean) => (
+      <WorkshopAccessProvider readOnly={readOnly}>
+        {list(0)}
+        <SuggestionsPanel workshopId="w1" footageId="f1" clock={createPlaybackClock()} onSeek={() => {}} />
+      </WorkshopAccessProvider>
+    );
+    const { rerender } = renderWithProviders(panels(true));
+    expect(await screen.findByText('“reading 0”')).toBeTruthy();
+    expect(rowsDrawn().length).toBeGreaterThan(0);
+    expect(screen.getByText('Note 0')).toBeTruthy();
+    for (const name of ['Edit', 'Remove', 'Accept', 'Dismiss']) expect(screen.queryAllByRole('button', { name })).toHaveLength(0);
+    // Seeking stays: reading a footage's marks is allowed.
+    expect(screen.getAllByRole('button', { name: /^Jump to / }).length).toBeGreaterThan(0);
+
+    rerender(panels(false));
+    expect((await screen.findAllByRole('button', { name: 'Edit' })).length).toBe(rowsDrawn().length);
+    expect(screen.getAllByRole('button', { name: 'Accept' })).toHaveLength(3);
   }, 20_000);
 });
 

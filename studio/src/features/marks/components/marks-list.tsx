@@ -13,6 +13,7 @@ import { KindShape } from './kind-shape';
 import { KIND_LOOK } from './mark-kinds';
 import { MarkLink } from './mark-link';
 import classes from './virtual-list.module.css';
+import { useWorkshopReadOnly } from '@/lib/workshop-access';
 
 /** A first guess at a row's height; rows are measured once drawn (a label and a link make two lines). */
 const MARK_ROW_ESTIMATE_PX = 48;
@@ -52,6 +53,8 @@ export function lastStartedAt(rows: readonly { startMs: number }[], ms: number):
 export function MarksList({ workshopId, footageId, marks, clock, onSeek, onEdit }: MarksListProps) {
   const [kind, setKind] = useState<MarkKind | 'all'>('all');
   const remove = useRemoveMark(workshopId, footageId);
+  // Site admins (not members) and disabled workshops read the marks without Edit and Remove.
+  const readOnly = useWorkshopReadOnly();
   const shown = useMemo(() => (kind === 'all' ? marks : marks.filter((mark) => mark.kind === kind)), [marks, kind]);
   // Re-renders when the highlighted row changes, not on every time update.
   const active = usePlaybackSelect(clock, (ms) => lastStartedAt(shown, ms));
@@ -101,7 +104,7 @@ export function MarksList({ workshopId, footageId, marks, clock, onSeek, onEdit 
                   style={{ transform: `translateY(${row.start}px)` }}
                   data-active={row.index === active || undefined}
                 >
-                  <MarkRow workshopId={workshopId} footageId={footageId} mark={shown[row.index]} onSeek={seek} onEdit={edit} onRemove={removeMark} />
+                  <MarkRow workshopId={workshopId} footageId={footageId} mark={shown[row.index]} onSeek={seek} onEdit={edit} onRemove={removeMark} readOnly={readOnly} />
                 </div>
               ))}
             </div>
@@ -119,10 +122,11 @@ interface MarkRowProps {
   onSeek: (ms: number) => void;
   onEdit: (mark: Mark) => void;
   onRemove: (mark: Mark) => void;
+  readOnly: boolean;
 }
 
 /** One mark; memoised, so the playing moment moving on does not draw it again. */
-const MarkRow = memo(function MarkRow({ workshopId, footageId, mark, onSeek, onEdit, onRemove }: MarkRowProps) {
+const MarkRow = memo(function MarkRow({ workshopId, footageId, mark, onSeek, onEdit, onRemove, readOnly }: MarkRowProps) {
   const at = formatClock(mark.startMs, { tenths: true });
   return (
     <div className={classes.markRow} data-testid="mark-row">
@@ -146,6 +150,7 @@ const MarkRow = memo(function MarkRow({ workshopId, footageId, mark, onSeek, onE
         )}
         <MarkLink workshopId={workshopId} footageId={footageId} mark={mark} />
       </Stack>
+      {!readOnly && (
       <Group className={classes.actions} gap={4} wrap="nowrap">
         <Button size="compact-xs" variant="default" onClick={() => onEdit(mark)}>
           Edit
@@ -162,6 +167,7 @@ const MarkRow = memo(function MarkRow({ workshopId, footageId, mark, onSeek, onE
           Remove
         </ConfirmButton>
       </Group>
+      )}
     </div>
   );
 });

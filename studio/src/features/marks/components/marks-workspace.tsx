@@ -12,6 +12,7 @@ import { draftOf, emptyLinks, MarkForm, type MarkDraft, type SpokenReading } fro
 import { MarksList } from './marks-list';
 import { MarksTimeline } from './marks-timeline';
 import { SuggestionsPanel } from './suggestions-panel';
+import { useWorkshopReadOnly } from '@/lib/workshop-access';
 
 /** What the workspace needs from the player it sits under (the footage feature's page, composed in app/routes). */
 export interface MarkingPlayer {
@@ -56,9 +57,12 @@ export function MarksWorkspace({ workshopId, footageId, player }: MarksWorkspace
   const [helpOpen, help] = useDisclosure(false);
   const thumbnailTiles = useThumbnailTiles(player.media?.thumbnailsUrl);
   const waveform = useWaveform(player.media?.waveformUrl);
+  // Site admins (not members) and disabled workshops watch and read the marks; pinning one would be refused.
+  const readOnly = useWorkshopReadOnly();
 
   const handlers = {
     pin: () => {
+      if (readOnly) return;
       // Pausing keeps the moment on screen while the form is filled in.
       const startMs = Math.round(player.readPositionMs());
       player.pause();
@@ -84,9 +88,11 @@ export function MarksWorkspace({ workshopId, footageId, player }: MarksWorkspace
         />
       )}
       <Group gap="xs">
-        <Button onClick={handlers.pin} data-testid="pin-mark">
-          Pin a mark at <PlaybackTime clock={player.clock} tenths />
-        </Button>
+        {!readOnly && (
+          <Button onClick={handlers.pin} data-testid="pin-mark">
+            Pin a mark at <PlaybackTime clock={player.clock} tenths />
+          </Button>
+        )}
         <Button variant="subtle" onClick={help.open}>
           Keys <Kbd ml={6}>?</Kbd>
         </Button>

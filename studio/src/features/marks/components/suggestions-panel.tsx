@@ -13,6 +13,7 @@ import { KindShape } from './kind-shape';
 import { lastStartedAt } from './marks-list';
 import { INSTRUMENT_CHOICES } from './reading-choices';
 import classes from './virtual-list.module.css';
+import { useWorkshopReadOnly } from '@/lib/workshop-access';
 
 /** A first guess at a row's height; rows are measured once drawn. */
 const SUGGESTION_ROW_ESTIMATE_PX = 34;
@@ -33,6 +34,8 @@ export function SuggestionsPanel({ workshopId, footageId, clock, onSeek }: Sugge
   const suggestions = useQuery(markQueries.suggestions(workshopId, footageId));
   const accept = useAcceptSuggestion(workshopId, footageId);
   const dismiss = useDismissSuggestion(workshopId, footageId);
+  // Site admins (not members) and disabled workshops read the suggestions without Accept and Dismiss.
+  const readOnly = useWorkshopReadOnly();
   const [reading, setReading] = useState<MarkSuggestion | null>(null);
   const items = suggestions.data ?? NO_SUGGESTIONS;
   // Re-renders when the highlighted row changes, not on every time update.
@@ -95,6 +98,7 @@ export function SuggestionsPanel({ workshopId, footageId, clock, onSeek }: Sugge
                     onSeek={seek}
                     onAccept={handleAccept}
                     onDismiss={handleDismiss}
+                    readOnly={readOnly}
                   />
                 </div>
               ))}
@@ -136,10 +140,11 @@ interface SuggestionRowProps {
   onSeek: (ms: number) => void;
   onAccept: (suggestion: MarkSuggestion) => void;
   onDismiss: (suggestion: MarkSuggestion) => void;
+  readOnly: boolean;
 }
 
 /** One suggestion; memoised, so the playing moment moving on does not draw it again. */
-const SuggestionRow = memo(function SuggestionRow({ suggestion, accepting, onSeek, onAccept, onDismiss }: SuggestionRowProps) {
+const SuggestionRow = memo(function SuggestionRow({ suggestion, accepting, onSeek, onAccept, onDismiss, readOnly }: SuggestionRowProps) {
   return (
     <div className={classes.suggestionRow} data-testid="suggestion-row">
       <Button
@@ -164,6 +169,7 @@ const SuggestionRow = memo(function SuggestionRow({ suggestion, accepting, onSee
           </Text>
         )}
       </Text>
+      {!readOnly && (
       <Group className={classes.actions} gap={4} wrap="nowrap">
         <Button size="compact-xs" onClick={() => onAccept(suggestion)} loading={accepting}>
           Accept
@@ -172,6 +178,7 @@ const SuggestionRow = memo(function SuggestionRow({ suggestion, accepting, onSee
           Dismiss
         </Button>
       </Group>
+      )}
     </div>
   );
 });

@@ -5,6 +5,7 @@ import { useState } from 'react';
 import { ConfirmButton } from '@/components/confirm-button';
 import { UnitToggle } from '@/components/unit-toggle';
 import { notifyError } from '@/lib/notify';
+import { useWorkshopReadOnly } from '@/lib/workshop-access';
 import { formatLength, type LengthUnit } from '@/lib/units';
 import { useRemoveMeasurement } from '../api/mutations';
 import { measurementQueries, type MeasurementSubject, type Quantity } from '../api/queries';
@@ -28,6 +29,8 @@ export function SubjectReadings({ workshopId, subject, defaultUnit, defaultQuant
   const removeMeasurement = useRemoveMeasurement(workshopId);
   const [unit, setUnit] = useState<LengthUnit>(defaultUnit);
   const [adding, { toggle, close }] = useDisclosure(false);
+  // Site admins (not members) and disabled workshops read the readings; recording or removing one would be refused.
+  const readOnly = useWorkshopReadOnly();
 
   if (readings.isPending) return <Skeleton height={40} />;
   if (readings.isError) return <Alert color="red" title="Readings could not be loaded">{readings.error.message}</Alert>;
@@ -49,19 +52,24 @@ export function SubjectReadings({ workshopId, subject, defaultUnit, defaultQuant
         </Text>
         <Group gap="sm">
           {measurements.length > 0 && <UnitToggle label="Show in" value={unit} options={UNIT_OPTIONS} onChange={setUnit} />}
-          <Button size="xs" variant={adding ? 'default' : 'light'} onClick={toggle}>
-            {adding ? 'Close form' : 'Add reading'}
-          </Button>
+          {!readOnly && (
+            <Button size="xs" variant={adding ? 'default' : 'light'} onClick={toggle}>
+              {adding ? 'Close form' : 'Add reading'}
+            </Button>
+          )}
         </Group>
       </Group>
-      {adding && (
+      {adding && !readOnly && (
         <ReadingForm workshopId={workshopId} subject={subject} defaultUnit={defaultUnit} defaultQuantity={defaultQuantity} onDone={close} />
       )}
       {measurements.length > 0 && (
         <ReadingsTable
           measurements={measurements}
           unit={unit}
-          renderActions={(measurement) => (
+          renderActions={
+            readOnly
+              ? undefined
+              : (measurement) => (
             <ConfirmButton
               size="compact-xs"
               variant="subtle"
@@ -75,7 +83,8 @@ export function SubjectReadings({ workshopId, subject, defaultUnit, defaultQuant
             >
               Remove
             </ConfirmButton>
-          )}
+          )
+          }
         />
       )}
     </Stack>

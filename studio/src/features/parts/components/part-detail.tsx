@@ -12,6 +12,7 @@ import { partQueries, type PartFeature } from '../api/queries';
 import { FeatureForm } from './feature-form';
 import { PartForm } from './part-form';
 import { CATEGORY_LABELS, describeFeature, FEATURE_KIND_LABELS, SOURCE_LABELS } from './part-labels';
+import { useWorkshopReadOnly } from '@/lib/workshop-access';
 
 export interface PartDetailProps {
   workshopId: string;
@@ -31,6 +32,8 @@ export function PartDetail({ workshopId, partId, renderReadings }: PartDetailPro
   const updateFeature = useUpdateFeature(workshopId, partId);
   const removeFeature = useRemoveFeature(workshopId, partId);
   const navigate = useNavigate();
+  // Site admins (not members) and disabled workshops read the part without controls the API would refuse.
+  const readOnly = useWorkshopReadOnly();
 
   if (part.isPending) return <Skeleton height={240} />;
   if (part.isError) return <Alert color="red" title="Part not found">{part.error.message}</Alert>;
@@ -60,6 +63,7 @@ export function PartDetail({ workshopId, partId, renderReadings }: PartDetailPro
             </Badge>
           </Group>
         </div>
+        {!readOnly && (
         <Group>
           <Button variant="default" onClick={editPartModal.open}>
             Edit part
@@ -80,6 +84,7 @@ export function PartDetail({ workshopId, partId, renderReadings }: PartDetailPro
             Remove
           </ConfirmButton>
         </Group>
+        )}
       </Group>
       {data.notes && (
         <Text maw={760} style={{ whiteSpace: 'pre-wrap' }}>
@@ -91,7 +96,7 @@ export function PartDetail({ workshopId, partId, renderReadings }: PartDetailPro
 
       <Group justify="space-between" mt="md">
         <Title order={3}>Features</Title>
-        <Button onClick={addFeatureModal.open}>Add feature</Button>
+        {!readOnly && <Button onClick={addFeatureModal.open}>Add feature</Button>}
       </Group>
       {data.features.length === 0 && (
         <Text c="dimmed">
@@ -110,6 +115,7 @@ export function PartDetail({ workshopId, partId, renderReadings }: PartDetailPro
               </Group>
               <Text size="sm">{describeFeature(feature)}</Text>
             </div>
+            {!readOnly && (
             <Group gap="xs" wrap="nowrap">
               <Button size="xs" variant="default" onClick={() => setEditedFeature(feature)}>
                 Edit
@@ -128,6 +134,7 @@ export function PartDetail({ workshopId, partId, renderReadings }: PartDetailPro
                 Remove
               </ConfirmButton>
             </Group>
+            )}
           </Group>
           {renderReadings && feature.kind !== 'free' && <div style={{ marginTop: 12 }}>{renderReadings(feature)}</div>}
         </Card>

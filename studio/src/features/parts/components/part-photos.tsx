@@ -2,6 +2,7 @@ import { ActionIcon, Button, FileButton, Group, Image, Paper, SimpleGrid, Stack,
 import { notifyError } from '@/lib/notify';
 import { useAddPartPhoto, useRemovePartPhoto } from '../api/mutations';
 import type { Part } from '../api/queries';
+import { useWorkshopReadOnly } from '@/lib/workshop-access';
 
 const ACCEPTED = 'image/png,image/jpeg,image/webp';
 
@@ -9,6 +10,7 @@ const ACCEPTED = 'image/png,image/jpeg,image/webp';
 export function PartPhotos({ workshopId, part }: { workshopId: string; part: Part }) {
   const addPhoto = useAddPartPhoto(workshopId, part.id);
   const removePhoto = useRemovePartPhoto(workshopId, part.id);
+  const readOnly = useWorkshopReadOnly();
 
   const handleFile = (file: File | null) => {
     if (file) addPhoto.mutate(file, { onError: (error) => notifyError('Photo not added', error) });
@@ -18,13 +20,15 @@ export function PartPhotos({ workshopId, part }: { workshopId: string; part: Par
     <Stack gap="xs">
       <Group justify="space-between">
         <Title order={3}>Photos</Title>
-        <FileButton onChange={handleFile} accept={ACCEPTED}>
-          {(props) => (
-            <Button {...props} variant="light" loading={addPhoto.isPending}>
-              Add a photo
-            </Button>
-          )}
-        </FileButton>
+        {!readOnly && (
+          <FileButton onChange={handleFile} accept={ACCEPTED}>
+            {(props) => (
+              <Button {...props} variant="light" loading={addPhoto.isPending}>
+                Add a photo
+              </Button>
+            )}
+          </FileButton>
+        )}
       </Group>
       {part.photos.length === 0 ? (
         <Text c="dimmed" size="sm">
@@ -35,6 +39,7 @@ export function PartPhotos({ workshopId, part }: { workshopId: string; part: Par
           {part.photos.map((photo, index) => (
             <Paper key={photo.id} withBorder p={4} pos="relative">
               <Image src={photo.url} alt={`${part.partNumber} photo ${index + 1}`} h={140} fit="cover" radius="sm" />
+              {!readOnly && (
               <ActionIcon
                 pos="absolute"
                 top={8}
@@ -47,6 +52,7 @@ export function PartPhotos({ workshopId, part }: { workshopId: string; part: Par
               >
                 ✕
               </ActionIcon>
+              )}
             </Paper>
           ))}
         </SimpleGrid>
