@@ -19,6 +19,9 @@ const router = createBrowserRouter([
       // Published guides: anyone may read them, signed in or not.
       { path: paths.guideIndex, lazy: async () => ({ Component: (await import('./routes/guides')).GuideIndexRoute }) },
       { path: paths.publicGuide.path, lazy: async () => ({ Component: (await import('./routes/guides')).PublicGuideRoute }) },
+      { path: paths.guideRevisions.path, lazy: async () => ({ Component: (await import('./routes/guide-revisions')).GuideRevisionsRoute }) },
+      { path: paths.guideRevision.path, lazy: async () => ({ Component: (await import('./routes/guide-revisions')).GuideRevisionRoute }) },
+      { path: paths.guideCompare.path, lazy: async () => ({ Component: (await import('./routes/guide-revisions')).GuideCompareRoute }) },
       { path: paths.search, lazy: async () => ({ Component: (await import('./routes/search')).SearchRoute }) },
       // Accounts: open to everyone (the e-mailed links land on these).
       { path: paths.signIn, lazy: async () => ({ Component: (await import('./routes/accounts')).SignInRoute }) },

@@ -37,6 +37,21 @@ export const paths = {
     path: '/guides/:workshopSlug/:guideSlug',
     to: (workshopSlug: string, guideSlug: string) => `/guides/${encodeURIComponent(workshopSlug)}/${encodeURIComponent(guideSlug)}`,
   },
+  // A published guide's revisions: the list, one revision read-only, and two compared (?from=&to=).
+  guideRevisions: {
+    path: '/guides/:workshopSlug/:guideSlug/revisions',
+    to: (workshopSlug: string, guideSlug: string) => `/guides/${encodeURIComponent(workshopSlug)}/${encodeURIComponent(guideSlug)}/revisions`,
+  },
+  guideRevision: {
+    path: '/guides/:workshopSlug/:guideSlug/revisions/:number',
+    to: (workshopSlug: string, guideSlug: string, number: number) =>
+      `/guides/${encodeURIComponent(workshopSlug)}/${encodeURIComponent(guideSlug)}/revisions/${number}`,
+  },
+  guideCompare: {
+    path: '/guides/:workshopSlug/:guideSlug/compare',
+    to: (workshopSlug: string, guideSlug: string, from: number, to: number) =>
+      `/guides/${encodeURIComponent(workshopSlug)}/${encodeURIComponent(guideSlug)}/compare?from=${from}&to=${to}`,
+  },
   // One search over published guides (and, signed in, one's own workshops): ?q=&kind=&state=&vehicle=&page=.
   search: '/search',
   // Accounts (the e-mailed links use verifyEmail, resetPassword, confirmEmail and acceptInvitation with ?token=).

@@ -3,6 +3,7 @@ import { ReportFitButton } from '@/features/fit-reports/components/report-fit-bu
 import { FollowControl } from '@/features/follows/components/follow-control';
 import { FollowAlongView, type FollowSlot, type ReportSlot } from '@/features/guide-view/components/follow-along-view';
 import { GuideIndex } from '@/features/guide-view/components/guide-index';
+import { GuideRevisionsBar } from '@/features/guide-revisions/components/read-notice';
 
 /** Published guides, for anyone: the index with its search. */
 export function GuideIndexRoute() {
@@ -23,13 +24,17 @@ export function PublicGuideRoute() {
   const seconds = Number(search.get('t'));
   const startAtMs = Number.isFinite(seconds) && seconds > 0 ? Math.round(seconds * 1000) : undefined;
   return (
-    <FollowAlongView
-      key={`${workshopSlug}/${guideSlug}@${startAtMs ?? 0}`}
-      workshopSlug={workshopSlug}
-      guideSlug={guideSlug}
-      startAtMs={startAtMs}
-      followSlot={followSlot}
-      reportSlot={reportSlot}
-    />
+    <>
+      {/* Revision history, and "updated since you last read" from the reader's own record, never the shared answer. */}
+      <GuideRevisionsBar key={`${workshopSlug}/${guideSlug}`} workshopSlug={workshopSlug} guideSlug={guideSlug} />
+      <FollowAlongView
+        key={`${workshopSlug}/${guideSlug}@${startAtMs ?? 0}`}
+        workshopSlug={workshopSlug}
+        guideSlug={guideSlug}
+        startAtMs={startAtMs}
+        followSlot={followSlot}
+        reportSlot={reportSlot}
+      />
+    </>
   );
 }
