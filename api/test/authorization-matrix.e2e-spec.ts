@@ -8,7 +8,7 @@ import { DataSource } from 'typeorm';
 import { AuthCookies } from '../src/auth/auth-cookies';
 import { hashPassword } from '../src/auth/password-hasher';
 import { ACCESS_RULE, type AccessRule } from '../src/common/decorators/access.decorator';
-import { ACCESS_CODES } from '../src/common/guards/access.guard';
+import { ACCESS_CODES } from '../src/auth/access.guard';
 import { hashSecretToken, newSecretToken } from '../src/common/secret-token';
 import { createTestApp } from './create-test-app';
 import { uniqueClientIp, uniqueEmail } from './support/accounts';

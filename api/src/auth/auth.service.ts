@@ -1,4 +1,3 @@
-import { InjectQueue } from '@nestjs/bull';
 import {
   BadRequestException,
   ConflictException,
@@ -11,10 +10,10 @@ import {
   UnauthorizedException,
 } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
-import type { Queue } from 'bull';
 import type { Request, Response } from 'express';
 import type { AppConfig } from '../config/app-config';
 import type { SessionUser } from '../common/types/access-context';
+import { InjectJobQueue, type JobQueue } from '../infra/jobs/job-queue';
 import { QUEUES } from '../infra/jobs/queues';
 import { MailOutbox } from '../outbox/mail-outbox.service';
 import { normalizeEmail } from '../users/email-address';
@@ -60,7 +59,7 @@ export class AuthService {
     @Inject(EmailTokenService) private readonly tokens: EmailTokenService,
     @Inject(MailOutbox) private readonly mail: MailOutbox,
     @Inject(SignInAttemptsStore) private readonly signInAttempts: SignInAttemptsStore,
-    @InjectQueue(QUEUES.accounts) private readonly accountsQueue: Queue<PasswordResetRequestedJob>,
+    @InjectJobQueue(QUEUES.accounts) private readonly accountsQueue: JobQueue<PasswordResetRequestedJob>,
     @Inject(ConfigService) config: ConfigService<AppConfig, true>,
   ) {
     this.appOrigin = config.get('appOrigin', { infer: true });
@@ -162,7 +161,7 @@ export class AuthService {
    * the answer nor its timing tells whether an account exists. The job does the lookup.
    */
   async forgotPassword(email: string): Promise<void> {
-    await this.accountsQueue.add(ACCOUNTS_JOBS.passwordResetRequested, { email: normalizeEmail(email) });
+    await this.accountsQueue.enqueue(ACCOUNTS_JOBS.passwordResetRequested, { email: normalizeEmail(email) });
   }
 
   /** The job's half of a reset request: only an existing, enabled account gets a link. Returns whether one was sent. */

@@ -1,6 +1,6 @@
 import { OnModuleDestroy } from '@nestjs/common';
-import Redis from 'ioredis';
 import { createHash } from 'node:crypto';
+import { RedisScripts, type RedisConnection } from '../infra/redis/redis-scripts';
 import { pauseSchedule, SIGN_IN_LOCKOUT, type SignInLockoutPolicy } from './sign-in-lockout';
 
 /**
@@ -22,16 +22,16 @@ return 0
 
 /** Failed sign-ins per account, in Redis (shared by every API process). Keys carry a hash, never the address. */
 export class SignInAttemptsStore implements OnModuleDestroy {
-  private readonly redis: Redis;
+  private readonly redis: RedisScripts;
   private readonly schedule: string[];
   private readonly window: string;
 
   constructor(
-    connection: { host: string; port: number; password?: string },
+    connection: RedisConnection,
     private readonly prefix: string,
     policy: SignInLockoutPolicy = SIGN_IN_LOCKOUT,
   ) {
-    this.redis = new Redis({ ...connection, maxRetriesPerRequest: 2, lazyConnect: true });
+    this.redis = new RedisScripts(connection);
     this.schedule = pauseSchedule(policy).map(String);
     this.window = String(policy.windowMs);
   }
@@ -45,7 +45,7 @@ export class SignInAttemptsStore implements OnModuleDestroy {
   /** Counts an attempt on the account; resolves to the pause left in ms (0: go ahead and check the password). */
   async take(normalizedEmail: string): Promise<number> {
     const keys = this.keysFor(normalizedEmail);
-    const pausedMs = await this.redis.eval(TAKE_ATTEMPT, 2, keys.failures, keys.pause, this.window, ...this.schedule);
+    const pausedMs = await this.redis.eval(TAKE_ATTEMPT, [keys.failures, keys.pause], [this.window, ...this.schedule]);
     return Number(pausedMs);
   }
 
@@ -56,7 +56,6 @@ export class SignInAttemptsStore implements OnModuleDestroy {
   }
 
   async onModuleDestroy(): Promise<void> {
-    if (this.redis.status === 'wait' || this.redis.status === 'end') return;
-    await this.redis.quit().catch(() => this.redis.disconnect());
+    await this.redis.close();
   }
 }

@@ -17,6 +17,7 @@ export interface AppConfig {
   database: { host: string; port: number; user: string; password: string; name: string };
   redis: { host: string; port: number; password?: string; prefix: string };
   storage: {
+    driver: EnvironmentVariables['STORAGE_DRIVER'];
     endpoint?: string;
     publicEndpoint?: string;
     region: string;
@@ -26,6 +27,7 @@ export interface AppConfig {
     forcePathStyle: boolean;
   };
   mail: {
+    driver: EnvironmentVariables['MAIL_DRIVER'];
     host: string;
     port: number;
     secure: boolean;
@@ -71,6 +73,7 @@ export function buildAppConfig(env: EnvironmentVariables): AppConfig {
       prefix: env.QUEUE_PREFIX,
     },
     storage: {
+      driver: env.STORAGE_DRIVER,
       endpoint: env.S3_ENDPOINT,
       publicEndpoint: env.S3_PUBLIC_ENDPOINT ?? env.S3_ENDPOINT,
       region: env.S3_REGION,
@@ -80,6 +83,7 @@ export function buildAppConfig(env: EnvironmentVariables): AppConfig {
       forcePathStyle: env.S3_FORCE_PATH_STYLE,
     },
     mail: {
+      driver: env.MAIL_DRIVER,
       host: env.SMTP_HOST,
       port: env.SMTP_PORT,
       secure: env.SMTP_SECURE,

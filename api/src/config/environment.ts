@@ -18,6 +18,10 @@ import {
 } from 'class-validator';
 import { trustProxyProblem } from './trust-proxy';
 
+/** Storage and mail drivers `InfraModule` can bind (infra/storage, infra/mail); a hosted provider's driver adds its name. */
+export const STORAGE_DRIVERS = ['s3'] as const;
+export const MAIL_DRIVERS = ['smtp'] as const;
+
 const toBoolean = ({ value }: { value: unknown }) =>
   value === undefined ? undefined : value === true || value === 'true' || value === '1';
 
@@ -82,6 +86,10 @@ export class EnvironmentVariables {
   @IsNotEmpty()
   QUEUE_PREFIX: string = 'fitwright';
 
+  /** Which storage driver keeps objects: `s3` speaks to any S3-compatible store (the local fake, AWS, others). */
+  @IsIn(STORAGE_DRIVERS)
+  STORAGE_DRIVER: (typeof STORAGE_DRIVERS)[number] = 's3';
+
   /** Empty means the provider's default endpoint (real AWS S3). */
   @IsOptional()
   @IsUrl({ require_tld: false })
@@ -111,6 +119,10 @@ export class EnvironmentVariables {
   @Transform(toBoolean)
   @IsBoolean()
   S3_FORCE_PATH_STYLE: boolean = false;
+
+  /** Which mail driver the outbox relay sends through: `smtp` (any SMTP server, the local fake included). */
+  @IsIn(MAIL_DRIVERS)
+  MAIL_DRIVER: (typeof MAIL_DRIVERS)[number] = 'smtp';
 
   @IsString()
   @IsNotEmpty()

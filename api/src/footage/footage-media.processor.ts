@@ -1,6 +1,6 @@
-import { OnQueueFailed, Process, Processor } from '@nestjs/bull';
 import { Inject, Logger } from '@nestjs/common';
-import type { Job } from 'bull';
+import { JobHandler, JobProcessor, OnJobFailed } from '../infra/jobs/job-handlers';
+import type { JobRun } from '../infra/jobs/job-queue';
 import { QUEUES } from '../infra/jobs/queues';
 import { MEDIA_JOBS, type ProcessFootageJob, type TranscodeFootageJob } from './footage-jobs';
 import { FootageProcessingService } from './footage-processing.service';
@@ -13,7 +13,7 @@ import { FootageService } from './footage.service';
  * (defaults in infra.module.ts), and after the last attempt the footage is marked failed. Transcodes
  * run on their own queue (FootageTranscodeProcessor, below): only probing jobs share these two slots.
  */
-@Processor(QUEUES.media)
+@JobProcessor(QUEUES.media)
 export class FootageMediaProcessor {
   private readonly logger = new Logger(FootageMediaProcessor.name);
 
@@ -22,8 +22,8 @@ export class FootageMediaProcessor {
     @Inject(FootageService) private readonly footage: FootageService,
   ) {}
 
-  @Process({ name: MEDIA_JOBS.processFootage, concurrency: 2 })
-  async processFootage(job: Job<ProcessFootageJob>): Promise<string> {
+  @JobHandler(MEDIA_JOBS.processFootage, { concurrency: 2 })
+  async processFootage(job: JobRun<ProcessFootageJob>): Promise<string> {
     try {
       const outcome = await this.processing.process(job.data.footageId);
       if (outcome === 'ready') await this.footage.enqueueRenditions(job.data.footageId);
@@ -36,8 +36,8 @@ export class FootageMediaProcessor {
     }
   }
 
-  @OnQueueFailed()
-  async onFailed(job: Job<ProcessFootageJob>, error: Error): Promise<void> {
+  @OnJobFailed()
+  async onFailed(job: JobRun<ProcessFootageJob>, error: Error): Promise<void> {
     const attempts = job.opts.attempts ?? 1;
     if (job.attemptsMade < attempts) return;
     if (job.name !== MEDIA_JOBS.processFootage) return;
@@ -53,14 +53,14 @@ export class FootageMediaProcessor {
  * every core. This is the queue's only handler, so its concurrency of 1 is the process's total (Bull
  * sums the slots of all handlers on a queue). More throughput comes from more worker processes.
  */
-@Processor(QUEUES.mediaTranscode)
+@JobProcessor(QUEUES.mediaTranscode)
 export class FootageTranscodeProcessor {
   private readonly logger = new Logger(FootageTranscodeProcessor.name);
 
   constructor(@Inject(FootageRenditionsService) private readonly renditions: FootageRenditionsService) {}
 
-  @Process({ name: MEDIA_JOBS.transcodeFootage, concurrency: 1 })
-  async transcodeFootage(job: Job<TranscodeFootageJob>): Promise<string> {
+  @JobHandler(MEDIA_JOBS.transcodeFootage, { concurrency: 1 })
+  async transcodeFootage(job: JobRun<TranscodeFootageJob>): Promise<string> {
     try {
       return await this.renditions.transcode(job.data.footageId);
     } catch (error) {
@@ -71,8 +71,8 @@ export class FootageTranscodeProcessor {
     }
   }
 
-  @OnQueueFailed()
-  async onFailed(job: Job<TranscodeFootageJob>, error: Error): Promise<void> {
+  @OnJobFailed()
+  async onFailed(job: JobRun<TranscodeFootageJob>, error: Error): Promise<void> {
     const attempts = job.opts.attempts ?? 1;
     if (job.attemptsMade < attempts) return;
     await this.renditions.markFailed(job.data.footageId, `Web versions could not be made after ${attempts} attempts: ${error.message}. The original is kept; retry later.`);

@@ -1,4 +1,3 @@
-import { InjectQueue } from '@nestjs/bull';
 import {
   BadRequestException,
   ConflictException,
@@ -12,10 +11,10 @@ import {
 } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { InjectRepository } from '@nestjs/typeorm';
-import type { Queue } from 'bull';
 import { In, QueryFailedError, Repository } from 'typeorm';
 import { BuildsService } from '../builds/builds.service';
 import { AppConfig } from '../config/app-config';
+import { InjectJobQueue, type JobQueue } from '../infra/jobs/job-queue';
 import { QUEUES } from '../infra/jobs/queues';
 import { MultipartRefusedError, StorageUnavailableError } from '../infra/storage/storage-errors';
 import { StorageService } from '../infra/storage/storage.service';
@@ -68,8 +67,8 @@ export class FootageService implements OnApplicationBootstrap {
     @InjectRepository(FootageUploadPart) private readonly parts: Repository<FootageUploadPart>,
     @Inject(BuildsService) private readonly builds: BuildsService,
     @Inject(StorageService) private readonly storage: StorageService,
-    @InjectQueue(QUEUES.media) private readonly mediaQueue: Queue<ProcessFootageJob | TranscodeFootageJob>,
-    @InjectQueue(QUEUES.mediaTranscode) private readonly transcodeQueue: Queue<TranscodeFootageJob>,
+    @InjectJobQueue(QUEUES.media) private readonly mediaQueue: JobQueue<ProcessFootageJob>,
+    @InjectJobQueue(QUEUES.mediaTranscode) private readonly transcodeQueue: JobQueue<TranscodeFootageJob>,
     @Inject(FootageMediaService) private readonly media: FootageMediaService,
     @Inject(FootageRenditionsService) private readonly renditions: FootageRenditionsService,
     @Inject(ConfigService) config: ConfigService<AppConfig, true>,
@@ -90,11 +89,12 @@ export class FootageService implements OnApplicationBootstrap {
 
   /** Queues the transcode job (media processor, after probing; a retry). */
   async enqueueRenditions(footageId: string): Promise<void> {
-    const jobId = `transcode-footage-${footageId}`;
-    // A finished or failed job with this id would make add() a no-op; a retry must run again.
-    const earlier = await this.transcodeQueue.getJob(jobId);
-    if (earlier && ((await earlier.isCompleted()) || (await earlier.isFailed()))) await earlier.remove();
-    await this.transcodeQueue.add(MEDIA_JOBS.transcodeFootage, { footageId }, { jobId, attempts: 3, backoff: { type: 'exponential', delay: 5000 } });
+    // A retry must run again, so a finished or failed job holding the id is replaced.
+    await this.transcodeQueue.enqueue(
+      MEDIA_JOBS.transcodeFootage,
+      { footageId },
+      { jobId: `transcode-footage-${footageId}`, replaceFinished: true, attempts: 3, backoffMs: 5000 },
+    );
   }
 
   /**
@@ -102,9 +102,7 @@ export class FootageService implements OnApplicationBootstrap {
    * ones are removed here and queued again on media-transcode from the footage rows just after.
    */
   private async dropTranscodesLeftOnMediaQueue(): Promise<void> {
-    for (const job of await this.mediaQueue.getJobs(['waiting', 'delayed', 'paused'])) {
-      if (job?.name === MEDIA_JOBS.transcodeFootage) await job.remove();
-    }
+    await this.mediaQueue.removeWaiting(MEDIA_JOBS.transcodeFootage);
   }
 
   limits(): FootageLimitsDto {
@@ -368,10 +366,10 @@ export class FootageService implements OnApplicationBootstrap {
 
   /** Adds the processing job; the job id makes a repeated call a no-op while the job exists. */
   private async enqueueProcessing(footageId: string): Promise<void> {
-    await this.mediaQueue.add(
+    await this.mediaQueue.enqueue(
       MEDIA_JOBS.processFootage,
       { footageId },
-      { jobId: `process-footage-${footageId}`, timeout: 10 * 60 * 1000 },
+      { jobId: `process-footage-${footageId}`, timeoutMs: 10 * 60 * 1000 },
     );
   }
 

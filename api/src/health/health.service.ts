@@ -1,7 +1,6 @@
-import { InjectQueue } from '@nestjs/bull';
 import { Inject, Injectable, Logger } from '@nestjs/common';
-import type { Queue } from 'bull';
 import { DataSource } from 'typeorm';
+import { InjectJobQueue, type JobQueue } from '../infra/jobs/job-queue';
 import { QUEUES } from '../infra/jobs/queues';
 import { MailService } from '../infra/mail/mail.service';
 import { StorageService } from '../infra/storage/storage.service';
@@ -23,7 +22,7 @@ export class HealthService {
     @Inject(DataSource) private readonly dataSource: DataSource,
     @Inject(StorageService) private readonly storage: StorageService,
     @Inject(MailService) private readonly mail: MailService,
-    @InjectQueue(QUEUES.media) private readonly mediaQueue: Queue,
+    @InjectJobQueue(QUEUES.media) private readonly mediaQueue: JobQueue,
   ) {}
 
   async check(): Promise<HealthReport> {
@@ -31,7 +30,7 @@ export class HealthService {
       this.probe('database', () => this.dataSource.query('SELECT 1')),
       this.probe('storage', () => this.storage.ping()),
       this.probe('mail', () => this.mail.ping()),
-      this.probe('queue', () => this.mediaQueue.client.ping()),
+      this.probe('queue', () => this.mediaQueue.ping()),
     ]);
     const checks = { database, storage, mail, queue };
     const allUp = Object.values(checks).every((state) => state === 'up');

@@ -1,14 +1,44 @@
-import { BullModule } from '@nestjs/bull';
-import { Global, Module } from '@nestjs/common';
+import { BullModule, getQueueToken } from '@nestjs/bull';
+import { Global, Module, type Provider, type Type } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
+import type { Queue } from 'bull';
 import { AppConfig } from '../config/app-config';
+import { BullJobQueue } from './jobs/bull-job-queue';
+import { jobQueueToken } from './jobs/job-queue';
 import { QueueWorkersLifecycle } from './jobs/queue-workers.lifecycle';
 import { QUEUES } from './jobs/queues';
 import { MailService } from './mail/mail.service';
+import { SmtpMailService } from './mail/smtp-mail.service';
 import { MediaToolsService } from './media/media-tools.service';
+import { S3StorageService } from './storage/s3-storage.service';
 import { StorageService } from './storage/storage.service';
 
-/** Infrastructure wrappers: storage, mail and the job queues. Global so domains inject them directly. */
+/** The driver behind each port, by the name the configuration gives (STORAGE_DRIVER, MAIL_DRIVER). */
+const STORAGE_DRIVER_CLASSES: Record<AppConfig['storage']['driver'], Type<StorageService>> = { s3: S3StorageService };
+const MAIL_DRIVER_CLASSES: Record<AppConfig['mail']['driver'], Type<MailService>> = { smtp: SmtpMailService };
+
+const DRIVERS: Provider[] = [
+  {
+    provide: StorageService,
+    inject: [ConfigService],
+    useFactory: (config: ConfigService<AppConfig, true>) => new STORAGE_DRIVER_CLASSES[config.get('storage', { infer: true }).driver](config),
+  },
+  {
+    provide: MailService,
+    inject: [ConfigService],
+    useFactory: (config: ConfigService<AppConfig, true>) => new MAIL_DRIVER_CLASSES[config.get('mail', { infer: true }).driver](config),
+  },
+];
+
+/** The job port of each queue, on its Bull queue. */
+const JOB_QUEUES: Provider[] = Object.values(QUEUES).map((name) => ({
+  provide: jobQueueToken(name),
+  inject: [getQueueToken(name)],
+  useFactory: (queue: Queue) => new BullJobQueue(queue),
+}));
+
+/** Infrastructure wrappers: storage, mail and the job queues (domains add jobs through the `JobQueue` port,
+ * `jobs/job-queue.ts`; Bull stays here). Global so domains inject them directly. */
 @Global()
 @Module({
   imports: [
@@ -34,7 +64,7 @@ import { StorageService } from './storage/storage.service';
     }),
     BullModule.registerQueue({ name: QUEUES.media }, { name: QUEUES.mediaTranscode }, { name: QUEUES.marks }, { name: QUEUES.accounts }),
   ],
-  providers: [StorageService, MailService, MediaToolsService, QueueWorkersLifecycle],
-  exports: [StorageService, MailService, BullModule, MediaToolsService],
+  providers: [...DRIVERS, MediaToolsService, QueueWorkersLifecycle, ...JOB_QUEUES],
+  exports: [StorageService, MailService, MediaToolsService, ...JOB_QUEUES],
 })
 export class InfraModule {}

@@ -1,19 +1,19 @@
-import { Process, Processor } from '@nestjs/bull';
 import { Inject, Logger } from '@nestjs/common';
-import type { Job } from 'bull';
+import { JobHandler, JobProcessor } from '../infra/jobs/job-handlers';
+import type { JobRun } from '../infra/jobs/job-queue';
 import { QUEUES } from '../infra/jobs/queues';
 import { MarkSuggestionsMiner } from './mark-suggestions-miner.service';
 import { MARKS_JOBS, type MineTranscriptJob } from './marks-jobs';
 
 /** Works the marks queue: mining a transcript for suggested marks. Failures retry with the queue's backoff. */
-@Processor(QUEUES.marks)
+@JobProcessor(QUEUES.marks)
 export class MarksProcessor {
   private readonly logger = new Logger(MarksProcessor.name);
 
   constructor(@Inject(MarkSuggestionsMiner) private readonly miner: MarkSuggestionsMiner) {}
 
-  @Process({ name: MARKS_JOBS.mineTranscript, concurrency: 2 })
-  async mineTranscript(job: Job<MineTranscriptJob>): Promise<number> {
+  @JobHandler(MARKS_JOBS.mineTranscript, { concurrency: 2 })
+  async mineTranscript(job: JobRun<MineTranscriptJob>): Promise<number> {
     try {
       return await this.miner.mine(job.data.workshopId, job.data.footageId);
     } catch (error) {

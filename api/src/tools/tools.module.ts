@@ -1,7 +1,7 @@
 import { Module } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
-import { RedisThrottlerStorage } from '../auth/redis-throttler.storage';
 import type { AppConfig } from '../config/app-config';
+import { RedisThrottlerStorage } from '../infra/rate-limits/redis-throttler.storage';
 import { TextToolsService } from './text-tools.service';
 import { TOOLS_THROTTLER_OPTIONS, TOOLS_THROTTLER_STORAGE, toolsThrottlerOptions, ToolsThrottlerGuard } from './tools-throttler.guard';
 import { ToolsController } from './tools.controller';

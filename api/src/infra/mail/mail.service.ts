@@ -1,8 +1,3 @@
-import { Inject, Injectable, OnModuleDestroy } from '@nestjs/common';
-import { ConfigService } from '@nestjs/config';
-import { createTransport, Transporter } from 'nodemailer';
-import { AppConfig } from '../../config/app-config';
-
 export interface OutgoingMail {
   to: string;
   subject: string;
@@ -11,12 +6,12 @@ export interface OutgoingMail {
   headers?: Record<string, string>;
 }
 
-/** What the SMTP server answered to a message it took. */
+/** What the mail server answered to a message it took. */
 export interface SmtpAcceptance {
   reply: string;
 }
 
-/** The SMTP server refused the message: `permanent` for a 5xx answer (the address or the message is refused). */
+/** The server refused the message: `permanent` for a 5xx answer (the address or the message is refused). */
 export class SmtpRefusal extends Error {
   constructor(
     message: string,
@@ -28,59 +23,20 @@ export class SmtpRefusal extends Error {
 }
 
 /**
- * The only place that speaks SMTP, through one pooled connection set per process (bounded by the
- * relay's concurrency). Domain code writes mail to the outbox; the outbox relay calls send().
+ * The mail port: the outbox relay sends through it; domain code never does (it writes to the outbox). It is
+ * also the injection token: `InfraModule` binds the driver `MAIL_DRIVER` names (`smtp`: `SmtpMailService`),
+ * so a hosted provider's driver replaces it by configuration.
  */
-@Injectable()
-export class MailService implements OnModuleDestroy {
-  private readonly transporter: Transporter;
-  private readonly from: string;
+export abstract class MailService {
   /** The host part of Message-IDs (the sender's domain), so they look like the sender's own. */
-  readonly messageIdDomain: string;
+  abstract readonly messageIdDomain: string;
 
-  constructor(@Inject(ConfigService) config: ConfigService<AppConfig, true>) {
-    const mail = config.get('mail', { infer: true });
-    this.from = mail.from;
-    this.messageIdDomain = /@([^>\s]+)/.exec(mail.from)?.[1] ?? 'fitwright.local';
-    this.transporter = createTransport({
-      pool: true,
-      maxConnections: mail.relay.concurrency,
-      maxMessages: 500,
-      host: mail.host,
-      port: mail.port,
-      secure: mail.secure,
-      ignoreTLS: mail.ignoreTls,
-      auth: mail.user ? { user: mail.user, pass: mail.password } : undefined,
-      connectionTimeout: 5000,
-      greetingTimeout: 5000,
-      socketTimeout: 20_000,
-    });
-  }
-
-  /** Connects, greets and (when configured) authenticates, without sending anything. */
-  async ping(): Promise<void> {
-    await this.transporter.verify();
-  }
+  /** Reaches the server (connects, greets, authenticates) without sending anything. */
+  abstract ping(): Promise<void>;
 
   /**
    * Sends one message with the given Message-ID (derived from its idempotency key, so a repeat after a
-   * crash carries the same id and a receiving system can drop it). Resolves only once the server accepted.
+   * crash carries the same id). Resolves only once the server accepted; throws `SmtpRefusal` otherwise.
    */
-  async send(mail: OutgoingMail, messageId: string): Promise<SmtpAcceptance> {
-    try {
-      const info = (await this.transporter.sendMail({ from: this.from, ...mail, messageId })) as { response?: string; rejected?: unknown[] };
-      if (Array.isArray(info.rejected) && info.rejected.length > 0) throw new SmtpRefusal(`recipient refused: ${info.response ?? ''}`, 550, true);
-      return { reply: String(info.response ?? 'accepted').slice(0, 500) };
-    } catch (error) {
-      if (error instanceof SmtpRefusal) throw error;
-      const code = (error as { responseCode?: unknown }).responseCode;
-      const responseCode = typeof code === 'number' ? code : undefined;
-      const message = error instanceof Error ? error.message : String(error);
-      throw new SmtpRefusal(message.slice(0, 500), responseCode, responseCode !== undefined && responseCode >= 500 && responseCode < 600);
-    }
-  }
-
-  onModuleDestroy(): void {
-    this.transporter.close();
-  }
+  abstract send(mail: OutgoingMail, messageId: string): Promise<SmtpAcceptance>;
 }

@@ -10,12 +10,12 @@ import {
 } from '@nestjs/common';
 import { Reflector } from '@nestjs/core';
 import type { Response } from 'express';
-import { AuthCookies } from '../../auth/auth-cookies';
-import { SessionService } from '../../auth/session.service';
-import { MembershipService } from '../../workshops/membership.service';
-import { ACCESS_RULE, type AccessRule } from '../decorators/access.decorator';
-import { REQUIRE_CSRF } from '../decorators/csrf.decorator';
-import type { AccessRequest } from '../types/access-context';
+import { ACCESS_RULE, type AccessRule } from '../common/decorators/access.decorator';
+import { REQUIRE_CSRF } from '../common/decorators/csrf.decorator';
+import type { AccessRequest } from '../common/types/access-context';
+import { MembershipService } from '../workshops/membership.service';
+import { AuthCookies } from './auth-cookies';
+import { SessionService } from './session.service';
 
 /** The `code` of every refusal this guard makes; the authorization-matrix test keys on them. */
 export const ACCESS_CODES = {

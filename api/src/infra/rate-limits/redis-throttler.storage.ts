@@ -1,6 +1,6 @@
 import { OnModuleDestroy } from '@nestjs/common';
 import type { ThrottlerStorage } from '@nestjs/throttler';
-import Redis from 'ioredis';
+import { RedisScripts, type RedisConnection } from '../redis/redis-scripts';
 
 type ThrottlerStorageRecord = Awaited<ReturnType<ThrottlerStorage['increment']>>;
 
@@ -25,13 +25,13 @@ return { hits, hitsTtl, 0, 0 }
 
 /** Rate-limit counters in Redis, shared by every API process (the in-memory default is per process). */
 export class RedisThrottlerStorage implements ThrottlerStorage, OnModuleDestroy {
-  private readonly redis: Redis;
+  private readonly redis: RedisScripts;
 
   constructor(
-    connection: { host: string; port: number; password?: string },
+    connection: RedisConnection,
     private readonly prefix: string,
   ) {
-    this.redis = new Redis({ ...connection, maxRetriesPerRequest: 2, lazyConnect: true });
+    this.redis = new RedisScripts(connection);
   }
 
   async increment(
@@ -42,15 +42,7 @@ export class RedisThrottlerStorage implements ThrottlerStorage, OnModuleDestroy 
     throttlerName: string,
   ): Promise<ThrottlerStorageRecord> {
     const base = `${this.prefix}:throttle:${throttlerName}:${key}`;
-    const [totalHits, hitsTtl, blocked, blockTtl] = (await this.redis.eval(
-      INCREMENT,
-      2,
-      base,
-      `${base}:blocked`,
-      ttl,
-      limit,
-      blockDuration,
-    )) as [number, number, number, number];
+    const [totalHits, hitsTtl, blocked, blockTtl] = (await this.redis.eval(INCREMENT, [base, `${base}:blocked`], [ttl, limit, blockDuration])) as [number, number, number, number];
     return {
       totalHits,
       timeToExpire: Math.max(0, Math.ceil(hitsTtl / 1000)),
@@ -60,8 +52,6 @@ export class RedisThrottlerStorage implements ThrottlerStorage, OnModuleDestroy 
   }
 
   async onModuleDestroy(): Promise<void> {
-    // A connection never opened (lazyConnect) has nothing to close; an open one finishes its replies first.
-    if (this.redis.status === 'wait' || this.redis.status === 'end') return;
-    await this.redis.quit().catch(() => this.redis.disconnect());
+    await this.redis.close();
   }
 }
