@@ -28,6 +28,11 @@ describe('demo guide (real MariaDB, Redis, S3 fake)', () => {
     await loadDemoMarks(app, ids);
     await loadDemoGuide(app, ids);
     expect(await loadDemoGuide(app, ids)).toBe('demo guide already loaded');
+    // Two published revisions with a real difference, for the revisions pages.
+    const revisions = (await request(app.getHttpServer()).get('/api/guides/harrow-lane-garage/fitting-the-21-tooth-coupler-stack/revisions').expect(200)).body;
+    expect(revisions.currentRevision).toBeGreaterThanOrEqual(2);
+    const diff = (await request(app.getHttpServer()).get('/api/guides/harrow-lane-garage/fitting-the-21-tooth-coupler-stack/revisions/compare').query({ from: 1, to: revisions.currentRevision }).expect(200)).body;
+    expect(diff.changed.map((step: { title: string }) => step.title)).toContain('Seat the coupler and read its end float');
     await loadDemoFollower(app, { workshopId: accounts.workshopId, followerId: accounts.followerId });
     expect(await loadDemoFollower(app, { workshopId: accounts.workshopId, followerId: accounts.followerId })).toBe('demo follower already loaded');
     const follower = await signIn(app, DEMO_PEOPLE.follower.email, DEMO_PASSWORD);
@@ -41,7 +46,8 @@ describe('demo guide (real MariaDB, Redis, S3 fake)', () => {
 
     const index = await request(app.getHttpServer()).get('/api/guides').query({ q: 'coupler stack' }).expect(200);
     const entry = index.body.find((item: { title: string; workshop: { name: string } }) => item.title === DEMO_GUIDE_TITLE && item.workshop.name === 'Harrow Lane Garage');
-    expect(entry).toMatchObject({ revision: 1, stepCount: 6, skillLevel: 'seasoned_fitter', estimatedMinutes: 180 });
+    expect(entry.revision).toBeGreaterThanOrEqual(2);
+    expect(entry).toMatchObject({ stepCount: 6, skillLevel: 'seasoned_fitter', estimatedMinutes: 180 });
 
     const view = await request(app.getHttpServer()).get(`/api${entry.path}`).expect(200);
     expect(view.body.cautions.map((caution: { level: string; topic: string }) => `${caution.level} ${caution.topic}`)).toEqual([

@@ -85,7 +85,11 @@ export async function loadDemoGuide(app: INestApplicationContext, { workshopId, 
   const footage = build && (await app.get(FootageService).list(workshopId, build.id)).find((item) => item.title === DEMO_FOOTAGE_TITLE);
   if (!build || !footage?.transcript) return 'demo guide skipped: the demo footage or its transcript is missing';
   const existing = (await guides.list(workshopId, build.id)).find((guide) => guide.title === DEMO_GUIDE_TITLE);
-  if (existing) return existing.skillLevel ? 'demo guide already loaded' : addDemoEffort(guides, workshopId, existing.id, creatorId);
+  if (existing) {
+    const effort = existing.skillLevel ? null : await addDemoEffort(guides, workshopId, existing.id, creatorId);
+    const reworded = await addDemoSecondRevision(guides, workshopId, existing.id, creatorId);
+    return [effort, reworded].filter(Boolean).join('; ') || 'demo guide already loaded';
+  }
 
   const assembly = (await app.get(AssembliesService).list(workshopId, build.id)).find((candidate) => candidate.name === DEMO_ASSEMBLY_NAME);
   const { cues } = await app.get(TranscriptsService).read(workshopId, footage.id);
@@ -110,7 +114,29 @@ export async function loadDemoGuide(app: INestApplicationContext, { workshopId, 
     if (mark) await marks.create(workshopId, footage.id, creatorId, { kind: 'step', label: mark, startMs: cue.startMs + 500, guideStepId: created.id });
   }
   const revision = await guides.publish(workshopId, guide.id, creatorId, 'First publication of the bench and truck checks.');
-  return `demo guide "${DEMO_GUIDE_TITLE}" published as revision ${revision.number} with ${DEMO_STEPS.length} steps`;
+  const reworded = await addDemoSecondRevision(guides, workshopId, guide.id, creatorId);
+  return `demo guide "${DEMO_GUIDE_TITLE}" published as revision ${revision.number} with ${DEMO_STEPS.length} steps; ${reworded}`;
+}
+
+const SECOND_REVISION_NOTE = 'Clearer end-float step: where to hold the feeler gauge and what reading to expect.';
+const END_FLOAT_TITLE = 'Seat the coupler and check end float';
+
+/**
+ * A second published revision with a real difference, so a newcomer can open revision 1 and compare it with
+ * the current one: the end-float step gets a new title and a clearer body. Nothing when already published.
+ */
+async function addDemoSecondRevision(guides: GuidesService, workshopId: string, guideId: string, creatorId: string): Promise<string | null> {
+  if ((await guides.listRevisions(workshopId, guideId)).some((revision) => revision.note === SECOND_REVISION_NOTE)) return null;
+  const step = (await guides.describe(workshopId, guideId)).steps.find((candidate) => candidate.title === END_FLOAT_TITLE);
+  if (!step) return 'demo guide second revision skipped: the end-float step is missing';
+  await guides.updateStep(workshopId, guideId, step.id, {
+    title: 'Seat the coupler and read its end float',
+    body:
+      '<p>Slide the coupler onto the motor shaft by hand, never with a hammer. With it seated, hold a feeler gauge square to the motor face: ' +
+      'expect 0.012 to 0.018 in of end float, and note the reading on the job sheet.</p>',
+  });
+  const revision = await guides.publish(workshopId, guideId, creatorId, SECOND_REVISION_NOTE);
+  return `demo guide revision ${revision.number}: the end-float step reworded`;
 }
 
 /** A demo guide loaded before guides had a skill level and times gets them, in a new revision. */
