@@ -24,3 +24,6 @@ export * from './mark-suggestions';
 // ---- guides ----
 export * from './safety-topics';
 export * from './guide-effort';
+
+// ---- display ----
+export * from './byte-sizes';

@@ -1,3 +1,5 @@
+import { formatBytes } from '../engine/byte-sizes';
+
 /**
  * Rules for a footage upload, decided before any byte is sent: accepted file types (by extension
  * and the browser's MIME type), the size limit, the multipart plan and a safe file name. Pure.
@@ -60,18 +62,8 @@ export function resolveFootageType(fileName: string, mimeType: string): FootageT
   return type;
 }
 
-/** "20 GB", "1.5 GB", "750 MB": decimal units, as file managers show sizes. */
-export function formatBytes(bytes: number): string {
-  const units = ['bytes', 'kB', 'MB', 'GB', 'TB'];
-  let value = bytes;
-  let unit = 0;
-  while (value >= 1000 && unit < units.length - 1) {
-    value /= 1000;
-    unit += 1;
-  }
-  const digits = unit === 0 || value >= 100 || Number.isInteger(value) ? 0 : 1;
-  return `${value.toFixed(digits)} ${units[unit]}`;
-}
+/** Sizes in messages read as the studio shows them: one function, in the engine. */
+export { formatBytes };
 
 export function checkFileSize(sizeBytes: number, maxBytes: number): void {
   if (sizeBytes <= 0) throw new UploadRuleError('The file is empty.');

@@ -1,16 +1,7 @@
-/** Display helpers for footage: sizes in decimal units (as file managers show them), times left (clocks are in lib/clock.ts). */
+/** Display helpers for footage: sizes in decimal units (the API's own formatBytes), times left (clocks are in lib/clock.ts). */
+import { formatBytes } from '@fitwright/engine';
 
-export function formatBytes(bytes: number): string {
-  const units = ['bytes', 'kB', 'MB', 'GB', 'TB'];
-  let value = bytes;
-  let unit = 0;
-  while (value >= 1000 && unit < units.length - 1) {
-    value /= 1000;
-    unit += 1;
-  }
-  const digits = unit === 0 || value >= 100 || Number.isInteger(value) ? 0 : 1;
-  return `${value.toFixed(digits)} ${units[unit]}`;
-}
+export { formatBytes };
 
 export function formatSpeed(bytesPerSecond: number): string {
   return `${formatBytes(bytesPerSecond)}/s`;
