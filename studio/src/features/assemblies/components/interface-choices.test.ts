@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { AssemblyDetail, FeatureInfo } from '../api/queries';
-import { interfaceChoices } from './interface-choices';
+import { featureChoiceLabel, interfaceChoices } from './interface-choices';
 
 const feature = (id: string, partId: string, kind: FeatureInfo['kind'], spec: FeatureInfo['spec']): FeatureInfo => ({
   id,
@@ -50,6 +50,20 @@ const PARTS: AssemblyDetail['parts'] = [
 const values = (groups: { items: { value: string }[] }[]) => groups.flatMap((group) => group.items.map((item) => item.value));
 
 describe('interfaceChoices', () => {
+  it('names the part in every choice, so the chosen field says whose feature it is', () => {
+    const { first, second } = interfaceChoices('bore_shaft', PARTS, 'pilot-bore');
+    const labels = [...first, ...second].flatMap((group) => group.items.map((item) => item.label));
+    expect(labels[0]).toMatch(/^HL-2107 coupler — pilot-bore/);
+    expect(labels[1]).toMatch(/^DS-540 shaft — pilot-journal/);
+    expect(second.flatMap((group) => group.items.map((item) => item.label))).toEqual([labels[1]]);
+  });
+
+  it('leaves out empty brackets when a feature has nothing to summarise', () => {
+    const bare = feature('keyway note', 'shaft', 'free', {});
+    expect(featureChoiceLabel({ partNumber: 'DS-540', title: 'shaft' }, bare)).toBe('DS-540 shaft — keyway note');
+    expect(featureChoiceLabel({ partNumber: 'DS-540', title: 'shaft' }, bare)).not.toContain('()');
+  });
+
   it('offers only features of the kind the interface joins, grouped by position and part', () => {
     const { first } = interfaceChoices('bore_shaft', PARTS, null);
     expect(values(first)).toEqual(['pilot-bore', 'pilot-journal']);

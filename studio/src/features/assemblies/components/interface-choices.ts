@@ -63,13 +63,22 @@ export function interfaceChoices(
         group: `${position} · ${part.partNumber}`,
         items: part.features
           .filter((feature) => feature.kind === wanted && keep(feature))
-          .map((feature) => ({ value: feature.id, label: `${feature.name} (${featureSummary(feature)})` })),
+          .map((feature) => ({ value: feature.id, label: featureChoiceLabel(part, feature) })),
       }))
       .filter((entry) => entry.items.length > 0);
   return {
     first: group(() => true),
     second: kind === 'length_window' || !first ? [] : group((candidate) => mates(kind, first, candidate)),
   };
+}
+
+/**
+ * A feature as a picker names it: the part first, because once chosen the field shows only this line, and two
+ * parts often have features of the same name ("HL-2107 Motor coupler — pilot bore (15 H7)").
+ */
+export function featureChoiceLabel(part: { partNumber: string; title: string }, feature: FeatureInfo): string {
+  const summary = featureSummary(feature);
+  return `${part.partNumber} ${part.title} — ${feature.name}${summary ? ` (${summary})` : ''}`;
 }
 
 /** "input spline on HL-2107" for a feature id of the assembly. */
