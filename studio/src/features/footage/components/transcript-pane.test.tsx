@@ -5,6 +5,7 @@ import { createPlaybackClock } from '@/lib/playback-clock';
 import { stubApi } from '@/testing/api-stub';
 import { fakeScrollLayout } from '@/testing/fake-scroll-layout';
 import { renderWithProviders } from '@/testing/render';
+import { WorkshopAccessProvider } from '@/lib/workshop-access';
 import type { CueMatch, SearchResults, Transcript } from '../api/types';
 import { TranscriptPane } from './transcript-pane';
 
@@ -45,6 +46,25 @@ function searchPage({ url }: { url: URL }): SearchResults<CueMatch> {
   const limit = Number(url.searchParams.get('limit') ?? 50);
   return { terms: ['spline'], total: SPLINE_HITS.length, offset, results: SPLINE_HITS.slice(offset, offset + limit) };
 }
+
+describe('TranscriptPane read-only (a site admin, or a disabled workshop)', () => {
+  afterEach(() => vi.restoreAllMocks());
+
+  it('offers the WebVTT download but not Replace; a member gets Replace', () => {
+    stubApi([]);
+    const pane = (readOnly: boolean) => (
+      <WorkshopAccessProvider readOnly={readOnly}>
+        <TranscriptPane workshopId="w1" footageId="f1" transcript={TRANSCRIPT} clock={createPlaybackClock()} transcriptMaxBytes={1_000_000} onSeek={() => {}} />
+      </WorkshopAccessProvider>
+    );
+    const { rerender } = renderWithProviders(pane(true));
+    expect(screen.getByRole('link', { name: 'WebVTT' })).toBeTruthy();
+    expect(screen.queryByRole('button', { name: 'Replace' })).toBeNull();
+    expect(screen.queryByRole('button', { name: 'Attach transcript' })).toBeNull();
+    rerender(pane(false));
+    expect(screen.getByRole('button', { name: 'Replace' })).toBeTruthy();
+  });
+});
 
 describe('TranscriptPane search', () => {
   afterEach(() => vi.restoreAllMocks());

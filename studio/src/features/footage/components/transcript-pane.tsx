@@ -6,6 +6,7 @@ import { BackToNow } from '@/components/back-to-now';
 import { usePlaybackSelect, type PlaybackClock } from '@/lib/playback-clock';
 import { useFollowingList } from '@/lib/use-follow-playback';
 import { useStableHandler } from '@/lib/use-stable-handler';
+import { useWorkshopReadOnly } from '@/lib/workshop-access';
 import { downloadUrl, transcriptQueries } from '../api/queries';
 import type { Cue, Transcript } from '../api/types';
 import { formatClock } from '@/lib/clock';
@@ -55,6 +56,8 @@ function activeCueRow(cues: Cue[], ms: number): number {
  */
 export function TranscriptPane({ workshopId, footageId, transcript, clock, transcriptMaxBytes, onSeek, onSearchChange }: TranscriptPaneProps) {
   const [attaching, { open, close }] = useDisclosure(false);
+  // Site admins (not members) and disabled workshops read and download the transcript; attaching one would be refused.
+  const readOnly = useWorkshopReadOnly();
   const [query, setQuery] = useState('');
   const [debounced] = useDebouncedValue(query.trim(), 250);
   const search = useInfiniteQuery({
@@ -102,9 +105,11 @@ export function TranscriptPane({ workshopId, footageId, transcript, clock, trans
                 WebVTT
               </Anchor>
             )}
-            <Button size="xs" variant={transcript ? 'default' : 'filled'} onClick={open}>
-              {transcript ? 'Replace' : 'Attach transcript'}
-            </Button>
+            {!readOnly && (
+              <Button size="xs" variant={transcript ? 'default' : 'filled'} onClick={open}>
+                {transcript ? 'Replace' : 'Attach transcript'}
+              </Button>
+            )}
           </Group>
         </Group>
         {transcript && (
@@ -176,7 +181,7 @@ export function TranscriptPane({ workshopId, footageId, transcript, clock, trans
       <TranscriptAttach
         workshopId={workshopId}
         footageId={footageId}
-        opened={attaching}
+        opened={attaching && !readOnly}
         replacing={transcript !== null}
         maxBytes={transcriptMaxBytes}
         onClose={close}
