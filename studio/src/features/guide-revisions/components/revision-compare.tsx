@@ -178,7 +178,7 @@ export function DifferenceList({ diff, workshopSlug, guideSlug }: { diff: Revisi
 
       <section aria-labelledby="checklist-changes">
         <Title order={2} size="h3" id="checklist-changes">
-          Verified-fit checklist then and then
+          Verified-fit checklist at each revision
         </Title>
         {diff.checklist.length === 0 ? (
           <Text c="dimmed">This guide showed no checklist in either revision.</Text>
