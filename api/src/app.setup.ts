@@ -85,6 +85,9 @@ function refuseDeepJson(_request: IncomingMessage, _response: unknown, body: Buf
   }
 }
 
+/** The page's path is ours, not the request's: a build under a dot-folder (a benchmark's .data/…) is served too. */
+const SEND_INDEX = { dotfiles: 'allow' } as const;
+
 /** Serves the built single-page studio; any non-API GET that is not a file gets index.html. */
 function serveStudio(app: NestExpressApplication, dist: string): void {
   // The build writes .br and .gz beside each asset (vite.config.ts); the smallest the browser accepts is sent.
@@ -110,14 +113,14 @@ function serveStudio(app: NestExpressApplication, dist: string): void {
     if (!isPageRequest) return next();
     response.setHeader('Cache-Control', 'no-cache');
     const page = shellPageOf(request.path, request.query);
-    if (!page) return response.sendFile(indexHtml);
+    if (!page) return response.sendFile(indexHtml, SEND_INDEX);
     // A public guide page arrives with its title, cautions and poster drawn, before the JavaScript.
     void Promise.all([shells.shellFor(page), readFile(indexHtml, 'utf8')]).then(
-      ([shell, html]) => (shell ? response.type('html').send(withPageShell(html, shell)) : response.sendFile(indexHtml)),
+      ([shell, html]) => (shell ? response.type('html').send(withPageShell(html, shell)) : response.sendFile(indexHtml, SEND_INDEX)),
       (error: unknown) => {
         // The shell is an extra: without it (Redis or the database away) the page still loads and says what is wrong.
         logger.warn(`No page shell for ${request.path}: ${error instanceof Error ? error.message : String(error)}`);
-        response.sendFile(indexHtml);
+        response.sendFile(indexHtml, SEND_INDEX);
       },
     );
   });

@@ -17,6 +17,7 @@ const INDEX_HTML = `<!doctype html>
     <meta name="description" content="Fitwright: verified-fit build guides from workshop footage" />
     <title>Fitwright</title>
     <script type="module" crossorigin src="/assets/index-test.js"></script>
+    <link rel="stylesheet" crossorigin href="/assets/index-test.css">
   </head>
   <body>
     <div id="root"></div>
@@ -73,8 +74,11 @@ describe('Public guide pages: server-rendered shell (real MariaDB, Redis, S3 fak
     expect(html).toContain('<strong>Step 1: Fit it</strong>');
     expect(html).not.toContain('<b>splines</b>');
     expect(html).toContain(`<img class="fw-shell-poster" src="/api/guides/${shop.workshopSlug}/${shop.guideSlug}/poster"`);
-    // The studio's script stays, so the app still takes over.
+    // The studio's script stays, so the app still takes over; its stylesheet follows the shell as a print sheet
+    // (turned on by the studio as it starts), so it holds back no paint.
     expect(html).toContain('src="/assets/index-test.js"');
+    expect(html).toMatch(/<\/main><\/div><\/div><link rel="stylesheet" media="print" data-shell-deferred="" crossorigin href="\/assets\/index-test.css">/);
+    expect(html.indexOf('index-test.css')).toBeGreaterThan(html.indexOf('data-page-shell'));
     // The poster link the shell names answers (a redirect to storage).
     await anonymous().get(`/api/guides/${shop.workshopSlug}/${shop.guideSlug}/poster`).expect(302);
   });

@@ -32,3 +32,10 @@ for (const { route, module } of VIEWER_ROUTES) {
   }
   for (const source of load.editorSources.slice(0, 10)) console.log(`    editor: ${source}`);
 }
+
+// With the services up (bash bench/run.sh bundle [dev|test]), the same build is served by an API process and
+// loaded in Chromium on a throttled phone profile; without them, the size report above is all.
+if (process.env.DB_NAME && !process.argv.includes('--sizes-only')) {
+  const { reportFirstPaint } = await import('./first-paint.mjs');
+  await reportFirstPaint(outDir);
+}

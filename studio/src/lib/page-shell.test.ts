@@ -7,9 +7,11 @@ describe('page shell', () => {
   });
 
   it('keeps the server’s shell in view, outside the root React clears, until released', () => {
-    document.body.innerHTML = '<div id="root"><div data-page-shell=""><h1>Fitting the coupler</h1></div></div>';
+    document.body.innerHTML =
+      '<div id="root"><div data-page-shell=""><h1>Fitting the coupler</h1></div></div><link rel="stylesheet" media="print" data-shell-deferred="" href="/a.css">';
     const root = document.getElementById('root')!;
     holdPageShell(root);
+    expect(document.querySelector('link')?.media).toBe('all');
     expect(root.childElementCount).toBe(0);
     expect(root.hidden).toBe(true);
     expect(document.body.firstElementChild?.textContent).toBe('Fitting the coupler');

@@ -11,6 +11,8 @@ const SHELL = '[data-page-shell]';
 const LONGEST_HOLD_MS = 15_000;
 
 export function holdPageShell(root: HTMLElement): void {
+  // The API sends the studio's stylesheets as print sheets after a shell, so they hold back no first paint.
+  for (const link of document.querySelectorAll<HTMLLinkElement>('link[data-shell-deferred]')) link.media = 'all';
   const shell = root.querySelector(`:scope > ${SHELL}`);
   if (!shell) return;
   root.before(shell);
