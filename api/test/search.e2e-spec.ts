@@ -1,5 +1,6 @@
 import { NestExpressApplication } from '@nestjs/platform-express';
 import { randomInt } from 'node:crypto';
+import { DataSource } from 'typeorm';
 import { createTestApp } from './create-test-app';
 import { browserAgent, signUpAndSignIn, type Agent } from './support/accounts';
 import { makeWorkshopFixture, type WorkshopFixture } from './support/workshop-fixture';
@@ -26,7 +27,8 @@ interface Results {
   total: number;
   offset: number;
   limit: number;
-  counts: { kind: string; count: number }[];
+  totalCapped: boolean;
+  counts: { kind: string; count: number; capped: boolean }[];
   results: Hit[];
 }
 
@@ -104,7 +106,8 @@ describe('search: published guides for everyone, own workshops for members (real
     const second = await search(reader, { q: pagedWord, limit: 2, offset: 2 });
     const third = await search(reader, { q: pagedWord, limit: 2, offset: 4 });
     expect(first.total).toBe(5);
-    expect(first.counts).toContainEqual({ kind: 'cue', count: 5 });
+    expect(first.counts).toContainEqual({ kind: 'cue', count: 5, capped: false });
+    expect(first.totalCapped).toBe(false);
     const ids = [...first.results, ...second.results, ...third.results].map((hit) => hit.id);
     expect(ids).toHaveLength(5);
     expect(new Set(ids).size).toBe(5);
@@ -139,7 +142,7 @@ describe('search: published guides for everyone, own workshops for members (real
     // A kind filter narrows the page; the chips still count the other kinds.
     const onlyCues = await search(reader, { q: stepWord, kind: 'cue' });
     expect(onlyCues.total).toBe(0);
-    expect(onlyCues.counts).toContainEqual({ kind: 'guide', count: 1 });
+    expect(onlyCues.counts).toContainEqual({ kind: 'guide', count: 1, capped: false });
     expect((await search(shop.owner.agent, { q: draftWord, state: 'published' })).total).toBe(0);
     expect((await search(shop.owner.agent, { q: stepWord, state: 'unpublished', kind: 'guide' })).total).toBe(0);
     // The fixture's build has no vehicle: any vehicle filter leaves it out.
@@ -163,6 +166,42 @@ describe('search: published guides for everyone, own workshops for members (real
     const own = await search(owner.agent, { q: 'SEARCHSHOP-1', kind: 'part', state: 'unpublished' });
     expect(own.results.every((hit) => !hit.published)).toBe(true);
     expect(own.total).toBe(1);
+  });
+
+  it('caps a kind\'s count at 1,000 ("1,000+") and still pages to the thousandth hit', async () => {
+    // 1,050 cues in the published footage's transcript, written straight to the table (the API's
+    // transcript path would take minutes): more than the cap, so the count stops and says so.
+    const manyWord = inventedWord();
+    const database = app.get(DataSource);
+    const [transcript] = await database.query<{ id: string }[]>('SELECT id FROM transcripts WHERE footage_id = ? AND is_active = 1', [shop.footageId]);
+    const rows = Array.from({ length: 1_050 }, (_, index) => [transcript.id, 10_000 + index, 3_900, 3_950, `Cue ${index} names ${manyWord} again`]);
+    await database.query('INSERT INTO transcript_cues (transcript_id, cue_index, start_ms, end_ms, text) VALUES ?', [rows]);
+    try {
+      const first = await search(reader, { q: manyWord, limit: 5 });
+      expect(first.counts).toContainEqual({ kind: 'cue', count: 1_000, capped: true });
+      expect(first.total).toBe(1_000);
+      expect(first.totalCapped).toBe(true);
+      expect(first.results).toHaveLength(5);
+      const deep = await search(reader, { q: manyWord, kind: 'cue', offset: 1_000, limit: 50 });
+      expect(deep.results).toHaveLength(50);
+      expect(new Set([...first.results, ...deep.results].map((hit) => hit.id)).size).toBe(55);
+      // Under the cap a count is exact and not capped.
+      const few = await search(reader, { q: `${manyWord} 1049` });
+      expect(few.totalCapped).toBe(false);
+    } finally {
+      await database.query('DELETE FROM transcript_cues WHERE transcript_id = ? AND cue_index >= 10000', [transcript.id]);
+    }
+  });
+
+  it('narrows to guides with a fit check in a state (checkState), apart from published/unpublished', async () => {
+    // The fixture's assembly has one derived check, open until confirmed.
+    const [{ state }] = await app.get(DataSource).query<{ state: string }[]>('SELECT state FROM fit_checks WHERE assembly_id = ? LIMIT 1', [shop.assemblyId]);
+    const other = state === 'confirmed' ? 'no_fit' : 'confirmed';
+    expect((await search(reader, { q: stepWord, checkState: state })).total).toBe(1);
+    expect((await search(reader, { q: stepWord, checkState: other })).total).toBe(0);
+    expect((await search(shop.owner.agent, { q: draftWord, checkState: state })).total).toBe(0);
+    const bad = await reader.get('/api/search').query({ q: stepWord, checkState: 'bench_passed' }).expect(400);
+    expect(JSON.stringify(bad.body)).toMatch(/checkState/u);
   });
 
   it('refuses a query with nothing to search and out-of-range paging, naming the field', async () => {

@@ -2,14 +2,21 @@ import { BadRequestException, Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import type { DataSource } from 'typeorm';
 import type { SessionUser } from '../common/types/access-context';
-import { SEARCH_KINDS, type SearchHitDto, type SearchKind, type SearchQueryDto, type SearchResultsDto } from './dto/search.dto';
+import { MAX_SEARCH_COUNT, SEARCH_KINDS, type SearchHitDto, type SearchKind, type SearchQueryDto, type SearchResultsDto } from './dto/search.dto';
 import { isEmptySearch, parseSearchQuery, type ParsedSearch } from './search-query';
 import { highlightSnippet } from './search-snippet';
 
-/** One kind's rows as SQL: the same columns for every kind, so a page is one UNION ALL ordered by score. */
+/**
+ * One kind's rows as SQL: the same columns for every kind, so a page is one UNION ALL ordered by score.
+ * A public kind reads its matches from one FULLTEXT table alone (`candidates`: id columns and `score`)
+ * and LEFT JOINs what makes a match visible (published revision, enabled workshop, filters), so each
+ * candidate gives a row and `visible` says whether it is a hit; `sql` places the candidates' derived
+ * table where `from` is given. Member kinds have no candidates: their rows are all hits.
+ */
 interface KindQuery {
   kind: SearchKind;
-  sql: string;
+  candidates?: { sql: string; params: unknown[] };
+  sql: (from: string) => string;
   params: unknown[];
 }
 
@@ -28,14 +35,23 @@ interface HitRow {
   targetId: string | null;
   startMs: number | string | null;
   checkState: string | null;
+  visible: number | string;
 }
 
+type BranchRow = HitRow & { branch: number | string; kindTotal: number | string | null; rawCount: number | string | null };
+
 /** Every kind names these columns, in its own order; a page reads them by name so UNION ALL lines them up. */
-const COLUMNS = 'kind, id, score, published, title, body, workshopId, workshopSlug, workshopName, vehicle, guideSlug, targetId, startMs, checkState';
+const COLUMNS = 'kind, id, score, published, title, body, workshopId, workshopSlug, workshopName, vehicle, guideSlug, targetId, startMs, checkState, visible';
 
 /** A part-number hit outranks every FULLTEXT relevance (InnoDB's relevance stays far below this). */
 const PART_NUMBER_SCORE = 1000;
 
+/** What one branch of a page gave: its best rows, how many hits it saw, and whether that count is complete. */
+interface BranchResult {
+  rows: HitRow[];
+  count: number;
+  complete: boolean;
+}
 
 /**
  * Search across published guides (everyone) and a member's own workshops (signed in). A named read
@@ -64,14 +80,20 @@ export class SearchService {
     const memberWorkshopIds = user ? await this.memberWorkshopIds(user.id) : [];
     const all = this.kindQueries(parsed, query, memberWorkshopIds);
     const { rows, counts } = await this.page(all, query.kind, offset, limit);
-    const total = query.kind ? (counts.get(query.kind) ?? 0) : [...counts.values()].reduce((sum, count) => sum + count, 0);
+    const kinds = SEARCH_KINDS.filter((kind) => all.some((entry) => entry.kind === kind));
+    const countOf = (kind: SearchKind) => {
+      const entry = counts.get(kind) ?? { count: 0, complete: true };
+      return { kind, count: Math.min(entry.count, MAX_SEARCH_COUNT), capped: !entry.complete || entry.count > MAX_SEARCH_COUNT };
+    };
+    const summed = (query.kind ? [query.kind] : kinds).map(countOf);
     return {
       terms: parsed.terms,
       partNumbers: parsed.partNumberKeys,
-      total,
+      total: summed.reduce((sum, entry) => sum + entry.count, 0),
+      totalCapped: summed.some((entry) => entry.capped),
       offset,
       limit,
-      counts: SEARCH_KINDS.filter((kind) => all.some((entry) => entry.kind === kind)).map((kind) => ({ kind, count: counts.get(kind) ?? 0 })),
+      counts: kinds.map(countOf),
       results: rows.map((row) => toHit(row, parsed)),
     };
   }
@@ -85,30 +107,77 @@ export class SearchService {
   }
 
   /**
-   * One statement per search: each kind gives its best `offset + limit` rows and, through a window
-   * count, how many it has in all, so every FULLTEXT match is read once (not once to count and again
-   * for the page). Kinds not asked for give one row, for their count. The page is cut here, by score
-   * (ties by kind and id, so pages are stable).
+   * One statement per search. Each public kind ranks a bounded candidate set: the best `CANDIDATES`
+   * matches of its FULLTEXT table by relevance (`ORDER BY score DESC LIMIT n` on the table alone, the
+   * same shape as a plain MATCH … AGAINST, so InnoDB need not read every match), of which only the
+   * visible ones are hits. The page is exact whenever those candidates hold at least `offset + limit`
+   * hits or are every match: no hit outside them ranks higher. Otherwise (most candidates are private
+   * or filtered out) that kind is read again over all its matches. Counts stop at the candidates: a
+   * kind with more matches says "at least" (capped), so no search joins, counts and sorts every match.
+   * Kinds not asked for give one row, for their count. The page is cut here, by score (ties by kind
+   * and id, so pages are stable).
    */
-  private async page(kinds: KindQuery[], asked: SearchKind | undefined, offset: number, limit: number): Promise<{ rows: HitRow[]; counts: Map<SearchKind, number> }> {
+  private async page(kinds: KindQuery[], asked: SearchKind | undefined, offset: number, limit: number) {
     const take = offset + limit;
-    const sql = kinds
-      .map(
-        (kind, branch) =>
-          `(SELECT ${COLUMNS}, ${branch} AS branch, COUNT(*) OVER () AS kindTotal FROM (${kind.sql}) AS hits ORDER BY score DESC, id LIMIT ${!asked || asked === kind.kind ? take : 1})`,
-      )
-      .join(' UNION ALL ');
-    const found = await this.dataSource.query<(HitRow & { branch: number | string; kindTotal: number | string })[]>(sql, kinds.flatMap((kind) => kind.params));
-    // A kind may come from two queries (public and member parts): each query's window counts its own rows.
-    const totals = new Map<number, number>();
-    for (const row of found) totals.set(Number(row.branch), Number(row.kindTotal));
-    const counts = new Map<SearchKind, number>();
-    kinds.forEach((kind, branch) => counts.set(kind.kind, (counts.get(kind.kind) ?? 0) + (totals.get(branch) ?? 0)));
-    const rows = found
+    const candidates = Math.max(MAX_SEARCH_COUNT + 1, take);
+    const wanted = (kind: KindQuery) => !asked || asked === kind.kind;
+    const results = await this.branches(kinds, (kind) => (wanted(kind) ? take : 1), candidates);
+    // A wanted kind whose candidates ran out of hits before the page was full is read again in full.
+    const again = kinds
+      .map((kind, branch) => ({ kind, branch }))
+      .filter(({ kind, branch }) => wanted(kind) && !results[branch].complete && results[branch].rows.length < take);
+    if (again.length > 0) {
+      const full = await this.branches(again.map(({ kind }) => kind), () => take, null);
+      again.forEach(({ branch }, index) => (results[branch] = full[index]));
+    }
+    // A kind may come from two queries (public and member parts): their counts add up.
+    const counts = new Map<SearchKind, { count: number; complete: boolean }>();
+    kinds.forEach((kind, branch) => {
+      const before = counts.get(kind.kind) ?? { count: 0, complete: true };
+      counts.set(kind.kind, { count: before.count + results[branch].count, complete: before.complete && results[branch].complete });
+    });
+    const rows = results
+      .flatMap((result) => result.rows)
       .filter((row) => !asked || row.kind === asked)
       .sort((a, b) => Number(b.score) - Number(a.score) || (a.kind < b.kind ? -1 : a.kind > b.kind ? 1 : 0) || (a.id < b.id ? -1 : a.id > b.id ? 1 : 0))
       .slice(offset, offset + limit);
     return { rows, counts };
+  }
+
+  /**
+   * The UNION ALL of the given kinds, each giving its best `rowsOf(kind)` hits, the hits it saw
+   * (`kindTotal`) and, for a bounded read, how many candidates it read (`rawCount`). `candidates` null
+   * reads every match.
+   */
+  private async branches(kinds: KindQuery[], rowsOf: (kind: KindQuery) => number, candidates: number | null): Promise<BranchResult[]> {
+    const parts = kinds.map((kind, branch) => {
+      let from = '';
+      let params = kind.params;
+      if (kind.candidates) {
+        from =
+          candidates === null
+            ? `(SELECT x.*, NULL AS rawCount FROM (${kind.candidates.sql}) x)`
+            : `(SELECT x.*, COUNT(*) OVER () AS rawCount FROM (${kind.candidates.sql} ORDER BY score DESC LIMIT ${candidates}) x)`;
+        params = [...kind.candidates.params, ...kind.params];
+      }
+      const raw = kind.candidates ? 'MAX(rawCount) OVER ()' : 'NULL';
+      return {
+        sql: `(SELECT ${COLUMNS}, ${branch} AS branch, SUM(visible) OVER () AS kindTotal, ${raw} AS rawCount
+          FROM (${kind.sql(from)}) AS hits ORDER BY visible DESC, score DESC, id LIMIT ${rowsOf(kind)})`,
+        params,
+      };
+    });
+    const found = await this.dataSource.query<BranchRow[]>(parts.map((part) => part.sql).join(' UNION ALL '), parts.flatMap((part) => part.params));
+    return kinds.map((kind, branch) => {
+      const own = found.filter((row) => Number(row.branch) === branch);
+      const rawCount = own.length > 0 && own[0].rawCount !== null ? Number(own[0].rawCount) : null;
+      return {
+        rows: own.filter((row) => Number(row.visible) === 1),
+        count: own.length > 0 ? Number(own[0].kindTotal ?? 0) : 0,
+        // Complete when every match was read: a bounded read that got fewer candidates than it asked for.
+        complete: candidates === null || !kind.candidates || rawCount === null || rawCount < candidates,
+      };
+    });
   }
 
   private kindQueries(parsed: ParsedSearch, query: SearchQueryDto, memberWorkshopIds: string[]): KindQuery[] {
@@ -126,69 +195,79 @@ export class SearchService {
     const inMember = (column: string) => `${column} IN (${members.map(() => '?').join(', ')})`;
 
     // Published guides: the revision's words, joined to a live, enabled workshop by the published revision.
-    const publishedGuide = `FROM guide_revision_search rs
-      JOIN guides g ON g.published_revision_id = rs.revision_id
+    // The joins are LEFT and nested, conditions in ON: a candidate that is not public still gives its row.
+    const publishedGuide = `JOIN guides g ON g.published_revision_id = rs.revision_id
       JOIN workshops w ON w.id = g.workshop_id AND w.disabled_at IS NULL
       JOIN builds b ON b.id = g.build_id`;
 
     if (wantPublic && text) {
-      const where = filters.sql('w', 'b');
+      const where = filters.sql('w', 'b', 'rs.assembly_id');
       kinds.push({
         kind: 'guide',
-        sql: `SELECT 'guide' AS kind, g.id AS id, MATCH (rs.search_text) AGAINST (? IN BOOLEAN MODE) AS score, 1 AS published,
+        candidates: {
+          sql: 'SELECT revision_id, MATCH (search_text) AGAINST (? IN BOOLEAN MODE) AS score FROM guide_revision_search WHERE MATCH (search_text) AGAINST (? IN BOOLEAN MODE)',
+          params: [text, text],
+        },
+        sql: (from) => `SELECT 'guide' AS kind, g.id AS id, m.score AS score, 1 AS published,
             rs.title AS title, rs.search_text AS body, w.id AS workshopId, w.slug AS workshopSlug, w.name AS workshopName,
-            b.vehicle AS vehicle, g.slug AS guideSlug, NULL AS targetId, NULL AS startMs, NULL AS checkState
-          ${publishedGuide}
-          WHERE MATCH (rs.search_text) AGAINST (? IN BOOLEAN MODE) ${where.sql}`,
-        params: [text, text, ...where.params],
+            b.vehicle AS vehicle, g.slug AS guideSlug, NULL AS targetId, NULL AS startMs, NULL AS checkState,
+            g.id IS NOT NULL AS visible, m.rawCount AS rawCount
+          FROM ${from} m
+          LEFT JOIN (guide_revision_search rs ${publishedGuide}) ON rs.revision_id = m.revision_id ${where.sql}`,
+        params: where.params,
       });
       kinds.push({
         kind: 'cue',
-        sql: `SELECT 'cue' AS kind, CONCAT(g.id, ':', c.transcript_id, ':', c.cue_index) AS id, MATCH (c.text) AGAINST (? IN BOOLEAN MODE) AS score,
+        candidates: {
+          sql: 'SELECT transcript_id, cue_index, MATCH (text) AGAINST (? IN BOOLEAN MODE) AS score FROM transcript_cues WHERE MATCH (text) AGAINST (? IN BOOLEAN MODE)',
+          params: [text, text],
+        },
+        sql: (from) => `SELECT 'cue' AS kind, CONCAT(g.id, ':', c.transcript_id, ':', c.cue_index) AS id, m.score AS score,
             1 AS published, rs.title AS title, c.text AS body, w.id AS workshopId, w.slug AS workshopSlug, w.name AS workshopName,
-            b.vehicle AS vehicle, g.slug AS guideSlug, NULL AS targetId, c.start_ms AS startMs, NULL AS checkState
-          FROM transcript_cues c
-          JOIN transcripts t ON t.id = c.transcript_id AND t.is_active = 1
-          JOIN guide_revision_search rs ON rs.footage_id = t.footage_id
-          JOIN guides g ON g.published_revision_id = rs.revision_id
-          JOIN workshops w ON w.id = g.workshop_id AND w.disabled_at IS NULL
-          JOIN builds b ON b.id = g.build_id
-          WHERE MATCH (c.text) AGAINST (? IN BOOLEAN MODE) ${notMember} ${where.sql}`,
-        params: [text, text, ...replaced, ...where.params],
+            b.vehicle AS vehicle, g.slug AS guideSlug, NULL AS targetId, c.start_ms AS startMs, NULL AS checkState,
+            g.id IS NOT NULL AS visible, m.rawCount AS rawCount
+          FROM ${from} m
+          LEFT JOIN (transcript_cues c
+            JOIN transcripts t ON t.id = c.transcript_id AND t.is_active = 1
+            JOIN guide_revision_search rs ON rs.footage_id = t.footage_id
+            ${publishedGuide})
+          ON c.transcript_id = m.transcript_id AND c.cue_index = m.cue_index ${notMember} ${where.sql}`,
+        params: [...replaced, ...where.params],
       });
     }
     if (wantPublic && (text || keys.length)) {
       const matched = matchedParts(text, keys, null);
-      const where = filters.sql('w', 'b');
+      const where = filters.sql('w', 'b', 'rs.assembly_id');
       kinds.push({
         kind: 'part',
-        sql: `SELECT 'part' AS kind, CONCAT(g.id, ':', p.id) AS id, m.score AS score, 1 AS published,
+        candidates: matched,
+        sql: (from) => `SELECT 'part' AS kind, CONCAT(g.id, ':', p.id) AS id, m.score AS score, 1 AS published,
             CONCAT(p.title, ' · ', p.part_number) AS title, CONCAT_WS(' · ', p.maker, rs.title) AS body,
             w.id AS workshopId, w.slug AS workshopSlug, w.name AS workshopName,
-            b.vehicle AS vehicle, g.slug AS guideSlug, NULL AS targetId, NULL AS startMs, NULL AS checkState
-          FROM (${matched.sql}) m
-          JOIN parts p ON p.id = m.id
-          JOIN assembly_parts ap ON ap.part_id = p.id
-          JOIN guide_revision_search rs ON rs.assembly_id = ap.assembly_id
-          JOIN guides g ON g.published_revision_id = rs.revision_id
-          JOIN workshops w ON w.id = g.workshop_id AND w.disabled_at IS NULL
-          JOIN builds b ON b.id = g.build_id
-          WHERE 1 = 1 ${notMember} ${where.sql}`,
-        params: [...matched.params, ...replaced, ...where.params],
+            b.vehicle AS vehicle, g.slug AS guideSlug, NULL AS targetId, NULL AS startMs, NULL AS checkState,
+            g.id IS NOT NULL AS visible, m.rawCount AS rawCount
+          FROM ${from} m
+          LEFT JOIN (parts p
+            JOIN assembly_parts ap ON ap.part_id = p.id
+            JOIN guide_revision_search rs ON rs.assembly_id = ap.assembly_id
+            ${publishedGuide})
+          ON p.id = m.id ${notMember} ${where.sql}`,
+        params: [...replaced, ...where.params],
       });
     }
     if (!wantMember) return kinds;
 
     const workshopJoin = 'JOIN workshops w ON w.id = x.workshop_id';
-    if (text || keys.length) {
+    // A fit-check state narrows member hits to fit checks: the other member kinds carry no check.
+    if ((text || keys.length) && !query.checkState) {
       const matched = matchedParts(text, keys, members);
-      const where = filters.sql('w', null);
+      const where = filters.sql('w', null, null);
       const vehicle = filters.partVehicle();
       kinds.push({
         kind: 'part',
-        sql: `SELECT 'part' AS kind, x.id AS id, m.score AS score, 0 AS published, CONCAT(x.title, ' · ', x.part_number) AS title,
+        sql: () => `SELECT 'part' AS kind, x.id AS id, m.score AS score, 0 AS published, CONCAT(x.title, ' · ', x.part_number) AS title,
             CONCAT_WS(' · ', x.maker, x.notes) AS body, w.id AS workshopId, w.slug AS workshopSlug, w.name AS workshopName,
-            NULL AS vehicle, NULL AS guideSlug, x.id AS targetId, NULL AS startMs, NULL AS checkState
+            NULL AS vehicle, NULL AS guideSlug, x.id AS targetId, NULL AS startMs, NULL AS checkState, 1 AS visible
           FROM (${matched.sql}) m JOIN parts x ON x.id = m.id ${workshopJoin}
           WHERE 1 = 1 ${where.sql} ${vehicle.sql}`,
         params: [...matched.params, ...where.params, ...vehicle.params],
@@ -196,17 +275,26 @@ export class SearchService {
     }
     if (!text) return kinds;
 
-    const memberKind = (kind: SearchKind, select: string, from: string, match: string, vehicleBuild: string | null): KindQuery => {
-      const where = filters.sql('w', vehicleBuild);
+    const memberKind = (kind: SearchKind, select: string, from: string, match: string, vehicleBuild: string | null, state: string | null = null): KindQuery => {
+      const where = filters.sql('w', vehicleBuild, null, state);
       return {
         kind,
-        sql: `SELECT '${kind}' AS kind, ${select}, MATCH (${match}) AGAINST (? IN BOOLEAN MODE) AS score, 0 AS published,
-            w.id AS workshopId, w.slug AS workshopSlug, w.name AS workshopName
+        sql: () => `SELECT '${kind}' AS kind, ${select}, MATCH (${match}) AGAINST (? IN BOOLEAN MODE) AS score, 0 AS published,
+            w.id AS workshopId, w.slug AS workshopSlug, w.name AS workshopName, 1 AS visible
           ${from} ${workshopJoin}
           WHERE MATCH (${match}) AGAINST (? IN BOOLEAN MODE) AND ${inMember('x.workshop_id')} ${where.sql}`,
         params: [text, text, ...members, ...where.params],
       };
     };
+    const fitChecks = memberKind(
+      'fit_check',
+      "x.id AS id, x.title AS title, x.reason AS body, b.vehicle AS vehicle, NULL AS guideSlug, x.assembly_id AS targetId, NULL AS startMs, x.state AS checkState",
+      'FROM fit_checks x JOIN assemblies a ON a.id = x.assembly_id JOIN builds b ON b.id = a.build_id',
+      'x.title, x.reason',
+      'b',
+      'x.state',
+    );
+    if (query.checkState) return [...kinds, fitChecks];
     kinds.push(
       memberKind(
         'build',
@@ -236,13 +324,7 @@ export class SearchService {
         'x.label',
         'b',
       ),
-      memberKind(
-        'fit_check',
-        "x.id AS id, x.title AS title, x.reason AS body, b.vehicle AS vehicle, NULL AS guideSlug, x.assembly_id AS targetId, NULL AS startMs, x.state AS checkState",
-        'FROM fit_checks x JOIN assemblies a ON a.id = x.assembly_id JOIN builds b ON b.id = a.build_id',
-        'x.title, x.reason',
-        'b',
-      ),
+      fitChecks,
       memberKind(
         'draft_guide',
         "x.id AS id, x.title AS title, x.summary AS body, b.vehicle AS vehicle, NULL AS guideSlug, x.id AS targetId, NULL AS startMs, NULL AS checkState",
@@ -283,11 +365,16 @@ function matchedParts(text: string | null, keys: string[], workshopIds: string[]
   return { sql: `SELECT id, MAX(score) AS score FROM (${pieces.join(' UNION ALL ')}) AS candidates GROUP BY id`, params };
 }
 
-/** The workshop and vehicle filters as SQL on the aliases a kind uses. */
+/** The workshop, vehicle and fit-check state filters as SQL on the aliases a kind uses. */
 class Filters {
   constructor(private readonly query: SearchQueryDto) {}
 
-  sql(workshopAlias: string, buildAlias: string | null): { sql: string; params: unknown[] } {
+  /**
+   * `assembly`: the column naming a published guide's assembly (it matches a check state through that
+   * assembly's live checks); `state`: a fit check's own state column. A kind with neither gives no hit
+   * under a state filter.
+   */
+  sql(workshopAlias: string, buildAlias: string | null, assembly: string | null, state: string | null = null): { sql: string; params: unknown[] } {
     let sql = '';
     const params: unknown[] = [];
     if (this.query.workshop) {
@@ -298,6 +385,12 @@ class Filters {
       if (!buildAlias) return { sql: `${sql} AND 1 = 0`, params };
       sql += ` AND ${buildAlias}.vehicle LIKE ?`;
       params.push(likeContaining(this.query.vehicle));
+    }
+    if (this.query.checkState) {
+      if (state) sql += ` AND ${state} = ?`;
+      else if (assembly) sql += ` AND EXISTS (SELECT 1 FROM fit_checks fc WHERE fc.assembly_id = ${assembly} AND fc.state = ?)`;
+      else return { sql: `${sql} AND 1 = 0`, params };
+      params.push(this.query.checkState);
     }
     return { sql, params };
   }

@@ -1,6 +1,7 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { IsIn, IsInt, IsOptional, IsString, Length, Matches, Max, MaxLength, Min } from 'class-validator';
 import { NumberFromText } from '../../common/decorators/number-from-text.decorator';
+import { FIT_CHECK_STATES, type FitCheckState } from '../../engine/checklist';
 import { MAX_SEARCH_TEXT } from '../search-query';
 
 /** Public kinds come from published guides; the others are a member's own workshop records. */
@@ -10,6 +11,13 @@ export type SearchKind = (typeof SEARCH_KINDS)[number];
 /** `published`: what everyone may read; `unpublished`: a member's own workshop records (drafts, footage, checks…). */
 export const SEARCH_STATES = ['published', 'unpublished'] as const;
 export type SearchState = (typeof SEARCH_STATES)[number];
+
+/** Fit-check states a search can narrow to (a retired check is history, not evidence). */
+export const SEARCH_CHECK_STATES = FIT_CHECK_STATES.filter((state) => state !== 'retired') as Exclude<FitCheckState, 'retired'>[];
+export type SearchCheckState = (typeof SEARCH_CHECK_STATES)[number];
+
+/** Per-kind counts stop here: past it the answer says "1,000+" (`capped`), so no search reads every match to count it. */
+export const MAX_SEARCH_COUNT = 1_000;
 
 /** Deep pages cost every kind `offset + limit` rows; past the first thousand hits a narrower search serves better. */
 export const MAX_SEARCH_OFFSET = 1_000;
@@ -36,6 +44,15 @@ export class SearchQueryDto {
   @IsOptional()
   @IsIn(SEARCH_STATES)
   state?: SearchState;
+
+  @ApiPropertyOptional({
+    enum: SEARCH_CHECK_STATES,
+    description:
+      "Only hits with a fit check in this state: published guides whose assembly has such a check, and (members) their fit checks in it. Kinds that carry no check (builds, footage, marks, drafts, a member's own parts and cues) give no hits under it",
+  })
+  @IsOptional()
+  @IsIn(SEARCH_CHECK_STATES)
+  checkState?: SearchCheckState;
 
   @ApiPropertyOptional({ description: "Words the build's vehicle must contain", example: 'pickup' })
   @IsOptional()
@@ -86,13 +103,16 @@ export class SearchHitDto {
 
 export class SearchKindCountDto {
   @ApiProperty({ enum: SEARCH_KINDS }) kind!: SearchKind;
-  @ApiProperty() count!: number;
+  @ApiProperty({ description: `Hits of this kind, at most ${MAX_SEARCH_COUNT}; with capped, a lower bound` }) count!: number;
+  @ApiProperty({ description: 'True when there may be more than count (show "1,000+"): the count stopped at its cap or at the best-ranked matches read' })
+  capped!: boolean;
 }
 
 export class SearchResultsDto {
   @ApiProperty({ description: 'The words searched for' }) terms!: string[];
   @ApiProperty({ description: 'Part-number keys matched exactly or by prefix (letters and digits, upper case)' }) partNumbers!: string[];
   @ApiProperty({ description: 'Hits of the asked kind (or of every kind) in all; results holds at most `limit`' }) total!: number;
+  @ApiProperty({ description: 'True when total is a lower bound (a count it adds up is capped): show it as "1,000+"' }) totalCapped!: boolean;
   @ApiProperty() offset!: number;
   @ApiProperty() limit!: number;
   @ApiProperty({ type: [SearchKindCountDto], description: 'Hits per kind under the other filters, for the kind chips' }) counts!: SearchKindCountDto[];

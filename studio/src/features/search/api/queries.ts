@@ -19,6 +19,7 @@ export const searchQueries = {
             workshop: filters.workshop,
             state: filters.state,
             vehicle: filters.vehicle,
+            checkState: filters.checkState,
             offset: filters.offset || undefined,
             limit: SEARCH_PAGE_SIZE,
           },

@@ -4,6 +4,9 @@ import type { FitCheckState } from '@/components/check-state';
 export const SEARCH_KINDS = ['guide', 'part', 'cue', 'build', 'footage', 'mark', 'fit_check', 'draft_guide'] as const;
 export type SearchKind = (typeof SEARCH_KINDS)[number];
 export type SearchState = 'published' | 'unpublished';
+/** Fit-check states a search narrows to (the API's checkState; a retired check is history, not evidence). */
+export const SEARCH_CHECK_STATES = ['confirmed', 'bench_pass', 'open', 'no_fit'] as const satisfies readonly FitCheckState[];
+export type SearchCheckState = (typeof SEARCH_CHECK_STATES)[number];
 
 export interface SnippetSegment {
   text: string;
@@ -27,9 +30,11 @@ export interface SearchResults {
   terms: string[];
   partNumbers: string[];
   total: number;
+  /** True when total is a lower bound: show it as "1,000+". */
+  totalCapped: boolean;
   offset: number;
   limit: number;
-  counts: { kind: SearchKind; count: number }[];
+  counts: { kind: SearchKind; count: number; capped: boolean }[];
   results: SearchHit[];
 }
 
@@ -39,5 +44,6 @@ export interface SearchFilters {
   workshop?: string;
   state?: SearchState;
   vehicle?: string;
+  checkState?: SearchCheckState;
   offset?: number;
 }

@@ -27,12 +27,13 @@ function results(overrides: Partial<SearchResults> = {}): SearchResults {
     terms: ['spline'],
     partNumbers: [],
     total: 1,
+    totalCapped: false,
     offset: 0,
     limit: 20,
     counts: [
-      { kind: 'guide', count: 0 },
-      { kind: 'cue', count: 1 },
-      { kind: 'part', count: 0 },
+      { kind: 'guide', count: 0, capped: false },
+      { kind: 'cue', count: 1, capped: false },
+      { kind: 'part', count: 0, capped: false },
     ],
     results: [CUE_HIT],
     ...overrides,
@@ -67,6 +68,45 @@ describe('SearchPage', () => {
     fireEvent.click(await screen.findByRole('button', { name: '2' }));
     await waitFor(() => expect(requests.filter((r) => r.url.pathname === '/api/search').at(-1)?.url.searchParams.get('offset')).toBe('20'));
     expect(requests.filter((r) => r.url.pathname === '/api/search').at(-1)?.url.searchParams.get('kind')).toBe('cue');
+  });
+
+  it('shows a capped count as "1,000+" on the chips and the summary', async () => {
+    stubApi([
+      {
+        path: /^\/search\?/,
+        body: results({
+          total: 1_000,
+          totalCapped: true,
+          counts: [
+            { kind: 'guide', count: 12, capped: false },
+            { kind: 'cue', count: 1_000, capped: true },
+          ],
+        }),
+      },
+      { path: /^\/auth\/me$/, status: 401, body: { statusCode: 401, message: 'Sign in' } },
+    ]);
+    renderWithProviders(<SearchPage />, { route: '/search?q=spline' });
+    expect(await screen.findByRole('radio', { name: 'Transcript (1,000+)' })).toBeTruthy();
+    expect(screen.getByRole('radio', { name: 'Guide (12)' })).toBeTruthy();
+    expect(screen.getByRole('radio', { name: 'All (1,012+)' })).toBeTruthy();
+    expect(screen.getByTestId('search-summary').textContent).toBe('1,000+ results — showing 1–1');
+  });
+
+  it('asks again with a workshop from the answer and a fit-check state', async () => {
+    const requests = stubApi([
+      { path: /^\/search\?/, body: results() },
+      { path: /^\/auth\/me$/, status: 401, body: { statusCode: 401, message: 'Sign in' } },
+    ]);
+    renderWithProviders(<SearchPage />, { route: '/search?q=spline' });
+    await screen.findByTestId('search-hit');
+    const last = () => requests.filter((r) => r.url.pathname === '/api/search').at(-1)?.url.searchParams;
+    fireEvent.change(screen.getByLabelText('Workshop'), { target: { value: 'harrow-lane-garage' } });
+    await waitFor(() => expect(last()?.get('workshop')).toBe('harrow-lane-garage'));
+    fireEvent.change(screen.getByLabelText('Fit check'), { target: { value: 'confirmed' } });
+    await waitFor(() => expect(last()?.get('checkState')).toBe('confirmed'));
+    expect(last()?.get('workshop')).toBe('harrow-lane-garage');
+    fireEvent.change(screen.getByLabelText('Workshop'), { target: { value: '' } });
+    await waitFor(() => expect(last()?.get('workshop')).toBeNull());
   });
 
   it("says what the API refused, naming the field", async () => {

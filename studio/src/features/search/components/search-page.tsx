@@ -1,13 +1,13 @@
-import { Alert, Anchor, Badge, Button, Card, Chip, Group, Pagination, SegmentedControl, Skeleton, Stack, Text, TextInput, Title } from '@mantine/core';
+import { Alert, Anchor, Badge, Button, Card, Chip, Group, NativeSelect, Pagination, SegmentedControl, Skeleton, Stack, Text, TextInput, Title } from '@mantine/core';
 import { useQuery } from '@tanstack/react-query';
 import { useState, type FormEvent } from 'react';
 import { Link, useSearchParams } from 'react-router-dom';
-import { CheckStateBadge } from '@/components/check-state';
+import { CheckStateBadge, STATE_LOOK } from '@/components/check-state';
 import { ApiError } from '@/lib/api-client';
 import { formatClock } from '@/lib/clock';
 import { useSession } from '@/lib/session';
 import { SEARCH_PAGE_SIZE, searchQueries } from '../api/queries';
-import { SEARCH_KINDS, type SearchFilters, type SearchHit, type SearchKind, type SearchState } from '../api/types';
+import { SEARCH_CHECK_STATES, SEARCH_KINDS, type SearchCheckState, type SearchFilters, type SearchHit, type SearchKind, type SearchState } from '../api/types';
 import { Snippet } from './snippet';
 
 export const KIND_LABELS: Record<SearchKind, string> = {
@@ -23,12 +23,19 @@ export const KIND_LABELS: Record<SearchKind, string> = {
 
 const isKind = (value: string | null): value is SearchKind => SEARCH_KINDS.some((kind) => kind === value);
 const isState = (value: string | null): value is SearchState => value === 'published' || value === 'unpublished';
+const isCheckState = (value: string | null): value is SearchCheckState => SEARCH_CHECK_STATES.some((state) => state === value);
+
+/** A count as the API gives it: a capped one is a lower bound ("1,000+"). */
+export function countText(count: number, capped: boolean): string {
+  return `${count.toLocaleString('en')}${capped ? '+' : ''}`;
+}
 
 /** The filters as the address holds them, so a search can be shared, reloaded and walked back. */
 function useSearchFilters() {
   const [params, setParams] = useSearchParams();
   const kind = params.get('kind');
   const state = params.get('state');
+  const checkState = params.get('checkState');
   const page = Math.max(1, Math.floor(Number(params.get('page') ?? '1')) || 1);
   const filters: SearchFilters = {
     q: params.get('q') ?? '',
@@ -36,6 +43,7 @@ function useSearchFilters() {
     workshop: params.get('workshop') || undefined,
     state: isState(state) ? state : undefined,
     vehicle: params.get('vehicle') || undefined,
+    checkState: isCheckState(checkState) ? checkState : undefined,
     offset: (page - 1) * SEARCH_PAGE_SIZE,
   };
   /** Sets some filters; any change but the page goes back to the first page. */
@@ -102,6 +110,11 @@ export function SearchPage() {
   };
 
   const allCount = data?.counts.reduce((sum, entry) => sum + entry.count, 0) ?? 0;
+  const allCapped = data?.counts.some((entry) => entry.capped) ?? false;
+  // The workshops the answer names, and the chosen one (the API filters by slug), for the workshop choice.
+  const workshops = new Map<string, string>();
+  if (filters.workshop) workshops.set(filters.workshop, filters.workshop);
+  for (const hit of data?.results ?? []) workshops.set(hit.workshop.slug, hit.workshop.name);
   const pages = data ? Math.max(1, Math.ceil(data.total / SEARCH_PAGE_SIZE)) : 1;
   const first = data && data.total > 0 ? data.offset + 1 : 0;
   const last = data ? data.offset + data.results.length : 0;
@@ -130,6 +143,22 @@ export function SearchPage() {
               style={{ flex: '0 1 12rem' }}
             />
             <Button type="submit">Search</Button>
+          </Group>
+          <Group gap="xs" align="flex-end" wrap="wrap">
+            <NativeSelect
+              label="Workshop"
+              value={filters.workshop ?? ''}
+              onChange={(event) => update({ workshop: event.currentTarget.value || undefined })}
+              data={[{ value: '', label: 'All workshops' }, ...[...workshops].map(([slug, name]) => ({ value: slug, label: name }))]}
+              style={{ flex: '0 1 14rem' }}
+            />
+            <NativeSelect
+              label="Fit check"
+              value={filters.checkState ?? ''}
+              onChange={(event) => update({ checkState: event.currentTarget.value || undefined })}
+              data={[{ value: '', label: 'Any state' }, ...SEARCH_CHECK_STATES.map((state) => ({ value: state, label: STATE_LOOK[state].label }))]}
+              style={{ flex: '0 1 14rem' }}
+            />
           </Group>
           {user && (
             <SegmentedControl
@@ -160,18 +189,20 @@ export function SearchPage() {
         <>
           <Chip.Group multiple={false} value={filters.kind ?? 'all'} onChange={(value) => update({ kind: value === 'all' ? undefined : value })}>
             <Group gap="xs" aria-label="Kinds of result" role="group">
-              <Chip value="all">All ({allCount})</Chip>
+              <Chip value="all">All ({countText(allCount, allCapped)})</Chip>
               {data.counts
                 .filter((entry) => entry.count > 0 || entry.kind === filters.kind)
                 .map((entry) => (
                   <Chip key={entry.kind} value={entry.kind}>
-                    {KIND_LABELS[entry.kind]} ({entry.count})
+                    {KIND_LABELS[entry.kind]} ({countText(entry.count, entry.capped)})
                   </Chip>
                 ))}
             </Group>
           </Chip.Group>
           <Text size="sm" c="dimmed" aria-live="polite" data-testid="search-summary">
-            {data.total === 0 ? `Nothing matches “${filters.q}”.` : `${data.total} ${data.total === 1 ? 'result' : 'results'} — showing ${first}–${last}`}
+            {data.total === 0
+              ? `Nothing matches “${filters.q}”.`
+              : `${countText(data.total, data.totalCapped)} ${data.total === 1 && !data.totalCapped ? 'result' : 'results'} — showing ${first}–${last}`}
           </Text>
           <Stack component="ol" gap="sm" p={0} m={0} style={{ listStyle: 'none' }} opacity={query.isPlaceholderData ? 0.6 : 1}>
             {data.results.map((hit) => (
