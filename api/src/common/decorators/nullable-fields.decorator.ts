@@ -3,6 +3,11 @@ import { ApiPropertyOptional } from '@nestjs/swagger';
 import { IsInt, IsOptional, IsUUID, Max, Min } from 'class-validator';
 import { MAX_FOOTAGE_MS } from '../http/limits';
 
+/** An optional UUID (a link given when known, or a filter): absent, or a UUID. The document shows it as a plain optional field. */
+export function OptionalUuid(description?: string): PropertyDecorator {
+  return applyDecorators(ApiPropertyOptional(description === undefined ? {} : { description }), IsOptional(), IsUUID());
+}
+
 /** An optional link to another row: a UUID, or null to untie it. (IsOptional lets null and absence through.) */
 export function NullableUuid(description: string): PropertyDecorator {
   return applyDecorators(ApiPropertyOptional({ type: String, format: 'uuid', nullable: true, description }), IsOptional(), IsUUID());

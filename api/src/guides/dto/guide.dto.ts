@@ -15,7 +15,7 @@ import {
   Min,
   ValidateNested,
 } from 'class-validator';
-import { NullableFootageTime, NullableUuid } from '../../common/decorators/nullable-fields.decorator';
+import { NullableFootageTime, NullableUuid, OptionalUuid } from '../../common/decorators/nullable-fields.decorator';
 import { GUIDE_MINUTES_MAX, SKILL_LEVELS, STEP_MINUTES_MAX, type SkillLevel } from '../../engine/guide-effort';
 import { CAUTION_LEVELS, SAFETY_TOPICS, type CautionLevel, type SafetyTopic } from '../../engine/safety-topics';
 
@@ -161,9 +161,7 @@ export class PublishRevisionDto {
 }
 
 export class GuideStepsQueryDto {
-  @ApiPropertyOptional({ description: 'Only steps anchored in this footage' })
-  @IsOptional()
-  @IsUUID()
+  @OptionalUuid('Only steps anchored in this footage')
   footageId?: string;
 }
 

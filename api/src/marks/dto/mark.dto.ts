@@ -1,6 +1,6 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
-import { IsIn, IsInt, IsOptional, IsString, IsUUID, Matches, Max, MaxLength, Min } from 'class-validator';
-import { NullableFootageTime, NullableUuid } from '../../common/decorators/nullable-fields.decorator';
+import { IsIn, IsInt, IsOptional, IsString, Matches, Max, MaxLength, Min } from 'class-validator';
+import { NullableFootageTime, NullableUuid, OptionalUuid } from '../../common/decorators/nullable-fields.decorator';
 import { NumberFromText } from '../../common/decorators/number-from-text.decorator';
 import { MAX_FOOTAGE_MS } from '../../common/http/limits';
 import { QUANTITIES, INSTRUMENT_KINDS, type InstrumentKind, type Quantity } from '../../measurements/entities/measurement.entity';
@@ -109,14 +109,10 @@ const READING = /^\s*-?(\d+(\.\d*)?|\.\d+)\s*$/;
  * cannot say: the subject (a part feature or an interface) and, optionally, the instrument.
  */
 export class AcceptSuggestionDto {
-  @ApiPropertyOptional({ description: 'Measurement suggestions: the part feature measured (or interfaceId)' })
-  @IsOptional()
-  @IsUUID()
+  @OptionalUuid('Measurement suggestions: the part feature measured (or interfaceId)')
   featureId?: string;
 
-  @ApiPropertyOptional({ description: 'Measurement suggestions: the interface measured (or featureId)' })
-  @IsOptional()
-  @IsUUID()
+  @OptionalUuid('Measurement suggestions: the interface measured (or featureId)')
   interfaceId?: string;
 
   @ApiPropertyOptional({ enum: QUANTITIES, default: 'other' })

@@ -6,12 +6,12 @@ import {
   IsNumber,
   IsOptional,
   IsString,
-  IsUUID,
   Matches,
   Max,
   MaxLength,
   Min,
 } from 'class-validator';
+import { OptionalUuid } from '../../common/decorators/nullable-fields.decorator';
 import { MAX_FOOTAGE_MS } from '../../common/http/limits';
 import { LENGTH_UNITS, type LengthUnit } from '../../engine/units';
 import { INSTRUMENT_KINDS, QUANTITIES, type InstrumentKind, type Quantity } from '../entities/measurement.entity';
@@ -19,14 +19,10 @@ import { INSTRUMENT_KINDS, QUANTITIES, type InstrumentKind, type Quantity } from
 const READING = /^\s*-?(\d+(\.\d*)?|\.\d+)\s*$/;
 
 export class CreateMeasurementDto {
-  @ApiPropertyOptional({ description: 'The part feature measured (give this or interfaceId)' })
-  @IsOptional()
-  @IsUUID()
+  @OptionalUuid('The part feature measured (give this or interfaceId)')
   featureId?: string;
 
-  @ApiPropertyOptional({ description: 'The interface measured, e.g. a clearance between two parts' })
-  @IsOptional()
-  @IsUUID()
+  @OptionalUuid('The interface measured, e.g. a clearance between two parts')
   interfaceId?: string;
 
   @ApiProperty({ enum: QUANTITIES })
@@ -72,9 +68,7 @@ export class CreateMeasurementDto {
   @IsDateString()
   takenAt?: string;
 
-  @ApiPropertyOptional({ description: 'The footage that shows the reading' })
-  @IsOptional()
-  @IsUUID()
+  @OptionalUuid('The footage that shows the reading')
   footageId?: string;
 
   @ApiPropertyOptional({ example: 95000, description: 'Time in that footage, ms' })
@@ -92,14 +86,10 @@ export class CreateMeasurementDto {
 }
 
 export class ListMeasurementsQueryDto {
-  @ApiPropertyOptional()
-  @IsOptional()
-  @IsUUID()
+  @OptionalUuid()
   featureId?: string;
 
-  @ApiPropertyOptional()
-  @IsOptional()
-  @IsUUID()
+  @OptionalUuid()
   interfaceId?: string;
 }
 
