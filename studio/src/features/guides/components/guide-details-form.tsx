@@ -12,6 +12,7 @@ import { RichTextField } from './rich-text-field';
 import { FormProblems } from '@/components/form-problems';
 import { formatMinutes, GUIDE_MINUTES_MAX, SKILL_LEVELS, SKILL_LEVEL_WORDS } from '@/lib/guide-effort';
 import { checkMinutes, minutesFrom } from './effort-fields';
+import { useWorkshopReadOnly } from '@/lib/workshop-access';
 
 const FIELD_LABELS: Record<keyof GuideInput, string> = {
   title: 'Title',
@@ -69,6 +70,8 @@ const checkItems = (what: string) => (items: string[]) => {
 /** The guide's details: title, summary, its main footage and assembly, safety topics, tools and consumables. */
 export function GuideDetailsForm({ workshopId, guide }: { workshopId: string; guide: Guide }) {
   const update = useUpdateGuide(workshopId, guide.id);
+  // Site admins (not members) and disabled workshops read the guide without the controls the API would refuse.
+  const readOnly = useWorkshopReadOnly();
   const footage = useQuery(guideQueries.footageChoices(workshopId, guide.buildId));
   const assemblies = useQuery(guideQueries.assemblyChoices(workshopId, guide.buildId));
   const [general, setGeneral] = useState<string[]>([]);
@@ -129,6 +132,8 @@ export function GuideDetailsForm({ workshopId, guide }: { workshopId: string; gu
   return (
     <Paper withBorder p="md">
       <form onSubmit={form.onSubmit(handleSubmit)} aria-label="Guide details" noValidate>
+        {/* Read-only: the fields show the guide as it is, disabled, with no Save. */}
+        <fieldset disabled={readOnly} style={{ border: 0, padding: 0, margin: 0, minWidth: 0 }}>
         <Stack gap="md">
           <Group justify="space-between">
             <Title order={3} fz="lg">
@@ -239,6 +244,7 @@ export function GuideDetailsForm({ workshopId, guide }: { workshopId: string; gu
             clearable
             {...form.getInputProps('consumables')}
           />
+          {!readOnly && (
           <Group justify="flex-end" gap="xs">
             <Button variant="default" disabled={!unsaved} onClick={() => form.setValues(valuesOf(guide))}>
               Undo changes
@@ -247,7 +253,9 @@ export function GuideDetailsForm({ workshopId, guide }: { workshopId: string; gu
               Save details
             </Button>
           </Group>
+          )}
         </Stack>
+        </fieldset>
       </form>
     </Paper>
   );

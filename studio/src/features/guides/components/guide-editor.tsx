@@ -11,12 +11,15 @@ import { GuideDetailsForm } from './guide-details-form';
 import { GuideStatusBadges } from './guide-status';
 import { PublishPanel } from './publish-panel';
 import { StepsSection } from './steps-section';
+import { useWorkshopReadOnly } from '@/lib/workshop-access';
 
 /** The creator's guide editor: details, steps anchored in the main footage, and publishing. */
 export function GuideEditor({ workshopId, guideId }: { workshopId: string; guideId: string }) {
   const guide = useQuery(guideQueries.detail(workshopId, guideId));
   const remove = useDeleteGuide(workshopId, guideId);
   const navigate = useNavigate();
+  // Site admins (not members) and disabled workshops read the guide without the controls the API would refuse.
+  const readOnly = useWorkshopReadOnly();
 
   if (guide.isPending) return <Skeleton height={420} />;
   if (guide.isError) {
@@ -59,6 +62,7 @@ export function GuideEditor({ workshopId, guideId }: { workshopId: string; guide
           </div>
           <Group gap="sm">
             <GuideStatusBadges status={item.status} hasUnpublishedChanges={item.hasUnpublishedChanges} />
+            {!readOnly && (
             <ConfirmButton
               variant="subtle"
               color="red"
@@ -70,6 +74,7 @@ export function GuideEditor({ workshopId, guideId }: { workshopId: string; guide
             >
               Delete guide
             </ConfirmButton>
+            )}
           </Group>
         </Group>
       </Stack>

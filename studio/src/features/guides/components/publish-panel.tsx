@@ -10,6 +10,7 @@ import { guideQueries } from '../api/queries';
 import type { Guide } from '../api/types';
 import { describeStatus, GuideStatusBadges } from './guide-status';
 import { formatDateTime } from '@/lib/dates';
+import { useWorkshopReadOnly } from '@/lib/workshop-access';
 
 const NOTE_MAX = 500;
 
@@ -22,6 +23,8 @@ export function PublishPanel({ workshopId, guide }: { workshopId: string; guide:
   const publish = usePublishRevision(workshopId, guide.id);
   const withdraw = useWithdrawGuide(workshopId, guide.id);
   const [note, setNote] = useState('');
+  // Site admins (not members) and disabled workshops read the publication state and revisions; no publish or withdraw.
+  const readOnly = useWorkshopReadOnly();
   const [problem, setProblem] = useState<{ note?: string; general: string[] } | null>(null);
 
   // After a withdrawal the guide may no longer carry its last revision; the revisions list still does.
@@ -80,6 +83,8 @@ export function PublishPanel({ workshopId, guide }: { workshopId: string; guide:
             Open the public page
           </Anchor>
         )}
+        {!readOnly && (
+          <>
 
         {problem && problem.general.length > 0 && (
           <Alert color="red" title="Not published" data-testid="publish-error">
@@ -130,6 +135,8 @@ export function PublishPanel({ workshopId, guide }: { workshopId: string; guide:
           <Text size="xs" c="dimmed">
             Nothing has changed since revision {lastRevision?.number}.
           </Text>
+        )}
+          </>
         )}
 
         <Stack gap={4} mt="xs">

@@ -8,6 +8,7 @@ import { CautionNote } from './caution-note';
 import { MARK_KIND_NAMES } from './guide-labels';
 import { formatClock } from '@/lib/clock';
 import { StepMinutes } from '@/components/guide-effort';
+import { useWorkshopReadOnly } from '@/lib/workshop-access';
 
 export interface StepListProps {
   workshopId: string;
@@ -39,6 +40,8 @@ export function moveStep(stepIds: string[], stepId: string, direction: Direction
 export function StepList({ workshopId, guideId, steps, mainFootageId, onSeek, onEdit, editingStepId, editor }: StepListProps) {
   const reorder = useReorderSteps(workshopId, guideId);
   const remove = useDeleteStep(workshopId, guideId);
+  // Site admins (not members) and disabled workshops read the guide without the controls the API would refuse.
+  const readOnly = useWorkshopReadOnly();
   const listRef = useRef<HTMLOListElement>(null);
   const [moved, setMoved] = useState<{ stepId: string; direction: Direction } | null>(null);
   const [announcement, setAnnouncement] = useState('');
@@ -125,6 +128,7 @@ export function StepList({ workshopId, guideId, steps, mainFootageId, onSeek, on
                       ))}
                     </Stack>
                   )}
+                  {!readOnly && (
                   <Group gap={6} justify="flex-end">
                     <Button
                       size="compact-sm"
@@ -162,6 +166,7 @@ export function StepList({ workshopId, guideId, steps, mainFootageId, onSeek, on
                       Delete
                     </ConfirmButton>
                   </Group>
+                  )}
                 </Stack>
               </Paper>
             )}

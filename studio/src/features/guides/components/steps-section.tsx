@@ -6,6 +6,7 @@ import type { Guide } from '../api/types';
 import { StepForm } from './step-form';
 import { StepList } from './step-list';
 import { StepPlayer, useStepPlayer } from './step-player';
+import { useWorkshopReadOnly } from '@/lib/workshop-access';
 
 /** The guide's steps beside a small player of its main footage, to find and set each step's moment. */
 export function StepsSection({ workshopId, guide }: { workshopId: string; guide: Guide }) {
@@ -15,6 +16,8 @@ export function StepsSection({ workshopId, guide }: { workshopId: string; guide:
   const playable = mainFootage?.state === 'ready';
   // 'new' while adding a step, a step's id while changing it.
   const [editing, setEditing] = useState<string | null>(null);
+  // Site admins (not members) and disabled workshops read the guide without the controls the API would refuse.
+  const readOnly = useWorkshopReadOnly();
   const editingStep = guide.steps.find((step) => step.id === editing) ?? null;
 
   const form =
@@ -51,7 +54,7 @@ export function StepsSection({ workshopId, guide }: { workshopId: string; guide:
               editingStepId={editing}
               editor={form}
             />
-            {editing === null && (
+            {editing === null && !readOnly && (
               <Group>
                 <Button onClick={() => setEditing('new')}>Add step</Button>
               </Group>
