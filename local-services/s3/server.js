@@ -71,6 +71,19 @@ server.store.putObjectMultipart = async (bucketName, uploadId, parts) => {
   return assembleParts(bucketName, uploadId, parts);
 };
 
+/**
+ * S3_FAKE_PUT_DELAY_MS (default 0) makes every whole-object PUT answer that much later: a slow store,
+ * so a fault test can catch a writer half-way through storing many objects.
+ */
+const putDelayMs = Number(process.env.S3_FAKE_PUT_DELAY_MS || 0);
+if (putDelayMs > 0) {
+  const storeObject = server.store.putObject.bind(server.store);
+  server.store.putObject = async (object) => {
+    await new Promise((resolve) => setTimeout(resolve, putDelayMs));
+    return storeObject(object);
+  };
+}
+
 /** A file's text, or null when it is not there. */
 async function readable(file) {
   try {

@@ -5,6 +5,8 @@ import {
   MAX_PEAKS,
   MAX_THUMBNAILS,
   PeakAccumulator,
+  progressEstimate,
+  renditionJobFraction,
   renditionLadder,
   samplesPerPeak,
   spriteLayout,
@@ -149,5 +151,23 @@ describe('waveform peaks', () => {
     const accumulator = new PeakAccumulator(10);
     accumulator.push(Buffer.alloc(200));
     expect(accumulator.finish()).toEqual(Array.from({ length: 10 }, () => 0));
+  });
+});
+
+describe('renditionJobFraction and progressEstimate', () => {
+  it('gives percent and a straight-line estimate of the time left', () => {
+    expect(progressEstimate(0.25, 10_000)).toEqual({ percent: 25, secondsLeft: 30 });
+    expect(progressEstimate(0, 500)).toEqual({ percent: 0, secondsLeft: null });
+    expect(progressEstimate(1.5, 9000)).toEqual({ percent: 100, secondsLeft: 0 });
+  });
+
+  it('keeps moving through packing and storing, and reaches 100 % only when storing ends', () => {
+    expect(renditionJobFraction('converting', 0)).toBe(0);
+    expect(renditionJobFraction('converting', 1)).toBeCloseTo(renditionJobFraction('packing', 0), 10);
+    expect(renditionJobFraction('packing', 1)).toBeCloseTo(renditionJobFraction('storing', 0), 10);
+    expect(renditionJobFraction('storing', 1)).toBeCloseTo(1, 10);
+    expect(renditionJobFraction('storing', 0.5)).toBeGreaterThan(renditionJobFraction('storing', 0.25));
+    // Out-of-range inputs (a frame count past the probe's estimate) stay inside their phase.
+    expect(renditionJobFraction('converting', 1.2)).toBeCloseTo(renditionJobFraction('converting', 1), 10);
   });
 });

@@ -1,7 +1,7 @@
 import { Inject, Injectable, Logger } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import { createReadStream } from 'node:fs';
-import { mkdir, mkdtemp, readdir, rm, writeFile } from 'node:fs/promises';
+import { mkdir, mkdtemp, readdir, rm, stat, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join, relative } from 'node:path';
 import { In, Repository } from 'typeorm';
@@ -9,13 +9,15 @@ import {
   constantFrameRate,
   displaySize,
   PeakAccumulator,
+  progressEstimate,
+  renditionJobFraction,
   renditionLadder,
   samplesPerPeak,
   spriteLayout,
   WAVEFORM_SAMPLE_RATE,
 } from '../engine/media-renditions';
 import { MediaToolsService, UnreadableSourceError } from '../infra/media/media-tools.service';
-import { progressEstimate, TRANSCODE_OUTPUTS, type TranscodePlan } from '../infra/media/transcode-command';
+import { TRANSCODE_OUTPUTS, type TranscodePlan } from '../infra/media/transcode-command';
 import { StorageService } from '../infra/storage/storage.service';
 import { Footage, type RenditionsMedia } from './entities/footage.entity';
 import { WorkshopMediaSettings } from './entities/workshop-media-settings.entity';
@@ -88,9 +90,19 @@ export class FootageRenditionsService {
     // Whatever an interrupted attempt stored goes first, so nothing is ever doubled.
     await this.storage.deletePrefix(prefix);
     const workDir = await mkdtemp(join(tmpdir(), 'fitwright-transcode-'));
+    const progress = new ProgressWrites((percent, secondsLeft) =>
+      this.footage
+        .update(
+          { id: footage.id, renditionsState: 'processing' },
+          // updated_at stays: progress is the studio's alone, and every public guide tag reads footage.updated_at.
+          { renditionsPercent: percent, renditionsSecondsLeft: secondsLeft, renditionsProgressAt: new Date(), updatedAt: () => 'updated_at' },
+        )
+        .catch((error: unknown) => this.logger.warn(`progress of ${footage.id} not stored: ${String(error)}`)),
+    );
     try {
-      const media = await this.makeRenditions(footage, workDir);
-      await this.storeFolder(workDir, prefix);
+      const media = await this.makeRenditions(footage, workDir, progress);
+      await this.storeFolder(workDir, prefix, (share) => progress.report(renditionJobFraction('storing', share)));
+      await progress.settled();
       // Ready and "original dropped" are one change, so no reader sees ready footage still claiming its original.
       const dropOriginal = !(await this.keepOriginals(footage.workshopId));
       const finished = await this.footage.update(
@@ -139,7 +151,7 @@ export class FootageRenditionsService {
     return keepOriginals;
   }
 
-  private async makeRenditions(footage: Footage, workDir: string): Promise<RenditionsMedia> {
+  private async makeRenditions(footage: Footage, workDir: string, progress: ProgressWrites): Promise<RenditionsMedia> {
     const input = await this.storage.internalGetUrl(footage.objectKey, TOOL_URL_TTL_SECONDS);
     const info = await this.media.probe(input, extensionOf(footage.objectKey));
     const display = displaySize(info.width, info.height, info.rotation);
@@ -153,29 +165,11 @@ export class FootageRenditionsService {
     const plan: TranscodePlan = { input, outputDir: workDir, renditions, frameRate, hasAudio, durationMs: info.durationMs, sprites };
 
     const expectedFrames = Math.max(1, Math.round((info.durationMs / 1000) * frameRate.value));
-    const startedAt = Date.now();
-    let lastWrite = 0;
     let framesWritten = 0;
-    let pendingWrite: Promise<unknown> = Promise.resolve();
     await this.media.transcode(plan, ({ frames }) => {
       framesWritten = frames;
-      const now = Date.now();
-      if (now - lastWrite < PROGRESS_WRITE_MS) return;
-      lastWrite = now;
-      const estimate = progressEstimate(frames, expectedFrames, now - startedAt);
-      // Never 100 before the files are stored.
-      const percent = Math.min(99, estimate.percent);
-      pendingWrite = pendingWrite.then(() =>
-        this.footage
-          .update(
-            { id: footage.id, renditionsState: 'processing' },
-            // updated_at stays: progress is the studio's alone, and every public guide tag reads footage.updated_at.
-            { renditionsPercent: percent, renditionsSecondsLeft: estimate.secondsLeft, renditionsProgressAt: new Date(), updatedAt: () => 'updated_at' },
-          )
-          .catch((error: unknown) => this.logger.warn(`progress of ${footage.id} not stored: ${String(error)}`)),
-      );
+      progress.report(renditionJobFraction('converting', frames / expectedFrames));
     });
-    await pendingWrite;
     if (framesWritten < expectedFrames * MIN_FRAME_SHARE) {
       const readSeconds = (framesWritten / frameRate.value).toFixed(1);
       throw new UnreadableSourceError(
@@ -183,12 +177,16 @@ export class FootageRenditionsService {
       );
     }
 
+    progress.report(renditionJobFraction('packing', 0), true);
     await this.media.tileSprites(workDir, sprites);
     for (const file of await readdir(workDir)) if (file.startsWith('thumb-')) await rm(join(workDir, file));
+    progress.report(renditionJobFraction('packing', 1 / 3));
     await this.media.remuxFaststart(join(workDir, RENDITION_FILES.variantPlaylist(0)), join(workDir, RENDITION_FILES.download));
+    progress.report(renditionJobFraction('packing', 2 / 3));
     const waveform = await this.waveform(join(workDir, TRANSCODE_OUTPUTS.pcm), info.durationMs, hasAudio);
     await writeFile(join(workDir, RENDITION_FILES.waveform), JSON.stringify(waveform));
     await rm(join(workDir, TRANSCODE_OUTPUTS.pcm), { force: true });
+    progress.report(renditionJobFraction('storing', 0), true);
 
     return {
       variants: renditions.map((size) => ({
@@ -215,16 +213,35 @@ export class FootageRenditionsService {
     };
   }
 
-  /** Uploads every file under `folder`, a few at a time; playlists last so no playlist names a missing segment. */
-  private async storeFolder(folder: string, prefix: string): Promise<void> {
-    const files = (await readdir(folder, { recursive: true, withFileTypes: true }))
-      .filter((entry) => entry.isFile())
-      .map((entry) => relative(folder, join(entry.parentPath, entry.name)));
-    const playlists = files.filter((file) => file.endsWith('.m3u8'));
-    const others = files.filter((file) => !file.endsWith('.m3u8'));
-    const put = (file: string) => this.storage.putFile(`${prefix}${file}`, join(folder, file), CONTENT_TYPES[file.split('.').pop() ?? ''] ?? 'application/octet-stream');
-    await runLimited(others, 4, put);
-    await runLimited(playlists, 4, put);
+  /**
+   * Uploads every file under `folder`, a few at a time; playlists last so no playlist names a missing
+   * segment. Reports the share of bytes stored as each file lands.
+   */
+  private async storeFolder(folder: string, prefix: string, onStored: (share: number) => void): Promise<void> {
+    const entries = (await readdir(folder, { recursive: true, withFileTypes: true })).filter((entry) => entry.isFile());
+    const files = await Promise.all(
+      entries.map(async (entry) => {
+        const path = join(entry.parentPath, entry.name);
+        return { name: relative(folder, path), path, bytes: (await stat(path)).size };
+      }),
+    );
+    const totalBytes = Math.max(1, files.reduce((sum, file) => sum + file.bytes, 0));
+    let storedBytes = 0;
+    const put = async (file: (typeof files)[number]) => {
+      await this.storage.putFile(`${prefix}${file.name}`, file.path, CONTENT_TYPES[file.name.split('.').pop() ?? ''] ?? 'application/octet-stream');
+      storedBytes += file.bytes;
+      onStored(storedBytes / totalBytes);
+    };
+    await runLimited(
+      files.filter((file) => !file.name.endsWith('.m3u8')),
+      4,
+      put,
+    );
+    await runLimited(
+      files.filter((file) => file.name.endsWith('.m3u8')),
+      4,
+      put,
+    );
   }
 
   /** After the row says the original is gone: a failed delete leaves an object no row points to, never a row pointing at nothing. */
@@ -247,4 +264,28 @@ async function runLimited<T>(items: T[], limit: number, work: (item: T) => Promi
     }
   });
   await Promise.all(workers);
+}
+
+/** Stores a job's progress at most every PROGRESS_WRITE_MS (or at once when forced), one write at a time, in order. */
+class ProgressWrites {
+  private readonly startedAt = Date.now();
+  private lastWrite = 0;
+  private chain: Promise<unknown> = Promise.resolve();
+
+  constructor(private readonly store: (percent: number, secondsLeft: number | null) => Promise<unknown>) {}
+
+  report(fraction: number, force = false): void {
+    const now = Date.now();
+    if (!force && now - this.lastWrite < PROGRESS_WRITE_MS) return;
+    this.lastWrite = now;
+    const estimate = progressEstimate(fraction, now - this.startedAt);
+    // Never 100 before the row says ready.
+    const percent = Math.min(99.9, estimate.percent);
+    this.chain = this.chain.then(() => this.store(percent, estimate.secondsLeft));
+  }
+
+  /** Resolves when every reported progress is stored (a failed write is logged by `store`, not thrown). */
+  settled(): Promise<unknown> {
+    return this.chain;
+  }
 }

@@ -231,8 +231,14 @@ export class FaultRedis {
 
 /** The S3 and mail fakes of the faults profile (they are not faulted here; they must simply be ours). */
 export class FaultFakes {
-  private readonly s3 = new Service('s3-fake', 'node', [join(ROOT, 'local-services/s3/server.js')]);
+  private readonly s3: Service;
   private readonly mail = new Service('mail-fake', 'node', [join(ROOT, 'local-services/mail/server.js')]);
+
+  /** `s3PutDelayMs`: the S3 fake stores each whole object that much later (a slow store; see local-services/s3/server.js). */
+  constructor(options: { s3PutDelayMs?: number } = {}) {
+    const env = options.s3PutDelayMs ? { ...process.env, S3_FAKE_PUT_DELAY_MS: String(options.s3PutDelayMs) } : undefined;
+    this.s3 = new Service('s3-fake', 'node', [join(ROOT, 'local-services/s3/server.js')], env ? { env } : {});
+  }
 
   async start(): Promise<void> {
     for (const [service, port] of [[this.s3, faultsEnv.s3Port], [this.mail, faultsEnv.mailWebPort]] as const) {
@@ -363,7 +369,11 @@ export async function signUp(email: string, password = 'correct horse battery st
 export class FaultStack {
   readonly mariadb = new FaultMariaDb();
   readonly redis = new FaultRedis();
-  readonly fakes = new FaultFakes();
+  readonly fakes: FaultFakes;
+
+  constructor(fakes: ConstructorParameters<typeof FaultFakes>[0] = {}) {
+    this.fakes = new FaultFakes(fakes);
+  }
 
   async start(): Promise<void> {
     mkdirSync(faultsEnv.logs, { recursive: true });

@@ -1,5 +1,5 @@
 import { constantFrameRate, renditionLadder, spriteLayout } from '../../engine/media-renditions';
-import { ProgressReader, progressEstimate, type TranscodeProgress, transcodeArguments } from './transcode-command';
+import { ProgressReader, type TranscodeProgress, transcodeArguments } from './transcode-command';
 
 describe('ProgressReader', () => {
   it('reports each -progress block with the frames of the first output, across split chunks (ffmpeg 5.1 key=value format)', () => {
@@ -12,14 +12,6 @@ describe('ProgressReader', () => {
       { frames: 12, done: false },
       { frames: 225, done: true },
     ]);
-  });
-});
-
-describe('progressEstimate', () => {
-  it('gives percent and a linear estimate of the time left', () => {
-    expect(progressEstimate(250, 1000, 10_000)).toEqual({ percent: 25, secondsLeft: 30 });
-    expect(progressEstimate(0, 1000, 500)).toEqual({ percent: 0, secondsLeft: null });
-    expect(progressEstimate(2000, 1000, 9000)).toEqual({ percent: 100, secondsLeft: 0 });
   });
 });
 

@@ -141,16 +141,3 @@ export class ProgressReader {
     }
   }
 }
-
-/** Percent done and an estimate of the seconds left, from frames written and the time spent so far. */
-export function progressEstimate(
-  frames: number,
-  totalFrames: number,
-  elapsedMs: number,
-): { percent: number; secondsLeft: number | null } {
-  if (totalFrames <= 0) return { percent: 0, secondsLeft: null };
-  const fraction = Math.min(1, Math.max(0, frames / totalFrames));
-  const percent = Math.round(fraction * 1000) / 10;
-  if (fraction <= 0.01 || elapsedMs <= 0) return { percent, secondsLeft: null };
-  return { percent, secondsLeft: Math.max(0, Math.round(((elapsedMs / fraction) * (1 - fraction)) / 1000)) };
-}
