@@ -43,7 +43,8 @@ describe('GET /api/health (real MariaDB, Redis, S3 fake, mail fake)', () => {
       }
       await app.close();
     }
-  });
+    // Three full start-ups and closes: on a busy 2-core box one start-up alone can take 2–4 s.
+  }, 60_000);
 
   it('reports storage down when the bucket does not exist', async () => {
     app = await createTestApp({ S3_BUCKET: 'no-such-bucket' });
