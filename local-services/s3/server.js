@@ -1,6 +1,19 @@
 #!/usr/bin/env node
 // Local S3 stand-in for development and tests. Real S3 replaces it by configuration alone.
 'use strict';
+const crypto = require('node:crypto');
+
+// s3rver encrypts list continuation tokens with DES, which OpenSSL 3 no longer offers: every listing of more
+// than 1,000 objects (a long footage's segments, a backup of the bucket) failed with InternalError. The token
+// is opaque to clients, so AES-128 with the same key and IV (each doubled to 16 bytes) stands in both ways.
+for (const name of ['createCipheriv', 'createDecipheriv']) {
+  const original = crypto[name];
+  crypto[name] = (algorithm, key, iv, options) =>
+    algorithm === 'des'
+      ? original('aes-128-cbc', Buffer.concat([key, key]), Buffer.concat([iv, iv]), options)
+      : original(algorithm, key, iv, options);
+}
+
 const S3rver = require('s3rver');
 const S3Error = require('s3rver/lib/models/error');
 const { mkdirSync } = require('node:fs');
