@@ -186,8 +186,10 @@ test('the creator builds an assembly: places the parts and adds three interfaces
     const form = page.getByRole('form', { name: 'New interface' });
     await segment(form, kind);
     await field(form, 'Name').fill(name);
-    await choose(form, kind === 'Length in an installed window' ? 'Length feature' : 'First feature', first);
-    if (second) await choose(form, 'Mating feature', second);
+    // Feature choices read "<part> — <feature>": pick by the feature, whichever part it belongs to.
+    const ofAnyPart = (feature) => new RegExp(` — ${feature.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}$`);
+    await choose(form, kind === 'Length in an installed window' ? 'Length feature' : 'First feature', ofAnyPart(first));
+    if (second) await choose(form, 'Mating feature', ofAnyPart(second));
     if (extra) await extra(form);
     await form.getByRole('button', { name: 'Add interface' }).click();
     await page.getByLabel(`Interface ${name}`).waitFor();
