@@ -143,6 +143,7 @@ test('on a 1440×900 desktop the whole video is on the first screen, after compa
   const context = await browser.newContext({ viewport: { width: 1440, height: 900 } });
   const page = await openGuide(context);
   const video = await page.getByTestId('guide-video').boundingBox();
+  await shot(page, '00-desktop-as-loaded');
   assert.ok(video.y >= 0 && video.y + video.height <= 900, `video from ${video.y} to ${video.y + video.height} px`);
   assert.ok(await cautionsBeforeSteps(page), 'every caution comes before step 1');
 

@@ -151,19 +151,15 @@ export function guideIndexShell(items: GuideIndexShellItem[]): PageShell {
 export function withPageShell(indexHtml: string, shell: PageShell): string {
   const root = '<div id="root"></div>';
   if (!indexHtml.includes(root)) return indexHtml;
-  // The studio's stylesheets move after the shell and load as print sheets, which hold back no paint (Chromium
-  // waits for every parser-inserted stylesheet, head or body, before its first paint): the shell, styled inline,
-  // paints as soon as the page arrives, not after ~35 KB of CSS. The studio turns them on as it starts
-  // (studio/src/lib/page-shell.ts), long before it shows itself.
-  const stylesheets: string[] = [];
-  const head = indexHtml.replace(/\s*<link rel="stylesheet"[^>]*>/g, (link) => {
-    stylesheets.push(link.trim().replace('<link rel="stylesheet"', '<link rel="stylesheet" media="print" data-shell-deferred=""'));
-    return '';
-  });
-  return head
+  // The studio's stylesheets load as print sheets, which hold back no first paint: the shell, styled inline, paints
+  // as soon as the page arrives, not after ~35 KB of CSS. The studio turns them on as it starts
+  // (studio/src/lib/page-shell.ts), long before it shows itself. They stay in <head>: the theme's variables are
+  // drawn by React inside #root, and a stylesheet after #root would put the library's defaults back over them.
+  return indexHtml
+    .replace(/<link rel="stylesheet"/g, '<link rel="stylesheet" media="print" data-shell-deferred=""')
     .replace(/<title>[^<]*<\/title>/, () => `<title>${escapeHtml(shell.title)}</title>`)
     .replace(/<meta name="description" content="[^"]*"\s*\/?>/, () => `<meta name="description" content="${escapeHtml(shell.description)}" />`)
-    .replace(root, () => `<div id="root">${shell.body}</div>${stylesheets.join('')}`);
+    .replace(root, () => `<div id="root">${shell.body}</div>`);
 }
 
 /** The public page a studio path names, if it has a shell: the guide index (without a search) or one guide. */

@@ -4,11 +4,12 @@ import { holdPageShell, releasePageShell } from './page-shell';
 describe('page shell', () => {
   afterEach(() => {
     document.body.innerHTML = '';
+    document.head.innerHTML = '';
   });
 
   it('keeps the server’s shell in view, outside the root React clears, until released', () => {
-    document.body.innerHTML =
-      '<div id="root"><div data-page-shell=""><h1>Fitting the coupler</h1></div></div><link rel="stylesheet" media="print" data-shell-deferred="" href="/a.css">';
+    document.head.innerHTML = '<link rel="stylesheet" media="print" data-shell-deferred="" href="/a.css">';
+    document.body.innerHTML = '<div id="root"><div data-page-shell=""><h1>Fitting the coupler</h1></div></div>';
     const root = document.getElementById('root')!;
     holdPageShell(root);
     expect(document.querySelector('link')?.media).toBe('all');

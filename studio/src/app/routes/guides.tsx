@@ -3,7 +3,7 @@ import { ReportFitButton } from '@/features/fit-reports/components/report-fit-bu
 import { FollowControl } from '@/features/follows/components/follow-control';
 import { FollowAlongView, type FollowSlot, type ReportSlot } from '@/features/guide-view/components/follow-along-view';
 import { GuideIndex } from '@/features/guide-view/components/guide-index';
-import { GuideRevisionsBar } from '@/features/guide-revisions/components/read-notice';
+import { UpdatedSinceReadNotice } from '@/features/guide-revisions/components/read-notice';
 
 /** Published guides, for anyone: the index with its search. */
 export function GuideIndexRoute() {
@@ -25,8 +25,8 @@ export function PublicGuideRoute() {
   const startAtMs = Number.isFinite(seconds) && seconds > 0 ? Math.round(seconds * 1000) : undefined;
   return (
     <>
-      {/* Revision history, and "updated since you last read" from the reader's own record, never the shared answer. */}
-      <GuideRevisionsBar key={`${workshopSlug}/${guideSlug}`} workshopSlug={workshopSlug} guideSlug={guideSlug} />
+      {/* "Updated since you last read", from the reader’s own record, never the shared answer. */}
+      <UpdatedSinceReadNotice key={`${workshopSlug}/${guideSlug}`} workshopSlug={workshopSlug} guideSlug={guideSlug} />
       <FollowAlongView
         key={`${workshopSlug}/${guideSlug}@${startAtMs ?? 0}`}
         workshopSlug={workshopSlug}

@@ -1,4 +1,4 @@
-import { Alert, Anchor, Group, Text } from '@mantine/core';
+import { Alert, Anchor, Text } from '@mantine/core';
 import { useQuery } from '@tanstack/react-query';
 import { useEffect, useRef } from 'react';
 import { Link } from 'react-router-dom';
@@ -7,11 +7,12 @@ import { useSession } from '@/lib/session';
 import { guideRevisionQueries, useRecordReading } from '../api/queries';
 
 /**
- * Above a published guide: its revision history, and for a signed-in reader who opened an older revision
- * before, "Updated since you last read" with a comparison from that revision to this one. The visit is recorded
- * after the first answer, so the notice keeps saying what it said while the page is open.
+ * Above a published guide, for a signed-in reader who opened an older revision before: "Updated since you last
+ * read" with a comparison from that revision to this one (the revision history is linked from the guide's
+ * revision line). The visit is recorded after the first answer, so the notice keeps saying what it said while the
+ * page is open.
  */
-export function GuideRevisionsBar({ workshopSlug, guideSlug }: { workshopSlug: string; guideSlug: string }) {
+export function UpdatedSinceReadNotice({ workshopSlug, guideSlug }: { workshopSlug: string; guideSlug: string }) {
   const { user } = useSession();
   const reading = useQuery({ ...guideRevisionQueries.reading(workshopSlug, guideSlug), enabled: !!user });
   const record = useRecordReading(workshopSlug, guideSlug);
@@ -26,21 +27,15 @@ export function GuideRevisionsBar({ workshopSlug, guideSlug }: { workshopSlug: s
 
   const data = reading.data;
   const updated = data && data.lastReadRevision !== null && data.lastReadRevision < data.currentRevision;
+  if (!updated || data.lastReadRevision === null) return null;
   return (
-    <Group gap="sm" mb="sm" className="no-print" data-testid="guide-revisions-bar">
-      {updated && data.lastReadRevision !== null && (
-        <Alert color="blue" title="Updated since you last read" data-testid="updated-since-read" style={{ flex: '1 1 100%' }}>
-          <Text size="sm">
-            You last opened revision {data.lastReadRevision}; this is revision {data.currentRevision}.{' '}
-            <Anchor component={Link} to={paths.guideCompare.to(workshopSlug, guideSlug, data.lastReadRevision, data.currentRevision)}>
-              Compare what changed
-            </Anchor>
-          </Text>
-        </Alert>
-      )}
-      <Anchor component={Link} to={paths.guideRevisions.to(workshopSlug, guideSlug)} size="sm">
-        Revision history
-      </Anchor>
-    </Group>
+    <Alert color="blue" title="Updated since you last read" mb="sm" className="no-print" data-testid="updated-since-read">
+      <Text size="sm">
+        You last opened revision {data.lastReadRevision}; this is revision {data.currentRevision}.{' '}
+        <Anchor component={Link} to={paths.guideCompare.to(workshopSlug, guideSlug, data.lastReadRevision, data.currentRevision)}>
+          Compare what changed
+        </Anchor>
+      </Text>
+    </Alert>
   );
 }

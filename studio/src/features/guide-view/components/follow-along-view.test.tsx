@@ -48,7 +48,12 @@ describe('FollowAlongView', () => {
     const requests = stubApi(guideRoutes(testGuide()));
     renderGuide();
     expect(await screen.findByRole('heading', { level: 1, name: 'Fitting the motor-to-gearbox coupler' })).toBeTruthy();
-    expect(screen.getByTestId('guide-revision').textContent).toBe(`Revision 3 · published ${formatDate('2026-03-02T10:00:00.000Z')} · Longer driveshaft`);
+    expect(screen.getByTestId('guide-revision').textContent).toBe(
+      `Revision 3 · published ${formatDate('2026-03-02T10:00:00.000Z')} · Longer driveshaft · Revision history`,
+    );
+    expect(within(screen.getByTestId('guide-revision')).getByRole('link', { name: 'Revision history' }).getAttribute('href')).toBe(
+      '/guides/harrow-lane-garage/motor-to-gearbox-coupler/revisions',
+    );
     expect(screen.getAllByTestId('caution')[0].getAttribute('data-level')).toBe('DANGER');
     const video = screen.getByTestId('guide-video') as HTMLVideoElement;
     expect(video.getAttribute('src')).toBe('/api/guides/harrow-lane-garage/motor-to-gearbox-coupler/video');

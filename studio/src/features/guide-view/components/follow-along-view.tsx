@@ -89,6 +89,12 @@ export function GuideDocument({
             <Text size="sm" data-testid="guide-revision">
               Revision {revision.number} · published {formatDate(revision.publishedAt)}
               {revision.note ? ` · ${revision.note}` : ''}
+              <span className={classes.noPrint}>
+                {' · '}
+                <Anchor component={Link} to={paths.guideRevisions.to(workshop.slug, guide.slug)} size="sm">
+                  Revision history
+                </Anchor>
+              </span>
             </Text>
             <GuideEffort skillLevel={guide.skillLevel} estimatedMinutes={guide.estimatedMinutes} steps={data.steps} />
           </div>
