@@ -178,6 +178,21 @@ run_migrations() {
   (cd "$ROOT/api" && node dist/database/run-migrations.js)
 }
 
+# npm start and npm run start:cluster: install what is missing, start the dev profile's services (stopped when
+# the script exits), build, migrate and load the invented demo scenario (idempotent).
+prepare_dev_app() {
+  fw_profile_env dev
+  # espeak-ng narrates the generated demo footage (without it the demo video is silent).
+  ensure_debian_packages mariadbd=mariadb-server redis-server=redis-server ffmpeg=ffmpeg ffprobe=ffmpeg espeak-ng=espeak-ng
+  ensure_npm_dependencies
+  trap 'stop_services' EXIT
+  trap 'say "stopping"; exit 130' INT TERM
+  start_services
+  build_all
+  run_migrations
+  (cd "$ROOT/api" && node dist/database/demo/load-demo.js)
+}
+
 http_ok() { node -e 'fetch(process.argv[1]).then((r) => process.exit(r.ok ? 0 : 1), () => process.exit(1))' "$1"; }
 
 # For scripts that run something on the test profile: takes the lock npm test takes (so no run resets

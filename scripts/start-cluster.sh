@@ -3,16 +3,7 @@
 # (PORT+1, PORT+2), one queue-only worker and a round-robin proxy on PORT (3000) in front of them, all on the same
 # MariaDB, Redis and storage (scripts/cluster.mjs). Ctrl-C stops everything started here.
 source "$(dirname "$0")/lib.sh"
-fw_profile_env dev
-
-ensure_debian_packages mariadbd=mariadb-server redis-server=redis-server ffmpeg=ffmpeg ffprobe=ffmpeg espeak-ng=espeak-ng
-ensure_npm_dependencies
-trap 'stop_services' EXIT
-trap 'say "stopping"; exit 130' INT TERM
-start_services
-build_all
-run_migrations
-(cd "$ROOT/api" && node dist/database/demo/load-demo.js)
+prepare_dev_app
 
 say "Fitwright (cluster): http://localhost:$PORT  (API processes on $((PORT + 1)) and $((PORT + 2)), one worker)"
 say "mail inbox:     $MAIL_INBOX_URL"

@@ -1,13 +1,10 @@
-import { Alert, Button, Group, Skeleton, Stack, Table, Text, Title } from '@mantine/core';
+import { Alert, Skeleton, Stack, Table, Text, Title } from '@mantine/core';
 import { useQuery } from '@tanstack/react-query';
+import { countOf, FailedFitNewsAlert } from '@/components/failed-fit-news';
 import { formatDateTime } from '@/lib/dates';
 import { buildFitNewsQuery, useRetryBuildFitNews, type BuildFitNewsRecord } from '../api/fit-news';
 
 const CHANGE_LABELS: Record<string, string> = { confirmed: 'Confirmed', no_fit: 'No fit' };
-
-function count(n: number, one: string, many = `${one}s`): string {
-  return `${n} ${n === 1 ? one : many}`;
-}
 
 function when(first: string | null, last: string | null): string {
   if (!first) return '—';
@@ -16,7 +13,7 @@ function when(first: string | null, last: string | null): string {
 
 /** The build's totals in one sentence: people told, and what is still pending, failed, in digests or uncertain. */
 function summary(record: BuildFitNewsRecord): string {
-  const parts = [`${count(record.followersTold, 'follower')} told about changes of ${count(record.checks.length, 'check')} (${count(record.told, 'mail')})`];
+  const parts = [`${countOf(record.followersTold, 'follower')} told about changes of ${countOf(record.checks.length, 'check')} (${countOf(record.told, 'mail')})`];
   if (record.pending) parts.push(`${record.pending} pending`);
   if (record.failed) parts.push(`${record.failed} failed`);
   if (record.inDigests) parts.push(`${record.inDigests} in digests`);
@@ -54,27 +51,14 @@ export function BuildFitNews({ workshopId, buildId, canRetry }: { workshopId: st
             {summary(record.data)}
             {record.data.firstSentAt && <> · sent {when(record.data.firstSentAt, record.data.lastSentAt)}</>}
           </Text>
-          {(record.data.failed > 0 || retry.isError) && (
-            <Alert color="yellow" role="status" title={`${count(record.data.failed, 'fit-news mail')} of this build failed`} data-testid="build-fit-news-failed">
-              <Group gap="sm" justify="space-between" align="center">
-                <Text size="sm">
-                  {canRetry
-                    ? 'The followers’ mail servers refused them or we gave up trying. Send them again once the cause is mended; paused addresses are left out.'
-                    : 'The followers’ mail servers refused them or we gave up trying. A workshop owner can send them again.'}
-                </Text>
-                {canRetry && (
-                  <Button size="xs" loading={retry.isPending} onClick={() => retry.mutate()}>
-                    Retry failed
-                  </Button>
-                )}
-              </Group>
-              {retry.isError && (
-                <Text size="sm" c="red" role="alert" mt="xs">
-                  {retry.error.message}
-                </Text>
-              )}
-            </Alert>
-          )}
+          <FailedFitNewsAlert
+            failed={record.data.failed}
+            subject="this build"
+            canRetry={canRetry}
+            retry={retry}
+            retryNote="paused addresses are left out"
+            data-testid="build-fit-news-failed"
+          />
           <Table striped withTableBorder aria-label="Fit news per check">
             <Table.Thead>
               <Table.Tr>

@@ -1,14 +1,11 @@
-import { Alert, Button, Group, Text } from '@mantine/core';
+import { Text } from '@mantine/core';
+import { countOf, FailedFitNewsAlert } from '@/components/failed-fit-news';
 import { formatDateTime } from '@/lib/dates';
 import { useRetryFailedFitNews, type ChangeDeliveryRecord } from '../api/fit-news-record';
 
-function count(n: number, one: string, many = `${one}s`): string {
-  return `${n} ${n === 1 ? one : many}`;
-}
-
 /** One news change's delivery in a line: who was told and when, what is pending, failed or waiting in digests. */
 export function FitNewsDeliveryLine({ change }: { change: ChangeDeliveryRecord }) {
-  const parts = [`${count(change.told, 'follower')} told`];
+  const parts = [`${countOf(change.told, 'follower')} told`];
   if (change.firstSentAt) {
     parts[0] +=
       change.lastSentAt && change.lastSentAt !== change.firstSentAt
@@ -47,26 +44,5 @@ export function FailedFitNews({
 }) {
   const retry = useRetryFailedFitNews(workshopId, checkId);
   const failed = record.reduce((sum, change) => sum + change.failed, 0);
-  if (failed === 0 && !retry.isError) return null;
-  return (
-    <Alert color="yellow" role="status" title={`${count(failed, 'fit-news mail')} of this check failed`} mb="md" data-testid="fit-news-failed">
-      <Group gap="sm" justify="space-between" align="center">
-        <Text size="sm">
-          {canRetry
-            ? 'The followers’ mail servers refused them or we gave up trying. Send them again once the cause is mended.'
-            : 'The followers’ mail servers refused them or we gave up trying. A workshop owner can send them again.'}
-        </Text>
-        {canRetry && (
-          <Button size="xs" loading={retry.isPending} onClick={() => retry.mutate()}>
-            Retry failed
-          </Button>
-        )}
-      </Group>
-      {retry.isError && (
-        <Text size="sm" c="red" role="alert" mt="xs">
-          {retry.error.message}
-        </Text>
-      )}
-    </Alert>
-  );
+  return <FailedFitNewsAlert failed={failed} subject="this check" canRetry={canRetry} retry={retry} mb="md" data-testid="fit-news-failed" />;
 }

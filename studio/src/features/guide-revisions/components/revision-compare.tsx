@@ -1,5 +1,6 @@
 import { Alert, Anchor, Badge, Breadcrumbs, Card, Group, List, NativeSelect, Skeleton, Stack, Table, Text, Title } from '@mantine/core';
 import { useQuery } from '@tanstack/react-query';
+import type { ReactNode } from 'react';
 import { Link } from 'react-router-dom';
 import { CheckStateBadge } from '@/components/check-state';
 import { paths } from '@/config/paths';
@@ -87,99 +88,71 @@ export function DifferenceList({ diff, workshopSlug, guideSlug }: { diff: Revisi
       </Text>
       {nothing && <Text>The guide’s words and steps are the same in both revisions.</Text>}
 
-      {diff.guideChanges.length > 0 && (
-        <section aria-labelledby="guide-changes">
-          <Title order={2} size="h3" id="guide-changes">
-            About the guide
-          </Title>
-          {diff.guideChanges.map((change) => (
-            <Text key={change.field}>
-              <strong>{GUIDE_FIELD_WORDS[change.field]}: </strong>
-              <TextPieces pieces={change.pieces} />
-            </Text>
+      <DifferenceSection id="guide-changes" title="About the guide" shown={diff.guideChanges.length > 0}>
+        {diff.guideChanges.map((change) => (
+          <Text key={change.field}>
+            <strong>{GUIDE_FIELD_WORDS[change.field]}: </strong>
+            <TextPieces pieces={change.pieces} />
+          </Text>
+        ))}
+      </DifferenceSection>
+
+      <DifferenceSection id="added-steps" title={`Steps added (${diff.added.length})`} shown={diff.added.length > 0}>
+        <List>
+          {diff.added.map((step) => (
+            <List.Item key={step.id}>
+              <Badge variant="light" color="green" mr="xs">
+                New
+              </Badge>
+              Step {step.number}: {step.title}
+            </List.Item>
           ))}
-        </section>
-      )}
+        </List>
+      </DifferenceSection>
 
-      {diff.added.length > 0 && (
-        <section aria-labelledby="added-steps">
-          <Title order={2} size="h3" id="added-steps">
-            Steps added ({diff.added.length})
-          </Title>
-          <List>
-            {diff.added.map((step) => (
-              <List.Item key={step.id}>
-                <Badge variant="light" color="green" mr="xs">
-                  New
-                </Badge>
-                Step {step.number}: {step.title}
-              </List.Item>
-            ))}
-          </List>
-        </section>
-      )}
+      <DifferenceSection id="removed-steps" title={`Steps removed (${diff.removed.length})`} shown={diff.removed.length > 0}>
+        <List>
+          {diff.removed.map((step) => (
+            <List.Item key={step.id}>
+              <Badge variant="light" color="red" mr="xs">
+                Gone
+              </Badge>
+              Was step {step.number}: {step.title}
+            </List.Item>
+          ))}
+        </List>
+      </DifferenceSection>
 
-      {diff.removed.length > 0 && (
-        <section aria-labelledby="removed-steps">
-          <Title order={2} size="h3" id="removed-steps">
-            Steps removed ({diff.removed.length})
-          </Title>
-          <List>
-            {diff.removed.map((step) => (
-              <List.Item key={step.id}>
-                <Badge variant="light" color="red" mr="xs">
-                  Gone
-                </Badge>
-                Was step {step.number}: {step.title}
-              </List.Item>
-            ))}
-          </List>
-        </section>
-      )}
+      <DifferenceSection id="moved-steps" title={`Steps moved (${diff.moved.length})`} shown={diff.moved.length > 0}>
+        <List>
+          {diff.moved.map((step) => (
+            <List.Item key={step.id}>
+              {step.title}: step {step.fromNumber} → step {step.toNumber}
+            </List.Item>
+          ))}
+        </List>
+      </DifferenceSection>
 
-      {diff.moved.length > 0 && (
-        <section aria-labelledby="moved-steps">
-          <Title order={2} size="h3" id="moved-steps">
-            Steps moved ({diff.moved.length})
-          </Title>
-          <List>
-            {diff.moved.map((step) => (
-              <List.Item key={step.id}>
-                {step.title}: step {step.fromNumber} → step {step.toNumber}
-              </List.Item>
-            ))}
-          </List>
-        </section>
-      )}
-
-      {diff.changed.length > 0 && (
-        <section aria-labelledby="changed-steps">
-          <Title order={2} size="h3" id="changed-steps">
-            Steps reworded ({diff.changed.length})
-          </Title>
-          <Stack gap="sm">
-            {diff.changed.map((step) => (
-              <Card key={step.id} withBorder data-testid="changed-step">
-                <Text fw={600}>
-                  Step {step.toNumber}: {step.title}
-                  {step.fromNumber !== step.toNumber ? ` (was step ${step.fromNumber})` : ''}
+      <DifferenceSection id="changed-steps" title={`Steps reworded (${diff.changed.length})`} shown={diff.changed.length > 0}>
+        <Stack gap="sm">
+          {diff.changed.map((step) => (
+            <Card key={step.id} withBorder data-testid="changed-step">
+              <Text fw={600}>
+                Step {step.toNumber}: {step.title}
+                {step.fromNumber !== step.toNumber ? ` (was step ${step.fromNumber})` : ''}
+              </Text>
+              {step.changes.map((change) => (
+                <Text key={change.field} size="sm" mt={4}>
+                  <strong>{STEP_FIELD_WORDS[change.field]}: </strong>
+                  <TextPieces pieces={change.pieces} />
                 </Text>
-                {step.changes.map((change) => (
-                  <Text key={change.field} size="sm" mt={4}>
-                    <strong>{STEP_FIELD_WORDS[change.field]}: </strong>
-                    <TextPieces pieces={change.pieces} />
-                  </Text>
-                ))}
-              </Card>
-            ))}
-          </Stack>
-        </section>
-      )}
+              ))}
+            </Card>
+          ))}
+        </Stack>
+      </DifferenceSection>
 
-      <section aria-labelledby="checklist-changes">
-        <Title order={2} size="h3" id="checklist-changes">
-          Verified-fit checklist at each revision
-        </Title>
+      <DifferenceSection id="checklist-changes" title="Verified-fit checklist at each revision" shown>
         {diff.checklist.length === 0 ? (
           <Text c="dimmed">This guide showed no checklist in either revision.</Text>
         ) : (
@@ -209,7 +182,20 @@ export function DifferenceList({ diff, workshopSlug, guideSlug }: { diff: Revisi
             </Table.Tbody>
           </Table>
         )}
-      </section>
+      </DifferenceSection>
     </Stack>
+  );
+}
+
+/** One kind of difference under its heading; kinds with nothing to say are left out. */
+function DifferenceSection({ id, title, shown, children }: { id: string; title: string; shown: boolean; children: ReactNode }) {
+  if (!shown) return null;
+  return (
+    <section aria-labelledby={id}>
+      <Title order={2} size="h3" id={id}>
+        {title}
+      </Title>
+      {children}
+    </section>
   );
 }
