@@ -1,4 +1,4 @@
-import { applyDecorators, Controller, Get, Header, Inject, Param, ParseUUIDPipe, Query, Redirect, Req, Res } from '@nestjs/common';
+import { applyDecorators, Controller, Get, Header, Inject, Param, ParseUUIDPipe, Query, Redirect, Req, Res, StreamableFile, type Type } from '@nestjs/common';
 import { ApiHeader, ApiNotFoundResponse, ApiOkResponse, ApiProduces, ApiResponse, ApiTags } from '@nestjs/swagger';
 import type { Request, Response } from 'express';
 import { Public } from '../common/decorators/access.decorator';
@@ -6,6 +6,7 @@ import { unlessNotModified } from '../common/http/entity-tag';
 import { precompressedJson } from '../common/http/precompressed-json';
 import { WaveformDto } from '../footage/dto/footage.dto';
 import { PublicGuidesQueryDto } from './dto/guide.dto';
+import { PublishedGuideDto, PublishedGuideSummaryDto } from './dto/published-guide-response.dto';
 import { PublishedGuideMediaService } from './published-guide-media.service';
 import { PublishedGuidesService } from './published-guides.service';
 
@@ -20,11 +21,12 @@ export const PUBLIC_GUIDE_CACHE = 'public, max-age=30, stale-while-revalidate=30
 const PUBLIC_MEDIA_CACHE = 'public, max-age=60';
 const HLS_TYPE = 'application/vnd.apple.mpegurl';
 
-function ConditionalPublicRead(what: string) {
+function ConditionalPublicRead(what: string, type: Type<unknown> | [Type<unknown>]) {
   return applyDecorators(
     Header('Cache-Control', PUBLIC_GUIDE_CACHE),
     ApiHeader({ name: 'If-None-Match', required: false, description: `An ETag of ${what} from an earlier answer` }),
     ApiOkResponse({
+      type,
       description: what,
       headers: {
         ETag: { description: 'Strong tag of the published revision and the live checklist it shows', schema: { type: 'string' } },
@@ -46,20 +48,25 @@ export class PublishedGuidesController {
   ) {}
 
   @Get()
-  @ConditionalPublicRead('Published guides, newest first (at most 50)')
-  index(@Query() query: PublicGuidesQueryDto, @Req() request: Request, @Res({ passthrough: true }) response: Response) {
+  @ConditionalPublicRead('Published guides, newest first (at most 50)', [PublishedGuideSummaryDto])
+  index(
+    @Query() query: PublicGuidesQueryDto,
+    @Req() request: Request,
+    @Res({ passthrough: true }) response: Response,
+  ): Promise<PublishedGuideSummaryDto[] | undefined> {
     return unlessNotModified(request, response, () => this.published.indexTag(), () => this.published.index(query.q));
   }
 
   @Get(':workshopSlug/:guideSlug')
-  @ConditionalPublicRead('The follow-along content: the published revision with the live verified-fit checklist')
+  @ConditionalPublicRead('The follow-along content: the published revision with the live verified-fit checklist', PublishedGuideDto)
   @ApiNotFoundResponse({ description: 'No such guide, or it is not published' })
   read(
     @Param('workshopSlug') workshopSlug: string,
     @Param('guideSlug') guideSlug: string,
     @Req() request: Request,
     @Res({ passthrough: true }) response: Response,
-  ) {
+  ): Promise<PublishedGuideDto | StreamableFile | undefined> {
+    // The gzipped answer is the same PublishedGuideDto, built by `read` and stored as it was.
     let tag: string | null = null;
     return unlessNotModified(
       request,
@@ -68,7 +75,8 @@ export class PublishedGuidesController {
       async () => {
         if (tag === null) return this.published.read(workshopSlug, guideSlug);
         const answer = await this.published.readAnswer(workshopSlug, guideSlug, tag);
-        return 'gzippedJson' in answer ? precompressedJson(request, response, answer.gzippedJson) : answer.personal;
+        // `personal` is what `read` built just now (checked against PublishedGuideDto on the line above), not shared.
+        return 'gzippedJson' in answer ? precompressedJson(request, response, answer.gzippedJson) : (answer.personal as PublishedGuideDto);
       },
     );
   }

@@ -311,7 +311,7 @@ export class PublishedGuidesService {
 
   /** The marks the guide uses, in its footage: those on its steps (as published) and those evidencing its checks (live). */
   private marksUsed(stepMarks: GuideMarkContent[], evidenceMarks: Mark[], footageId: string | null) {
-    const byId = new Map<string, { id: string; kind: string; startMs: number; endMs: number | null; label: string; stepId: string | null; fitCheckId: string | null }>();
+    const byId = new Map<string, { id: string; kind: Mark['kind']; startMs: number; endMs: number | null; label: string; stepId: string | null; fitCheckId: string | null }>();
     for (const mark of stepMarks) {
       if (mark.footageId === footageId) {
         byId.set(mark.id, { id: mark.id, kind: mark.kind, startMs: mark.startMs, endMs: mark.endMs, label: mark.label, stepId: mark.stepId, fitCheckId: mark.fitCheckId });

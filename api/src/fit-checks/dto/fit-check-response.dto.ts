@@ -5,7 +5,7 @@ import { CHECK_KINDS, type CheckKind } from '../entities/fit-check.entity';
 import { EVIDENCE_KINDS, type EvidenceKind } from '../entities/fit-check-evidence.entity';
 
 const CHECK_OUTCOMES: CheckOutcome[] = ['pass', 'fail', 'unknown'];
-const CHECKLIST_VERDICTS: ChecklistVerdict[] = ['open', 'bench_pass', 'confirmed', 'no_fit'];
+export const CHECKLIST_VERDICTS: ChecklistVerdict[] = ['open', 'bench_pass', 'confirmed', 'no_fit'];
 
 export class EvidenceResponseDto {
   @ApiProperty({ format: 'uuid' }) id!: string;
