@@ -22,7 +22,7 @@ import { ObjectBodyPipe } from './common/pipes/object-body.pipe';
 import { validationException } from './common/pipes/validation-errors';
 import { buildOpenApiDocument } from './openapi/openapi-document';
 import { PublicPageShellService } from './guides/public-page-shell.service';
-import { shellPageOf, withPageShell } from './guides/public-page-shell';
+import { PAGE_SHELL_SCRIPT_SOURCE, shellPageOf, withPageShell } from './guides/public-page-shell';
 
 /** Everything main.ts and the e2e tests share, so tests exercise the app as it is served. */
 export function configureApp(app: NestExpressApplication): void {
@@ -39,6 +39,8 @@ export function configureApp(app: NestExpressApplication): void {
     helmet({
       contentSecurityPolicy: {
         directives: {
+          // The one inline script: the page shell's loader, which starts the studio's code after the first paint.
+          'script-src': ["'self'", PAGE_SHELL_SCRIPT_SOURCE],
           // Browsers upload to and play from storage directly with presigned URLs.
           'connect-src': ["'self'", storageOrigin],
           'media-src': ["'self'", storageOrigin, 'blob:'],
@@ -92,19 +94,19 @@ const SEND_INDEX = { dotfiles: 'allow' } as const;
 function serveStudio(app: NestExpressApplication, dist: string): void {
   // The build writes .br and .gz beside each asset (vite.config.ts); the smallest the browser accepts is sent.
   // Names under assets/ carry a content hash, so they never change and may be cached for a year.
-  app.use(
-    expressStaticGzip(dist, {
-      index: false,
-      enableBrotli: true,
-      orderPreference: ['br', 'gzip'],
-      serveStatic: {
-        setHeaders: (response, path) => {
-          const hashed = path.startsWith(join(dist, 'assets'));
-          response.setHeader('Cache-Control', hashed ? 'public, max-age=31536000, immutable' : 'public, max-age=3600');
-        },
+  const assets = expressStaticGzip(dist, {
+    index: false,
+    enableBrotli: true,
+    orderPreference: ['br', 'gzip'],
+    serveStatic: {
+      setHeaders: (response, path) => {
+        const hashed = path.startsWith(join(dist, 'assets'));
+        response.setHeader('Cache-Control', hashed ? 'public, max-age=31536000, immutable' : 'public, max-age=3600');
       },
-    }),
-  );
+    },
+  });
+  // API requests never name a file: they skip the file lookup (a stat on the thread pool for every API call).
+  app.use((request: Request, response: Response, next: NextFunction) => (request.path.startsWith('/api/') ? next() : assets(request, response, next)));
   const indexHtml = join(dist, 'index.html');
   const shells = app.get(PublicPageShellService, { strict: false });
   const logger = new Logger('StudioPages');

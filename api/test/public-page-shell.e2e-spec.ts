@@ -1,4 +1,5 @@
 import { NestExpressApplication } from '@nestjs/platform-express';
+import { createHash } from 'node:crypto';
 import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -17,6 +18,7 @@ const INDEX_HTML = `<!doctype html>
     <meta name="description" content="Fitwright: verified-fit build guides from workshop footage" />
     <title>Fitwright</title>
     <script type="module" crossorigin src="/assets/index-test.js"></script>
+    <link rel="modulepreload" crossorigin href="/assets/runtime-test.js">
     <link rel="stylesheet" crossorigin href="/assets/index-test.css">
   </head>
   <body>
@@ -26,6 +28,25 @@ const INDEX_HTML = `<!doctype html>
 `;
 
 const HOSTILE_TITLE = 'Coupler <script>alert("x")</script> & "friends"';
+
+/**
+ * A shell page starts the studio's code only after its first paint: no module script or preload in the page as
+ * sent; the entry and preloads are named in a JSON block, and the one inline script (the loader) is allowed by
+ * its hash in the page's Content-Security-Policy, which allows no other inline script.
+ */
+function expectModulesDeferred(page: request.Response): void {
+  const html = page.text;
+  expect(html).not.toContain('<script type="module"');
+  expect(html).not.toContain('<link rel="modulepreload"');
+  const modules = /<script type="application\/json" id="fw-shell-modules">([^<]*)<\/script>/.exec(html);
+  expect(JSON.parse(modules?.[1] ?? 'null')).toEqual({ entry: '/assets/index-test.js', preload: ['/assets/runtime-test.js'] });
+  const inline = [...html.matchAll(/<script>([^<]*)<\/script>/g)].map((match) => match[1]);
+  expect(inline).toHaveLength(1);
+  const scriptSrc = /(?:^|;)script-src ([^;]*)/.exec(String(page.headers['content-security-policy']))?.[1].trim().split(/\s+/);
+  expect(scriptSrc).toEqual(["'self'", `'sha256-${createHash('sha256').update(inline[0]).digest('base64')}'`]);
+  // After the shell, outside what the studio moves aside.
+  expect(html.indexOf('id="fw-shell-modules"')).toBeGreaterThan(html.indexOf('data-page-shell'));
+}
 
 /**
  * The public guide pages arrive with a server-rendered first paint (title, cautions, poster) in #root, made from
@@ -74,10 +95,10 @@ describe('Public guide pages: server-rendered shell (real MariaDB, Redis, S3 fak
     expect(html).toContain('<strong>Step 1: Fit it</strong>');
     expect(html).not.toContain('<b>splines</b>');
     expect(html).toContain(`<img class="fw-shell-poster" src="/api/guides/${shop.workshopSlug}/${shop.guideSlug}/poster"`);
-    // The studio's script stays, so the app still takes over; its stylesheet stays in <head> as a print sheet
-    // (turned on by the studio as it starts), so it holds back no paint, and stays before #root, where React draws
-    // the theme's variables that must win over the library's defaults in it.
-    expect(html).toContain('src="/assets/index-test.js"');
+    // The studio's script is started by the loader after the first paint, so the app still takes over; its stylesheet
+    // stays in <head> as a print sheet (turned on by the studio as it starts), so it holds back no paint, and stays
+    // before #root, where React draws the theme's variables that must win over the library's defaults in it.
+    expectModulesDeferred(page);
     expect(html).toContain('<link rel="stylesheet" media="print" data-shell-deferred="" crossorigin href="/assets/index-test.css">');
     expect(html.indexOf('index-test.css')).toBeLessThan(html.indexOf('</head>'));
     // The poster link the shell names answers (a redirect to storage).
@@ -98,13 +119,32 @@ describe('Public guide pages: server-rendered shell (real MariaDB, Redis, S3 fak
     const index = (await anonymous().get('/guides').expect(200)).text;
     expect(index).toContain('<title>Published guides · Fitwright</title>');
     expect(index).toContain(`<a href="/guides/${shop.workshopSlug}/${shop.guideSlug}">Fitting the shell coupler</a>`);
+    expectModulesDeferred(await anonymous().get('/guides').expect(200));
     const search = (await anonymous().get('/guides?q=coupler').expect(200)).text;
     expect(search).toBe(INDEX_HTML);
   });
 
+  it('gives the other public pages a static first paint: a title and a sentence, nothing from the address', async () => {
+    const unsubscribe = await anonymous().get('/unsubscribe?token=tok-%3Cb%3Esecret').expect(200).expect('Content-Type', /text\/html/);
+    expect(unsubscribe.text).toContain('<title>Stop fit news · Fitwright</title>');
+    expect(unsubscribe.text).toMatch(/<div id="root"><div data-page-shell=""[^]*<h1>Stop fit news<\/h1><p class="fw-shell-lead">This page stops/);
+    expect(unsubscribe.text).not.toMatch(/tok-|secret/);
+    expectModulesDeferred(unsubscribe);
+    const preferences = await anonymous().get('/mail-preferences?token=abc').expect(200);
+    expect(preferences.text).toContain('<title>Mail preferences · Fitwright</title>');
+    expect(preferences.text).toContain('<h1>Mail preferences</h1>');
+    expectModulesDeferred(preferences);
+    const finder = await anonymous().get('/fit-finder/?splineTeeth=21').expect(200);
+    expect(finder.text).toContain('<title>Fit finder · Fitwright</title>');
+    expect(finder.text).toContain('<h1>Fit finder</h1><p class="fw-shell-lead">Has anyone proven it fits?');
+    expect(finder.text).toMatch(/<meta name="description" content="Has anyone proven it fits\?/);
+    expectModulesDeferred(finder);
+  });
+
   it('serves the plain page for an unknown guide, other studio paths, and a withdrawn guide', async () => {
     expect((await anonymous().get(`/guides/${shop.workshopSlug}/no-such-guide`).expect(200)).text).toBe(INDEX_HTML);
-    expect((await anonymous().get('/fit-finder').expect(200)).text).toBe(INDEX_HTML);
+    expect((await anonymous().get('/tools/fit-calculator').expect(200)).text).toBe(INDEX_HTML);
+    expect((await anonymous().get('/unsubscribe/more').expect(200)).text).toBe(INDEX_HTML);
     await shop.owner.agent.delete(`${shop.base}/guides/${shop.guideId}/publication`).expect(204);
     const withdrawn = (await anonymous().get(pagePath).expect(200)).text;
     expect(withdrawn).toBe(INDEX_HTML);

@@ -3,6 +3,7 @@
 // static HTML page of the same guide's title and poster served in the same run (goal ≤ 1.5 × that page).
 // Needs the services (bash bench/run.sh bundle [dev|test]); run.mjs calls it after the size report.
 import { createServer } from 'node:http';
+import { loadavg } from 'node:os';
 import { startApi } from '../lib/harness.mjs';
 import { launchBrowser } from '../../studio/e2e/browser.mjs';
 
@@ -43,13 +44,17 @@ async function coldLoad(browser, url) {
     const fcp = await page.waitForFunction(() => performance.getEntriesByName('first-contentful-paint')[0]?.startTime, null, { timeout: 60_000 });
     const fcpMs = await fcp.jsonValue();
     // Which responses had ended by the paint (Resource Timing's responseEnd is given for every origin).
-    const ended = await page.evaluate((paint) => {
+    const { ended, firstByteMs } = await page.evaluate((paint) => {
       const navigation = performance.getEntriesByType('navigation')[0];
       const resources = performance.getEntriesByType('resource').filter((entry) => entry.responseEnd <= paint);
-      return [...(navigation && navigation.responseEnd <= paint ? [navigation.name] : []), ...resources.map((entry) => entry.name)];
+      return {
+        ended: [...(navigation && navigation.responseEnd <= paint ? [navigation.name] : []), ...resources.map((entry) => entry.name)],
+        // When the page's first byte came: what the server and the link take before the browser can draw anything.
+        firstByteMs: navigation?.responseStart ?? 0,
+      };
     }, fcpMs);
     const bytesBeforePaint = ended.reduce((sum, name) => sum + (bytesByUrl.get(name) ?? 0), 0);
-    return { fcpMs, bytesBeforePaint, files: ended.length };
+    return { fcpMs, firstByteMs, bytesBeforePaint, files: ended.length };
   } finally {
     await context.close();
   }
@@ -88,13 +93,14 @@ export async function reportFirstPaint(studioDist) {
     ];
     console.log(
       `\nfirst contentful paint, cold cache, phone profile (${PHONE.downloadBitsPerSecond / 1e6} Mbit/s, ${PHONE.latencyMs} ms RTT, CPU ${PHONE.cpuSlowdown}× slower), ` +
-        `median of ${RUNS}; bytes = compressed responses finished before the paint (budget ≤ ${FIRST_PAINT_BUDGET_BYTES / 1024} KB)`,
+        `median of ${RUNS}; bytes = compressed responses finished before the paint (budget ≤ ${FIRST_PAINT_BUDGET_BYTES / 1024} KB); ` +
+        `load average ${loadavg().map((value) => value.toFixed(1)).join(', ')}`,
     );
     const results = [];
     for (const route of routes) {
       const loads = [];
       for (let run = 0; run < RUNS; run += 1) loads.push(await coldLoad(browser, route.url));
-      results.push({ ...route, fcpMs: median(loads.map((load) => load.fcpMs)), bytes: median(loads.map((load) => load.bytesBeforePaint)), files: median(loads.map((load) => load.files)) });
+      results.push({ ...route, fcpMs: median(loads.map((load) => load.fcpMs)), firstByteMs: median(loads.map((load) => load.firstByteMs)), bytes: median(loads.map((load) => load.bytesBeforePaint)), files: median(loads.map((load) => load.files)) });
     }
     const staticFcp = results[0].fcpMs;
     for (const result of results) {
@@ -102,10 +108,11 @@ export async function reportFirstPaint(studioDist) {
       const budget = result.bytes <= FIRST_PAINT_BUDGET_BYTES ? 'within' : 'OVER';
       const goal = result.baseline ? ` (goal ≤ ${FIRST_PAINT_GOAL_RATIO}×: ${ratio <= FIRST_PAINT_GOAL_RATIO ? 'met' : 'NOT met'})` : '';
       console.log(
-        `${result.label.padEnd(48)} FCP ${String(Math.round(result.fcpMs)).padStart(5)} ms  ${ratio.toFixed(2)}× static${goal}  ` +
+        `${result.label.padEnd(48)} FCP ${String(Math.round(result.fcpMs)).padStart(5)} ms (first byte ${String(Math.round(result.firstByteMs)).padStart(4)} ms)  ${ratio.toFixed(2)}× static${goal}  ` +
           `before paint ${(result.bytes / 1024).toFixed(1).padStart(6)} KB in ${result.files} files (${budget})`,
       );
     }
+    console.log(`load average at the end: ${loadavg().map((value) => value.toFixed(1)).join(', ')}`);
     staticPage.close();
   } finally {
     await browser.close();

@@ -2,7 +2,7 @@ import { Injectable } from '@nestjs/common';
 import { gunzipSync } from 'node:zlib';
 import { PublishedGuideCache } from './published-guide-cache';
 import { PublishedGuidesService } from './published-guides.service';
-import { guideIndexShell, guidePageShell, type GuideShellSource, type PageShell, type ShellPage } from './public-page-shell';
+import { guideIndexShell, guidePageShell, staticPageShell, type GuideShellSource, type PageShell, type ShellPage } from './public-page-shell';
 
 /**
  * The shells of the public guide pages, made from the same cached answers the API serves: for a published guide,
@@ -18,6 +18,7 @@ export class PublicPageShellService {
   ) {}
 
   async shellFor(page: ShellPage): Promise<PageShell | null> {
+    if (page.kind === 'static') return staticPageShell(page.name);
     if (page.kind === 'index') {
       const tag = await this.published.indexTag();
       return (await this.cache.page(tag, async () => guideIndexShell(await this.published.index()))) as PageShell;

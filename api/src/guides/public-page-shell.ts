@@ -1,3 +1,4 @@
+import { createHash } from 'node:crypto';
 import { CAUTION_LEVELS, type CautionLevel, type SafetyTopic } from '../engine/safety-topics';
 
 /**
@@ -69,6 +70,9 @@ const SHELL_STYLE = `<style>
 .fw-shell-poster{display:block;width:100%;max-width:960px;aspect-ratio:16/9;object-fit:contain;background:#000;border-radius:4px}
 .fw-shell-list{list-style:none;padding:0;margin:0;display:grid;gap:8px}
 .fw-shell-list a{font-weight:600;color:#1c7ed6;text-decoration:none}
+.fw-shell-card{max-width:480px;margin:20px auto 0;border:1px solid #dee2e6;border-radius:8px;padding:32px}
+.fw-shell-card h1{font-size:26px}
+.fw-shell-lead{color:#495057;margin:0}
 </style>`;
 
 function frame(main: string): string {
@@ -144,6 +148,76 @@ export function guideIndexShell(items: GuideIndexShellItem[]): PageShell {
   };
 }
 
+/** The public pages without data of their own: a title and a sentence, so nothing is blank before the JavaScript. */
+export type StaticShellName = 'unsubscribe' | 'mail-preferences' | 'fit-finder';
+
+const STATIC_SHELLS: Record<StaticShellName, { title: string; description: string; lead: string; card: boolean }> = {
+  unsubscribe: {
+    title: 'Stop fit news',
+    description: 'Stop the fit news an e-mail from Fitwright brought you.',
+    lead: 'This page stops the fit news of the e-mail you came from, and says what it stopped as soon as it has loaded.',
+    card: true,
+  },
+  'mail-preferences': {
+    title: 'Mail preferences',
+    description: 'Choose which mail Fitwright sends you.',
+    lead: 'Choose which mail Fitwright sends you. Your settings show as soon as the page has loaded.',
+    card: true,
+  },
+  'fit-finder': {
+    title: 'Fit finder',
+    description: 'Has anyone proven it fits? Search every published guide for assemblies whose fit checks match by the numbers.',
+    // The studio's own lead (features/fit-finder/components/fit-finder-page.tsx), so nothing moves when it takes over.
+    lead:
+      'Has anyone proven it fits? Describe what you have; the finder looks through every published guide for assemblies whose fit checks ' +
+      'match by the numbers (tooth count and pitch, ISO 286 limits, clearances, length windows), proven ones first.',
+    card: false,
+  },
+};
+
+export function staticPageShell(name: StaticShellName): PageShell {
+  const page = STATIC_SHELLS[name];
+  const content = `<h1>${escapeHtml(page.title)}</h1><p class="fw-shell-lead">${escapeHtml(page.lead)}</p>`;
+  return {
+    title: `${page.title} · Fitwright`,
+    description: page.description,
+    body: frame(page.card ? `<div class="fw-shell-card">${content}</div>` : content),
+  };
+}
+
+/**
+ * Starts the studio's JavaScript once the shell has painted (the frame after it was parsed), or after a second
+ * at the latest (a background tab draws no frames). Sent with the page, the entry script and its module preloads
+ * (about 190 KB) take a slow link's bandwidth from the page and its poster and can run before the first paint.
+ * The script is fixed text (the file names are read from the JSON block beside it), so one CSP hash allows it.
+ */
+const SHELL_LOADER =
+  '(function(){var d=document.getElementById("fw-shell-modules");if(!d)return;var m=JSON.parse(d.textContent),s=0;' +
+  'function go(){if(s)return;s=1;m.preload.forEach(function(h){var l=document.createElement("link");l.rel="modulepreload";' +
+  'l.crossOrigin="";l.href=h;document.head.appendChild(l)});var e=document.createElement("script");e.type="module";' +
+  'e.crossOrigin="";e.src=m.entry;document.head.appendChild(e)}' +
+  'requestAnimationFrame(function(){setTimeout(go,0)});setTimeout(go,1000)})();';
+
+/** The Content-Security-Policy source that allows the shell's loader, and nothing else inline. */
+export const PAGE_SHELL_SCRIPT_SOURCE = `'sha256-${createHash('sha256').update(SHELL_LOADER).digest('base64')}'`;
+
+const MODULE_SCRIPT = /<script type="module"[^>]*\ssrc="([^"]+)"[^>]*><\/script>\s*/g;
+const MODULE_PRELOAD = /<link rel="modulepreload"[^>]*\shref="([^"]+)"[^>]*>\s*/g;
+
+/** The page's module entry and preloads taken out of <head>, and the loader that adds them after the first paint. */
+function deferModules(html: string): { html: string; loader: string } {
+  const entries = [...html.matchAll(MODULE_SCRIPT)].map((match) => match[1]);
+  // Only the shape Vite writes (one entry) is deferred; anything else is left to load as written.
+  if (entries.length !== 1) return { html, loader: '' };
+  const preload = [...html.matchAll(MODULE_PRELOAD)].map((match) => match[1]);
+  // In a <script> block only "</" could end it early; the names are Vite's hashed paths, escaped all the same.
+  const modules = JSON.stringify({ entry: entries[0], preload }).replace(/</g, '\\u003c');
+  return {
+    html: html.replace(MODULE_SCRIPT, '').replace(MODULE_PRELOAD, ''),
+    loader: `<script type="application/json" id="fw-shell-modules">${modules}</script><script>${SHELL_LOADER}</script>`,
+  };
+}
+
 /**
  * The studio's index.html with the shell in place: its <title>, its meta description, and its body in #root.
  * A page built without those landmarks is returned unchanged rather than guessed at.
@@ -151,21 +225,33 @@ export function guideIndexShell(items: GuideIndexShellItem[]): PageShell {
 export function withPageShell(indexHtml: string, shell: PageShell): string {
   const root = '<div id="root"></div>';
   if (!indexHtml.includes(root)) return indexHtml;
+  const { html, loader } = deferModules(indexHtml);
   // The studio's stylesheets load as print sheets, which hold back no first paint: the shell, styled inline, paints
   // as soon as the page arrives, not after ~35 KB of CSS. The studio turns them on as it starts
   // (studio/src/lib/page-shell.ts), long before it shows itself. They stay in <head>: the theme's variables are
   // drawn by React inside #root, and a stylesheet after #root would put the library's defaults back over them.
-  return indexHtml
+  return html
     .replace(/<link rel="stylesheet"/g, '<link rel="stylesheet" media="print" data-shell-deferred=""')
     .replace(/<title>[^<]*<\/title>/, () => `<title>${escapeHtml(shell.title)}</title>`)
     .replace(/<meta name="description" content="[^"]*"\s*\/?>/, () => `<meta name="description" content="${escapeHtml(shell.description)}" />`)
-    .replace(root, () => `<div id="root">${shell.body}</div>`);
+    .replace(root, () => `<div id="root">${shell.body}</div>${loader}`);
 }
 
-/** The public page a studio path names, if it has a shell: the guide index (without a search) or one guide. */
-export type ShellPage = { kind: 'index' } | { kind: 'guide'; workshopSlug: string; guideSlug: string };
+/** The public page a studio path names, if it has a shell: the guide index (without a search), one guide, or a static page. */
+export type ShellPage =
+  | { kind: 'index' }
+  | { kind: 'guide'; workshopSlug: string; guideSlug: string }
+  | { kind: 'static'; name: StaticShellName };
+
+const STATIC_PATHS = new Map<string, StaticShellName>([
+  ['/unsubscribe', 'unsubscribe'],
+  ['/mail-preferences', 'mail-preferences'],
+  ['/fit-finder', 'fit-finder'],
+]);
 
 export function shellPageOf(path: string, query: Record<string, unknown>): ShellPage | null {
+  const staticName = STATIC_PATHS.get(path.replace(/(.)\/$/, '$1'));
+  if (staticName) return { kind: 'static', name: staticName };
   if (/^\/guides\/?$/.test(path)) return query.q ? null : { kind: 'index' };
   const match = /^\/guides\/([^/]+)\/([^/]+)\/?$/.exec(path);
   if (!match) return null;
