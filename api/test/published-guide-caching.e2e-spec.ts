@@ -1,9 +1,10 @@
 import { NestExpressApplication } from '@nestjs/platform-express';
 import request from 'supertest';
 import { DataSource } from 'typeorm';
+// The app first: it loads the entities in the order their decorators need (the controller alone reaches them through its DTOs).
+import { createTestApp } from './create-test-app';
 import { PUBLIC_GUIDE_CACHE } from '../src/guides/published-guides.controller';
 import { PUBLISHED_GUIDE_VERSION_SQL, PUBLISHED_INDEX_VERSION_SQL } from '../src/guides/published-guide-versions';
-import { createTestApp } from './create-test-app';
 import { removeScratch } from './support/footage';
 import { makeWorkshopFixture, type WorkshopFixture } from './support/workshop-fixture';
 
@@ -130,6 +131,24 @@ describe('Public guide reads: ETag, Cache-Control and 304 (real MariaDB, S3 fake
     await shop.owner.agent.post(`${shop.base}/guides/${shop.guideId}/revisions`).send({}).expect(201);
     const published = await anonymous().get('/api/guides').set('If-None-Match', String(withdrawn.headers.etag)).expect(200);
     expect(published.headers.etag).not.toBe(withdrawn.headers.etag);
+    // The whole index is held under its tag too: the answer after publishing lists the guide again, at its new revision.
+    const republished = (published.body as { slug: string; revision: number; workshop: { slug: string } }[]).find(
+      (guide) => guide.workshop.slug === shop.workshopSlug && guide.slug === shop.guideSlug,
+    );
+    expect(republished?.revision).toBeGreaterThan(1);
+  });
+
+  it('serves the index’s held answer with the public policy, and a search freshly, under the same tag', async () => {
+    const plain = await anonymous().get('/api/guides').set('Accept-Encoding', 'gzip').expect(200);
+    expect(plain.headers['cache-control']).toBe(PUBLIC_GUIDE_CACHE);
+    expect(plain.headers['content-encoding']).toBe('gzip');
+    const workshopName = String((await anonymous().get(readPath).expect(200)).body.workshop.name);
+    const search = await anonymous().get(`/api/guides?q=${encodeURIComponent(workshopName)}`).expect(200);
+    expect(search.headers.etag).toBe(plain.headers.etag);
+    const found = search.body as { slug: string; workshop: { slug: string; name: string } }[];
+    expect(found.map((guide) => `${guide.workshop.slug}/${guide.slug}`)).toContain(`${shop.workshopSlug}/${shop.guideSlug}`);
+    expect(found.length).toBeLessThan((plain.body as unknown[]).length + 1);
+    expect(found.every((guide) => guide.workshop.name === workshopName)).toBe(true);
   });
 
   it('reads the tags through keys: EXPLAIN shows no full scan of any table', async () => {

@@ -103,6 +103,17 @@ describe('Public guide reads held in Redis, shared by two API processes', () => 
     expect((after.body as { workshop: { name: string } }).workshop.name).toBe('Renamed by a job');
   });
 
+  it('serves the index gzipped from Redis, the same as a freshly built one', async () => {
+    const index = await request(first.getHttpServer()).get('/api/guides').set('Accept-Encoding', 'gzip').expect(200);
+    expect(index.headers['content-encoding']).toBe('gzip');
+    const tag = String(index.headers.etag);
+    // Other test files publish guides meanwhile: compare with a fresh build only while the tag holds still.
+    const built = await second.get(PublishedGuidesService).index();
+    const still = await request(second.getHttpServer()).get('/api/guides').set('Accept-Encoding', 'gzip').set('If-None-Match', tag);
+    if (still.status === 304) expect(index.body).toEqual(JSON.parse(JSON.stringify(built)));
+    else expect(still.headers.etag).not.toBe(tag);
+  });
+
   it('moves the index tag on withdrawal through either process', async () => {
     const index = await request(second.getHttpServer()).get('/api/guides').expect(200);
     await request(second.getHttpServer()).get('/api/guides').set('If-None-Match', String(index.headers.etag)).expect(304);

@@ -53,8 +53,20 @@ export class PublishedGuidesController {
     @Query() query: PublicGuidesQueryDto,
     @Req() request: Request,
     @Res({ passthrough: true }) response: Response,
-  ): Promise<PublishedGuideSummaryDto[] | undefined> {
-    return unlessNotModified(request, response, () => this.published.indexTag(), () => this.published.index(query.q));
+  ): Promise<PublishedGuideSummaryDto[] | StreamableFile | undefined> {
+    let tag = '';
+    return unlessNotModified(
+      request,
+      response,
+      async () => (tag = await this.published.indexTag()),
+      async () => {
+        // A search is built each time (any words can be asked); the plain index, which every reader opens, is held.
+        if (query.q?.trim()) return this.published.index(query.q);
+        const answer = await this.published.indexAnswer(tag);
+        // The gzipped answer is what `index` built and stored as it was; `personal` is never the case here (no presigned links).
+        return 'gzippedJson' in answer ? precompressedJson(request, response, answer.gzippedJson) : (answer.personal as PublishedGuideSummaryDto[]);
+      },
+    );
   }
 
   @Get(':workshopSlug/:guideSlug')

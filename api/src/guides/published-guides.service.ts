@@ -83,6 +83,11 @@ export class PublishedGuidesService {
     return this.cache.answer(tag, () => this.read(workshopSlug, guideSlug));
   }
 
+  /** The index without a search for the state `tag` names: built once, then served gzipped from Redis like a follow-along answer. */
+  indexAnswer(tag: string): Promise<CachedAnswer> {
+    return this.cache.answer(tag, () => this.index());
+  }
+
   async index(query?: string) {
     const builder = this.guides
       .createQueryBuilder('guide')
