@@ -19,15 +19,19 @@ import { FitChecksModule } from './fit-checks/fit-checks.module';
 import { FitReportsModule } from './fit-reports/fit-reports.module';
 import { FitFinderModule } from './fit-finder/fit-finder.module';
 import { FollowsModule } from './follows/follows.module';
+import { FollowsPortsModule } from './follows/follows-ports.module';
 import { FootageModule } from './footage/footage.module';
 import { GuideRevisionsModule } from './guide-revisions/guide-revisions.module';
 import { GuidesModule } from './guides/guides.module';
+import { GuidesPortsModule } from './guides/guides-ports.module';
 import { MarksModule } from './marks/marks.module';
+import { MarksPortsModule } from './marks/marks-ports.module';
 import { MeasurementsModule } from './measurements/measurements.module';
 import { PartsModule } from './parts/parts.module';
 import { SearchModule } from './search/search.module';
 import { ToolsModule } from './tools/tools.module';
 import { TranscriptsModule } from './transcripts/transcripts.module';
+import { TranscriptsPortsModule } from './transcripts/transcripts-ports.module';
 
 @Module({
   imports: [
@@ -64,6 +68,11 @@ import { TranscriptsModule } from './transcripts/transcripts.module';
     FitReportsModule,
     FitFinderModule,
     SearchModule,
+    // What a domain asks of one that depends on it goes through a port it declares and the other fills (global modules).
+    MarksPortsModule,
+    GuidesPortsModule,
+    TranscriptsPortsModule,
+    FollowsPortsModule,
   ],
 })
 export class AppModule implements NestModule {

@@ -1,7 +1,6 @@
 import { Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { BuildsModule } from '../builds/builds.module';
-import { FitChecksModule } from '../fit-checks/fit-checks.module';
 import { PartFeature } from '../parts/entities/part-feature.entity';
 import { PartsModule } from '../parts/parts.module';
 import { AssembliesController } from './assemblies.controller';
@@ -11,7 +10,7 @@ import { AssemblyPart } from './entities/assembly-part.entity';
 import { Assembly } from './entities/assembly.entity';
 
 @Module({
-  imports: [TypeOrmModule.forFeature([Assembly, AssemblyPart, AssemblyInterface, PartFeature]), BuildsModule, PartsModule, FitChecksModule],
+  imports: [TypeOrmModule.forFeature([Assembly, AssemblyPart, AssemblyInterface, PartFeature]), BuildsModule, PartsModule],
   controllers: [AssembliesController],
   providers: [AssembliesService],
   exports: [AssembliesService],

@@ -1,13 +1,14 @@
 import { BadRequestException, Inject, Injectable, NotFoundException } from '@nestjs/common';
+import { EventEmitter2 } from '@nestjs/event-emitter';
 import { InjectRepository } from '@nestjs/typeorm';
 import { In, Repository } from 'typeorm';
 import { BuildsService } from '../builds/builds.service';
 import { EngineError } from '../engine/engine-error';
 import { formatLengthValue, toNanometres, type LengthUnit } from '../engine/units';
-import { FitChecksService } from '../fit-checks/fit-checks.service';
 import type { DiameterSpec } from '../parts/entities/part-feature.entity';
 import { PartFeature } from '../parts/entities/part-feature.entity';
 import { PartsService } from '../parts/parts.service';
+import { ASSEMBLY_INTERFACES_CHANGED, type AssemblyInterfacesChangedEvent } from './assemblies.events';
 import { toAssemblyDetail } from './assembly.mapper';
 import { AssemblyDetailDto, CreateAssemblyDto, CreateInterfaceDto, PlacePartDto, UpdateAssemblyDto, UpdateInterfaceDto } from './dto/assembly.dto';
 import { AssemblyInterface } from './entities/assembly-interface.entity';
@@ -25,7 +26,7 @@ export class AssembliesService {
     @InjectRepository(PartFeature) private readonly features: Repository<PartFeature>,
     @Inject(BuildsService) private readonly builds: BuildsService,
     @Inject(PartsService) private readonly parts: PartsService,
-    @Inject(FitChecksService) private readonly fitChecks: FitChecksService,
+    @Inject(EventEmitter2) private readonly events: EventEmitter2,
   ) {}
 
   async list(workshopId: string, buildId: string): Promise<Assembly[]> {
@@ -42,6 +43,19 @@ export class AssembliesService {
     const assembly = await this.assemblies.findOneBy({ id: assemblyId, workshopId });
     if (!assembly) throw new NotFoundException('Assembly not found');
     return assembly;
+  }
+
+  /** The interfaces of an assembly, of one feature (either side) or with one id: what fit checks evaluate. */
+  interfacesOf(assemblyId: string): Promise<AssemblyInterface[]> {
+    return this.interfaces.find({ where: { assemblyId } });
+  }
+
+  interfacesUsingFeature(featureId: string): Promise<AssemblyInterface[]> {
+    return this.interfaces.find({ where: [{ featureAId: featureId }, { featureBId: featureId }] });
+  }
+
+  interfacesWithId(interfaceId: string): Promise<AssemblyInterface[]> {
+    return this.interfaces.find({ where: { id: interfaceId } });
   }
 
   async detail(workshopId: string, assemblyId: string): Promise<AssemblyDetailDto> {
@@ -90,7 +104,7 @@ export class AssembliesService {
     const assemblyInterface = this.interfaces.create({ assemblyId });
     await this.applyInterfaceInput(assemblyInterface, input);
     await this.interfaces.save(assemblyInterface);
-    await this.fitChecks.evaluateAssembly(workshopId, assemblyId, `interface "${assemblyInterface.name}" added`, actorId);
+    await this.interfacesChanged({ workshopId, assemblyId, actorId, reason: `interface "${assemblyInterface.name}" added` });
     return assemblyInterface;
   }
 
@@ -125,8 +139,13 @@ export class AssembliesService {
     }
     await this.applyInterfaceInput(assemblyInterface, merged);
     await this.interfaces.save(assemblyInterface);
-    await this.fitChecks.evaluateAssembly(workshopId, assemblyId, `interface "${assemblyInterface.name}" changed`, actorId);
+    await this.interfacesChanged({ workshopId, assemblyId, actorId, reason: `interface "${assemblyInterface.name}" changed` });
     return assemblyInterface;
+  }
+
+  /** Waits for the listeners (fit checks re-evaluate), so the answer already reflects the new checks. */
+  private async interfacesChanged(event: AssemblyInterfacesChangedEvent): Promise<void> {
+    await this.events.emitAsync(ASSEMBLY_INTERFACES_CHANGED, event);
   }
 
   async removeInterface(workshopId: string, assemblyId: string, interfaceId: string): Promise<void> {

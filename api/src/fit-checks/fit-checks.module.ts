@@ -1,10 +1,8 @@
 import { Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
-import { AssemblyInterface } from '../assemblies/entities/assembly-interface.entity';
-import { Assembly } from '../assemblies/entities/assembly.entity';
-import { Mark } from '../marks/entities/mark.entity';
-import { Measurement } from '../measurements/entities/measurement.entity';
-import { PartFeature } from '../parts/entities/part-feature.entity';
+import { AssembliesModule } from '../assemblies/assemblies.module';
+import { MeasurementsModule } from '../measurements/measurements.module';
+import { PartsModule } from '../parts/parts.module';
 import { UsersModule } from '../users/users.module';
 import { FitCheckEvent } from './entities/fit-check-event.entity';
 import { FitCheckEvidence } from './entities/fit-check-evidence.entity';
@@ -14,8 +12,11 @@ import { FitChecksService } from './fit-checks.service';
 
 @Module({
   imports: [
-    TypeOrmModule.forFeature([FitCheck, FitCheckEvent, FitCheckEvidence, Assembly, AssemblyInterface, PartFeature, Measurement, Mark]),
+    TypeOrmModule.forFeature([FitCheck, FitCheckEvent, FitCheckEvidence]),
     UsersModule,
+    AssembliesModule,
+    PartsModule,
+    MeasurementsModule,
   ],
   controllers: [FitChecksController],
   providers: [FitChecksService],

@@ -2,27 +2,30 @@ import { BadRequestException, ConflictException, Inject, Injectable, Logger, Not
 import { EventEmitter2, OnEvent } from '@nestjs/event-emitter';
 import { InjectRepository } from '@nestjs/typeorm';
 import { EntityManager, In, Repository } from 'typeorm';
-import { AssemblyInterface } from '../assemblies/entities/assembly-interface.entity';
+import { ASSEMBLY_INTERFACES_CHANGED, type AssemblyInterfacesChangedEvent } from '../assemblies/assemblies.events';
+import { AssembliesService } from '../assemblies/assemblies.service';
+import type { AssemblyInterface } from '../assemblies/entities/assembly-interface.entity';
+import type { Assembly } from '../assemblies/entities/assembly.entity';
 import { newId } from '../common/database/columns';
 import { requireImage, type UploadedFileLike } from '../common/uploads/image-file';
 import { StorageService } from '../infra/storage/storage.service';
 import { MailOutbox } from '../outbox/mail-outbox.service';
-import { Assembly } from '../assemblies/entities/assembly.entity';
 import { canTransition, rollUpChecklist, stateAfterOutcome, stateForOutcome, type FitCheckState } from '../engine/checklist';
 import { EngineError } from '../engine/engine-error';
 import { evaluateInterface, type InterfaceInput, type InterfaceVerdict, type Reading } from '../engine/interface-evaluation';
 import { UsersService } from '../users/users.service';
 import { whatIf } from '../engine/measured-fit';
 import { toNanometres, type LengthUnit } from '../engine/units';
-import { Mark } from '../marks/entities/mark.entity';
-import { Measurement } from '../measurements/entities/measurement.entity';
+import { MeasurementsService } from '../measurements/measurements.service';
 import { MEASUREMENT_CHANGED, type MeasurementChangedEvent } from '../measurements/measurements.events';
 import type { DiameterSpec, LengthSpec, SplineSpec } from '../parts/entities/part-feature.entity';
-import { PartFeature } from '../parts/entities/part-feature.entity';
+import type { PartFeature } from '../parts/entities/part-feature.entity';
+import { PartsService } from '../parts/parts.service';
 import { PART_FEATURE_CHANGED, type PartFeatureChangedEvent } from '../parts/parts.events';
 import { AddEvidenceDto, CreateManualCheckDto, TransitionDto } from './dto/fit-check.dto';
 import { FitCheckEvent } from './entities/fit-check-event.entity';
 import { FitCheckEvidence } from './entities/fit-check-evidence.entity';
+import { EvidenceMarks } from './evidence-marks.port';
 import { FitCheck, type CheckKind } from './entities/fit-check.entity';
 import { FIT_CHECK_CHANGED, type FitCheckChangedEvent } from './fit-checks.events';
 import { referenceNotFound } from '../common/http/field-errors';
@@ -54,11 +57,10 @@ export class FitChecksService {
     @InjectRepository(FitCheck) private readonly checks: Repository<FitCheck>,
     @InjectRepository(FitCheckEvent) private readonly events: Repository<FitCheckEvent>,
     @InjectRepository(FitCheckEvidence) private readonly evidence: Repository<FitCheckEvidence>,
-    @InjectRepository(Assembly) private readonly assemblies: Repository<Assembly>,
-    @InjectRepository(AssemblyInterface) private readonly interfaces: Repository<AssemblyInterface>,
-    @InjectRepository(PartFeature) private readonly features: Repository<PartFeature>,
-    @InjectRepository(Measurement) private readonly measurements: Repository<Measurement>,
-    @InjectRepository(Mark) private readonly marks: Repository<Mark>,
+    @Inject(AssembliesService) private readonly assemblies: AssembliesService,
+    @Inject(PartsService) private readonly parts: PartsService,
+    @Inject(MeasurementsService) private readonly measurements: MeasurementsService,
+    @Inject(EvidenceMarks) private readonly marks: EvidenceMarks,
     @Inject(EventEmitter2) private readonly emitter: EventEmitter2,
     @Inject(StorageService) private readonly storage: StorageService,
     @Inject(UsersService) private readonly users: UsersService,
@@ -69,24 +71,23 @@ export class FitChecksService {
 
   @OnEvent(PART_FEATURE_CHANGED, { async: true, promisify: true })
   async handleFeatureChanged(event: PartFeatureChangedEvent): Promise<void> {
-    const touched = await this.interfaces.find({
-      where: [{ featureAId: event.featureId }, { featureBId: event.featureId }],
-    });
+    const touched = await this.assemblies.interfacesUsingFeature(event.featureId);
     await this.evaluateInterfaces(event.workshopId, touched, event.reason, event.actorId);
   }
 
   @OnEvent(MEASUREMENT_CHANGED, { async: true, promisify: true })
   async handleMeasurementChanged(event: MeasurementChangedEvent): Promise<void> {
     const touched = event.interfaceId
-      ? await this.interfaces.find({ where: { id: event.interfaceId } })
-      : await this.interfaces.find({ where: [{ featureAId: event.featureId! }, { featureBId: event.featureId! }] });
+      ? await this.assemblies.interfacesWithId(event.interfaceId)
+      : await this.assemblies.interfacesUsingFeature(event.featureId!);
     await this.evaluateInterfaces(event.workshopId, touched, event.reason, event.actorId);
   }
 
-  /** Re-evaluates every interface of an assembly (after the assembly itself changed). */
-  async evaluateAssembly(workshopId: string, assemblyId: string, reason: string, actorId: string | null): Promise<void> {
-    const interfaces = await this.interfaces.find({ where: { assemblyId } });
-    await this.evaluateInterfaces(workshopId, interfaces, reason, actorId);
+  /** Re-evaluates every interface of an assembly after one was added or changed; errors reach the request that caused it. */
+  @OnEvent(ASSEMBLY_INTERFACES_CHANGED, { async: true, promisify: true, suppressErrors: false })
+  async handleAssemblyInterfacesChanged(event: AssemblyInterfacesChangedEvent): Promise<void> {
+    const interfaces = await this.assemblies.interfacesOf(event.assemblyId);
+    await this.evaluateInterfaces(event.workshopId, interfaces, event.reason, event.actorId);
   }
 
   private async evaluateInterfaces(
@@ -113,8 +114,8 @@ export class FitChecksService {
 
   private async interfaceInput(assemblyInterface: AssemblyInterface): Promise<InterfaceInput> {
     const ids = [assemblyInterface.featureAId, assemblyInterface.featureBId].filter((id): id is string => Boolean(id));
-    const features = await this.features.find({ where: { id: In(ids) }, relations: { part: true } });
-    const readings = await this.measurements.find({ where: { featureId: In(ids) } });
+    const features = await this.parts.featuresWithParts(ids);
+    const readings = await this.measurements.readingsOfFeatures(ids);
     const readingsOf = (featureId: string): Reading[] =>
       readings
         .filter((reading) => reading.featureId === featureId)
@@ -133,9 +134,7 @@ export class FitChecksService {
         };
       case 'bore_shaft': {
         const [hole, shaft] = (featureA.spec as DiameterSpec).role === 'hole' ? [featureA, featureB!] : [featureB!, featureA];
-        const clearanceReadings = await this.measurements.find({
-          where: { interfaceId: assemblyInterface.id, quantity: 'clearance' },
-        });
+        const clearanceReadings = await this.measurements.clearanceReadings(assemblyInterface.id);
         return {
           kind: 'bore_shaft',
           hole: { name: label(hole), ...(hole.spec as DiameterSpec), readings: readingsOf(hole.id) },
@@ -297,8 +296,8 @@ export class FitChecksService {
     const given = input.kind === 'mark' ? input.markId : input.measurementId;
     const found =
       input.kind === 'mark'
-        ? await this.marks.existsBy({ id: given, workshopId })
-        : await this.measurements.existsBy({ id: given, workshopId });
+        ? await this.marks.existsInWorkshop(workshopId, given!)
+        : await this.measurements.existsInWorkshop(workshopId, given!);
     if (!found) throw input.kind === 'mark' ? referenceNotFound('markId', 'Mark') : referenceNotFound('measurementId', 'Measurement');
     // The same mark or reading counts once per check (a check-evidence mark is attached when it is made).
     const already = await this.evidence.findOneBy(input.kind === 'mark' ? { fitCheckId: check.id, markId: given } : { fitCheckId: check.id, measurementId: given });
@@ -314,6 +313,26 @@ export class FitChecksService {
         addedBy: actorId,
       }),
     );
+  }
+
+  /** Whether the check is the workshop's (for domains that link to checks, such as marks). */
+  existsInWorkshop(workshopId: string, checkId: string): Promise<boolean> {
+    return this.checks.existsBy({ id: checkId, workshopId });
+  }
+
+  /**
+   * A check-evidence mark is evidence of its fit check (`checkId`, or none): it is listed with that check's
+   * evidence once, and leaves any other check's evidence when the mark moves to another check or becomes another kind.
+   */
+  async syncMarkEvidence(markId: string, checkId: string | null, actorId: string): Promise<void> {
+    const rows = await this.evidence.findBy({ markId });
+    const stale = rows.filter((row) => row.fitCheckId !== checkId);
+    if (stale.length) await this.evidence.remove(stale);
+    if (checkId && !rows.some((row) => row.fitCheckId === checkId)) {
+      await this.evidence.save(
+        this.evidence.create({ fitCheckId: checkId, kind: 'mark', markId, measurementId: null, photoKey: null, note: '', addedBy: actorId }),
+      );
+    }
   }
 
   /** A photo of the test fit, stored in storage and attached as evidence. */
@@ -351,7 +370,7 @@ export class FitChecksService {
 
   /** What a shaft `delta` larger (or smaller, if negative) does to the measured clearance of a bore/shaft interface. */
   async whatIf(workshopId: string, interfaceId: string, delta: string, unit: LengthUnit) {
-    const assemblyInterface = await this.interfaces.findOneBy({ id: interfaceId });
+    const [assemblyInterface] = await this.assemblies.interfacesWithId(interfaceId);
     if (!assemblyInterface) throw new NotFoundException('Interface not found');
     await this.assemblyOf(workshopId, assemblyInterface.assemblyId);
     if (assemblyInterface.kind !== 'bore_shaft') throw new BadRequestException('What-if applies to a bore and shaft interface');
@@ -443,10 +462,8 @@ export class FitChecksService {
     await this.emitter.emitAsync(FIT_CHECK_CHANGED, this.changedEvent(check, history));
   }
 
-  private async assemblyOf(workshopId: string, assemblyId: string): Promise<Assembly> {
-    const assembly = await this.assemblies.findOneBy({ id: assemblyId, workshopId });
-    if (!assembly) throw new NotFoundException('Assembly not found');
-    return assembly;
+  private assemblyOf(workshopId: string, assemblyId: string): Promise<Assembly> {
+    return this.assemblies.get(workshopId, assemblyId); // 404 'Assembly not found' for another workshop's
   }
 
   private async checkOf(workshopId: string, checkId: string): Promise<FitCheck> {

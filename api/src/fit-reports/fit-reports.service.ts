@@ -15,10 +15,10 @@ import { User } from '../users/entities/user.entity';
 import { Workshop } from '../workshops/entities/workshop.entity';
 import type { CreateFitReportDto, UpdateFitReportDto } from './dto/fit-report.dto';
 import type { FitReportResponseDto } from './dto/fit-report-response.dto';
+import { FitReportMailPreferences } from './fit-report-mail.port';
 import { FitReport, type FitReportStatus } from './entities/fit-report.entity';
 import { referenceNotFound } from '../common/http/field-errors';
 import type { AppConfig } from '../config/app-config';
-import { MailPreferencesService } from '../follows/mail-preferences.service';
 import { MailOutbox } from '../outbox/mail-outbox.service';
 import { MembersService } from '../workshops/members.service';
 import { fitReportArrivedMail } from './fit-report-mails';
@@ -53,7 +53,7 @@ export class FitReportsService {
     private readonly storage: StorageService,
     @Inject(MembersService) private readonly members: MembersService,
     @Inject(MailOutbox) private readonly mail: MailOutbox,
-    @Inject(MailPreferencesService) private readonly mailPreferences: MailPreferencesService,
+    @Inject(FitReportMailPreferences) private readonly mailPreferences: FitReportMailPreferences,
     config: ConfigService<AppConfig, true>,
   ) {
     this.appOrigin = config.get('appOrigin', { infer: true });

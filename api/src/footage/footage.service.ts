@@ -18,7 +18,7 @@ import { InjectJobQueue, type JobQueue } from '../infra/jobs/job-queue';
 import { QUEUES } from '../infra/jobs/queues';
 import { MultipartRefusedError, StorageUnavailableError } from '../infra/storage/storage-errors';
 import { StorageService } from '../infra/storage/storage.service';
-import { TRANSCRIPT_MAX_BYTES, TRANSCRIPT_MAX_CUES } from '../transcripts/transcript-limits';
+import { TRANSCRIPT_MAX_BYTES, TRANSCRIPT_MAX_CUES } from '../engine/transcript-limits';
 import {
   CreateFootageDto,
   CreateFootageResponseDto,
@@ -27,7 +27,6 @@ import {
   PartUrlsResponseDto,
   PlaybackResponseDto,
   RecordPartResponseDto,
-  TranscriptSummaryDto,
   UploadProgressDto,
   UploadStateDto,
 } from './dto/footage.dto';
@@ -38,6 +37,7 @@ import { MEDIA_JOBS, type ProcessFootageJob, type TranscodeFootageJob } from './
 import { FootageMediaService } from './footage-media.service';
 import { FootageRenditionsService, renditionsPrefix } from './footage-renditions.service';
 import { toFootageResponse } from './footage.mapper';
+import { TranscriptSummaries } from './transcript-summaries.port';
 import {
   checkFileSize,
   FOOTAGE_TYPES,
@@ -71,6 +71,7 @@ export class FootageService implements OnApplicationBootstrap {
     @InjectJobQueue(QUEUES.mediaTranscode) private readonly transcodeQueue: JobQueue<TranscodeFootageJob>,
     @Inject(FootageMediaService) private readonly media: FootageMediaService,
     @Inject(FootageRenditionsService) private readonly renditions: FootageRenditionsService,
+    @Inject(TranscriptSummaries) private readonly transcriptSummaries: TranscriptSummaries,
     @Inject(ConfigService) config: ConfigService<AppConfig, true>,
   ) {
     this.maxBytes = config.get('footage', { infer: true }).maxBytes;
@@ -422,7 +423,7 @@ export class FootageService implements OnApplicationBootstrap {
     const [uploads, partCounts, transcripts] = await Promise.all([
       uploading.length ? this.uploads.findBy({ footageId: In(uploading) }) : Promise.resolve([]),
       uploading.length ? this.countParts(uploading) : Promise.resolve(new Map<string, number[]>()),
-      this.activeTranscripts(ids),
+      this.transcriptSummaries.activeFor(ids),
     ]);
     const uploadById = new Map(uploads.map((upload) => [upload.footageId, upload]));
     return Promise.all(
@@ -454,15 +455,6 @@ export class FootageService implements OnApplicationBootstrap {
     const byFootage = new Map<string, number[]>();
     for (const part of parts) byFootage.set(part.footageId, [...(byFootage.get(part.footageId) ?? []), part.partNumber]);
     return byFootage;
-  }
-
-  /** The active transcript's revision and cue count per footage (the transcripts table, read-only here). */
-  private async activeTranscripts(footageIds: string[]): Promise<Map<string, TranscriptSummaryDto>> {
-    const rows: { footage_id: string; revision: number | string; cue_count: number | string }[] = await this.footage.query(
-      `SELECT footage_id, revision, cue_count FROM transcripts WHERE is_active = 1 AND footage_id IN (${footageIds.map(() => '?').join(', ')})`,
-      footageIds,
-    );
-    return new Map(rows.map((row) => [row.footage_id, { revision: Number(row.revision), cueCount: Number(row.cue_count) }]));
   }
 }
 

@@ -1,18 +1,16 @@
 import { BadRequestException, ConflictException, Inject, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import { Repository } from 'typeorm';
-import { FitCheck } from '../fit-checks/entities/fit-check.entity';
-import { FitCheckEvidence } from '../fit-checks/entities/fit-check-evidence.entity';
+import { FitChecksService } from '../fit-checks/fit-checks.service';
 import { FootageService } from '../footage/footage.service';
-import { Measurement } from '../measurements/entities/measurement.entity';
+import type { Measurement } from '../measurements/entities/measurement.entity';
 import { MeasurementsService } from '../measurements/measurements.service';
-import { Part } from '../parts/entities/part.entity';
+import { PartsService } from '../parts/parts.service';
 import { CreateMarkDto, MarkLinksDto, UpdateMarkDto, AcceptSuggestionDto, type PageQueryDto } from './dto/mark.dto';
 import { Mark, MarkKind } from './entities/mark.entity';
 import { MarkSuggestion, SuggestionStatus } from './entities/mark-suggestion.entity';
 import { resolutionOfDigits } from './spoken-reading';
-import { GuideStep } from '../guides/entities/guide-step.entity';
-import { Guide } from '../guides/entities/guide.entity';
+import { GuideStepLinks } from './guide-step-links.port';
 import { referenceNotFound } from '../common/http/field-errors';
 
 type LinkField = keyof Required<MarkLinksDto>;
@@ -32,14 +30,11 @@ export class MarksService {
   constructor(
     @InjectRepository(Mark) private readonly marks: Repository<Mark>,
     @InjectRepository(MarkSuggestion) private readonly suggestions: Repository<MarkSuggestion>,
-    @InjectRepository(Part) private readonly parts: Repository<Part>,
-    @InjectRepository(Measurement) private readonly measurementRows: Repository<Measurement>,
-    @InjectRepository(FitCheck) private readonly fitChecks: Repository<FitCheck>,
-    @InjectRepository(FitCheckEvidence) private readonly checkEvidence: Repository<FitCheckEvidence>,
-    @InjectRepository(GuideStep) private readonly guideSteps: Repository<GuideStep>,
-    @InjectRepository(Guide) private readonly guides: Repository<Guide>,
     @Inject(FootageService) private readonly footage: FootageService,
     @Inject(MeasurementsService) private readonly measurements: MeasurementsService,
+    @Inject(PartsService) private readonly parts: PartsService,
+    @Inject(FitChecksService) private readonly fitChecks: FitChecksService,
+    @Inject(GuideStepLinks) private readonly guideSteps: GuideStepLinks,
   ) {}
 
   async list(workshopId: string, footageId: string, kind?: MarkKind): Promise<Mark[]> {
@@ -99,28 +94,14 @@ export class MarksService {
     await this.syncCheckEvidence(saved, actorId);
     if (saved.kind === 'measurement' && saved.measurementId && saved.startMs !== previousStartMs) {
       // A reading taken at the mark's moment moves with it; one tied to another moment keeps its own.
-      await this.measurementRows.update(
-        { id: saved.measurementId, footageId: saved.footageId, footageTimeMs: previousStartMs },
-        { footageTimeMs: saved.startMs },
-      );
+      await this.measurements.followMark(saved.measurementId, saved.footageId, previousStartMs, saved.startMs);
     }
     return saved;
   }
 
-  /**
-   * A check-evidence mark is evidence of its fit check: it is listed with the check's evidence (once),
-   * and leaves it when the mark moves to another check or becomes another kind.
-   */
+  /** A check-evidence mark is evidence of its fit check; the fit-check domain keeps that list in step. */
   private async syncCheckEvidence(mark: Mark, actorId: string): Promise<void> {
-    const target = mark.kind === 'check_evidence' ? mark.fitCheckId : null;
-    const rows = await this.checkEvidence.findBy({ markId: mark.id });
-    const stale = rows.filter((row) => row.fitCheckId !== target);
-    if (stale.length) await this.checkEvidence.remove(stale);
-    if (target && !rows.some((row) => row.fitCheckId === target)) {
-      await this.checkEvidence.save(
-        this.checkEvidence.create({ fitCheckId: target, kind: 'mark', markId: mark.id, measurementId: null, photoKey: null, note: '', addedBy: actorId }),
-      );
-    }
+    await this.fitChecks.syncMarkEvidence(mark.id, mark.kind === 'check_evidence' ? mark.fitCheckId : null, actorId);
   }
 
   async remove(workshopId: string, footageId: string, markId: string): Promise<void> {
@@ -251,16 +232,15 @@ export class MarksService {
         );
       }
     }
-    if (mark.partId && !(await this.parts.existsBy({ id: mark.partId, workshopId }))) throw referenceNotFound('partId', 'Part');
-    if (mark.measurementId && !(await this.measurementRows.existsBy({ id: mark.measurementId, workshopId }))) {
+    if (mark.partId && !(await this.parts.existsInWorkshop(workshopId, mark.partId))) throw referenceNotFound('partId', 'Part');
+    if (mark.measurementId && !(await this.measurements.existsInWorkshop(workshopId, mark.measurementId))) {
       throw referenceNotFound('measurementId', 'Measurement');
     }
-    if (mark.fitCheckId && !(await this.fitChecks.existsBy({ id: mark.fitCheckId, workshopId }))) {
+    if (mark.fitCheckId && !(await this.fitChecks.existsInWorkshop(workshopId, mark.fitCheckId))) {
       throw referenceNotFound('fitCheckId', 'Fit check');
     }
-    if (mark.guideStepId) {
-      const step = await this.guideSteps.findOneBy({ id: mark.guideStepId });
-      if (!step || !(await this.guides.existsBy({ id: step.guideId, workshopId }))) throw referenceNotFound('guideStepId', 'Guide step');
+    if (mark.guideStepId && !(await this.guideSteps.stepInWorkshop(workshopId, mark.guideStepId))) {
+      throw referenceNotFound('guideStepId', 'Guide step');
     }
   }
 }

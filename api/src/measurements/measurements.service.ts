@@ -1,7 +1,7 @@
 import { BadRequestException, Inject, Injectable, NotFoundException } from '@nestjs/common';
 import { EventEmitter2 } from '@nestjs/event-emitter';
 import { InjectRepository } from '@nestjs/typeorm';
-import { DataSource, Repository } from 'typeorm';
+import { DataSource, In, Repository } from 'typeorm';
 import { referenceNotFound } from '../common/http/field-errors';
 import { EngineError } from '../engine/engine-error';
 import { toNanometres } from '../engine/units';
@@ -26,6 +26,29 @@ export class MeasurementsService {
       },
       order: { takenAt: 'ASC', createdAt: 'ASC' },
     });
+  }
+
+  /** Whether the reading is the workshop's (for domains that link to readings: marks, fit-check evidence). */
+  existsInWorkshop(workshopId: string, measurementId: string): Promise<boolean> {
+    return this.measurements.existsBy({ id: measurementId, workshopId });
+  }
+
+  /** Every reading of these part features (fit checks evaluate interfaces from them). */
+  readingsOfFeatures(featureIds: string[]): Promise<Measurement[]> {
+    return this.measurements.find({ where: { featureId: In(featureIds) } });
+  }
+
+  /** The clearance readings taken across an interface. */
+  clearanceReadings(interfaceId: string): Promise<Measurement[]> {
+    return this.measurements.find({ where: { interfaceId, quantity: 'clearance' } });
+  }
+
+  /**
+   * A reading taken at a mark's moment moves with the mark (from `fromMs` to `toMs` in that footage); one tied
+   * to another moment keeps its own.
+   */
+  async followMark(measurementId: string, footageId: string, fromMs: number, toMs: number): Promise<void> {
+    await this.measurements.update({ id: measurementId, footageId, footageTimeMs: fromMs }, { footageTimeMs: toMs });
   }
 
   async create(workshopId: string, actorId: string, input: CreateMeasurementDto): Promise<Measurement> {

@@ -70,6 +70,16 @@ export class PartsService {
     return part;
   }
 
+  /** Whether the part is the workshop's (for domains that link to parts, such as marks). */
+  existsInWorkshop(workshopId: string, partId: string): Promise<boolean> {
+    return this.parts.existsBy({ id: partId, workshopId });
+  }
+
+  /** Features by id with their parts loaded (fit checks label and evaluate interfaces with them). */
+  featuresWithParts(featureIds: string[]): Promise<PartFeature[]> {
+    return this.features.find({ where: { id: In(featureIds) }, relations: { part: true } });
+  }
+
   async create(workshopId: string, input: CreatePartDto): Promise<Part> {
     const specs = (input.features ?? []).map((feature) => ({ feature, spec: toFeatureSpec(feature) }));
     const part = this.parts.create({

@@ -37,7 +37,7 @@ import {
   WorkshopSearchResponseDto,
 } from './dto/transcript.dto';
 import { decodeTranscriptFile } from './transcript-text';
-import { TRANSCRIPT_MAX_BYTES } from './transcript-limits';
+import { TRANSCRIPT_MAX_BYTES } from '../engine/transcript-limits';
 import { SingleFileUpload } from '../common/uploads/single-file-upload.decorator';
 import { TranscriptsService } from './transcripts.service';
 

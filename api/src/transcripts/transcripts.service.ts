@@ -30,7 +30,7 @@ import {
 import { TranscriptCue } from './entities/transcript-cue.entity';
 import { Transcript } from './entities/transcript.entity';
 import { searchTerms } from './transcript-search';
-import { TRANSCRIPT_MAX_BYTES, TRANSCRIPT_MAX_CUES } from './transcript-limits';
+import { TRANSCRIPT_MAX_BYTES, TRANSCRIPT_MAX_CUES } from '../engine/transcript-limits';
 import { toCue, toTranscript, toTranscriptRevision } from './transcript.mapper';
 import { TRANSCRIPT_ATTACHED, TranscriptAttachedEvent } from './transcripts.events';
 

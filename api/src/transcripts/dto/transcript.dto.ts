@@ -2,7 +2,7 @@ import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Transform } from 'class-transformer';
 import { IsBoolean, IsIn, IsInt, IsOptional, IsString, Length, Max, MaxLength, Min } from 'class-validator';
 import { TRANSCRIPT_FORMATS, type StoredTranscriptFormat } from '../entities/transcript.entity';
-import { TRANSCRIPT_MAX_BYTES } from '../transcript-limits';
+import { TRANSCRIPT_MAX_BYTES } from '../../engine/transcript-limits';
 import { NumberFromText } from '../../common/decorators/number-from-text.decorator';
 
 const FORMAT_CHOICES = ['auto', ...TRANSCRIPT_FORMATS] as const;
