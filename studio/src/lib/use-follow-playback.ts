@@ -67,8 +67,8 @@ export interface FollowingListOptions {
   count: number;
   /** The row playing now, or -1 (nothing playing, or the list shows something else, such as search results). */
   currentIndex: number;
-  /** A first guess at a row's height in px; rows are measured once drawn. */
-  estimateRowHeight: number;
+  /** A first guess at a row's height in px (for every row, or row by row); rows are measured once drawn. */
+  estimateRowHeight: number | ((index: number) => number);
   /** Keys that stay with a row when the rows change (e.g. a cue's index in the whole transcript). */
   rowKey?: (index: number) => number;
   /** Where the playing row sits: a third of the way down, or near the top. */
@@ -117,7 +117,7 @@ export function useFollowingList<T extends HTMLElement>({
   const rows = useVirtualizer<T, HTMLElement>({
     count,
     getScrollElement: () => boxNode.current,
-    estimateSize: () => estimateRowHeight,
+    estimateSize: typeof estimateRowHeight === 'number' ? () => estimateRowHeight : estimateRowHeight,
     getItemKey: rowKey,
     overscan: OVERSCAN_ROWS,
     scrollPaddingStart: lead,

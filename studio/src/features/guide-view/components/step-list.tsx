@@ -1,4 +1,4 @@
-import { Badge, Group, Paper, Stack, Text, Title, Typography, UnstyledButton } from '@mantine/core';
+import { Badge, Group, Paper, Text, Title, Typography, UnstyledButton } from '@mantine/core';
 import { memo, useMemo } from 'react';
 import { BackToNow } from '@/components/back-to-now';
 import type { PlaybackClock } from '@/lib/playback-clock';
@@ -42,9 +42,6 @@ function StepTime({ step, mainFootageId, onSeek }: { step: PublishedStep; mainFo
       aria-label={`Play step ${step.position} from ${formatClock(step.startMs)}`}
       data-testid="step-time"
     >
-      <svg width="10" height="10" viewBox="0 0 10 10" aria-hidden="true" focusable="false" className={classes.noPrint}>
-        <path d="M1 0l9 5-9 5z" fill="currentColor" />
-      </svg>
       {range}
     </UnstyledButton>
   );
@@ -104,7 +101,12 @@ interface StepRowProps {
   onSeek: (ms: number) => void;
 }
 
-/** One step; memoised, so when another step starts playing only the step that stops and the one that starts draw again. */
+/**
+ * One step; memoised, so when another step starts playing only the step that stops and the one that starts draw
+ * again. Laid out by the module's grid (number beside title and time, the rest under them) rather than nested
+ * Mantine groups: a 40-step guide is all in the page (it prints whole and find-in-page finds every step), so each
+ * step keeps to a few elements.
+ */
 const StepRow = memo(function StepRow({ step, marks, mainFootageId, current, rowRef, onSeek }: StepRowProps) {
   return (
     <li
@@ -114,49 +116,41 @@ const StepRow = memo(function StepRow({ step, marks, mainFootageId, current, row
       aria-current={current ? 'step' : undefined}
       data-testid="guide-step"
     >
-      <Stack gap={6}>
-        <Group gap="xs" wrap="nowrap" align="flex-start">
-          <span className={classes.stepNumber} aria-hidden="true">
-            {step.position}
-          </span>
-          <div style={{ flex: 1, minWidth: 0 }}>
-            <Title order={3} size="h5">
-              <span className={classes.visuallyHidden}>Step {step.position}: </span>
-              {step.title}
-            </Title>
-            <Group gap="xs" mt={2}>
-              <StepTime step={step} mainFootageId={mainFootageId} onSeek={onSeek} />
-              <StepMinutes minutes={step.estimatedMinutes} size="sm" />
-              {current && (
-                <Badge size="sm" variant="filled" className={classes.noPrint} data-testid="step-now">
-                  Playing now
-                </Badge>
-              )}
-            </Group>
-          </div>
-        </Group>
-        {step.caution && <CautionPanel level={step.caution.level} text={step.caution.text} compact />}
-        {step.body && (
-          <Typography className={classes.stepBody}>
-            {/* The server sanitises step bodies (a short allow-list of tags) before they reach any reader. */}
-            <div dangerouslySetInnerHTML={{ __html: step.body }} />
-          </Typography>
+      <span className={classes.stepNumber} aria-hidden="true">
+        {step.position}
+      </span>
+      <Title order={3} size="h5" className={classes.stepTitle}>
+        <span className={classes.visuallyHidden}>Step {step.position}: </span>
+        {step.title}
+      </Title>
+      <div className={classes.stepMeta}>
+        <StepTime step={step} mainFootageId={mainFootageId} onSeek={onSeek} />
+        <StepMinutes minutes={step.estimatedMinutes} size="sm" />
+        {current && (
+          <Badge size="sm" variant="filled" className={classes.noPrint} data-testid="step-now">
+            Playing now
+          </Badge>
         )}
-        {marks.length > 0 && (
-          <ul className={classes.markChips} aria-label={`Marks in step ${step.position}`}>
-            {marks.map((mark) => (
-              <li key={mark.id}>
-                <button type="button" className={classes.markChip} onClick={() => onSeek(mark.startMs)}>
-                  <MarkShape kind={mark.kind} size={10} />
-                  <span className={classes.visuallyHidden}>{MARK_LOOK[mark.kind]?.name ?? 'Mark'} </span>
-                  <span className={classes.timeText}>{formatClock(mark.startMs)}</span>
-                  <span>{mark.label || MARK_LOOK[mark.kind]?.name}</span>
-                </button>
-              </li>
-            ))}
-          </ul>
-        )}
-      </Stack>
+      </div>
+      {step.caution && <CautionPanel level={step.caution.level} text={step.caution.text} compact />}
+      {step.body && (
+        // The server sanitises step bodies (a short allow-list of tags) before they reach any reader.
+        <Typography className={classes.stepBody} dangerouslySetInnerHTML={{ __html: step.body }} />
+      )}
+      {marks.length > 0 && (
+        <ul className={classes.markChips} aria-label={`Marks in step ${step.position}`}>
+          {marks.map((mark) => (
+            <li key={mark.id}>
+              <button type="button" className={classes.markChip} onClick={() => onSeek(mark.startMs)}>
+                <MarkShape kind={mark.kind} size={10} />
+                <span className={classes.visuallyHidden}>{MARK_LOOK[mark.kind]?.name ?? 'Mark'} </span>
+                <span className={classes.timeText}>{formatClock(mark.startMs)}</span>
+                <span>{mark.label || MARK_LOOK[mark.kind]?.name}</span>
+              </button>
+            </li>
+          ))}
+        </ul>
+      )}
     </li>
   );
 });

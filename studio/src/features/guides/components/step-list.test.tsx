@@ -136,3 +136,58 @@ describe('StepList', () => {
     await waitFor(() => expect(requests.some((request) => request.method === 'DELETE' && request.url.pathname.endsWith('/steps/s2'))).toBe(true));
   });
 });
+
+describe('StepList of a long guide', () => {
+  // Invented: forty steps of a three-hour session, each with words and a moment.
+  const LONG = Array.from({ length: 40 }, (_, index) =>
+    aStep({
+      id: `l${index + 1}`,
+      position: index + 1,
+      title: `Check pass ${index + 1}`,
+      body: `<p>Measure the bore, pass ${index + 1}.</p>`,
+      footageId: 'f1',
+      startMs: index * 270_000 + 500,
+    }),
+  );
+
+  function renderLong() {
+    const guide = aGuide({ footageId: 'f1', steps: LONG });
+    stubApi([{ path: /^\/workshops\/w1\/guides\/g1$/, body: guide }]);
+    return renderWithProviders(<StepList workshopId="w1" guideId="g1" steps={LONG} mainFootageId="f1" onSeek={() => {}} onEdit={() => {}} />);
+  }
+
+  it('lists every step folded to its title line and time, with a few elements each', () => {
+    renderLong();
+    const cards = screen.getAllByTestId('step-card');
+    expect(cards).toHaveLength(40);
+    expect(within(cards[39]).getByRole('heading').textContent).toBe('Check pass 40');
+    expect(within(cards[39]).getByTestId('step-time').textContent).toBe('2:55:30.5');
+    // Whole, a step carried its words and a row of four controls; folded, its title line only.
+    expect(screen.queryByText('Measure the bore, pass 1.')).toBeNull();
+    expect(screen.queryAllByRole('button', { name: /^Edit step/ })).toHaveLength(0);
+    const elements = document.querySelectorAll('[data-testid="step-card"] *').length;
+    expect(elements / 40).toBeLessThanOrEqual(10);
+  });
+
+  it('opens one step at a time by its title, with its words and controls', () => {
+    renderLong();
+    const title = screen.getByRole('button', { name: 'Check pass 5' });
+    expect(title.getAttribute('aria-expanded')).toBe('false');
+    fireEvent.click(title);
+    expect(title.getAttribute('aria-expanded')).toBe('true');
+    expect(screen.getByText('Measure the bore, pass 5.')).toBeTruthy();
+    expect(screen.getAllByRole('button', { name: /^Edit step/ }).map((button) => button.getAttribute('aria-label'))).toEqual(['Edit step 5, Check pass 5']);
+    fireEvent.click(screen.getByRole('button', { name: 'Check pass 6' }));
+    expect(screen.queryByText('Measure the bore, pass 5.')).toBeNull();
+    expect(screen.getByText('Measure the bore, pass 6.')).toBeTruthy();
+    // The open step folds again by its title.
+    fireEvent.click(screen.getByRole('button', { name: 'Check pass 6' }));
+    expect(screen.queryAllByRole('button', { name: /^Edit step/ })).toHaveLength(0);
+  });
+
+  it('a guide of up to eight steps shows every step whole, as before', () => {
+    renderList();
+    expect(screen.getAllByRole('button', { name: /^Edit step/ })).toHaveLength(3);
+    expect(screen.queryAllByRole('button', { expanded: false })).toHaveLength(0);
+  });
+});

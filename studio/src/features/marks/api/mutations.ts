@@ -48,14 +48,63 @@ function useRefresh(alsoReadings = false) {
     ]);
 }
 
+/** The list's order, as the API gives it: by start, then creation (a provisional row, made now, goes last). */
+function inTimeOrder(marks: Mark[]): Mark[] {
+  return [...marks].sort((a, b) => a.startMs - b.startMs || a.createdAt.localeCompare(b.createdAt) || a.id.localeCompare(b.id));
+}
+
+/** Ids of marks drawn before the API has answered; never sent to it. */
+let provisionalCount = 0;
+export const PROVISIONAL_MARK_PREFIX = 'provisional-';
+
+/**
+ * Saving a mark changes one row of one footage's list: the list in the cache is changed at once (a new mark shows
+ * as soon as it is pinned, an edited one at its new time), then takes the API's answer, or goes back as it was
+ * when the API refuses. Nothing is read again: refetching every mark (and every list a link could name) for one
+ * pin drew the whole workspace again at three hours.
+ */
 export function useSaveMark(workshopId: string, footageId: string) {
-  const refresh = useRefresh();
+  const queryClient = useQueryClient();
+  const listKey = markQueries.list(workshopId, footageId).queryKey;
   return useMutation({
     mutationFn: ({ id, ...input }: MarkInput & { id?: string }) =>
       id
         ? apiRequest<Mark>(`${base(workshopId, footageId)}/marks/${id}`, { method: 'PATCH', body: input })
         : apiRequest<Mark>(`${base(workshopId, footageId)}/marks`, { method: 'POST', body: input }),
-    onSuccess: refresh,
+    onMutate: async ({ id, ...input }) => {
+      // A read on its way would overwrite the change with the list as it was.
+      await queryClient.cancelQueries({ queryKey: listKey });
+      const before = queryClient.getQueryData(listKey);
+      const now = new Date().toISOString();
+      const shownId = id ?? `${PROVISIONAL_MARK_PREFIX}${(provisionalCount += 1)}`;
+      if (before) {
+        const edited = id ? before.find((mark) => mark.id === id) : undefined;
+        const shown: Mark = {
+          id: shownId,
+          footageId,
+          endMs: null,
+          partId: null,
+          measurementId: null,
+          fitCheckId: null,
+          guideStepId: null,
+          createdBy: null,
+          createdAt: now,
+          ...edited,
+          ...input,
+          updatedAt: now,
+        };
+        queryClient.setQueryData(listKey, inTimeOrder([...before.filter((mark) => mark.id !== shownId), shown]));
+      }
+      return { before, shownId };
+    },
+    onSuccess: (saved, _input, context) => {
+      queryClient.setQueryData(listKey, (current) =>
+        current ? inTimeOrder([...current.filter((mark) => mark.id !== context.shownId && mark.id !== saved.id), saved]) : current,
+      );
+    },
+    onError: (_error, _input, context) => {
+      if (context?.before) queryClient.setQueryData(listKey, context.before);
+    },
   });
 }
 
@@ -72,11 +121,21 @@ export function useRecordReading(workshopId: string) {
   });
 }
 
+/** Removing a mark takes its row out of the cached list at once, and puts it back if the API refuses. */
 export function useRemoveMark(workshopId: string, footageId: string) {
-  const refresh = useRefresh();
+  const queryClient = useQueryClient();
+  const listKey = markQueries.list(workshopId, footageId).queryKey;
   return useMutation({
     mutationFn: (markId: string) => apiRequest<null>(`${base(workshopId, footageId)}/marks/${markId}`, { method: 'DELETE' }),
-    onSuccess: refresh,
+    onMutate: async (markId) => {
+      await queryClient.cancelQueries({ queryKey: listKey });
+      const before = queryClient.getQueryData(listKey);
+      if (before) queryClient.setQueryData(listKey, before.filter((mark) => mark.id !== markId));
+      return { before };
+    },
+    onError: (_error, _markId, context) => {
+      if (context?.before) queryClient.setQueryData(listKey, context.before);
+    },
   });
 }
 

@@ -3,7 +3,7 @@ import { useQuery } from '@tanstack/react-query';
 import { Link } from 'react-router-dom';
 import { markQueries, type Mark } from '../api/queries';
 import { describeLink } from './link-labels';
-import { LINK_OF_KIND } from './mark-kinds';
+import { LINK_OF_KIND, type MarkLinkField } from './mark-kinds';
 
 export interface MarkLinkProps {
   workshopId: string;
@@ -11,18 +11,22 @@ export interface MarkLinkProps {
   mark: Mark;
 }
 
-/** What a mark links to, by name, opening that record's page where the studio has one. */
-export function MarkLink({ workshopId, footageId, mark }: MarkLinkProps) {
-  const field = LINK_OF_KIND[mark.kind];
-  const linked = field !== undefined && mark[field] !== null;
+/**
+ * What a mark links to, by name, opening that record's page where the studio has one. A mark without a link draws
+ * nothing and watches no query: in a list of hundreds, each row drawn while scrolling stays cheap.
+ */
+export function MarkLink(props: MarkLinkProps) {
+  const field = LINK_OF_KIND[props.mark.kind];
+  if (field === undefined || !props.mark[field]) return null;
+  return <LinkedMarkLink {...props} field={field} />;
+}
+
+function LinkedMarkLink({ workshopId, footageId, mark, field }: MarkLinkProps & { field: MarkLinkField }) {
   // Each list loads only when a mark needs it; rows share the cached lists.
-  const parts = useQuery({ ...markQueries.parts(workshopId), enabled: linked && (field === 'partId' || field === 'measurementId') });
-  const measurements = useQuery({ ...markQueries.measurements(workshopId), enabled: linked && field === 'measurementId' });
-  const assemblies = useQuery({
-    ...markQueries.assemblies(workshopId),
-    enabled: linked && (field === 'fitCheckId' || field === 'measurementId'),
-  });
-  const guideSteps = useQuery({ ...markQueries.guideSteps(workshopId, footageId), enabled: linked && field === 'guideStepId' });
+  const parts = useQuery({ ...markQueries.parts(workshopId), enabled: field === 'partId' || field === 'measurementId' });
+  const measurements = useQuery({ ...markQueries.measurements(workshopId), enabled: field === 'measurementId' });
+  const assemblies = useQuery({ ...markQueries.assemblies(workshopId), enabled: field === 'fitCheckId' || field === 'measurementId' });
+  const guideSteps = useQuery({ ...markQueries.guideSteps(workshopId, footageId), enabled: field === 'guideStepId' });
   const described = describeLink(
     mark,
     { parts: parts.data, measurements: measurements.data, assemblies: assemblies.data, guideSteps: guideSteps.data },

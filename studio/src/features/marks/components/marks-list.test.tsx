@@ -1,4 +1,4 @@
-import { act, fireEvent, screen, waitFor } from '@testing-library/react';
+import { act, fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { formatClock } from '@/lib/clock';
 import { createPlaybackClock } from '@/lib/playback-clock';
@@ -93,6 +93,22 @@ describe('MarksList at three hours', () => {
     fireEvent.click(screen.getByRole('button', { name: 'Back to now' }));
     expect(await screen.findByText('Note 300')).toBeTruthy();
   }, 20_000);
+
+  it('a drawn row puts no dialog and watches no query in the page until it needs one', async () => {
+    const requests = stubApi([{ method: 'DELETE', path: /\/marks\/m000$/, status: 204 }]);
+    const { queryClient } = renderWithProviders(list(0));
+    await screen.findByText('Note 0');
+    expect(rowsDrawn().length).toBeGreaterThan(5);
+    // Each row's Remove used to keep a closed dialog (its portal, scroll lock and key listener) in the page.
+    expect(document.querySelector('[data-mantine-shared-portal-node]')?.childElementCount ?? 0).toBe(0);
+    // Notes link nothing: no row made a (disabled) query for the parts, readings, assemblies or guide steps.
+    expect(queryClient.getQueryCache().findAll({ queryKey: ['marks'] })).toHaveLength(0);
+
+    fireEvent.click(screen.getAllByRole('button', { name: 'Remove' })[0]);
+    const dialog = await screen.findByRole('dialog', { name: 'Remove this mark?' });
+    fireEvent.click(within(dialog).getByRole('button', { name: 'Remove mark' }));
+    await waitFor(() => expect(requests.filter((request) => request.method === 'DELETE').map((request) => request.url.pathname)).toEqual(['/api/workshops/w1/footage/f1/marks/m000']));
+  });
 
   it('draws again only the rows whose highlight changes as the video plays on', async () => {
     const { rerender } = renderWithProviders(list(1_000));

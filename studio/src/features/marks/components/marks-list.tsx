@@ -7,16 +7,25 @@ import { notifyError } from '@/lib/notify';
 import { usePlaybackSelect, type PlaybackClock } from '@/lib/playback-clock';
 import { useFollowingList } from '@/lib/use-follow-playback';
 import { useStableHandler } from '@/lib/use-stable-handler';
-import { useRemoveMark } from '../api/mutations';
+import { PROVISIONAL_MARK_PREFIX, useRemoveMark } from '../api/mutations';
 import { MARK_KINDS, type Mark, type MarkKind } from '../api/queries';
 import { KindShape } from './kind-shape';
-import { KIND_LOOK } from './mark-kinds';
+import { KIND_LOOK, LINK_OF_KIND } from './mark-kinds';
 import { MarkLink } from './mark-link';
 import classes from './virtual-list.module.css';
 import { useWorkshopReadOnly } from '@/lib/workshop-access';
 
-/** A first guess at a row's height; rows are measured once drawn (a label and a link make two lines). */
-const MARK_ROW_ESTIMATE_PX = 48;
+/**
+ * First guesses at a row's height, rows being measured once drawn: one line, or two when a link goes under the
+ * label. A close guess keeps the list from correcting its scroll position row after row while it is flung through.
+ */
+const MARK_ROW_ESTIMATE_PX = { oneLine: 26, withLink: 46 };
+
+/** Whether the row shows a link line under its label. */
+function hasLinkLine(mark: Mark): boolean {
+  const field = LINK_OF_KIND[mark.kind];
+  return field !== undefined && Boolean(mark[field]);
+}
 
 export interface MarksListProps {
   workshopId: string;
@@ -66,7 +75,7 @@ export function MarksList({ workshopId, footageId, marks, clock, onSeek, onEdit 
   const { following, box, rows, resume } = useFollowingList<HTMLDivElement>({
     count: shown.length,
     currentIndex: active,
-    estimateRowHeight: MARK_ROW_ESTIMATE_PX,
+    estimateRowHeight: (index) => (hasLinkLine(shown[index]) ? MARK_ROW_ESTIMATE_PX.withLink : MARK_ROW_ESTIMATE_PX.oneLine),
     place: 'third',
   });
 
@@ -104,7 +113,7 @@ export function MarksList({ workshopId, footageId, marks, clock, onSeek, onEdit 
                   style={{ transform: `translateY(${row.start}px)` }}
                   data-active={row.index === active || undefined}
                 >
-                  <MarkRow workshopId={workshopId} footageId={footageId} mark={shown[row.index]} onSeek={seek} onEdit={edit} onRemove={removeMark} readOnly={readOnly} />
+                  <MarkRow workshopId={workshopId} footageId={footageId} mark={shown[row.index]} onSeek={seek} onEdit={edit} onRemove={removeMark} readOnly={readOnly || shown[row.index].id.startsWith(PROVISIONAL_MARK_PREFIX)} />
                 </div>
               ))}
             </div>
@@ -125,7 +134,11 @@ interface MarkRowProps {
   readOnly: boolean;
 }
 
-/** One mark; memoised, so the playing moment moving on does not draw it again. */
+/**
+ * One mark; memoised, so the playing moment moving on does not draw it again. Plain elements laid out by the
+ * module's grid where Mantine's layout components would only add work: a fling through 400 marks draws a
+ * screenful of new rows every frame.
+ */
 const MarkRow = memo(function MarkRow({ workshopId, footageId, mark, onSeek, onEdit, onRemove, readOnly }: MarkRowProps) {
   const at = formatClock(mark.startMs, { tenths: true });
   return (
@@ -135,38 +148,38 @@ const MarkRow = memo(function MarkRow({ workshopId, footageId, mark, onSeek, onE
           {at}
         </Text>
       </UnstyledButton>
-      <Group className={classes.kind} gap="xs" wrap="nowrap" h={22}>
+      <div className={classes.kind}>
         <KindShape kind={mark.kind} />
-        <Text size="sm" fw={500} style={{ whiteSpace: 'nowrap' }}>
+        <Text span size="sm" fw={500}>
           {KIND_LOOK[mark.kind].name}
         </Text>
-      </Group>
+      </div>
       {/* The label as written (whole, wrapping between words), and under it what the mark links to. */}
-      <Stack className={classes.text} gap={0}>
+      <div className={classes.text}>
         {mark.label && (
           <Text size="sm" data-testid="mark-label">
             {mark.label}
           </Text>
         )}
         <MarkLink workshopId={workshopId} footageId={footageId} mark={mark} />
-      </Stack>
+      </div>
       {!readOnly && (
-      <Group className={classes.actions} gap={4} wrap="nowrap">
-        <Button size="compact-xs" variant="default" onClick={() => onEdit(mark)}>
-          Edit
-        </Button>
-        <ConfirmButton
-          size="compact-xs"
-          variant="subtle"
-          color="red"
-          question="Remove this mark?"
-          detail="What it links to (a part, a reading, a fit check, a step) stays."
-          confirmLabel="Remove mark"
-          onConfirm={() => onRemove(mark)}
-        >
-          Remove
-        </ConfirmButton>
-      </Group>
+        <div className={classes.actions}>
+          <Button size="compact-xs" variant="default" onClick={() => onEdit(mark)}>
+            Edit
+          </Button>
+          <ConfirmButton
+            size="compact-xs"
+            variant="subtle"
+            color="red"
+            question="Remove this mark?"
+            detail="What it links to (a part, a reading, a fit check, a step) stays."
+            confirmLabel="Remove mark"
+            onConfirm={() => onRemove(mark)}
+          >
+            Remove
+          </ConfirmButton>
+        </div>
       )}
     </div>
   );
