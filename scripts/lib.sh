@@ -62,7 +62,10 @@ start_mariadb() {
       mariadb-install-db --no-defaults --user="$(id -un)" --datadir="$datadir" \
         --auth-root-authentication-method=normal --skip-test-db >"$FW_LOGS/mariadb-install.log" 2>&1
     fi
-    mariadbd --no-defaults --user="$(id -un)" --datadir="$datadir" \
+    # Temporary tables and sort files go beside the data, not in /tmp, where a cleaner can delete them mid-query
+    # (a full-size benchmark's FULLTEXT build and large sorts failed that way).
+    mkdir -p "$FW_DATA/mariadb-tmp"
+    mariadbd --no-defaults --user="$(id -un)" --datadir="$datadir" --tmpdir="$FW_DATA/mariadb-tmp" \
       --socket="$FW_RUN/mysqld.sock" --pid-file="$FW_RUN/mysqld.pid" \
       --port="$DB_PORT" --bind-address=127.0.0.1 --skip-name-resolve \
       --character-set-server=utf8mb4 --collation-server=utf8mb4_unicode_ci \

@@ -2,7 +2,9 @@ import { NestExpressApplication } from '@nestjs/platform-express';
 import { randomUUID } from 'node:crypto';
 import request from 'supertest';
 import { DataSource } from 'typeorm';
-import { FitFinderService } from '../src/fit-finder/fit-finder.service';
+import { MysqlQueryRunner } from 'typeorm/driver/mysql/MysqlQueryRunner';
+import type { FitFinderQueryDto } from '../src/fit-finder/dto/fit-finder.dto';
+import { FINDER_CANDIDATES, FINDER_NEAR_CANDIDATES, FitFinderService } from '../src/fit-finder/fit-finder.service';
 import { createTestApp } from './create-test-app';
 import { signUpAndSignIn, uniqueSlug, type Agent, type TestAccount } from './support/accounts';
 import { makeClip, removeScratch, uploadFile, waitUntilProcessed } from './support/footage';
@@ -366,6 +368,116 @@ describe('Fit finder (real MariaDB)', () => {
         expect({ query, fullScans }).toEqual({ query, fullScans: [] });
       }
     }
+  });
+
+  it('narrows splines by the pitch as the engine compares it, and still lists the other pitches as near misses', async () => {
+    const byFraction = await find({ splineTeeth: 43, splinePitch: '16/32' });
+    // "16 DP" names no stub pitch: the same diametral pitch, so the same matches (the engine notes the stub).
+    const byDiametral = await find({ splineTeeth: 43, splinePitch: '16 DP' });
+    expect(byDiametral.results.map((result) => result.workshop.slug)).toEqual(byFraction.results.map((result) => result.workshop.slug));
+    expect(byDiametral.nearMisses.map((result) => result.workshop.slug)).toEqual([otherPitchShop.slug]);
+    // A module is another pitch system: nothing matches, and every 43-tooth assembly is a near miss from the wider window.
+    const byModule = await find({ splineTeeth: 43, splinePitch: 'm1.25' });
+    expect(byModule.total).toBe(0);
+    expect(byModule.nearMisses.map((result) => result.workshop.slug).sort()).toEqual([confirmedShop.slug, benchShop.slug, openShop.slug, otherPitchShop.slug].sort());
+    expect(byModule.nearMisses.every((result) => result.checks[0].verdict === 'near_miss' && /^same teeth, /.test(result.checks[0].reasons[0]))).toBe(true);
+    // The 24/48 shop matches its own pitch, and the 16/32 shops are its near misses.
+    const byOther = await find({ splineTeeth: 43, splinePitch: '24/48' });
+    expect(byOther.results.map((result) => result.workshop.slug)).toEqual([otherPitchShop.slug]);
+    expect(byOther.nearMissTotal).toBe(3);
+    const capped = (answer: FinderAnswer) => answer as FinderAnswer & { totalCapped: boolean; nearMissCapped: boolean };
+    expect([byFraction, byDiametral, byModule, byOther].map((answer) => [capped(answer).totalCapped, capped(answer).nearMissCapped])).toEqual(Array(4).fill([false, false]));
+  });
+
+  it('reads bounded candidate windows: every candidate statement has a LIMIT, near misses a narrower one', async () => {
+    const finder = app.get(FitFinderService);
+    const queries: FitFinderQueryDto[] = [
+      { splineTeeth: 43, splinePitch: '16/32' },
+      { splineTeeth: 43, vehicle: vehicleWord },
+      { diameter: '15 mm', fit: 'H7/g6' },
+      { lengthMin: '500 mm' },
+      { maker: 'Confirmed Gear', vehicle: vehicleWord },
+    ];
+    for (const query of queries) {
+      for (const statement of finder.candidateStatements(query)) {
+        const limit = Number(/LIMIT (\d+)\s*$/.exec(statement.sql)?.[1] ?? Number.NaN);
+        expect({ query, window: statement.window, limit }).toEqual({ query, window: statement.window, limit: statement.window === 'near' ? FINDER_NEAR_CANDIDATES : FINDER_CANDIDATES });
+      }
+    }
+    // A pitch narrows the match window by the keyed pitch; a near-miss window is read apart, for the other pitches.
+    const pitched = finder.candidateStatements({ splineTeeth: 43, splinePitch: '16/32' });
+    expect(pitched.map((statement) => statement.window)).toEqual(['match', 'near']);
+    expect(pitched[0].parameters).toEqual(expect.arrayContaining([43, 'dp16.000000']));
+  });
+
+  it('runs only keyed statements for a question, the page details included: EXPLAIN shows no full scan of a growing table', async () => {
+    const database = app.get(DataSource);
+    const finder = app.get(FitFinderService);
+    // Plans of a few-row table say nothing (a scan of 18 rows is the optimizer's cheapest choice): grow the features and
+    // readings tables first, 300 features with 10 readings each on the draft shop's part, which no answer shows.
+    const draftWorkshopId = draftShop.base.split('/').pop()!;
+    const [draftPart] = await database.query<{ id: string }[]>('SELECT id FROM parts WHERE workshop_id = ? AND part_number = ?', [draftWorkshopId, 'DRAFT-43C']);
+    await database.query(
+      `INSERT INTO part_features (id, part_id, name, kind, spec, display_unit) SELECT UUID(), ?, CONCAT('grown ', seq), 'free', '{}', 'mm' FROM seq_1_to_300`,
+      [draftPart.id],
+    );
+    await database.query(
+      `INSERT INTO measurements (id, workshop_id, feature_id, quantity, value_text, unit, value_nm, instrument_kind, instrument_resolution_nm, taken_at)
+       SELECT UUID(), ?, f.id, 'other', '1', 'mm', 1000000, 'caliper', 10000, NOW(3) FROM part_features f JOIN seq_1_to_10 WHERE f.part_id = ? AND f.name LIKE 'grown %'`,
+      [draftWorkshopId, draftPart.id],
+    );
+    await database.query('ANALYZE TABLE part_features, measurements');
+    const ran: { sql: string; parameters: unknown[] }[] = [];
+    const query = MysqlQueryRunner.prototype.query;
+    const spy = jest.spyOn(MysqlQueryRunner.prototype, 'query').mockImplementation(function (this: MysqlQueryRunner, sql: string, parameters?: unknown[] | object, structured?: boolean) {
+      ran.push({ sql, parameters: Array.isArray(parameters) ? parameters : [] });
+      return query.call(this, sql, parameters, structured);
+    });
+    try {
+      for (const dto of [
+        { splineTeeth: 43, splinePitch: '16/32' },
+        { splineTeeth: 43 },
+        { diameter: '15 mm', toleranceClass: 'H7' },
+        { diameter: '0.5910 in' },
+        { diameter: '15 mm', fit: 'H7/g6' },
+        { lengthMin: '515 mm', lengthMax: '570 mm' },
+        { partNumber: 'CONFIRMED-43C', maker: 'Confirmed Gear' },
+      ] as FitFinderQueryDto[]) {
+        const answer = await finder.find({ vehicle: vehicleWord, ...dto });
+        // Every question finds something, so the page's details (readings, marks, names, fit reports) were read too.
+        expect({ dto, found: answer.results.length + answer.nearMisses.length > 0 }).toEqual({ dto, found: true });
+      }
+    } finally {
+      spy.mockRestore();
+    }
+    // The grown rows go again once the plans are read (their readings with them).
+    const dropGrown = () => database.query("DELETE FROM part_features WHERE part_id = ? AND name LIKE 'grown %'", [draftPart.id]);
+    const selects = ran.filter(({ sql }) => /^\s*\(?\s*SELECT/i.test(sql));
+    expect(selects.length).toBeGreaterThan(20);
+    // Every statement with a scan (a whole table, or a whole index) of a table of 200 rows or more is named, with
+    // its WHERE. Below that a scan is the optimizer's cheaper choice and says nothing of the plan at size (a
+    // 3-row evidence table is scanned for 4 keys); the tables grown above are well over it.
+    const scans: { sql: string; fullScans: (string | null)[] }[] = [];
+    for (const { sql, parameters } of selects) {
+      const plan = await database.query<{ table: string | null; type: string | null; rows: string | number | null }[]>(`EXPLAIN ${sql}`, parameters);
+      const fullScans = plan
+        .filter((step) => (step.type === 'ALL' || step.type === 'index') && step.table !== null && !step.table.startsWith('<') && Number(step.rows) >= 200)
+        .map((step) => step.table);
+      if (fullScans.length > 0) scans.push({ sql: `${sql.trim().slice(0, 60)} … ${sql.slice(sql.search(/WHERE/i)).replace(/\s+/g, ' ').slice(0, 200)}`, fullScans });
+    }
+    await dropGrown();
+    expect(scans).toEqual([]);
+  });
+
+  // Last: it adds a 43-tooth shop, which the totals of the tests above do not count.
+  it('matches a module spline by its module (ISO 4156) through the keyed pitch, and lists it as a near miss for a diametral question', async () => {
+    const metricShop = await makeShop('Metric', { pitch: { module: 1.25 } as unknown as { diametralPitch: number; stubPitch: number } });
+    expect((await find({ splineTeeth: 43, splinePitch: 'm1.25' })).results.map((result) => result.workshop.slug)).toEqual([metricShop.slug]);
+    expect((await find({ splineTeeth: 43, splinePitch: 'module 1.25' })).total).toBe(1);
+    expect((await find({ splineTeeth: 43, splinePitch: 'm1.5' })).total).toBe(0);
+    const diametral = await find({ splineTeeth: 43, splinePitch: '16/32' });
+    expect(diametral.results.map((result) => result.workshop.slug)).not.toContain(metricShop.slug);
+    expect(diametral.nearMisses.find((result) => result.workshop.slug === metricShop.slug)?.checks[0].reasons[0]).toMatch(/^same teeth, other pitch: 16\/32 .* this is module 1.25/);
   });
 
   /** A reading on the shop's coupler spline feature, so a check has evidence to be confirmed with. */

@@ -15,6 +15,7 @@
 // BENCH_QUERIES (default 200). The data is kept between runs (regenerated when the sizes differ).
 import { createRequire } from 'node:module';
 import { randomUUID } from 'node:crypto';
+import { loadavg } from 'node:os';
 import { median, root, startApi } from '../lib/harness.mjs';
 
 const require = createRequire(`${root}api/package.json`);
@@ -208,6 +209,11 @@ async function main() {
     host: process.env.DB_HOST, port: Number(process.env.DB_PORT), user: process.env.DB_USER, password: process.env.DB_PASSWORD, database: DB_NAME,
     multipleStatements: false,
   });
+  // MariaDB's temporary files (the FULLTEXT build's sort, large sorts) must not live where a /tmp cleaner can remove them.
+  const [[{ tmpdir }]] = await connection.query('SELECT @@tmpdir AS tmpdir');
+  console.log(`MariaDB tmpdir ${tmpdir}${/^\/tmp(\/|$)/u.test(tmpdir) ? ' (under /tmp: restart this profile\'s MariaDB with scripts/lib.sh to move it beside the data)' : ''}`);
+  const load = () => loadavg().map((value) => value.toFixed(2)).join(', ');
+  console.log(`load average at start: ${load()}`);
   const have = await generated(connection);
   if (have.guides !== GUIDES || have.cues !== GUIDES * CUES_PER_GUIDE) await generate(connection);
   else console.log(`reusing ${have.guides.toLocaleString('en')} guides and ${have.cues.toLocaleString('en')} cues in ${DB_NAME}`);
@@ -247,6 +253,8 @@ async function main() {
         if (!response.ok) throw new Error(`finder ${path}: ${response.status} ${await response.text()}`);
         await response.json();
       }));
+      const sample = await (await fetch(`${api.baseUrl}${finderQueries[1]}`, { headers: { 'X-Forwarded-For': '10.9.9.8' } })).json();
+      console.log(`finder sample ${finderQueries[1]}: total ${sample.total}${sample.totalCapped ? '+' : ''}, near misses ${sample.nearMissTotal}${sample.nearMissCapped ? '+' : ''}`);
     }
 
     const searchStats = summary(ours);
@@ -258,6 +266,7 @@ async function main() {
     console.log(`baseline MATCH … AGAINST   median ${ms(plainStats.median)}  p95 ${ms(plainStats.p95)}`);
     console.log(`search p95 / baseline p95: ${(searchStats.p95 / plainStats.p95).toFixed(2)} (goal ≤ 2), search p95 ${searchStats.p95 < 150 ? '<' : '≥'} 150 ms`);
     if (finder) console.log(`finder p95 / baseline p95: ${(finder.p95 / plainStats.p95).toFixed(2)} (goal ≤ 2), finder p95 ${finder.p95 < 150 ? '<' : '≥'} 150 ms`);
+    console.log(`load average at end: ${load()}`);
   } finally {
     await api.stop();
     await connection.end();

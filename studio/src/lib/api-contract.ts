@@ -4720,14 +4720,18 @@ export interface components {
              *     ]
              */
             understood: string[];
-            /** @description matching results in all */
+            /** @description matching results in all (among the best-ranked 1,000 candidates per criterion: see totalCapped) */
             total: number;
+            /** @description true when a criterion had more candidates than the finder judges (1,000): total counts the best-ranked of them, and more may match */
+            totalCapped: boolean;
             offset: number;
             limit: number;
             /** @description confirmed first, then bench-passed, then open */
             results: components["schemas"]["FitFinderResultDto"][];
-            /** @description near misses in all */
+            /** @description near misses in all (among the best-ranked 200 near-miss candidates: see nearMissCapped) */
             nearMissTotal: number;
+            /** @description true when the near-miss candidates filled their window (200): more near misses may exist */
+            nearMissCapped: boolean;
             /** @description the first near misses, each with its reason (same page size, from the start) */
             nearMisses: components["schemas"]["FitFinderResultDto"][];
         };

@@ -171,11 +171,15 @@ export class FitFinderResultDto {
 export class FitFinderAnswerDto {
   @ApiProperty({ type: [String], example: ['spline: 21 teeth, 16/32 diametral pitch (ANSI B92.1)'], description: 'the query as understood' })
   understood!: string[];
-  @ApiProperty({ description: 'matching results in all' }) total!: number;
+  @ApiProperty({ description: 'matching results in all (among the best-ranked 1,000 candidates per criterion: see totalCapped)' }) total!: number;
+  @ApiProperty({ description: 'true when a criterion had more candidates than the finder judges (1,000): total counts the best-ranked of them, and more may match' })
+  totalCapped!: boolean;
   @ApiProperty() offset!: number;
   @ApiProperty() limit!: number;
   @ApiProperty({ type: [FitFinderResultDto], description: 'confirmed first, then bench-passed, then open' }) results!: FitFinderResultDto[];
-  @ApiProperty({ description: 'near misses in all' }) nearMissTotal!: number;
+  @ApiProperty({ description: 'near misses in all (among the best-ranked 200 near-miss candidates: see nearMissCapped)' }) nearMissTotal!: number;
+  @ApiProperty({ description: 'true when the near-miss candidates filled their window (200): more near misses may exist' })
+  nearMissCapped!: boolean;
   @ApiProperty({ type: [FitFinderResultDto], description: 'the first near misses, each with its reason (same page size, from the start)' })
   nearMisses!: FitFinderResultDto[];
 }

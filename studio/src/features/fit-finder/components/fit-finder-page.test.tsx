@@ -45,10 +45,12 @@ const NEAR: FitFinderResult = {
 const ANSWER: FitFinderAnswer = {
   understood: ['spline: 21 teeth, 16/32 diametral pitch (ANSI B92.1)'],
   total: 1,
+  totalCapped: false,
   offset: 0,
   limit: 10,
   results: [MATCH],
   nearMissTotal: 1,
+  nearMissCapped: false,
   nearMisses: [NEAR],
 };
 

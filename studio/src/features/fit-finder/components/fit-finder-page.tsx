@@ -192,7 +192,10 @@ export function FitFinderPage() {
           </Text>
           <section aria-labelledby="finder-matches">
             <Title order={2} size="h3" id="finder-matches">
-              {answer.data.total === 0 ? 'No proven match yet' : `${answer.data.total} ${answer.data.total === 1 ? 'match' : 'matches'}`}
+              {answer.data.total === 0
+                ? 'No proven match yet'
+                : // A capped count is the best-ranked candidates' share: more may match ("1,000+ matches").
+                  `${answer.data.total.toLocaleString('en')}${answer.data.totalCapped ? '+' : ''} ${answer.data.total === 1 && !answer.data.totalCapped ? 'match' : 'matches'}`}
             </Title>
             <Stack gap="sm" mt="sm">
               {answer.data.results.map((result) => (
