@@ -126,7 +126,8 @@ test('a signed-out reader finds the guide, follows it beside the video, searches
   await page.getByRole('heading', { level: 1, name: title }).waitFor();
   // The date is written in the reader's locale (lib/dates.ts), so the journey asks the browser how it writes today.
   const today = await page.evaluate(() => new Intl.DateTimeFormat(undefined, { dateStyle: 'medium' }).format(new Date()));
-  assert.equal(await page.getByTestId('guide-revision').textContent(), `Revision 1 · published ${today} · First edition`);
+  // The revision line ends with the link to the guide's revision history.
+  assert.equal(await page.getByTestId('guide-revision').textContent(), `Revision 1 · published ${today} · First edition · Revision history`);
 
   // Safety at the top: most severe first, each header spelling out its signal word; the disclaimer always there.
   const levels = await page.getByTestId('cautions-block').getByTestId('caution').evaluateAll((panels) => panels.map((panel) => panel.dataset.level));
