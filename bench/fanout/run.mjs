@@ -6,7 +6,7 @@
 // worker's memory. Run with: bash bench/run.sh fanout   (BENCH_FOLLOWERS, default 10000).
 import { spawn, spawnSync } from 'node:child_process';
 import { randomUUID } from 'node:crypto';
-import { existsSync, readFileSync, rmSync } from 'node:fs';
+import { closeSync, existsSync, openSync, readFileSync, readSync, rmSync, statSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { createServer } from 'node:net';
 import { root, rssBytes, session, startApi, watchRss } from '../lib/harness.mjs';
@@ -16,6 +16,8 @@ const nodemailer = require('nodemailer');
 
 const FOLLOWERS = Number(process.env.BENCH_FOLLOWERS ?? 10_000);
 const CONCURRENCY = Number(process.env.MAIL_CONCURRENCY ?? 5);
+/** The baseline's connections: the same as the product's unless set (to compare against a relay given more). */
+const PLAIN_CONNECTIONS = Number(process.env.BENCH_PLAIN_CONNECTIONS ?? CONCURRENCY);
 const MB = 1_000_000;
 
 function freePort() {
@@ -58,6 +60,20 @@ function recorded(file) {
   return readFileSync(file, 'utf8').split('\n').filter(Boolean).map((line) => JSON.parse(line));
 }
 
+/** MariaDB's own counters (statements, log syncs), to tell what the product arm cost the database per mail. */
+function dbCounters() {
+  const rows = sql("SHOW GLOBAL STATUS WHERE Variable_name IN ('Com_update','Com_select','Com_commit','Innodb_data_fsyncs','Questions')");
+  return Object.fromEntries(rows.split('\n').map((line) => line.split('\t')).map(([name, value]) => [name, Number(value)]));
+}
+
+/** How evenly the mails arrived: gaps between consecutive acceptances of `subject` at the fake (claims or commits stalling show as long gaps). */
+function arrivalGaps(records, subject) {
+  const times = records.filter((record) => record.subject === subject).map((record) => record.at).sort((a, b) => a - b);
+  const gaps = times.slice(1).map((time, index) => time - times[index]).sort((a, b) => a - b);
+  const at = (share) => gaps[Math.min(gaps.length - 1, Math.floor(share * gaps.length))] ?? 0;
+  return { p50: at(0.5), p99: at(0.99), max: gaps.at(-1) ?? 0, over100: gaps.filter((gap) => gap > 100).length, idleMs: gaps.filter((gap) => gap > 100).reduce((sum, gap) => sum + gap, 0) };
+}
+
 function tally(records, subject, recipients) {
   const copies = new Map();
   let last = 0;
@@ -74,11 +90,41 @@ function tally(records, subject, recipients) {
   };
 }
 
+/**
+ * Counts the fake's records with `subject` as they arrive, reading only the bytes added since the last look:
+ * re-reading and parsing the whole file (20,000 lines by the end) several times a second cost a core's worth
+ * of CPU on this 2-core box during the product arm only, and so slowed the arm it was measuring.
+ */
+function arrivalCounter(file, subject) {
+  let offset = 0;
+  let partial = '';
+  const seen = new Set();
+  const needle = JSON.stringify(subject);
+  return () => {
+    if (!existsSync(file)) return 0;
+    const size = statSync(file).size;
+    if (size > offset) {
+      const buffer = Buffer.alloc(size - offset);
+      const fd = openSync(file, 'r');
+      try {
+        readSync(fd, buffer, 0, buffer.length, offset);
+      } finally {
+        closeSync(fd);
+      }
+      offset = size;
+      const lines = (partial + buffer.toString('utf8')).split('\n');
+      partial = lines.pop() ?? '';
+      for (const line of lines) if (line.includes(needle)) for (const to of JSON.parse(line).to) seen.add(to);
+    }
+    return seen.size;
+  };
+}
+
 async function waitFor(what, check, timeoutMs) {
   const deadline = Date.now() + timeoutMs;
   while (Date.now() < deadline) {
     if (await check()) return;
-    await sleep(100);
+    await sleep(250);
   }
   throw new Error(`${what} did not happen within ${timeoutMs} ms`);
 }
@@ -143,11 +189,11 @@ async function scenario(baseUrl, recipients) {
 
 /** The baseline: the same number of mails, each to its own address, through one pooled transport with the same concurrency. */
 async function plainLoop(port, recipients, subject, sample) {
-  const transport = nodemailer.createTransport({ pool: true, maxConnections: CONCURRENCY, maxMessages: 500, host: '127.0.0.1', port, ignoreTLS: true });
+  const transport = nodemailer.createTransport({ pool: true, maxConnections: PLAIN_CONNECTIONS, maxMessages: 500, host: '127.0.0.1', port, ignoreTLS: true });
   const queue = [...recipients];
   const started = Date.now();
   await Promise.all(
-    Array.from({ length: CONCURRENCY }, async () => {
+    Array.from({ length: PLAIN_CONNECTIONS }, async () => {
       for (let to = queue.shift(); to; to = queue.shift()) {
         await transport.sendMail({ from: process.env.MAIL_FROM, to, subject, text: sample.text, html: sample.html, headers: sample.headers });
       }
@@ -186,21 +232,29 @@ async function main() {
     const apiRssBefore = rssBytes(api.pid);
     const stopApiWatch = watchRss(api.pid);
     const stopWorkerWatch = watchRss(worker.pid);
+    const countersBefore = dbCounters();
     const started = Date.now();
     await news.confirm();
-    await waitFor('every follower to be mailed', () => tally(recorded(file), news.subject, followers).delivered >= FOLLOWERS, 600_000);
+    const arrivals = arrivalCounter(file, news.subject);
+    await waitFor('every follower to be mailed', () => arrivals() >= FOLLOWERS, 600_000);
     await sleep(2000); // a doubled mail would arrive a moment later
+    const countersAfter = dbCounters();
     const apiPeak = stopApiWatch();
     const workerPeak = stopWorkerWatch();
     const product = tally(recorded(file), news.subject, followers);
     const productRate = product.delivered / ((product.last - started) / 1000);
     const [pending, failed] = sql("SELECT SUM(state='pending'), SUM(state='failed') FROM mail_deliveries WHERE kind='fit-news'").split('\t');
 
-    console.log(`fit-news fan-out to ${FOLLOWERS} followers, ${CONCURRENCY} SMTP connections, same SMTP fake:`);
+    console.log(`fit-news fan-out to ${FOLLOWERS} followers, SMTP connections: relay ${CONCURRENCY}, plain loop ${PLAIN_CONNECTIONS}; same SMTP fake:`);
     console.log(`  plain pooled nodemailer loop   ${plainRate.toFixed(0)} mails/s (${plain.delivered} sent, ${plain.lost} lost, ${plain.doubled} doubled)`);
     console.log(`  transition → outbox → relay    ${productRate.toFixed(0)} mails/s (${product.delivered} sent, ${product.lost} lost, ${product.doubled} doubled)`);
     console.log(`  ratio product/plain            ${(productRate / plainRate).toFixed(2)} (goal ≥ 0.9)`);
     console.log(`  outbox afterwards              pending ${pending === 'NULL' ? 0 : pending}, failed ${failed === 'NULL' ? 0 : failed}`);
+    const per = (name) => ((countersAfter[name] - countersBefore[name]) / FOLLOWERS).toFixed(2);
+    console.log(`  MariaDB per mail               ${per('Questions')} statements (${per('Com_update')} UPDATE, ${per('Com_select')} SELECT, ${per('Com_commit')} COMMIT), ${per('Innodb_data_fsyncs')} log fsyncs`);
+    const gaps = arrivalGaps(recorded(file), news.subject);
+    const plainGaps = arrivalGaps(recorded(file), plainSubject);
+    console.log(`  gaps between arrivals, ms      product p50 ${gaps.p50} p99 ${gaps.p99} max ${gaps.max}, ${gaps.over100} over 100 ms (${gaps.idleMs} ms); plain p50 ${plainGaps.p50} p99 ${plainGaps.p99} max ${plainGaps.max}`);
     console.log(`  API RSS                        ${(apiRssBefore / MB).toFixed(0)} MB before, ${(apiPeak / MB).toFixed(0)} MB peak during the fan-out`);
     console.log(`  worker RSS                     ${(workerPeak / MB).toFixed(0)} MB peak`);
   } finally {

@@ -7,6 +7,7 @@ import { DataSource, EntityManager } from 'typeorm';
 import { newId } from '../common/database/columns';
 import type { AppConfig } from '../config/app-config';
 import { MailService, SmtpRefusal } from '../infra/mail/mail.service';
+import { DeliveryRecorder } from './delivery-recorder';
 import { MailOutbox, type MailDraft } from './mail-outbox.service';
 
 /** Turns one outbox event into the mail it causes; runs inside the relay's transaction (use `manager`). */
@@ -32,6 +33,8 @@ interface DueDelivery {
   body_html: string | null;
   headers: string | null;
   attempts: number;
+  /** When this process claimed it: no send starts on it after SEND_WINDOW_MS. */
+  claimedAt: number;
 }
 
 /** Idle wait between looks at the outbox. */
@@ -44,6 +47,8 @@ const CLAIMS_PER_CONNECTION = 20;
 const LEASE_MS = 30_000;
 /** No new send starts after this much of the lease is used, so a live process never outlives its lease. */
 const SEND_WINDOW_MS = 15_000;
+/** A sending round claims again and again for this long, then lets the loop expand new events and run chores. */
+const ROUND_MS = 10_000;
 /** A message that keeps failing for reasons other than a refusal (server away) is given up after this many tries. */
 const MAX_ATTEMPTS = 12;
 const MAX_BACKOFF_MS = 5 * 60_000;
@@ -63,8 +68,8 @@ export function backoffMs(attempts: number): number {
  * LOCKED`, expands each into deliveries (unique per idempotency key) and marks it relayed, all in one
  * transaction; (2) claims due deliveries the same way (a lease, so two processes never send the same
  * one and a dead process's claims lapse), sends them through the pooled SMTP transport with bounded
- * concurrency under a per-minute cap counted across processes, and marks each sent only after the
- * server accepted it.
+ * concurrency under a per-minute cap counted across processes, claiming the next batch while the last
+ * one sends, and marks each sent only after the server accepted it (in grouped writes, DeliveryRecorder).
  *
  * Exactly once up to one window, which is named and counted: each send is written down as started
  * (`attempt_started_at`, under a live lease) before the message goes to the server, and the mark is
@@ -183,80 +188,102 @@ export class MailRelay implements OnApplicationBootstrap, OnModuleDestroy {
     });
   }
 
+  /**
+   * Sends what is due for up to ROUND_MS: the connections take deliveries from a local queue that is claimed
+   * again while they send (never idle between claims), and their records go down in groups.
+   */
   private async sendDue(): Promise<number> {
-    const claimed = await this.claim();
-    if (!claimed.length) return 0;
-    const started = Date.now();
-    const queue = [...claimed];
+    const roundStarted = Date.now();
+    const batch = this.settings.concurrency * CLAIMS_PER_CONNECTION;
+    const held = await this.claim(0);
+    if (!held.length) return 0;
+    const recorder = new DeliveryRecorder(this.dataSource, this.owner, LEASE_MS, this.logger);
+    let handled = held.length;
+    let claiming: Promise<void> | undefined;
+    let claimsDone = false;
+    let claimError: unknown;
     let connectionDown = false;
-    let databaseDown = false;
-    // Records of accepted messages, written while the connection goes on to its next message (awaited below).
-    const records: Promise<void>[] = [];
+    const mayClaim = () =>
+      !claimsDone && !claimError && !connectionDown && !recorder.databaseDown && !this.stopping && Date.now() - roundStarted < ROUND_MS;
+    // The next claim starts while the connections still have half a batch to send.
+    const refill = () => {
+      claiming ??= this.claim(held.length)
+        .then((rows) => {
+          held.push(...rows);
+          handled += rows.length;
+          if (!rows.length) claimsDone = true;
+        })
+        .catch((error: unknown) => {
+          claimError = error;
+        })
+        .finally(() => {
+          claiming = undefined;
+        });
+      return claiming;
+    };
     const work = async () => {
-      for (let next = queue.shift(); next; next = queue.shift()) {
-        // Without the database nothing can be written down, so nothing is sent; the claims lapse unmarked.
-        if (databaseDown) continue;
-        if (connectionDown || this.stopping || Date.now() - started > SEND_WINDOW_MS) {
-          await this.release(next.id, connectionDown ? 2000 : 0);
+      for (;;) {
+        if (held.length <= batch / 2 && mayClaim()) void refill();
+        const next = held.shift();
+        if (!next) {
+          if (!claiming) return;
+          await claiming;
           continue;
         }
-        const begun = await this.startAttempt(next.id).catch(() => undefined);
-        if (begun === undefined) databaseDown = true;
-        if (!begun) continue; // the database is away, or the lease lapsed and another relay has it
-        const down = await this.deliver(next, records);
-        if (down) connectionDown = true;
+        // Without the database nothing can be written down, so nothing is sent; the claims lapse unmarked.
+        if (recorder.databaseDown) continue;
+        if (connectionDown || this.stopping || Date.now() - next.claimedAt > SEND_WINDOW_MS) {
+          await this.release(next.id, connectionDown ? 2000 : 0).catch(() => undefined);
+          continue;
+        }
+        // Waits for the record of this connection's last message too: one message unrecorded per connection at most.
+        if (!(await recorder.startAttempt(next.id))) continue; // the database is away, or the lease lapsed and another relay has it
+        if (await this.deliver(next, recorder)) connectionDown = true;
       }
     };
     await Promise.all(Array.from({ length: this.settings.concurrency }, work));
-    await Promise.all(records);
-    if (databaseDown) throw new Error('the database went away while sending; unsent claims lapse and are sent by the next claim');
-    return claimed.length;
+    await recorder.settled();
+    if (recorder.databaseDown) throw new Error('the database went away while sending; unsent claims lapse and are sent by the next claim');
+    if (claimError) throw claimError;
+    return handled;
   }
 
-  private async claim(): Promise<DueDelivery[]> {
+  /** Claims due deliveries for this process under a lease, up to a batch and the per-minute cap (counting those it holds). */
+  private async claim(holding: number): Promise<DueDelivery[]> {
     const [{ sentLastMinute }] = (await this.dataSource.query(
       'SELECT COUNT(*) AS sentLastMinute FROM mail_deliveries WHERE sent_at > NOW(3) - INTERVAL 1 MINUTE',
     )) as { sentLastMinute: string | number }[];
-    const allowed = Math.min(this.settings.concurrency * CLAIMS_PER_CONNECTION, this.settings.ratePerMinute - Number(sentLastMinute));
+    const allowed = Math.min(
+      this.settings.concurrency * CLAIMS_PER_CONNECTION,
+      this.settings.ratePerMinute - Number(sentLastMinute) - holding,
+    );
     if (allowed <= 0) return [];
-    const ids = await this.dataSource.transaction(async (manager) => {
-      const rows = (await manager.query(
-        `SELECT id FROM mail_deliveries
+    const claimedAt = Date.now();
+    // READ COMMITTED: the scan takes no gap locks, so it never holds up another relay's claim or this one's records.
+    const rows = await this.dataSource.transaction('READ COMMITTED', async (manager) => {
+      const due = (await manager.query(
+        `SELECT id, user_id, idempotency_key, recipient, subject, body_text, body_html, headers, attempts FROM mail_deliveries
           WHERE state = 'pending' AND next_attempt_at <= NOW(3) AND (lease_until IS NULL OR lease_until < NOW(3))
           ORDER BY next_attempt_at LIMIT ${allowed} FOR UPDATE SKIP LOCKED`,
-      )) as { id: string }[];
-      if (!rows.length) return [];
-      const found = rows.map((row) => row.id);
+      )) as Omit<DueDelivery, 'claimedAt'>[];
+      if (!due.length) return [];
       // A delivery still marked as started was being sent when its relay died: the server may hold it already.
+      // It falls due again when its lease lapses, so the next claim's scan of due rows passes over held ones
+      // instead of reading (and locking) them.
       await manager.query(
         `UPDATE mail_deliveries SET lease_owner = ?, lease_until = NOW(3) + INTERVAL ${LEASE_MS / 1000} SECOND,
+           next_attempt_at = NOW(3) + INTERVAL ${LEASE_MS / 1000} SECOND,
            uncertain_attempts = uncertain_attempts + (attempt_started_at IS NOT NULL), attempt_started_at = NULL
           WHERE id IN (?)`,
-        [this.owner, found],
+        [this.owner, due.map((row) => row.id)],
       );
-      return found;
+      return due;
     });
-    if (!ids.length) return [];
-    return (await this.dataSource.query(
-      'SELECT id, user_id, idempotency_key, recipient, subject, body_text, body_html, headers, attempts FROM mail_deliveries WHERE id IN (?) ORDER BY next_attempt_at',
-      [ids],
-    )) as DueDelivery[];
-  }
-
-  /**
-   * Writes down that this claimed delivery is about to go to the server, while the lease is still live.
-   * False when the lease lapsed (another relay may have it now): then this process must not send it.
-   */
-  private async startAttempt(id: string): Promise<boolean> {
-    const result = (await this.dataSource.query(
-      'UPDATE mail_deliveries SET attempt_started_at = NOW(3) WHERE id = ? AND lease_owner = ? AND lease_until > NOW(3)',
-      [id, this.owner],
-    )) as { affectedRows?: number };
-    return (result.affectedRows ?? 0) === 1;
+    return rows.map((row) => ({ ...row, claimedAt }));
   }
 
   /** Sends one claimed delivery; returns true when the SMTP server could not be reached at all. */
-  private async deliver(delivery: DueDelivery, records: Promise<void>[]): Promise<boolean> {
+  private async deliver(delivery: DueDelivery, recorder: DeliveryRecorder): Promise<boolean> {
     const messageId = messageIdFor(delivery.idempotency_key, this.mail.messageIdDomain);
     try {
       const accepted = await this.mail.send(
@@ -269,14 +296,8 @@ export class MailRelay implements OnApplicationBootstrap, OnModuleDestroy {
         },
         messageId,
       );
-      // Started at once, not awaited here: the connection's next message needs only its own start mark, so
-      // the record of this one overlaps that send instead of adding a round trip per message. Should the
-      // record fail for the whole lease, the start mark stays and the next claim counts it as uncertain.
-      records.push(
-        this.markSent(delivery.id, accepted.reply).catch((error: unknown) =>
-          this.logger.warn(`mail ${delivery.id} was accepted but could not be recorded as sent: ${error instanceof Error ? error.message : String(error)}`),
-        ),
-      );
+      // Written with this connection's next start mark (and the other connections' records), not on its own.
+      recorder.recordAccepted(delivery.id, accepted.reply);
       return false;
     } catch (error) {
       const refusal = error instanceof SmtpRefusal ? error : new SmtpRefusal(String(error), undefined, false);
@@ -292,27 +313,6 @@ export class MailRelay implements OnApplicationBootstrap, OnModuleDestroy {
         for (const handler of this.refusalHandlers) await handler({ recipient: delivery.recipient, userId: delivery.user_id, reply: refusal.message });
       }
       return refusal.responseCode === undefined;
-    }
-  }
-
-  /**
-   * Records an accepted message as sent. The server has it now, so the database being away for a moment
-   * (a restart) must not make it look unsent: keep trying while the claim lasts.
-   */
-  private async markSent(id: string, reply: string): Promise<void> {
-    const deadline = Date.now() + LEASE_MS - 2_000;
-    for (let wait = 250; ; wait = Math.min(wait * 2, 2_000)) {
-      try {
-        await this.dataSource.query(
-          `UPDATE mail_deliveries SET state = 'sent', sent_at = NOW(3), sent_by = ?, attempts = attempts + 1, smtp_reply = ?, body_text = '', body_html = NULL,
-             lease_owner = NULL, lease_until = NULL, attempt_started_at = NULL WHERE id = ? AND lease_owner = ?`,
-          [this.owner, reply, id, this.owner],
-        );
-        return;
-      } catch (error) {
-        if (Date.now() + wait > deadline) throw error;
-        await sleep(wait);
-      }
     }
   }
 
