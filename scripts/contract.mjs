@@ -22,6 +22,8 @@ try {
     '/* Generated from api/openapi.json by `npm run contract` (openapi-typescript). Do not edit: change the API and regenerate. */\n';
   const freshTypes = header + astToString(await openapiTS(JSON.parse(freshDocument)));
 
+  const untyped = untypedOperations(JSON.parse(freshDocument));
+
   const stale = [
     [documentPath, freshDocument],
     [typesPath, freshTypes],
@@ -39,6 +41,13 @@ try {
   } else {
     console.log('contract current: api/openapi.json and studio/src/lib/api-contract.ts match the code');
   }
+  if (untyped.length) {
+    console.error(
+      `${untyped.length} operation(s) document no typed success answer: ${untyped.join(', ')}. ` +
+        'Give each a response DTO (@ApiOkResponse({ type }) or @ApiCreatedResponse), 204, or a redirect (@ApiResponse({ status: 302 })).',
+    );
+    process.exit(1);
+  }
 } finally {
   rmSync(scratch, { recursive: true, force: true });
 }
@@ -49,4 +58,22 @@ function readOrEmpty(path) {
   } catch {
     return '';
   }
+}
+
+/**
+ * Operations whose success the studio cannot type: a 2xx answer without a body schema (204 No Content aside), or
+ * no 2xx or redirect at all. None are allowed, so a new route cannot land with an answer the studio must guess.
+ */
+export function untypedOperations(document) {
+  const untyped = [];
+  for (const [path, operations] of Object.entries(document.paths ?? {})) {
+    for (const [method, operation] of Object.entries(operations)) {
+      if (!operation || typeof operation !== 'object' || !('responses' in operation)) continue;
+      const codes = Object.entries(operation.responses ?? {});
+      const answered = codes.filter(([code]) => /^[23]\d\d$/.test(code));
+      const bare = answered.filter(([code, answer]) => code.startsWith('2') && code !== '204' && !answer.content);
+      if (answered.length === 0 || bare.length) untyped.push(`${method.toUpperCase()} ${path}`);
+    }
+  }
+  return untyped;
 }

@@ -1,5 +1,6 @@
 import { Group, Text } from '@mantine/core';
 import type { ApiSchema } from '@/lib/api-types';
+import { ink, stateColours } from '@/theme/palette';
 
 /** The fit-check states and checklist verdicts of the API (DESIGN.md vocabulary). */
 export type FitCheckState = ApiSchema<'FitCheckState'>;
@@ -14,11 +15,11 @@ interface StateLook {
 
 /** Our own words for the states; each also has its own shape, so colour is never the only sign. */
 export const STATE_LOOK: Record<FitCheckState, StateLook> = {
-  open: { label: 'Open', meaning: 'not proven yet', colour: '#5c6470' },
-  bench_pass: { label: 'Passes on the bench', meaning: 'the numbers fit; not yet test-fitted', colour: '#1c5fa8' },
-  confirmed: { label: 'Confirmed on the vehicle', meaning: 'test-fitted, with evidence', colour: '#0d7369' },
-  no_fit: { label: 'Does not fit', meaning: 'the numbers or the test fit say no', colour: '#b3261e' },
-  retired: { label: 'Retired', meaning: 'no longer counted', colour: '#868e96' },
+  open: { label: 'Open', meaning: 'not proven yet', colour: stateColours.open },
+  bench_pass: { label: 'Passes on the bench', meaning: 'the numbers fit; not yet test-fitted', colour: stateColours.bench_pass },
+  confirmed: { label: 'Confirmed on the vehicle', meaning: 'test-fitted, with evidence', colour: stateColours.confirmed },
+  no_fit: { label: 'Does not fit', meaning: 'the numbers or the test fit say no', colour: stateColours.no_fit },
+  retired: { label: 'Retired', meaning: 'no longer counted', colour: stateColours.retired },
 };
 
 export const VERDICT_LOOK: Record<ChecklistVerdict, { label: string; explanation: string }> = {
@@ -56,7 +57,7 @@ export function StateIcon({ state, size = 16 }: { state: FitCheckState; size?: n
       {state === 'confirmed' && (
         <>
           <rect x="0.5" y="0.5" width="15" height="15" rx="3" fill={colour} />
-          <path d={GAUGE} transform={SMALL_GAUGE} fill="#fff" />
+          <path d={GAUGE} transform={SMALL_GAUGE} fill={ink.paper} />
         </>
       )}
       {state === 'no_fit' && (

@@ -26,7 +26,7 @@ export function SignalSymbol({ level, size = 18, onColour = true }: { level: Sig
       </svg>
     );
   }
-  const inner = onColour ? 'var(--signal-bg, #fff)' : '#fff';
+  const inner = onColour ? 'var(--signal-bg, var(--mantine-color-white))' : 'var(--mantine-color-white)';
   return (
     <svg width={(size * 20) / 18} height={size} viewBox="0 0 20 18" aria-hidden="true" focusable="false" data-symbol="safety-alert" style={{ flex: 'none' }}>
       <path d="M10 1L19 17H1z" fill="currentColor" />

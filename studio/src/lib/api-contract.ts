@@ -384,6 +384,22 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/invitations/opt-out": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["InvitationsController_optOut"];
+        put: operations["InvitationsController_setOptOut"];
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/admin/users": {
         parameters: {
             query?: never;
@@ -2242,6 +2258,18 @@ export interface components {
             workshopId: string;
             /** @enum {string} */
             role: "owner" | "editor";
+        };
+        InvitationOptOutView: {
+            /** @description The address the link was sent to */
+            email: string;
+            /** @description Invitations to this address are refused */
+            stopped: boolean;
+            /** @description Since when (ISO 8601), when stopped */
+            stoppedSince: string | null;
+        };
+        InvitationOptOutChangeDto: {
+            /** @description true: no more invitations to this address; false: invitations allowed again */
+            stopped: boolean;
         };
         AdminUserDto: {
             /** Format: uuid */
@@ -4162,6 +4190,267 @@ export interface components {
             /** @description Null when the publisher has no account any more, and in the answer to publishing */
             publishedBy: components["schemas"]["GuideRevisionPublisherDto"] | null;
         };
+        PublicWorkshopRefDto: {
+            /** @example Hollow Lane Garage */
+            name: string;
+            /** @example hollow-lane-garage */
+            slug: string;
+        };
+        PublishedGuideSummaryDto: {
+            workshop: components["schemas"]["PublicWorkshopRefDto"];
+            /** @example swapping-the-motor-coupler */
+            slug: string;
+            /** @example Swapping the motor coupler */
+            title: string;
+            /** @example Cargo trike drive refit */
+            buildTitle: string;
+            /**
+             * Format: date-time
+             * @example 2026-11-02T09:30:00.000Z
+             */
+            publishedAt: string;
+            /**
+             * @description The published revision’s number
+             * @example 2
+             */
+            revision: number;
+            /** @example 6 */
+            stepCount: number;
+            /**
+             * @description Null when the author gave none
+             * @enum {string|null}
+             */
+            skillLevel: "bench_starter" | "shop_regular" | "seasoned_fitter" | null;
+            /**
+             * @description Null when the author gave none
+             * @example 90
+             */
+            estimatedMinutes: number | null;
+            /**
+             * @description Redirects to the footage’s poster; null without one
+             * @example /api/guides/hollow-lane-garage/swapping-the-motor-coupler/poster
+             */
+            posterUrl: string | null;
+            /**
+             * @description The studio’s address of the guide
+             * @example /guides/hollow-lane-garage/swapping-the-motor-coupler
+             */
+            path: string;
+        };
+        PublishedGuideInfoDto: {
+            /** @example Swapping the motor coupler */
+            title: string;
+            /** @example swapping-the-motor-coupler */
+            slug: string;
+            /**
+             * @description Cleaned rich text (HTML)
+             * @example <p>Fit a 21-tooth coupler to the motor shaft and check it engages fully.</p>
+             */
+            summary: string;
+            /** @example Cargo trike drive refit */
+            buildTitle: string;
+            /** @example Three-wheel cargo trike, 250 W hub drive */
+            vehicle: string | null;
+            /**
+             * @example [
+             *       "13 mm socket",
+             *       "soft-faced mallet"
+             *     ]
+             */
+            tools: string[];
+            /**
+             * @example [
+             *       "anti-seize"
+             *     ]
+             */
+            consumables: string[];
+            /** @description Chosen by the creator or found in the guide’s text */
+            safetyTopics: ("lifting" | "rotating_parts" | "high_voltage" | "welding" | "pressing")[];
+            /** @enum {string|null} */
+            skillLevel: "bench_starter" | "shop_regular" | "seasoned_fitter" | null;
+            /** @example 90 */
+            estimatedMinutes: number | null;
+        };
+        StandardCautionDto: {
+            /** @enum {string} */
+            topic: "lifting" | "rotating_parts" | "high_voltage" | "welding" | "pressing";
+            /** @enum {string} */
+            level: "DANGER" | "WARNING" | "CAUTION" | "NOTICE";
+            /** @example A jack is not a support. Raise the vehicle at the maker’s lifting points on firm, level ground and hold it on rated stands or a lift with its locks engaged before going underneath. */
+            text: string;
+        };
+        PublishedFootageDto: {
+            /** Format: uuid */
+            id: string;
+            /** @example Coupler swap, bench camera */
+            title: string;
+            /** @example 412000 */
+            durationMs: number | null;
+            /**
+             * @description Redirects to a short-lived link to a progressive file (HTTP Range works)
+             * @example /api/guides/hollow-lane-garage/swapping-the-motor-coupler/video
+             */
+            videoUrl: string;
+            /** @example /api/guides/hollow-lane-garage/swapping-the-motor-coupler/poster */
+            posterUrl: string | null;
+            /**
+             * @description WebVTT captions; null without a transcript
+             * @example /api/guides/hollow-lane-garage/swapping-the-motor-coupler/captions.vtt
+             */
+            captionsUrl: string | null;
+            /**
+             * @description HLS master playlist once the web versions are made
+             * @example /api/guides/hollow-lane-garage/swapping-the-motor-coupler/hls/master.m3u8
+             */
+            hlsUrl: string | null;
+            /**
+             * @description The H.264 MP4 once the web versions are made
+             * @example /api/guides/hollow-lane-garage/swapping-the-motor-coupler/video
+             */
+            mp4Url: string | null;
+            /**
+             * @description WebVTT thumbnails track for scrub previews
+             * @example /api/guides/hollow-lane-garage/swapping-the-motor-coupler/thumbnails.vtt
+             */
+            thumbnailsUrl: string | null;
+            /**
+             * @description Audio peaks (WaveformDto)
+             * @example /api/guides/hollow-lane-garage/swapping-the-motor-coupler/waveform
+             */
+            waveformUrl: string | null;
+            /**
+             * @description The picture as shown, after rotation
+             * @example 1920
+             */
+            displayWidth: number | null;
+            /** @example 1080 */
+            displayHeight: number | null;
+        };
+        PublishedGuideStepDto: {
+            /** Format: uuid */
+            id: string;
+            /** @example 1 */
+            position: number;
+            /** @example Pull the old coupler */
+            title: string;
+            /**
+             * @description Cleaned rich text (HTML)
+             * @example <p>Back off the clamp bolt two turns.</p>
+             */
+            body: string;
+            /** Format: uuid */
+            footageId: string | null;
+            /** @example 95000 */
+            startMs: number | null;
+            /** @example 131000 */
+            endMs: number | null;
+            caution: components["schemas"]["GuideCautionDto"] | null;
+            /** @example 15 */
+            estimatedMinutes: number | null;
+        };
+        PublishedGuidePartDto: {
+            /** @example CPL-21T-12 */
+            partNumber: string;
+            /** @example Northway Drive Parts */
+            maker: string;
+            /** @example 21-tooth motor coupler */
+            title: string;
+            /** @enum {string} */
+            category: "coupler" | "shaft" | "joint" | "bearing" | "bore" | "plate" | "boot" | "seal" | "fastener" | "other";
+            /**
+             * @description Where the part sits in the assembly
+             * @example motor side
+             */
+            position: string;
+        };
+        PublishedCheckEvidenceDto: {
+            /** @enum {string} */
+            kind: "mark" | "measurement" | "photo";
+            /** @example Reading 12.02 mm */
+            label: string;
+            /**
+             * @description Where it is in the guide’s footage; null when elsewhere
+             * @example 95000
+             */
+            startMs: number | null;
+            /**
+             * @description A photo’s address (redirects to the image); photos only
+             * @example /api/guides/hollow-lane-garage/swapping-the-motor-coupler/evidence/7d0f3c2a-5b1e-4f7a-9c41-2e8d6b0a1f35/photo
+             */
+            photoUrl?: string;
+        };
+        PublishedCheckDto: {
+            /** Format: uuid */
+            id: string;
+            /** @example Coupler spline engages the motor shaft */
+            title: string;
+            state: components["schemas"]["FitCheckState"];
+            required: boolean;
+            /** @example Engagement 11.8 mm of 12 mm wanted */
+            detail: string | null;
+            /** Format: date-time */
+            confirmedAt: string | null;
+            /**
+             * @description Only where the workshop shows member names; otherwise null
+             * @example Rowan Hale
+             */
+            confirmedBy: string | null;
+            evidence: components["schemas"]["PublishedCheckEvidenceDto"][];
+        };
+        PublishedChecklistDto: {
+            /** @example Motor to gearbox coupling */
+            assemblyName: string;
+            /** @description The roll-up of the required checks */
+            verdict: components["schemas"]["ChecklistVerdict"];
+            checks: components["schemas"]["PublishedCheckDto"][];
+        };
+        FollowTargetRefDto: {
+            /** Format: uuid */
+            id: string;
+            /** @example Hollow Lane Garage */
+            label: string;
+        };
+        GuideFollowTargetsDto: {
+            workshop: components["schemas"]["FollowTargetRefDto"];
+            build: components["schemas"]["FollowTargetRefDto"];
+            /** @description Null when the guide follows no assembly */
+            assembly: components["schemas"]["FollowTargetRefDto"] | null;
+        };
+        PublishedGuideMarkDto: {
+            /** Format: uuid */
+            id: string;
+            /** @enum {string} */
+            kind: "part" | "measurement" | "check_evidence" | "step" | "caution" | "note";
+            /** @example 95000 */
+            startMs: number;
+            /** @example 131000 */
+            endMs: number | null;
+            /** @example Clamp bolt backed off */
+            label: string;
+            /** Format: uuid */
+            stepId: string | null;
+            /** Format: uuid */
+            fitCheckId: string | null;
+        };
+        PublishedGuideDto: {
+            workshop: components["schemas"]["PublicWorkshopRefDto"];
+            guide: components["schemas"]["PublishedGuideInfoDto"];
+            revision: components["schemas"]["GuidePublishedRevisionDto"];
+            /** @description Most severe first */
+            cautions: components["schemas"]["StandardCautionDto"][];
+            /** @example This guide records one workshop’s experience. It does not replace the vehicle or part manufacturer’s service information, local regulations and codes, or the judgement of a licensed professional. Work within your training. */
+            disclaimer: string;
+            /** @description Null without footage, or until it is ready */
+            footage: components["schemas"]["PublishedFootageDto"] | null;
+            /** @description By position */
+            steps: components["schemas"]["PublishedGuideStepDto"][];
+            parts: components["schemas"]["PublishedGuidePartDto"][];
+            /** @description Null when the guide follows no assembly */
+            checklist: components["schemas"]["PublishedChecklistDto"] | null;
+            followTargets: components["schemas"]["GuideFollowTargetsDto"];
+            /** @description By start */
+            marks: components["schemas"]["PublishedGuideMarkDto"][];
+        };
         CueWindowResponseDto: {
             /** @description How many cues the whole transcript has (to size a list before its rows arrive) */
             total: number;
@@ -5485,6 +5774,13 @@ export interface operations {
                     "application/json": components["schemas"]["InvitationView"];
                 };
             };
+            /** @description Already a member (already_member), or the address stopped invitations (invitations_stopped) */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
         };
     };
     WorkshopInvitationsController_revoke: {
@@ -5548,6 +5844,68 @@ export interface operations {
                 content: {
                     "application/json": components["schemas"]["AcceptedInvitation"];
                 };
+            };
+        };
+    };
+    InvitationsController_optOut: {
+        parameters: {
+            query: {
+                /** @description The token from the link in an invitation mail */
+                token: string;
+            };
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["InvitationOptOutView"];
+                };
+            };
+            /** @description Unknown token */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    InvitationsController_setOptOut: {
+        parameters: {
+            query: {
+                /** @description The token from the link in an invitation mail */
+                token: string;
+            };
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["InvitationOptOutChangeDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["InvitationOptOutView"];
+                };
+            };
+            /** @description Unknown token */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
             };
         };
     };
@@ -8156,7 +8514,9 @@ export interface operations {
                     "Cache-Control"?: string;
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["PublishedGuideSummaryDto"][];
+                };
             };
             /** @description Unchanged since the ETag given in If-None-Match; no body */
             304: {
@@ -8191,7 +8551,9 @@ export interface operations {
                     "Cache-Control"?: string;
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["PublishedGuideDto"];
+                };
             };
             /** @description Unchanged since the ETag given in If-None-Match; no body */
             304: {

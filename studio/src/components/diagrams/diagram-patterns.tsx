@@ -1,3 +1,5 @@
+import { patternColours } from '@/theme/palette';
+
 /**
  * Fill patterns shared by the diagrams, so each area reads by its texture and its label as well
  * as its colour (a printed page or a colour-blind reader still tells them apart).
@@ -19,20 +21,20 @@ export function DiagramPatterns({ ids }: { ids: PatternIds }) {
   return (
     <defs>
       <pattern id={ids.hatch} width="8" height="8" patternUnits="userSpaceOnUse" patternTransform="rotate(45)">
-        <rect width="8" height="8" fill="#d6eae7" />
-        <line x1="0" y1="0" x2="0" y2="8" stroke="#0d7369" strokeWidth="2" />
+        <rect width="8" height="8" fill={patternColours.hatch.ground} />
+        <line x1="0" y1="0" x2="0" y2="8" stroke={patternColours.hatch.line} strokeWidth="2" />
       </pattern>
       <pattern id={ids.dots} width="8" height="8" patternUnits="userSpaceOnUse">
-        <rect width="8" height="8" fill="#fdf1d8" />
-        <circle cx="4" cy="4" r="1.6" fill="#8a5a00" />
+        <rect width="8" height="8" fill={patternColours.dots.ground} />
+        <circle cx="4" cy="4" r="1.6" fill={patternColours.dots.line} />
       </pattern>
       <pattern id={ids.crosshatch} width="8" height="8" patternUnits="userSpaceOnUse">
-        <rect width="8" height="8" fill="#fbe2e2" />
-        <path d="M0 0L8 8M8 0L0 8" stroke="#a61b1b" strokeWidth="1.4" />
+        <rect width="8" height="8" fill={patternColours.crosshatch.ground} />
+        <path d="M0 0L8 8M8 0L0 8" stroke={patternColours.crosshatch.line} strokeWidth="1.4" />
       </pattern>
       <pattern id={ids.stripes} width="6" height="6" patternUnits="userSpaceOnUse" patternTransform="rotate(-45)">
-        <rect width="6" height="6" fill="#eceff3" />
-        <line x1="0" y1="0" x2="0" y2="6" stroke="#5c6470" strokeWidth="1.5" />
+        <rect width="6" height="6" fill={patternColours.stripes.ground} />
+        <line x1="0" y1="0" x2="0" y2="6" stroke={patternColours.stripes.line} strokeWidth="1.5" />
       </pattern>
     </defs>
   );

@@ -1,4 +1,5 @@
 import { formatReadableLength, unitLabel } from '@/lib/units';
+import { ink } from '@/theme/palette';
 import { lengthWindowGeometry, type LengthWindowInput, type Span } from './length-window-geometry';
 import { DiagramFrame } from './diagram-frame';
 
@@ -6,8 +7,8 @@ export interface LengthWindowDiagramProps extends LengthWindowInput {
   title?: string;
 }
 
-const INK = '#1f2328';
-const SHORT = '#a61b1b';
+const INK = ink.main;
+const SHORT = ink.short;
 
 /**
  * One length axis with two bars: the part's own range (fully compressed to fully extended) above,
@@ -33,7 +34,7 @@ export function LengthWindowDiagram(props: LengthWindowDiagramProps) {
 
         {/* guides from each end of one bar to the other */}
         {[geometry.part.x1, geometry.part.x2].map((x, index) => (
-          <line key={`pg${index}`} x1={x} y1={partRow.y} x2={x} y2={installedRow.y + installedRow.height} stroke="#8a929c" strokeDasharray="3 3" />
+          <line key={`pg${index}`} x1={x} y1={partRow.y} x2={x} y2={installedRow.y + installedRow.height} stroke={ink.guide} strokeDasharray="3 3" />
         ))}
 
         {/* part bar with the margin shaded at its ends */}

@@ -1,4 +1,5 @@
 import { splineDiametersGeometry, type SplineDiameterName } from './spline-diameters-geometry';
+import { fitColours, ink } from '@/theme/palette';
 import { DiagramFrame } from './diagram-frame';
 
 export interface SplineDiametersDiagramProps {
@@ -8,7 +9,7 @@ export interface SplineDiametersDiagramProps {
   diameters: Readonly<Record<SplineDiameterName, number>>;
 }
 
-const INK = '#1f2328';
+const INK = ink.main;
 
 /**
  * The key diameters of an involute spline: the hub's teeth (internal) and the shaft's tooth
@@ -36,18 +37,18 @@ export function SplineDiametersDiagram(props: SplineDiametersDiagramProps) {
               x2={plot.x + plot.width}
               y1={line.y}
               y2={line.y}
-              stroke={line.name === 'pitchDiameter' ? '#0d7369' : '#5c6470'}
+              stroke={line.name === 'pitchDiameter' ? fitColours.fit : ink.slate}
               strokeDasharray={line.name === 'pitchDiameter' ? '8 4' : line.name === 'baseDiameter' ? '2 3' : undefined}
               strokeWidth={line.name === 'pitchDiameter' ? 1.5 : 1}
             />
-            <line x1={plot.x + plot.width} x2={labelX - 4} y1={line.y} y2={line.labelY} stroke="#8a929c" />
+            <line x1={plot.x + plot.width} x2={labelX - 4} y1={line.y} y2={line.labelY} stroke={ink.guide} />
             <text x={labelX} y={line.labelY + 4} fontSize={12} fill={INK}>
               {line.label}: {formatSplineDiameter(line.value, props.unit)} {props.unit}
             </text>
           </g>
         ))}
 
-        <text x={plot.x} y={plot.y - 8} fontSize={11} fill="#5c6470">
+        <text x={plot.x} y={plot.y - 8} fontSize={11} fill={ink.slate}>
           Hub (dotted) over shaft (hatched); heights to scale, widths schematic
         </text>
         </>

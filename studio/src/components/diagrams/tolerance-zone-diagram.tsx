@@ -1,4 +1,5 @@
 import type { ReactNode } from 'react';
+import { ink } from '@/theme/palette';
 import { DEVIATION_UNIT_LABEL, formatDeviation, formatSpan } from './deviation-format';
 import { toleranceZoneGeometry, TOLERANCE_LAYOUT, type DeviationUnit, type Rect, type ZoneUm } from './tolerance-zone-geometry';
 import { DiagramFrame } from './diagram-frame';
@@ -18,10 +19,10 @@ export interface ToleranceZoneDiagramProps {
   title?: string;
 }
 
-const INK = '#1f2328';
-const MUTED = '#4b535d';
+const INK = ink.main;
+const MUTED = ink.muted;
 /** A white outline behind text keeps a label readable where it crosses a line or a pattern. */
-const HALO = { stroke: '#ffffff', strokeWidth: 6, paintOrder: 'stroke', strokeLinejoin: 'round' } as const;
+const HALO = { stroke: ink.paper, strokeWidth: 6, paintOrder: 'stroke', strokeLinejoin: 'round' } as const;
 
 /**
  * The classic zero-line chart of ISO 286-1: the hole's and the shaft's tolerance zones as bands
@@ -73,9 +74,9 @@ export function ToleranceZoneDiagram(props: ToleranceZoneDiagramProps) {
           <g data-testid="zone-overlap">
             {/* guides at the two bounds, across both columns, so the shared sizes read against each zone */}
             {[geometry.overlap.y, geometry.overlap.y + geometry.overlap.height].map((y) => (
-              <line key={y} x1={geometry.hole!.x} y1={y} x2={geometry.shaft!.x + geometry.shaft!.width} y2={y} stroke="#a61b1b" strokeDasharray="4 3" />
+              <line key={y} x1={geometry.hole!.x} y1={y} x2={geometry.shaft!.x + geometry.shaft!.width} y2={y} stroke={ink.short} strokeDasharray="4 3" />
             ))}
-            <rect {...geometry.overlap} fill={`url(#${ids.crosshatch})`} stroke="#a61b1b" strokeWidth={1.5} />
+            <rect {...geometry.overlap} fill={`url(#${ids.crosshatch})`} stroke={ink.short} strokeWidth={1.5} />
           </g>
         )}
         {geometry.gap && (
@@ -115,12 +116,12 @@ export function ToleranceZoneDiagram(props: ToleranceZoneDiagramProps) {
           <g key={`${marker.feature}-${index}`} data-testid={`marker-${marker.feature}`}>
             <title>{`measured ${marker.feature === 'hole' ? 'bore' : 'shaft'} ${formatDeviation(marker.deviationUm, props.unit)}`}</title>
             {marker.feature === 'hole' ? (
-              <circle cx={marker.x} cy={marker.y} r={5} fill="#ffffff" stroke={INK} strokeWidth={2} />
+              <circle cx={marker.x} cy={marker.y} r={5} fill={ink.paper} stroke={INK} strokeWidth={2} />
             ) : (
               <path
                 d={`M${marker.x} ${marker.y - 6}L${marker.x + 6} ${marker.y}L${marker.x} ${marker.y + 6}L${marker.x - 6} ${marker.y}Z`}
                 fill={INK}
-                stroke="#ffffff"
+                stroke={ink.paper}
                 strokeWidth={1}
               />
             )}
@@ -198,11 +199,11 @@ function Legend({
     const always = props.hole && props.shaft && props.hole.upper - props.shaft.lower <= 0;
     items.push({
       key: 'overlap',
-      swatch: <rect width={14} height={12} y={-9} fill={`url(#${ids.crosshatch})`} stroke="#a61b1b" />,
+      swatch: <rect width={14} height={12} y={-9} fill={`url(#${ids.crosshatch})`} stroke={ink.short} />,
       text: always ? 'shaft above hole: interferes' : 'overlap: may interfere',
     });
   }
-  if (props.measuredHole?.length) items.push({ key: 'mh', swatch: <circle cx={7} cy={-3} r={5} fill="#fff" stroke={INK} strokeWidth={2} />, text: 'measured bore' });
+  if (props.measuredHole?.length) items.push({ key: 'mh', swatch: <circle cx={7} cy={-3} r={5} fill={ink.paper} stroke={INK} strokeWidth={2} />, text: 'measured bore' });
   if (props.measuredShaft?.length) items.push({ key: 'ms', swatch: <path d="M7 -9L13 -3L7 3L1 -3Z" fill={INK} />, text: 'measured shaft' });
 
   const clearance = clearanceText(props);

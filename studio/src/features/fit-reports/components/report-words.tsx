@@ -1,4 +1,5 @@
 import { Group, Text } from '@mantine/core';
+import { fitColours, ink } from '@/theme/palette';
 import type { FitReportOutcome, FitReportStatus } from '../api/queries';
 
 export const OUTCOME_WORDS: Record<FitReportOutcome, string> = { fit: 'It fit', no_fit: 'It did not fit' };
@@ -19,7 +20,7 @@ export const STATUS_FOR_REPORTER: Record<FitReportStatus, string> = {
   declined: 'Declined by the workshop',
 };
 
-const OUTCOME_COLOUR: Record<FitReportOutcome, string> = { fit: '#0d7369', no_fit: '#b3261e' };
+const OUTCOME_COLOUR: Record<FitReportOutcome, string> = { fit: fitColours.fit, no_fit: fitColours.noFit };
 
 /** A tick in a circle for "it fit", a cross in a square for "it did not": the shape and the words carry it, not the colour. */
 export function OutcomeLabel({ outcome }: { outcome: FitReportOutcome }) {
@@ -30,12 +31,12 @@ export function OutcomeLabel({ outcome }: { outcome: FitReportOutcome }) {
         {outcome === 'fit' ? (
           <>
             <circle cx="8" cy="8" r="7" fill={colour} />
-            <path d="M4.5 8.2l2.3 2.3 4.7-4.8" fill="none" stroke="#fff" strokeWidth="2" strokeLinecap="round" strokeLinejoin="round" />
+            <path d="M4.5 8.2l2.3 2.3 4.7-4.8" fill="none" stroke={ink.paper} strokeWidth="2" strokeLinecap="round" strokeLinejoin="round" />
           </>
         ) : (
           <>
             <rect x="1.5" y="1.5" width="13" height="13" rx="1.5" fill={colour} />
-            <path d="M5 5l6 6M11 5l-6 6" stroke="#fff" strokeWidth="2" strokeLinecap="round" />
+            <path d="M5 5l6 6M11 5l-6 6" stroke={ink.paper} strokeWidth="2" strokeLinecap="round" />
           </>
         )}
       </svg>

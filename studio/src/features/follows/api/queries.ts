@@ -5,17 +5,10 @@ import type { ApiSchema } from '@/lib/api-types';
 export type Follow = ApiSchema<'FollowResponseDto'>;
 export type FollowTargetKind = Follow['targetKind'];
 
-export interface FollowTarget {
-  id: string;
-  label: string;
-}
+export type FollowTarget = ApiSchema<'FollowTargetRefDto'>;
 
 /** What a published guide offers to follow (its `followTargets`): a guide that follows no assembly has none to offer. */
-export interface FollowTargets {
-  workshop: FollowTarget;
-  build: FollowTarget;
-  assembly: FollowTarget | null;
-}
+export type FollowTargets = ApiSchema<'GuideFollowTargetsDto'>;
 
 /** POST /follows/unsubscribe: the e-mailed link, for anyone. */
 export interface UnsubscribeResult {

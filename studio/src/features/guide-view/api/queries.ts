@@ -1,7 +1,7 @@
 import { queryOptions } from '@tanstack/react-query';
-import { ApiError, apiRequest } from '@/lib/api-client';
+import { ApiError } from '@/lib/api-client';
+import { api } from '@/lib/api-paths';
 import type { ApiSchema } from '@/lib/api-types';
-import type { PublishedGuide, PublishedGuideSummary } from './types';
 
 /**
  * Public guide answers may be kept 30 s by any cache (`Cache-Control: public, max-age=30`), but someone who
@@ -23,9 +23,7 @@ const CUE_WINDOW_MAX = 500;
 /** The cues windows are the same for everyone and cached a minute by the API; a reader need not ask again sooner. */
 const CUE_STALE_MS = 60_000;
 
-function cuesPath(workshopSlug: string, guideSlug: string): string {
-  return `/guides/${encodeURIComponent(workshopSlug)}/${encodeURIComponent(guideSlug)}/cues`;
-}
+const CUES = '/guides/{workshopSlug}/{guideSlug}/cues';
 
 /**
  * The public side of guides. Its root key is not the editor's (`['guides']`), so a reader's cache and a
@@ -36,7 +34,7 @@ export const guideViewQueries = {
   list: (q: string) =>
     queryOptions({
       queryKey: [...guideViewQueries.all(), 'list', { q }] as const,
-      queryFn: ({ signal }) => apiRequest<PublishedGuideSummary[]>('/guides', { signal, query: { q: q || undefined }, cache: REVALIDATE }),
+      queryFn: ({ signal }) => api.get('/guides', { signal, query: { q: q || undefined }, cache: REVALIDATE }),
       placeholderData: (previous) => previous,
     }),
   /** Rows `page × CUE_PAGE_SIZE` onwards of the transcript: what a scrolled list shows. Page 0 also gives the total. */
@@ -44,7 +42,7 @@ export const guideViewQueries = {
     queryOptions({
       queryKey: [...guideViewQueries.all(), 'cues', workshopSlug, guideSlug, 'page', page] as const,
       queryFn: ({ signal }) =>
-        apiRequest<CueWindow>(cuesPath(workshopSlug, guideSlug), { signal, query: { fromIndex: page * CUE_PAGE_SIZE, limit: CUE_PAGE_SIZE } }),
+        api.get(CUES, { signal, path: { workshopSlug, guideSlug }, query: { fromIndex: page * CUE_PAGE_SIZE, limit: CUE_PAGE_SIZE } }),
       staleTime: CUE_STALE_MS,
       // No transcript (404) stays so.
       retry: (failureCount, error) => !(error instanceof ApiError && error.status === 404) && failureCount < 2,
@@ -54,7 +52,7 @@ export const guideViewQueries = {
     queryOptions({
       queryKey: [...guideViewQueries.all(), 'cues', workshopSlug, guideSlug, 'slice', slice] as const,
       queryFn: ({ signal }) =>
-        apiRequest<CueWindow>(cuesPath(workshopSlug, guideSlug), { signal, query: { fromMs: slice * CUE_SLICE_MS, toMs: (slice + 1) * CUE_SLICE_MS } }),
+        api.get(CUES, { signal, path: { workshopSlug, guideSlug }, query: { fromMs: slice * CUE_SLICE_MS, toMs: (slice + 1) * CUE_SLICE_MS } }),
       staleTime: CUE_STALE_MS,
     }),
   /** Every cue, fetched in the largest windows the API gives: only once the reader searches the transcript. */
@@ -65,7 +63,7 @@ export const guideViewQueries = {
         const cues: WindowCue[] = [];
         let total = Infinity;
         while (cues.length < total) {
-          const window = await apiRequest<CueWindow>(cuesPath(workshopSlug, guideSlug), { signal, query: { fromIndex: cues.length, limit: CUE_WINDOW_MAX } });
+          const window = await api.get(CUES, { signal, path: { workshopSlug, guideSlug }, query: { fromIndex: cues.length, limit: CUE_WINDOW_MAX } });
           total = window.total;
           if (window.cues.length === 0) break;
           cues.push(...window.cues);
@@ -77,8 +75,7 @@ export const guideViewQueries = {
   detail: (workshopSlug: string, guideSlug: string) =>
     queryOptions({
       queryKey: [...guideViewQueries.all(), 'detail', workshopSlug, guideSlug] as const,
-      queryFn: ({ signal }) =>
-        apiRequest<PublishedGuide>(`/guides/${encodeURIComponent(workshopSlug)}/${encodeURIComponent(guideSlug)}`, { signal, cache: REVALIDATE }),
+      queryFn: ({ signal }) => api.get('/guides/{workshopSlug}/{guideSlug}', { signal, path: { workshopSlug, guideSlug }, cache: REVALIDATE }),
       // A missing guide stays missing; retrying only delays the page that says so.
       retry: (failureCount, error) => !(error instanceof ApiError && error.status === 404) && failureCount < 2,
     }),

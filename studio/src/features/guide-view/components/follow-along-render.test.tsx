@@ -4,7 +4,7 @@ import { stubApi } from '@/testing/api-stub';
 import { fakeScrollLayout } from '@/testing/fake-scroll-layout';
 import { renderWithProviders } from '@/testing/render';
 import { FollowAlongView } from './follow-along-view';
-import { TEST_CUES, testGuide } from './test-guide';
+import { TEST_CUES, cueWindowRoute, testGuide } from './test-guide';
 
 // Counts how often each part of the public guide runs, whoever asks it to (the document passing new props or the
 // part's own subscription to the video's clock). Called as plain functions, so their hooks count as the wrapper's.
@@ -82,19 +82,11 @@ vi.mock('./transcript-panel', async (importOriginal) => {
 });
 
 const guide = testGuide();
-const CUES = TEST_CUES.map((cue, index) => ({ index, ...cue }));
 
 function renderGuide() {
   stubApi([
     { path: /^\/guides\/harrow-lane-garage\/motor-to-gearbox-coupler$/, body: guide },
-    {
-      path: /^\/guides\/harrow-lane-garage\/motor-to-gearbox-coupler\/cues\?/,
-      body: ({ url }: { url: URL }) => {
-        const number = (name: string) => Number(url.searchParams.get(name));
-        if (url.searchParams.has('fromMs')) return { total: CUES.length, cues: CUES.filter((cue) => cue.endMs > number('fromMs') && cue.startMs < number('toMs')) };
-        return { total: CUES.length, cues: CUES.slice(number('fromIndex'), number('fromIndex') + number('limit')) };
-      },
-    },
+    cueWindowRoute(/^\/guides\/harrow-lane-garage\/motor-to-gearbox-coupler\/cues\?/, TEST_CUES),
   ]);
   renderWithProviders(<FollowAlongView workshopSlug="harrow-lane-garage" guideSlug="motor-to-gearbox-coupler" />);
 }

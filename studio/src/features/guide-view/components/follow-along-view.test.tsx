@@ -4,25 +4,14 @@ import { stubApi, type StubRoute } from '@/testing/api-stub';
 import { fakeScrollLayout } from '@/testing/fake-scroll-layout';
 import { renderWithProviders } from '@/testing/render';
 import { FollowAlongView } from './follow-along-view';
-import { TEST_CUES, testGuide } from './test-guide';
+import { TEST_CUES, cueWindowRoute, testGuide } from './test-guide';
 import { formatDate } from '@/lib/dates';
 
 const GUIDE_PATH = /^\/guides\/harrow-lane-garage\/motor-to-gearbox-coupler$/;
 
 /** The guide's answer, and its transcript a window at a time as the public cues route gives it. */
 function guideRoutes(guide: ReturnType<typeof testGuide>, transcript = TEST_CUES): StubRoute[] {
-  const cues = transcript.map((cue, index) => ({ index, ...cue }));
-  return [
-    { path: GUIDE_PATH, body: guide },
-    {
-      path: /^\/guides\/harrow-lane-garage\/motor-to-gearbox-coupler\/cues\?/,
-      body: ({ url }: { url: URL }) => {
-        const number = (name: string) => Number(url.searchParams.get(name));
-        if (url.searchParams.has('fromMs')) return { total: cues.length, cues: cues.filter((cue) => cue.endMs > number('fromMs') && cue.startMs < number('toMs')) };
-        return { total: cues.length, cues: cues.slice(number('fromIndex'), number('fromIndex') + number('limit')) };
-      },
-    },
-  ];
+  return [{ path: GUIDE_PATH, body: guide }, cueWindowRoute(/^\/guides\/harrow-lane-garage\/motor-to-gearbox-coupler\/cues\?/, transcript)];
 }
 
 function renderGuide() {

@@ -4,8 +4,9 @@ import { stubApi } from '@/testing/api-stub';
 import { renderWithProviders } from '@/testing/render';
 import { GuideIndex } from './guide-index';
 import { formatDate } from '@/lib/dates';
+import type { PublishedGuideSummary } from '../api/types';
 
-const CARD = {
+const CARD: PublishedGuideSummary = {
   workshop: { name: 'Harrow Lane Garage', slug: 'harrow-lane-garage' },
   slug: 'motor-to-gearbox-coupler',
   title: 'Fitting the motor-to-gearbox coupler',

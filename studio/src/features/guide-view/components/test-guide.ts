@@ -1,3 +1,5 @@
+import type { StubRoute } from '@/testing/api-stub';
+import type { CueWindow } from '../api/queries';
 import type { Cue, PublishedGuide } from '../api/types';
 
 /** The test guide's transcript, as the public cues route gives it a window at a time (never in the guide's answer). */
@@ -37,6 +39,13 @@ export function testGuide(overrides: Partial<PublishedGuide> = {}): PublishedGui
       videoUrl: '/api/guides/harrow-lane-garage/motor-to-gearbox-coupler/video',
       posterUrl: null,
       captionsUrl: '/api/guides/harrow-lane-garage/motor-to-gearbox-coupler/captions',
+      // The web renditions are not made yet: the video plays the progressive file.
+      hlsUrl: null,
+      mp4Url: null,
+      thumbnailsUrl: null,
+      waveformUrl: null,
+      displayWidth: null,
+      displayHeight: null,
     },
     steps: [
       { id: 's1', position: 1, title: 'Lift the cab', body: '<p>Jack at the marked points.</p>', footageId: 'f1', startMs: 0, endMs: null, caution: null, estimatedMinutes: 20 },
@@ -85,5 +94,21 @@ export function testGuide(overrides: Partial<PublishedGuide> = {}): PublishedGui
       assembly: { id: 'a1', label: '21-tooth coupler' },
     },
     ...overrides,
+  };
+}
+
+/** The public cues route over `cues`, answering a window by time (fromMs, toMs) or by position (fromIndex, limit) as the API does. */
+export function cueWindowRoute(path: RegExp, cues: readonly Cue[]): StubRoute {
+  const indexed = cues.map((cue, index) => ({ index, ...cue }));
+  return {
+    path,
+    body: ({ url }: { url: URL }): CueWindow => {
+      const number = (name: string) => Number(url.searchParams.get(name));
+      if (url.searchParams.has('fromMs')) {
+        return { total: indexed.length, cues: indexed.filter((cue) => cue.endMs > number('fromMs') && cue.startMs < number('toMs')).slice(0, 500) };
+      }
+      const fromIndex = number('fromIndex');
+      return { total: indexed.length, cues: indexed.slice(fromIndex, fromIndex + (number('limit') || 100)) };
+    },
   };
 }

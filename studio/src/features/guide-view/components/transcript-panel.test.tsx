@@ -6,6 +6,7 @@ import { stubApi } from '@/testing/api-stub';
 import { fakeScrollLayout } from '@/testing/fake-scroll-layout';
 import { renderWithProviders } from '@/testing/render';
 import type { Cue } from '../api/types';
+import { cueWindowRoute } from './test-guide';
 import { TranscriptPanel } from './transcript-panel';
 
 // Each drawn cue formats its time once: counting the calls counts the cues drawn.
@@ -24,20 +25,7 @@ const SOURCE = { workshopSlug: 'harrow-lane', guideSlug: 'coupler-fit' };
 
 /** Answers the public cues windows from `cues` as the API does: by time (fromMs, toMs) or by position (fromIndex, limit). */
 function stubCues(cues: Cue[]) {
-  const indexed = cues.map((cue, index) => ({ index, ...cue }));
-  return stubApi([
-    {
-      path: /^\/guides\/harrow-lane\/coupler-fit\/cues\?/,
-      body: ({ url }: { url: URL }) => {
-        const number = (name: string) => Number(url.searchParams.get(name));
-        if (url.searchParams.has('fromMs')) {
-          return { total: indexed.length, cues: indexed.filter((cue) => cue.endMs > number('fromMs') && cue.startMs < number('toMs')).slice(0, 500) };
-        }
-        const fromIndex = number('fromIndex');
-        return { total: indexed.length, cues: indexed.slice(fromIndex, fromIndex + (number('limit') || 100)) };
-      },
-    },
-  ]);
+  return stubApi([cueWindowRoute(/^\/guides\/harrow-lane\/coupler-fit\/cues\?/, cues)]);
 }
 
 let clock: PlaybackClock;
