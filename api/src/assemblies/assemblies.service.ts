@@ -39,6 +39,11 @@ export class AssembliesService {
     return this.assemblies.save(this.assemblies.create({ workshopId, buildId, name: input.name, notes: input.notes ?? '' }));
   }
 
+  /** Assemblies by id (for lists in other domains that name them); unknown ids are simply absent. */
+  byIds(ids: string[]): Promise<Assembly[]> {
+    return this.assemblies.findBy({ id: In(ids) });
+  }
+
   async get(workshopId: string, assemblyId: string): Promise<Assembly> {
     const assembly = await this.assemblies.findOneBy({ id: assemblyId, workshopId });
     if (!assembly) throw new NotFoundException('Assembly not found');

@@ -1,6 +1,6 @@
 import { Injectable, Logger, NotFoundException } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
-import { Repository } from 'typeorm';
+import { In, Repository } from 'typeorm';
 import { StorageService } from '../infra/storage/storage.service';
 import { CreateBuildDto, UpdateBuildDto } from './dto/build.dto';
 import { Build } from './entities/build.entity';
@@ -19,6 +19,11 @@ export class BuildsService {
   }
 
   /** Any build lookup goes through the workshop, so another workshop's id answers 404. */
+  /** Builds by id (for lists in other domains that name them); unknown ids are simply absent. */
+  byIds(ids: string[]): Promise<Build[]> {
+    return this.builds.findBy({ id: In(ids) });
+  }
+
   async get(workshopId: string, buildId: string): Promise<Build> {
     const build = await this.builds.findOneBy({ id: buildId, workshopId });
     if (!build) throw new NotFoundException('Build not found');

@@ -315,6 +315,11 @@ export class FitChecksService {
     );
   }
 
+  /** Checks by id (for lists in other domains that name them); unknown ids are simply absent. */
+  byIds(ids: string[]): Promise<FitCheck[]> {
+    return this.checks.findBy({ id: In(ids) });
+  }
+
   /** Whether the check is the workshop's (for domains that link to checks, such as marks). */
   existsInWorkshop(workshopId: string, checkId: string): Promise<boolean> {
     return this.checks.existsBy({ id: checkId, workshopId });

@@ -1,18 +1,20 @@
 import { BadRequestException, HttpException, HttpStatus, Inject, Injectable, Logger, NotFoundException } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { InjectRepository } from '@nestjs/typeorm';
-import { In, IsNull, MoreThan, Not, Repository } from 'typeorm';
-import { Assembly } from '../assemblies/entities/assembly.entity';
-import { Build } from '../builds/entities/build.entity';
+import { MoreThan, Repository } from 'typeorm';
+import { AssembliesService } from '../assemblies/assemblies.service';
+import { BuildsService } from '../builds/builds.service';
 import { newId } from '../common/database/columns';
 import { requireImage, type UploadedFileLike } from '../common/uploads/image-file';
-import { FitCheck } from '../fit-checks/entities/fit-check.entity';
-import { Guide } from '../guides/entities/guide.entity';
+import { FitChecksService } from '../fit-checks/fit-checks.service';
+import type { Guide } from '../guides/entities/guide.entity';
+import { GuidesService } from '../guides/guides.service';
 import { publicGuidePath } from '../guides/guide.mapper';
 import { StorageService } from '../infra/storage/storage.service';
 import { photoIdOf } from '../common/uploads/photo-id';
-import { User } from '../users/entities/user.entity';
-import { Workshop } from '../workshops/entities/workshop.entity';
+import { UsersService } from '../users/users.service';
+import type { Workshop } from '../workshops/entities/workshop.entity';
+import { WorkshopsService } from '../workshops/workshops.service';
 import type { CreateFitReportDto, UpdateFitReportDto } from './dto/fit-report.dto';
 import type { FitReportResponseDto } from './dto/fit-report-response.dto';
 import { FitReportMailPreferences } from './fit-report-mail.port';
@@ -44,12 +46,12 @@ export class FitReportsService {
 
   constructor(
     @InjectRepository(FitReport) private readonly reports: Repository<FitReport>,
-    @InjectRepository(Guide) private readonly guides: Repository<Guide>,
-    @InjectRepository(Workshop) private readonly workshops: Repository<Workshop>,
-    @InjectRepository(Build) private readonly builds: Repository<Build>,
-    @InjectRepository(FitCheck) private readonly checks: Repository<FitCheck>,
-    @InjectRepository(Assembly) private readonly assemblies: Repository<Assembly>,
-    @InjectRepository(User) private readonly users: Repository<User>,
+    @Inject(GuidesService) private readonly guides: GuidesService,
+    @Inject(WorkshopsService) private readonly workshops: WorkshopsService,
+    @Inject(BuildsService) private readonly builds: BuildsService,
+    @Inject(FitChecksService) private readonly checks: FitChecksService,
+    @Inject(AssembliesService) private readonly assemblies: AssembliesService,
+    @Inject(UsersService) private readonly users: UsersService,
     private readonly storage: StorageService,
     @Inject(MembersService) private readonly members: MembersService,
     @Inject(MailOutbox) private readonly mail: MailOutbox,
@@ -60,8 +62,8 @@ export class FitReportsService {
   }
 
   async create(reporterId: string, workshopSlug: string, guideSlug: string, input: CreateFitReportDto): Promise<FitReportResponseDto> {
-    const workshop = await this.workshops.findOneBy({ slug: workshopSlug, disabledAt: IsNull() });
-    const guide = workshop ? await this.guides.findOneBy({ workshopId: workshop.id, slug: guideSlug, publishedRevisionId: Not(IsNull()) }) : null;
+    const workshop = await this.workshops.activeBySlug(workshopSlug);
+    const guide = workshop ? await this.guides.publishedBySlug(workshop.id, guideSlug) : null;
     if (!workshop || !guide) throw new NotFoundException('This guide is not published.');
     const lastHour = await this.reports.countBy({ reporterId, createdAt: MoreThan(new Date(Date.now() - 3_600_000)) });
     if (lastHour >= REPORTS_PER_HOUR) {
@@ -93,7 +95,7 @@ export class FitReportsService {
    */
   private async tellWorkshop(workshop: Workshop, guide: Guide, report: FitReport): Promise<void> {
     try {
-      const reporter = await this.users.findOneBy({ id: report.reporterId });
+      const reporter = await this.users.findById(report.reporterId);
       const team = (await this.members.list(workshop.id)).filter((member) => member.role === 'owner' || member.role === 'editor');
       // Each member's own choice: "new fit report" mail at once (default) or off.
       const off = await this.mailPreferences.fitReportMailOff(team.map((member) => member.userId));
@@ -149,7 +151,7 @@ export class FitReportsService {
     const report = await this.reports.findOneBy({ id: reportId, workshopId });
     if (!report) throw new NotFoundException('Fit report not found');
     if (input.fitCheckId !== undefined) {
-      if (input.fitCheckId !== null && !(await this.checks.existsBy({ id: input.fitCheckId, workshopId }))) {
+      if (input.fitCheckId !== null && !(await this.checks.existsInWorkshop(workshopId, input.fitCheckId))) {
         throw referenceNotFound('fitCheckId', 'Fit check');
       }
       report.fitCheckId = input.fitCheckId;
@@ -182,13 +184,13 @@ export class FitReportsService {
     if (reports.length === 0) return [];
     const ids = <K extends keyof FitReport>(key: K) => [...new Set(reports.map((report) => report[key]).filter((id): id is NonNullable<FitReport[K]> => !!id))] as string[];
     const [guides, builds, workshops, checks, reporters] = await Promise.all([
-      ids('guideId').length ? this.guides.findBy({ id: In(ids('guideId')) }) : [],
-      this.builds.findBy({ id: In(ids('buildId')) }),
-      this.workshops.findBy({ id: In(ids('workshopId')) }),
-      ids('fitCheckId').length ? this.checks.findBy({ id: In(ids('fitCheckId')) }) : [],
-      this.users.findBy({ id: In(ids('reporterId')) }),
+      ids('guideId').length ? this.guides.byIds(ids('guideId')) : [],
+      this.builds.byIds(ids('buildId')),
+      this.workshops.byIds(ids('workshopId')),
+      ids('fitCheckId').length ? this.checks.byIds(ids('fitCheckId')) : [],
+      this.users.displayNames(ids('reporterId')),
     ]);
-    const assemblies = checks.length ? await this.assemblies.findBy({ id: In(checks.map((check) => check.assemblyId)) }) : [];
+    const assemblies = checks.length ? await this.assemblies.byIds(checks.map((check) => check.assemblyId)) : [];
     return reports.map((report) => {
       const workshop = workshops.find((candidate) => candidate.id === report.workshopId);
       const guide = guides.find((candidate) => candidate.id === report.guideId);
@@ -210,7 +212,7 @@ export class FitReportsService {
         guide: guide && workshop ? { title: guide.title, path: publicGuidePath(workshop.slug, guide.slug) } : null,
         build: { id: report.buildId, title: build?.title ?? '' },
         workshop: { name: workshop?.name ?? '', slug: workshop?.slug ?? '' },
-        reporter: { displayName: reporters.find((candidate) => candidate.id === report.reporterId)?.displayName ?? '' },
+        reporter: { displayName: reporters.get(report.reporterId) ?? '' },
         photos: report.photoKeys.map((key) => ({ id: photoIdOf(key), url: `${photoBase}/${photoIdOf(key)}` })),
         createdAt: report.createdAt.toISOString(),
         updatedAt: report.updatedAt.toISOString(),

@@ -1,6 +1,6 @@
 import { ConflictException, Injectable, NotFoundException, UnprocessableEntityException } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
-import { In, Not, Repository } from 'typeorm';
+import { In, IsNull, Not, Repository } from 'typeorm';
 import { Assembly } from '../assemblies/entities/assembly.entity';
 import { BuildsService } from '../builds/builds.service';
 import { isDuplicateKey } from '../common/database/errors';
@@ -45,6 +45,16 @@ export class GuidesService {
   ) {}
 
   // ---- guides ----
+
+  /** A guide of the workshop with a published revision, by its slug. */
+  publishedBySlug(workshopId: string, slug: string): Promise<Guide | null> {
+    return this.guides.findOneBy({ workshopId, slug, publishedRevisionId: Not(IsNull()) });
+  }
+
+  /** Guides by id (for lists in other domains that name them); unknown ids are simply absent. */
+  byIds(ids: string[]): Promise<Guide[]> {
+    return this.guides.findBy({ id: In(ids) });
+  }
 
   async list(workshopId: string, buildId: string): Promise<GuideSummaryDto[]> {
     await this.builds.get(workshopId, buildId);

@@ -9,7 +9,7 @@ import {
 } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import { randomUUID } from 'node:crypto';
-import { DataSource, In, Repository } from 'typeorm';
+import { DataSource, In, IsNull, Repository } from 'typeorm';
 import type { SessionUser, WorkshopMembership } from '../common/types/access-context';
 import { StorageService } from '../infra/storage/storage.service';
 import type { CreateWorkshopDto, UpdateWorkshopDto } from './dto/workshop.dto';
@@ -76,6 +76,16 @@ export class WorkshopsService {
       if (workshop) views.push(toWorkshopView(workshop, membership.role, await this.logoUrl(workshop)));
     }
     return views;
+  }
+
+  /** A workshop that is not disabled, by its slug (public pages and what readers send through them). */
+  activeBySlug(slug: string): Promise<Workshop | null> {
+    return this.workshops.findOneBy({ slug, disabledAt: IsNull() });
+  }
+
+  /** Workshops by id (for lists in other domains that name them); unknown ids are simply absent. */
+  byIds(ids: string[]): Promise<Workshop[]> {
+    return this.workshops.findBy({ id: In(ids) });
   }
 
   async get(workshopId: string, role: WorkshopMembership['role'] | null): Promise<WorkshopView> {
