@@ -119,3 +119,17 @@ export async function waitUntilProcessed(agent: Agent, workshopId: string, foota
     await new Promise((resolve) => setTimeout(resolve, 150));
   }
 }
+
+/**
+ * Polls the footage until its web renditions are made or have failed: until then the media job still writes the
+ * footage row, and every such write rightly moves the public guide's tag (tests of 304s wait for this).
+ */
+export async function waitUntilRenditionsSettled(agent: Agent, workshopId: string, footageId: string, timeoutMs = 120_000): Promise<FootageBody> {
+  const deadline = Date.now() + timeoutMs;
+  for (;;) {
+    const footage = (await agent.get(`/api/workshops/${workshopId}/footage/${footageId}`).expect(200)).body as FootageBody & { renditions: { state: string } };
+    if (footage.renditions.state === 'ready' || footage.renditions.state === 'failed') return footage;
+    if (Date.now() > deadline) throw new Error(`renditions of ${footageId} still ${footage.renditions.state} after ${timeoutMs} ms`);
+    await new Promise((resolve) => setTimeout(resolve, 250));
+  }
+}

@@ -1,7 +1,7 @@
 import type { INestApplication } from '@nestjs/common';
 import { DataSource } from 'typeorm';
 import { signUpAndSignIn, type TestAccount, uniqueSlug } from './accounts';
-import { makeClip, uploadFile, waitUntilProcessed } from './footage';
+import { makeClip, uploadFile, waitUntilProcessed, waitUntilRenditionsSettled } from './footage';
 
 /** One workshop with one of everything a write route can reference, made through the API as a creator would. */
 export interface WorkshopFixture {
@@ -66,6 +66,8 @@ export async function makeWorkshopFixture(app: INestApplication, label: string):
   const footageId = await uploadFile(owner.agent, workshopId, buildId, clip);
   const footage = await waitUntilProcessed(owner.agent, workshopId, footageId);
   if (footage.state !== 'ready') throw new Error(`fixture footage ${footage.state}: ${footage.failureReason}`);
+  // The renditions job writes the footage row until it is done; tests that compare public tags need it settled.
+  await waitUntilRenditionsSettled(owner.agent, workshopId, footageId);
   const markId = (await owner.agent.post(`${base}/footage/${footageId}/marks`).send({ kind: 'note', startMs: 1000, label: 'here' }).expect(201)).body.id as string;
   const guide = (await owner.agent.post(`${base}/builds/${buildId}/guides`).send({ title: `${label} guide` }).expect(201)).body as { id: string; slug: string };
   await owner.agent.patch(`${base}/guides/${guide.id}`).send({ footageId }).expect(200);

@@ -197,4 +197,20 @@ describe('FootagePlayer', () => {
     expect(screen.getByTestId('time').textContent).toBe('12500');
     expect(pageRendered).toHaveBeenCalledTimes(rendersBefore);
   });
+
+  it('when the renditions arrive mid-play, the new stream starts where the old one was and plays on', () => {
+    const play = vi.spyOn(HTMLMediaElement.prototype, 'play').mockResolvedValue(undefined);
+    const { rerender } = renderWithProviders(<Player sources={{ hlsUrl: null, fileUrl: FILE }} />);
+    Object.defineProperty(video(), 'currentTime', { configurable: true, value: 42, writable: true });
+    fireEvent.play(video());
+    fireEvent.timeUpdate(video());
+    // The renditions are ready: a new answer names them and a fresh file link (this browser plays the file).
+    rerender(<Player sources={{ hlsUrl: HLS, fileUrl: `${FILE}&fresh` }} />);
+    const element = video();
+    expect(element.getAttribute('src')).toBe(`${FILE}&fresh`);
+    element.currentTime = 0;
+    fireEvent.loadedMetadata(element);
+    expect(element.currentTime).toBe(42);
+    expect(play).toHaveBeenCalledTimes(1);
+  });
 });

@@ -1,5 +1,5 @@
 import { Alert, Button, Group, Text } from '@mantine/core';
-import { useEffect, useRef, useState, type CSSProperties, type SyntheticEvent } from 'react';
+import { useEffect, useLayoutEffect, useRef, useState, type CSSProperties, type SyntheticEvent } from 'react';
 import { ScrubBar } from '../scrub-preview';
 import classes from './footage-player.module.css';
 import { attachHls, type HlsAttachment } from './hls-attachment';
@@ -72,6 +72,20 @@ export function FootagePlayer({
   const choice = abilities ? chooseStream(sources, abilities, failedStreams) : null;
   const hlsJsUrl = choice?.kind === 'hls.js' ? choice.url : null;
 
+  // A new stream (the web renditions became ready while the original played) starts where the old one was:
+  // the clock still holds that time, since the element's reset reaches it only in a later task.
+  const streamUrl = choice?.url ?? null;
+  const shownStream = useRef(streamUrl);
+  const playing = useRef(false);
+  const resumePlaying = useRef(false);
+  useLayoutEffect(() => {
+    if (shownStream.current !== null && streamUrl !== shownStream.current && resumeAtMs.current === undefined && clock.getMs() > 0) {
+      resumeAtMs.current = clock.getMs();
+      resumePlaying.current = playing.current;
+    }
+    shownStream.current = streamUrl;
+  }, [streamUrl, clock]);
+
   const rememberPosition = () => {
     const video = videoRef.current;
     if (video && video.currentTime > 0) resumeAtMs.current = video.currentTime * 1000;
@@ -121,6 +135,11 @@ export function FootagePlayer({
     event.currentTarget.currentTime = resumeAtMs.current / 1000;
     clock.set(resumeAtMs.current);
     resumeAtMs.current = undefined;
+    if (resumePlaying.current) {
+      resumePlaying.current = false;
+      // A browser may refuse to play on its own (autoplay rules); the reader then presses play.
+      event.currentTarget.play().catch(() => undefined);
+    }
   };
 
   const handleError = () => {
@@ -179,6 +198,12 @@ export function FootagePlayer({
           onTimeUpdate={handleTime}
           onSeeked={handleTime}
           onLoadedMetadata={handleLoadedMetadata}
+          onPlay={() => {
+            playing.current = true;
+          }}
+          onPause={() => {
+            playing.current = false;
+          }}
           onError={handleError}
         >
           {captions && <track key={captions.src} kind="captions" srcLang="en" label={captions.label} src={captions.src} default />}

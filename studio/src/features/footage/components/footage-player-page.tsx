@@ -1,5 +1,5 @@
 import { Alert, Anchor, Badge, Breadcrumbs, Grid, Group, Skeleton, Stack, Text, Title } from '@mantine/core';
-import { useQuery } from '@tanstack/react-query';
+import { keepPreviousData, useQuery } from '@tanstack/react-query';
 import { useMemo, useState, type ComponentType } from 'react';
 import { Link } from 'react-router-dom';
 import { paths } from '@/config/paths';
@@ -61,7 +61,12 @@ function describe(footage: Footage): string {
 export function FootagePlayerPage({ workshopId, footageId, startAtMs, workspace: Workspace }: FootagePlayerPageProps) {
   const footage = useQuery(footageQueries.detail(workshopId, footageId));
   const ready = footage.data?.state === 'ready';
-  const playback = useQuery({ ...footageQueries.playback(workshopId, footageId, footage.data?.renditions?.state), enabled: ready });
+  // The previous answer stays while the next is read (the renditions became ready), so the player is never unmounted mid-play.
+  const playback = useQuery({
+    ...footageQueries.playback(workshopId, footageId, footage.data?.renditions?.state),
+    enabled: ready,
+    placeholderData: keepPreviousData,
+  });
   const transcript = useQuery({ ...transcriptQueries.active(workshopId, footageId), enabled: ready });
   const limits = useQuery(footageQueries.limits(workshopId));
   const player = useFootagePlayer();
