@@ -203,6 +203,9 @@ describe('authorization matrix: every route × anonymous, non-member, editor, ow
       'GET /api/guides/:workshopSlug/:guideSlug/revisions/:number',
       'GET /api/guides/:workshopSlug/:guideSlug/reading',
       'PUT /api/guides/:workshopSlug/:guideSlug/reading',
+      // An invitation mail's "stop invitations to this address" link (no sign-in: the token is the key).
+      'GET /api/invitations/opt-out',
+      'PUT /api/invitations/opt-out',
     ]) {
       expect(discovered).toContain(route);
     }

@@ -69,7 +69,8 @@ export function backoffMs(attempts: number): number {
  * transaction; (2) claims due deliveries the same way (a lease, so two processes never send the same
  * one and a dead process's claims lapse), sends them through the pooled SMTP transport with bounded
  * concurrency under a per-minute cap counted across processes, claiming the next batch while the last
- * one sends, and marks each sent only after the server accepted it (in grouped writes, DeliveryRecorder).
+ * one sends, and marks each sent only after the server accepted it (DeliveryRecorder: that record travels
+ * in the same UPDATE as the connection's next start mark).
  *
  * Exactly once up to one window, which is named and counted: each send is written down as started
  * (`attempt_started_at`, under a live lease) before the message goes to the server, and the mark is

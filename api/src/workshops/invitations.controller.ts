@@ -10,15 +10,18 @@ import {
   Param,
   ParseUUIDPipe,
   Post,
+  Put,
   Query,
 } from '@nestjs/common';
-import { ApiCreatedResponse, ApiNoContentResponse, ApiOkResponse, ApiTags } from '@nestjs/swagger';
+import { ApiConflictResponse, ApiCreatedResponse, ApiNoContentResponse, ApiNotFoundResponse, ApiOkResponse, ApiTags } from '@nestjs/swagger';
 import { Public, SignedIn, WorkshopOwner } from '../common/decorators/access.decorator';
 import { CurrentMembership } from '../common/decorators/current-membership.decorator';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import type { SessionUser, WorkshopMembership } from '../common/types/access-context';
 import { CreateInvitationDto, InvitationTokenDto } from './dto/members.dto';
 import { AcceptedInvitation, InvitationPreview, InvitationView } from './dto/workshop-views.dto';
+import { InvitationOptOutChangeDto, InvitationOptOutQueryDto, InvitationOptOutView } from './dto/invitation-opt-out.dto';
+import { InvitationOptOutsService } from './invitation-opt-outs.service';
 import { InvitationsService } from './invitations.service';
 
 const invitationIdPipe = new ParseUUIDPipe({
@@ -41,6 +44,7 @@ export class WorkshopInvitationsController {
   @WorkshopOwner()
   @Post()
   @ApiCreatedResponse({ type: InvitationView, description: 'Invited; the link was e-mailed (valid 7 days)' })
+  @ApiConflictResponse({ description: 'Already a member (already_member), or the address stopped invitations (invitations_stopped)' })
   invite(
     @CurrentMembership() membership: WorkshopMembership,
     @CurrentUser() user: SessionUser,
@@ -65,7 +69,10 @@ export class WorkshopInvitationsController {
 @ApiTags('workshops')
 @Controller('invitations')
 export class InvitationsController {
-  constructor(@Inject(InvitationsService) private readonly invitations: InvitationsService) {}
+  constructor(
+    @Inject(InvitationsService) private readonly invitations: InvitationsService,
+    @Inject(InvitationOptOutsService) private readonly optOuts: InvitationOptOutsService,
+  ) {}
 
   /** The token travels in the query string, which the request log never records. */
   @Public()
@@ -81,5 +88,23 @@ export class InvitationsController {
   @ApiOkResponse({ type: AcceptedInvitation })
   accept(@CurrentUser() user: SessionUser, @Body() dto: InvitationTokenDto): Promise<AcceptedInvitation> {
     return this.invitations.accept(user, dto.token);
+  }
+
+  /** The "stop invitations" link in every invitation mail: no sign-in, the token is the key. */
+  @Public()
+  @Get('opt-out')
+  @ApiOkResponse({ type: InvitationOptOutView })
+  @ApiNotFoundResponse({ description: 'Unknown token' })
+  optOut(@Query() query: InvitationOptOutQueryDto): Promise<InvitationOptOutView> {
+    return this.optOuts.view(query.token);
+  }
+
+  /** Stops invitations to the link's address, or allows them again. */
+  @Public()
+  @Put('opt-out')
+  @ApiOkResponse({ type: InvitationOptOutView })
+  @ApiNotFoundResponse({ description: 'Unknown token' })
+  setOptOut(@Query() query: InvitationOptOutQueryDto, @Body() body: InvitationOptOutChangeDto): Promise<InvitationOptOutView> {
+    return this.optOuts.set(query.token, body.stopped);
   }
 }

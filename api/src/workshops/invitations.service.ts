@@ -19,6 +19,7 @@ import { User } from '../users/entities/user.entity';
 import type { CreateInvitationDto } from './dto/members.dto';
 import type { AcceptedInvitation, InvitationPreview, InvitationView } from './dto/workshop-views.dto';
 import { Invitation } from './entities/invitation.entity';
+import { InvitationOptOutsService } from './invitation-opt-outs.service';
 import { WorkshopMember } from './entities/workshop-member.entity';
 import { Workshop } from './entities/workshop.entity';
 import { MembersService } from './members.service';
@@ -37,6 +38,7 @@ export class InvitationsService {
     @InjectRepository(WorkshopMember) private readonly members: Repository<WorkshopMember>,
     @InjectRepository(User) private readonly users: Repository<User>,
     @Inject(MembersService) private readonly membersService: MembersService,
+    @Inject(InvitationOptOutsService) private readonly optOuts: InvitationOptOutsService,
     @Inject(MailOutbox) private readonly mail: MailOutbox,
     @Inject(DataSource) private readonly dataSource: DataSource,
     @Inject(ConfigService) config: ConfigService<AppConfig, true>,
@@ -58,7 +60,10 @@ export class InvitationsService {
     );
   }
 
-  /** E-mails an invitation link (valid 7 days). Inviting the same address again replaces the earlier link. */
+  /**
+   * E-mails an invitation link (valid 7 days). Inviting the same address again replaces the earlier link.
+   * An address that stopped invitations (the link in every invitation mail) is refused with 409 and sent nothing.
+   */
   async invite(membership: WorkshopMembership, inviter: SessionUser, dto: CreateInvitationDto): Promise<InvitationView> {
     const email = normalizeEmail(dto.email);
     const workshop = await this.workshops.findOneByOrFail({ id: membership.workshopId });
@@ -82,6 +87,8 @@ export class InvitationsService {
     const roleWords = dto.role === 'owner' ? 'an owner' : 'an editor';
     // The invitation and its mail commit together: no invitation without its mail, no mail for a rolled-back one.
     await this.dataSource.transaction(async (manager) => {
+      await this.optOuts.refuseIfStopped(email, manager);
+      const stopUrl = `${this.appOrigin}/invitations/stop?token=${encodeURIComponent(await this.optOuts.newLink(email, manager))}`;
       await manager.delete(Invitation, { workshopId: workshop.id, email, acceptedAt: IsNull() });
       await manager.insert(Invitation, invitation);
       await this.mail.send(
@@ -100,6 +107,7 @@ export class InvitationsService {
                 `${inviter.displayName} entered this address to invite you to "${workshop.name}". An invitation comes only when a workshop member sends one; if you do not want it, ignore it and it lapses in 7 days.`,
                 `${this.appOrigin}/account`,
               ),
+              `Do not want invitations to this address from anyone on Fitwright? Stop them here, no account needed (you can allow them again on the same page): ${stopUrl}`,
               '— Fitwright',
             ].join('\n\n'),
           },

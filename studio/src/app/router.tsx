@@ -31,6 +31,10 @@ const router = createBrowserRouter([
       { path: paths.forgotPassword, lazy: async () => ({ Component: (await import('./routes/accounts')).ForgotPasswordRoute }) },
       { path: paths.resetPassword, lazy: async () => ({ Component: (await import('./routes/accounts')).ResetPasswordRoute }) },
       { path: paths.acceptInvitation, lazy: async () => ({ Component: (await import('./routes/accounts')).AcceptInvitationRoute }) },
+      {
+        path: paths.invitationOptOut,
+        lazy: async () => ({ Component: (await import('./routes/invitation-opt-out')).InvitationOptOutRoute }),
+      },
       { path: paths.unsubscribe, lazy: async () => ({ Component: (await import('./routes/unsubscribe')).UnsubscribeRoute }) },
       {
         path: paths.mailPreferences,

@@ -79,6 +79,8 @@ export const paths = {
     to: (workshopId: string) => `/workshops/${workshopId}/fit-reports`,
   },
   acceptInvitation: '/invitations/accept',
+  // The "stop invitations to this address" link in every invitation mail (?token=), open to everyone.
+  invitationOptOut: '/invitations/stop',
   // The stop link in every fit-news e-mail (?token=), open to everyone.
   unsubscribe: '/unsubscribe',
   // The preferences link in every mail (?token=), open to everyone: delivery per follow, digest hour and zone.

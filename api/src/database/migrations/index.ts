@@ -20,6 +20,7 @@ import { GuideEffort1765466000000 } from './1765466000000-guide-effort';
 import { MailAttempts1765470000000 } from './1765470000000-mail-attempts';
 import { GuideReads1765480000000 } from './1765480000000-guide-reads';
 import { FinderSplinePitch1765486000000 } from './1765486000000-finder-spline-pitch';
+import { InvitationOptOuts1765490000000 } from './1765490000000-invitation-opt-outs';
 
 /** Every migration, oldest first. Listed explicitly so the same list works from src (tests) and dist. */
 // eslint-disable-next-line @typescript-eslint/no-unsafe-function-type
@@ -45,4 +46,5 @@ export const migrations: MixedList<Function> = [
   MailAttempts1765470000000,
   GuideReads1765480000000,
   FinderSplinePitch1765486000000,
+  InvitationOptOuts1765490000000,
 ];

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '@/lib/api-client';
-import { workshopQueries, type Invitation, type MediaSettings, type Member, type MemberRole, type Workshop } from './queries';
+import { workshopQueries, type Invitation, type InvitationOptOut, type MediaSettings, type Member, type MemberRole, type Workshop } from './queries';
 
 export interface WorkshopInput {
   name: string;
@@ -142,5 +142,14 @@ export function useAcceptInvitation() {
         queryClient.invalidateQueries({ queryKey: workshopQueries.all() }),
         queryClient.invalidateQueries({ queryKey: ['session'] }),
       ]),
+  });
+}
+
+/** Stops invitations to the address of an invitation mail's link, or allows them again (no sign-in: the token is the key). */
+export function useSetInvitationOptOut(token: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (stopped: boolean) => apiRequest<InvitationOptOut>('/invitations/opt-out', { method: 'PUT', query: { token }, body: { stopped } }),
+    onSuccess: (answer) => queryClient.setQueryData(workshopQueries.invitationOptOut(token).queryKey, answer),
   });
 }

@@ -48,6 +48,9 @@ export interface InvitationPreview {
   status: 'pending' | 'accepted' | 'expired';
 }
 
+/** Whether the address of an invitation mail's "stop invitations" link takes invitations. */
+export type InvitationOptOut = ApiSchema<'InvitationOptOutView'>;
+
 export const workshopQueries = {
   all: () => ['workshops'] as const,
   mine: () =>
@@ -86,5 +89,10 @@ export const workshopQueries = {
     queryOptions({
       queryKey: ['invitations', 'preview', token] as const,
       queryFn: ({ signal }) => apiRequest<InvitationPreview>('/invitations/lookup', { query: { token }, signal }),
+    }),
+  invitationOptOut: (token: string) =>
+    queryOptions({
+      queryKey: ['invitations', 'opt-out', token] as const,
+      queryFn: ({ signal }) => apiRequest<InvitationOptOut>('/invitations/opt-out', { query: { token }, signal }),
     }),
 };
