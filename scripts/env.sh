@@ -13,12 +13,15 @@ fw_profile_env() {
     # MariaDB port (3307 + offset, 3348–3356), and the mail fake's SMTP ports (1066–1074) below its web ports.
     test) offset=$((${FW_TEST_SLOT:-0} ? 40 + ${FW_TEST_SLOT:-0} : 10)) ;;
     # npm run test:faults: its own MariaDB, Redis, fakes and API processes, which the fault tests stop on purpose.
-    faults) offset=20 ;;
+    # FW_TEST_SLOT=1..9 gives it offsets 21–29 (data in .data/faults-slot<N>), so fault runs side by side never
+    # stop each other's services; no port of those offsets meets one of dev, test, faults or the test slots.
+    faults) offset=$((20 + ${FW_TEST_SLOT:-0})) ;;
     *) echo "unknown profile $profile" >&2; return 1 ;;
   esac
   export FW_PROFILE="$profile"
   local folder="$profile"
   if [ "$profile" = test ] && [ -n "${FW_TEST_SLOT:-}" ]; then folder="test-slot$FW_TEST_SLOT"; fi
+  if [ "$profile" = faults ] && [ -n "${FW_TEST_SLOT:-}" ]; then folder="faults-slot$FW_TEST_SLOT"; fi
   export FW_DATA="${FW_DATA:-$ROOT/.data/$folder}"
   export FW_RUN="$FW_DATA/run" FW_LOGS="$FW_DATA/logs"
 

@@ -4,7 +4,7 @@
 # them on purpose). Never touches the dev or test profile's services. Extra arguments go to Jest.
 if [ -n "${FW_PROFILE:-}" ] && [ "$FW_PROFILE" != faults ]; then
   # Called from another profile's script (npm test): inherit none of its ports or folders.
-  exec env -i HOME="$HOME" PATH="$PATH" TERM="${TERM:-dumb}" bash "$0" "$@"
+  exec env -i HOME="$HOME" PATH="$PATH" TERM="${TERM:-dumb}" ${FW_TEST_SLOT:+FW_TEST_SLOT="$FW_TEST_SLOT"} bash "$0" "$@"
 fi
 source "$(dirname "$0")/lib.sh"
 fw_profile_env faults

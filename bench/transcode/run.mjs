@@ -107,27 +107,35 @@ async function throughPipeline({ api, workshopId, buildId }) {
 
   const started = performance.now();
   await api.post(`${base}/upload/complete`);
+  // Changes of the percentage, and of what the studio shows (the percentage or the time left).
   const changes = [];
+  const shown = [];
   let last = null;
+  let lastShown = null;
   for (;;) {
     const footage = await api.get(base);
-    const { state, percent } = footage.renditions;
+    const { state, percent, secondsLeft } = footage.renditions;
     if (footage.state === 'failed') throw new Error(`probing failed: ${footage.failureReason}`);
     if (state === 'failed') throw new Error(`renditions failed: ${footage.renditions.reason}`);
     if (state === 'processing' && percent !== last) {
-      changes.push({ at: performance.now(), percent, secondsLeft: footage.renditions.secondsLeft });
+      changes.push({ at: performance.now(), percent, secondsLeft });
       last = percent;
+    }
+    if (state === 'processing' && `${percent}|${secondsLeft}` !== lastShown) {
+      shown.push({ at: performance.now(), percent, secondsLeft });
+      lastShown = `${percent}|${secondsLeft}`;
     }
     if (state === 'ready') {
       // The wait between the last progress seen and "ready" (storing the outputs) is a gap the creator sees too.
       changes.push({ at: performance.now(), percent: 100, secondsLeft: 0 });
+      shown.push({ at: performance.now(), percent: 100, secondsLeft: 0 });
       break;
     }
     await new Promise((resolve) => setTimeout(resolve, 250));
   }
   const seconds = (performance.now() - started) / 1000;
   await api.delete(base);
-  return { seconds, changes };
+  return { seconds, changes, shown };
 }
 
 ensureClip();
@@ -140,8 +148,11 @@ try {
   const after = await direct();
   const baseline = (before + after) / 2;
   const ratio = baseline / pipeline.seconds;
-  const gaps = pipeline.changes.slice(1).map((change, index) => (change.at - pipeline.changes[index].at) / 1000);
+  const gapsOf = (list) => list.slice(1).map((change, index) => (change.at - list[index].at) / 1000);
+  const gaps = gapsOf(pipeline.changes);
   const maxGap = gaps.length ? Math.max(...gaps) : Number.NaN;
+  const shownGaps = gapsOf(pipeline.shown);
+  const maxShownGap = shownGaps.length ? Math.max(...shownGaps) : Number.NaN;
   console.log('');
   console.log(`clip: ${MINUTES} min 1920×1080 30 fps H.264 + AAC, ${(statSync(file).size / MiB).toFixed(0)} MiB; renditions 1080p, 720p, 360p, sprites, waveform, faststart MP4`);
   console.log(`ffmpeg direct (same arguments + remux): ${before.toFixed(1)} s before, ${after.toFixed(1)} s after, mean ${baseline.toFixed(1)} s`);
@@ -156,6 +167,16 @@ try {
     .sort((a, b) => b.gap - a.gap)
     .slice(0, 3);
   console.log(`longest gaps: ${longest.map(({ gap, from, to }) => `${gap.toFixed(2)} s (${from}% → ${to}%)`).join(', ')}`);
+  console.log(
+    `what the studio shows (percentage or time left): ${pipeline.shown.length} changes, gaps median ` +
+      `${shownGaps.length ? median(shownGaps).toFixed(2) : '–'} s, max ${Number.isNaN(maxShownGap) ? '–' : maxShownGap.toFixed(2)} s (goal ≤ 2 s) ${maxShownGap <= 2 ? 'MET' : 'NOT MET'}`,
+  );
+  const shownLongest = shownGaps
+    .map((gap, index) => ({ gap, from: pipeline.shown[index], to: pipeline.shown[index + 1] }))
+    .sort((a, b) => b.gap - a.gap)
+    .slice(0, 3);
+  const label = ({ percent, secondsLeft }) => `${percent}% ${secondsLeft ?? '–'} s left`;
+  console.log(`longest: ${shownLongest.map(({ gap, from, to }) => `${gap.toFixed(2)} s (${label(from)} → ${label(to)})`).join(', ')}`);
   const middle = pipeline.changes[Math.floor(pipeline.changes.length / 2)];
   if (middle) console.log(`halfway: ${middle.percent}% with ${middle.secondsLeft ?? '–'} s estimated left`);
 } finally {

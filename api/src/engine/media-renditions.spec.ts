@@ -162,7 +162,8 @@ describe('renditionJobFraction and progressEstimate', () => {
   });
 
   it('keeps moving through packing and storing, and reaches 100 % only when storing ends', () => {
-    expect(renditionJobFraction('converting', 0)).toBe(0);
+    expect(renditionJobFraction('starting', 0)).toBe(0);
+    expect(renditionJobFraction('starting', 1)).toBeCloseTo(renditionJobFraction('converting', 0), 10);
     expect(renditionJobFraction('converting', 1)).toBeCloseTo(renditionJobFraction('packing', 0), 10);
     expect(renditionJobFraction('packing', 1)).toBeCloseTo(renditionJobFraction('storing', 0), 10);
     expect(renditionJobFraction('storing', 1)).toBeCloseTo(1, 10);

@@ -236,13 +236,15 @@ export class PeakAccumulator {
 }
 
 /**
- * The transcode job's share of the whole per phase: converting is nearly all of it; packing (sprite
- * sheets, the download MP4, the waveform) and storing the outputs follow. The creator sees one
- * percentage that keeps moving to the end, not a number parked at 99 while files are stored.
+ * The transcode job's share of the whole per phase: converting is nearly all of it; starting (clearing
+ * an earlier try's outputs, probing, ffmpeg opening the source) comes first, packing (sprite sheets,
+ * the download MP4, the waveform) and storing the outputs follow. The creator sees one percentage
+ * that moves from the start to the end, not a number parked at 0 or 99 while no frame is counted.
  * The weights are our own estimate from this box (storing ≈ 2–4 % of the time on local storage).
  */
 export const RENDITION_JOB_PHASES = {
-  converting: { start: 0, share: 0.94 },
+  starting: { start: 0, share: 0.01 },
+  converting: { start: 0.01, share: 0.93 },
   packing: { start: 0.94, share: 0.02 },
   storing: { start: 0.96, share: 0.04 },
 } as const;

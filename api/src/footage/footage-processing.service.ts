@@ -29,8 +29,12 @@ export class FootageProcessingService {
 
   async process(footageId: string): Promise<ProcessingOutcome> {
     const footage = await this.footage.findOneBy({ id: footageId });
-    // Deleted meanwhile, or already handled by an earlier attempt.
-    if (!footage || footage.state !== 'processing') return 'skipped';
+    if (!footage) return 'skipped';
+    // An earlier attempt made it ready but its process may have stopped before the transcode was queued
+    // (an API shut down mid-job): answer ready again so the caller queues it (the job id keeps that single).
+    if (footage.state === 'ready' && footage.renditionsState === 'waiting') return 'ready';
+    // Already handled by an earlier attempt.
+    if (footage.state !== 'processing') return 'skipped';
 
     const stored = await this.storage.headObject(footage.objectKey);
     if (!stored) {

@@ -9,8 +9,6 @@ import {
   constantFrameRate,
   displaySize,
   PeakAccumulator,
-  progressEstimate,
-  renditionJobFraction,
   renditionLadder,
   samplesPerPeak,
   spriteLayout,
@@ -21,12 +19,11 @@ import { TRANSCODE_OUTPUTS, type TranscodePlan } from '../infra/media/transcode-
 import { StorageService } from '../infra/storage/storage.service';
 import { Footage, type RenditionsMedia } from './entities/footage.entity';
 import { WorkshopMediaSettings } from './entities/workshop-media-settings.entity';
+import { RenditionProgress } from './rendition-progress';
 import { extensionOf } from './upload-plan';
 
 /** ffmpeg reads the original through a link valid this long; long footage takes a while. */
 const TOOL_URL_TTL_SECONDS = 6 * 60 * 60;
-/** Progress is stored at most this often (the studio polls; the goal is at least every 2 s). */
-const PROGRESS_WRITE_MS = 1000;
 /** Fewer frames than this share of the expected ones means the source ends early (a cut-short upload). */
 const MIN_FRAME_SHARE = 0.9;
 
@@ -87,10 +84,7 @@ export class FootageRenditionsService {
     if (!claimed.affected) return 'skipped';
 
     const prefix = renditionsPrefix(footage);
-    // Whatever an interrupted attempt stored goes first, so nothing is ever doubled.
-    await this.storage.deletePrefix(prefix);
-    const workDir = await mkdtemp(join(tmpdir(), 'fitwright-transcode-'));
-    const progress = new ProgressWrites((percent, secondsLeft) =>
+    const progress = new RenditionProgress((percent, secondsLeft) =>
       this.footage
         .update(
           { id: footage.id, renditionsState: 'processing' },
@@ -99,9 +93,16 @@ export class FootageRenditionsService {
         )
         .catch((error: unknown) => this.logger.warn(`progress of ${footage.id} not stored: ${String(error)}`)),
     );
+    progress.start();
+    let workDir: string | undefined;
     try {
+      // Whatever an interrupted attempt stored goes first, so nothing is ever doubled.
+      await this.storage.deletePrefix(prefix);
+      progress.reach('starting', 1 / 3);
+      workDir = await mkdtemp(join(tmpdir(), 'fitwright-transcode-'));
       const media = await this.makeRenditions(footage, workDir, progress);
-      await this.storeFolder(workDir, prefix, (share) => progress.report(renditionJobFraction('storing', share)));
+      await this.storeFolder(workDir, prefix, (share) => progress.report('storing', share));
+      progress.stop();
       await progress.settled();
       // Ready and "original dropped" are one change, so no reader sees ready footage still claiming its original.
       const dropOriginal = !(await this.keepOriginals(footage.workshopId));
@@ -125,13 +126,15 @@ export class FootageRenditionsService {
       if (dropOriginal) await this.deleteOriginal(footage);
       return 'ready';
     } catch (error) {
+      progress.stop();
       if (!(error instanceof UnreadableSourceError)) throw error;
       await this.storage.deletePrefix(prefix);
       await this.markFailed(footage.id, `${error.reason} The original is kept.`);
       this.logger.log(`footage ${footage.id}: renditions failed: ${error.reason}`);
       return 'failed';
     } finally {
-      await rm(workDir, { recursive: true, force: true });
+      progress.stop();
+      if (workDir) await rm(workDir, { recursive: true, force: true });
     }
   }
 
@@ -151,9 +154,10 @@ export class FootageRenditionsService {
     return keepOriginals;
   }
 
-  private async makeRenditions(footage: Footage, workDir: string, progress: ProgressWrites): Promise<RenditionsMedia> {
+  private async makeRenditions(footage: Footage, workDir: string, progress: RenditionProgress): Promise<RenditionsMedia> {
     const input = await this.storage.internalGetUrl(footage.objectKey, TOOL_URL_TTL_SECONDS);
     const info = await this.media.probe(input, extensionOf(footage.objectKey));
+    progress.reach('starting', 2 / 3);
     const display = displaySize(info.width, info.height, info.rotation);
     await this.footage.update({ id: footage.id }, { displayWidth: display.width, displayHeight: display.height });
 
@@ -166,9 +170,13 @@ export class FootageRenditionsService {
 
     const expectedFrames = Math.max(1, Math.round((info.durationMs / 1000) * frameRate.value));
     let framesWritten = 0;
+    let reading = false;
     await this.media.transcode(plan, ({ frames }) => {
       framesWritten = frames;
-      progress.report(renditionJobFraction('converting', frames / expectedFrames));
+      // ffmpeg's first report: it opened the source and is converting (no frame may be counted yet).
+      if (!reading) progress.reach('converting', frames / expectedFrames);
+      else progress.report('converting', frames / expectedFrames);
+      reading = true;
     });
     if (framesWritten < expectedFrames * MIN_FRAME_SHARE) {
       const readSeconds = (framesWritten / frameRate.value).toFixed(1);
@@ -177,16 +185,16 @@ export class FootageRenditionsService {
       );
     }
 
-    progress.report(renditionJobFraction('packing', 0), true);
+    progress.reach('packing');
     await this.media.tileSprites(workDir, sprites);
     for (const file of await readdir(workDir)) if (file.startsWith('thumb-')) await rm(join(workDir, file));
-    progress.report(renditionJobFraction('packing', 1 / 3));
+    progress.reach('packing', 1 / 3);
     await this.media.remuxFaststart(join(workDir, RENDITION_FILES.variantPlaylist(0)), join(workDir, RENDITION_FILES.download));
-    progress.report(renditionJobFraction('packing', 2 / 3));
+    progress.reach('packing', 2 / 3);
     const waveform = await this.waveform(join(workDir, TRANSCODE_OUTPUTS.pcm), info.durationMs, hasAudio);
     await writeFile(join(workDir, RENDITION_FILES.waveform), JSON.stringify(waveform));
     await rm(join(workDir, TRANSCODE_OUTPUTS.pcm), { force: true });
-    progress.report(renditionJobFraction('storing', 0), true);
+    progress.reach('storing');
 
     return {
       variants: renditions.map((size) => ({
@@ -264,28 +272,4 @@ async function runLimited<T>(items: T[], limit: number, work: (item: T) => Promi
     }
   });
   await Promise.all(workers);
-}
-
-/** Stores a job's progress at most every PROGRESS_WRITE_MS (or at once when forced), one write at a time, in order. */
-class ProgressWrites {
-  private readonly startedAt = Date.now();
-  private lastWrite = 0;
-  private chain: Promise<unknown> = Promise.resolve();
-
-  constructor(private readonly store: (percent: number, secondsLeft: number | null) => Promise<unknown>) {}
-
-  report(fraction: number, force = false): void {
-    const now = Date.now();
-    if (!force && now - this.lastWrite < PROGRESS_WRITE_MS) return;
-    this.lastWrite = now;
-    const estimate = progressEstimate(fraction, now - this.startedAt);
-    // Never 100 before the row says ready.
-    const percent = Math.min(99.9, estimate.percent);
-    this.chain = this.chain.then(() => this.store(percent, estimate.secondsLeft));
-  }
-
-  /** Resolves when every reported progress is stored (a failed write is logged by `store`, not thrown). */
-  settled(): Promise<unknown> {
-    return this.chain;
-  }
 }

@@ -38,7 +38,7 @@ export const faultsEnv = {
   mailSmtpPort: Number(required('MAIL_FAKE_SMTP_PORT')),
 };
 
-if (!faultsEnv.data.endsWith(join('.data', 'faults'))) {
+if (!/[/\\]\.data[/\\]faults(-slot\d)?$/u.test(faultsEnv.data)) {
   // The harness shuts services down: refuse to aim it at another profile's data.
   throw new Error(`fault tests run only on the faults profile (FW_DATA is ${faultsEnv.data})`);
 }
@@ -231,13 +231,29 @@ export class FaultRedis {
 
 /** The S3 and mail fakes of the faults profile (they are not faulted here; they must simply be ours). */
 export class FaultFakes {
-  private readonly s3: Service;
+  private s3: Service;
   private readonly mail = new Service('mail-fake', 'node', [join(ROOT, 'local-services/mail/server.js')]);
 
   /** `s3PutDelayMs`: the S3 fake stores each whole object that much later (a slow store; see local-services/s3/server.js). */
   constructor(options: { s3PutDelayMs?: number } = {}) {
-    const env = options.s3PutDelayMs ? { ...process.env, S3_FAKE_PUT_DELAY_MS: String(options.s3PutDelayMs) } : undefined;
-    this.s3 = new Service('s3-fake', 'node', [join(ROOT, 'local-services/s3/server.js')], env ? { env } : {});
+    this.s3 = FaultFakes.s3Service(options.s3PutDelayMs ?? 0);
+  }
+
+  private static s3Service(putDelayMs: number): Service {
+    const env = putDelayMs > 0 ? { ...process.env, S3_FAKE_PUT_DELAY_MS: String(putDelayMs) } : undefined;
+    return new Service('s3-fake', 'node', [join(ROOT, 'local-services/s3/server.js')], env ? { env } : {});
+  }
+
+  /**
+   * Restarts the S3 fake with another PUT delay (0: on time); its objects stay on disk. For a slow store in
+   * one test only: call it while no job is storing anything.
+   */
+  async restartS3(putDelayMs: number): Promise<void> {
+    await this.s3.stop();
+    await waitUntil('the S3 fake to stop listening', async () => !(await portAnswers(faultsEnv.s3Port)), 20_000);
+    this.s3 = FaultFakes.s3Service(putDelayMs);
+    this.s3.spawn();
+    await waitUntil(`the S3 fake to listen on ${faultsEnv.s3Port}`, () => portAnswers(faultsEnv.s3Port), 20_000);
   }
 
   async start(): Promise<void> {

@@ -2,6 +2,7 @@ import { ListObjectsV2Command, S3Client } from '@aws-sdk/client-s3';
 import Redis from 'ioredis';
 import { execFileSync } from 'node:child_process';
 import { randomBytes } from 'node:crypto';
+import { RENDITION_JOB_PHASES } from '../../src/engine/media-renditions';
 import { QUEUES } from '../../src/infra/jobs/queues';
 import type { Agent } from '../support/accounts';
 import { makeClip, removeScratch, uploadFile } from '../support/footage';
@@ -13,11 +14,21 @@ import { FaultApiProcess, FaultStack, faultsEnv, signUp, waitUntil } from './fau
  * the new worker; the job first clears the footage's `web/` folder, so the bucket ends up holding
  * exactly what an uninterrupted run stores, the renditions end `ready` and the footage stays one row.
  *
+ * The second case kills the worker while it stores the outputs in the bucket (some objects stored,
+ * others not yet): the retry clears the half-filled folder and stores everything once. For that case
+ * only, the S3 fake is restarted to answer each whole-object PUT a second late (a slow store), so the
+ * storing phase lasts long enough to catch; the first case and the clean run store at full speed.
+ *
  * The API process serves the uploads and is then stopped cleanly, so the worker is the only process
  * working the queues while the transcode runs (and is killed); the API comes back for the last reads.
+ * Stopping it may interrupt its probing job; the worker then runs that job again, which still queues
+ * the transcode (footage-processing.service.ts).
+ *
+ * Every percentage polled is kept: within one run it never goes backwards; the retry starts again from 0.
  */
+const STORE_DELAY_MS = 1000;
 
-// Two full transcodes of a 24 s 720p clip, a kill and a recovery, on a box that may be busy.
+// Transcodes of a 24 s 720p clip (a clean run, then two kills and recoveries), on a box that may be busy.
 jest.setTimeout(600_000);
 
 const S3 = {
@@ -63,6 +74,17 @@ function commandOf(pid: number): string {
   }
 }
 
+/** The killed worker's children (its ffmpeg) would run on as orphans; a crashed host takes them down too. */
+function killAll(pids: number[]): void {
+  for (const pid of pids) {
+    try {
+      process.kill(pid, 'SIGKILL');
+    } catch {
+      // already gone
+    }
+  }
+}
+
 describe('a worker killed with SIGKILL mid-transcode and started again', () => {
   const stack = new FaultStack();
   let api = new FaultApiProcess('main');
@@ -74,10 +96,22 @@ describe('a worker killed with SIGKILL mid-transcode and started again', () => {
 
   const jobKey = (suffix: string) => `${faultsEnv.queuePrefix}:${QUEUES.mediaTranscode}:${suffix}`;
   const sql = (statement: string) => stack.mariadb.sql(statement);
+  /** Every processing or ready percentage polled, per footage, in order. */
+  const percentsSeen = new Map<string, number[]>();
   const renditions = (footageId: string) => {
     const [row] = sql(`SELECT renditions_state, COALESCE(renditions_percent, 0) FROM footage WHERE id = '${footageId}'`);
-    return { state: row?.[0], percent: Number(row?.[1] ?? 0) };
+    const seen = { state: row?.[0], percent: Number(row?.[1] ?? 0) };
+    if (seen.state === 'processing' || seen.state === 'ready') percentsSeen.set(footageId, [...(percentsSeen.get(footageId) ?? []), seen.percent]);
+    return seen;
   };
+  /** The polled percentages rose within each run: at most one step back (the retry starting over), ending at 100. */
+  const expectProgressForward = (footageId: string) => {
+    const seen = percentsSeen.get(footageId) ?? [];
+    const stepsBack = seen.filter((percent, index) => index > 0 && percent < seen[index - 1]);
+    expect(stepsBack.length).toBeLessThanOrEqual(1);
+    expect(seen[seen.length - 1]).toBe(100);
+  };
+  let cleanListing: string[] = [];
   const webPrefix = (footageId: string) => sql(`SELECT object_key FROM footage WHERE id = '${footageId}'`)[0][0].replace(/[^/]+$/u, 'web/');
 
   async function newBuild(title: string): Promise<string> {
@@ -112,7 +146,7 @@ describe('a worker killed with SIGKILL mid-transcode and started again', () => {
     const cleanBuildId = await newBuild('Clean run');
     const cleanId = await uploadFile(owner, workshopId, cleanBuildId, clip);
     expect(await waitForRenditions(cleanId, 240_000)).toBe('ready');
-    const cleanListing = await storedNames(webPrefix(cleanId));
+    cleanListing = await storedNames(webPrefix(cleanId));
     expect(cleanListing.length).toBeGreaterThan(5);
 
     // The run to interrupt: uploaded through the API, which then stops, so the worker alone makes the
@@ -138,14 +172,7 @@ describe('a worker killed with SIGKILL mid-transcode and started again', () => {
     );
     const percentAtKill = renditions(footageId).percent;
     worker.kill('SIGKILL');
-    // The killed worker's ffmpeg would run on as an orphan; a crashed host takes it down too.
-    for (const pid of ffmpegPids) {
-      try {
-        process.kill(pid, 'SIGKILL');
-      } catch {
-        // already gone
-      }
-    }
+    killAll(ffmpegPids);
     await worker.waitForExit();
     expect(renditions(footageId).state).toBe('processing');
     expect(await redis.lrange(jobKey('active'), 0, -1)).toContain(jobId);
@@ -175,9 +202,69 @@ describe('a worker killed with SIGKILL mid-transcode and started again', () => {
     await api.start();
     const footage = (await owner.get(`/api/workshops/${workshopId}/footage/${footageId}`).expect(200)).body as { renditions: { state: string; percent: number | null } };
     expect(footage.renditions).toMatchObject({ state: 'ready', percent: 100 });
+    expectProgressForward(footageId);
     console.log(
       `worker killed mid-transcode at ${percentAtKill} %: ${listing.length} objects under web/ as in the clean run; ` +
         `the restarted worker finished ${recoveredMs} ms after the kill`,
+    );
+  });
+
+  it('killed while storing its outputs, ends with exactly the objects of a clean run', async () => {
+    expect(cleanListing.length).toBeGreaterThan(5);
+    await stack.fakes.restartS3(STORE_DELAY_MS);
+    const buildId = await newBuild('Killed while storing');
+    const footageId = await uploadFile(owner, workshopId, buildId, clip);
+    await api.stop();
+    const prefix = webPrefix(footageId);
+    const jobId = `transcode-footage-${footageId}`;
+    const workerPid = worker.pid!;
+
+    // The storing phase starts with a progress write of its own, before the first PUT; then the first objects land
+    // (a second each, four at a time), and the worker is frozen at once (SIGSTOP) so what is stored cannot change.
+    const storingPercent = RENDITION_JOB_PHASES.storing.start * 100;
+    const finished = () => {
+      if (renditions(footageId).state === 'ready') throw new Error('the outputs were all stored before the worker could be caught');
+    };
+    await waitUntil('the worker to reach the storing phase', () => {
+      finished();
+      const { state, percent } = renditions(footageId);
+      return state === 'processing' && percent >= storingPercent;
+    }, 240_000, 100);
+    await waitUntil('the first outputs in the bucket', async () => {
+      finished();
+      return (await storedNames(prefix)).length > 0;
+    }, 60_000, 50);
+    worker.kill('SIGSTOP');
+    const stored = await storedNames(prefix);
+    const { state, percent } = renditions(footageId);
+    killAll(childrenOf(workerPid));
+    worker.kill('SIGKILL');
+    await worker.waitForExit();
+
+    // Caught half-way through storing, and the creator was told so: the percentage had reached the storing phase.
+    expect(state).toBe('processing');
+    expect(stored.length).toBeGreaterThan(0);
+    expect(stored.length).toBeLessThan(cleanListing.length);
+    expect(percent).toBeGreaterThanOrEqual(storingPercent);
+    expect(percent).toBeLessThan(100);
+
+    const killedAt = Date.now();
+    worker = new FaultApiProcess('worker');
+    await worker.start();
+    expect(await waitForRenditions(footageId, 240_000)).toBe('ready');
+    const recoveredMs = Date.now() - killedAt;
+    const job = await redis.hgetall(jobKey(jobId));
+    expect(job.finishedOn).toBeDefined();
+    expect(job.failedReason).toBeUndefined();
+
+    const listing = await storedNames(prefix);
+    expect(listing).toEqual(cleanListing);
+    expect(new Set(listing).size).toBe(listing.length);
+    expect(sql(`SELECT COUNT(*), SUM(renditions_state = 'ready'), SUM(state = 'ready') FROM footage WHERE build_id = '${buildId}'`)).toEqual([['1', '1', '1']]);
+    expectProgressForward(footageId);
+    console.log(
+      `worker killed while storing at ${percent} % with ${stored.length} of ${cleanListing.length} objects stored: ` +
+        `the retry stored all ${listing.length} once, ready ${recoveredMs} ms after the kill`,
     );
   });
 });
