@@ -149,6 +149,11 @@ describe('Public guide reads: ETag, Cache-Control and 304 (real MariaDB, S3 fake
     expect(found.map((guide) => `${guide.workshop.slug}/${guide.slug}`)).toContain(`${shop.workshopSlug}/${shop.guideSlug}`);
     expect(found.length).toBeLessThan((plain.body as unknown[]).length + 1);
     expect(found.every((guide) => guide.workshop.name === workshopName)).toBe(true);
+    // The search is checked before the tag is read, with the usual field errors, even for a tag that matches.
+    const tooLong = await anonymous().get(`/api/guides?q=${'a'.repeat(101)}`).set('If-None-Match', String(plain.headers.etag)).expect(400);
+    expect(tooLong.body.errors.q).toMatch(/100 characters/);
+    expect((await anonymous().get('/api/guides?q=a&q=b').expect(400)).body.errors.q).toBe('q must be a string');
+    expect((await anonymous().get('/api/guides?page=2').expect(400)).body.errors.page).toBe('property page should not exist');
   });
 
   it('reads the tags through keys: EXPLAIN shows no full scan of any table', async () => {

@@ -164,11 +164,3 @@ export class GuideStepsQueryDto {
   @OptionalUuid('Only steps anchored in this footage')
   footageId?: string;
 }
-
-export class PublicGuidesQueryDto {
-  @ApiPropertyOptional({ description: 'Words of the title, build or workshop' })
-  @IsOptional()
-  @IsString()
-  @MaxLength(100)
-  q?: string;
-}
