@@ -4,7 +4,7 @@ import { CHECKLIST_VERDICTS } from '../../fit-checks/dto/fit-check-response.dto'
 import { SKILL_LEVELS, type SkillLevel } from '../../engine/guide-effort';
 import { CAUTION_LEVELS, GUIDE_DISCLAIMER, SAFETY_TOPICS, type CautionLevel, type SafetyTopic } from '../../engine/safety-topics';
 import { MARK_KINDS, type MarkKind } from '../../marks/entities/mark.entity';
-import { PART_CATEGORIES, type PartCategory } from '../../parts/entities/part.entity';
+import { PART_CATEGORIES, type PartCategory } from '../../parts/part-vocabulary';
 import { GuidePublishedRevisionDto, GuideStepResponseDto } from './guide-response.dto';
 
 /** The answers of the public guide routes (GET /api/guides and /api/guides/:workshopSlug/:guideSlug): anyone may read them. */

@@ -9,7 +9,7 @@ import {
   type SplineSpec,
   type SplineToleranceClass,
 } from '../entities/part-feature.entity';
-import { PART_CATEGORIES, PART_SOURCES, type PartCategory, type PartSource } from '../entities/part.entity';
+import { PART_CATEGORIES, PART_SOURCES, type PartCategory, type PartSource } from '../part-vocabulary';
 
 // The stored specs as they leave the API: lengths in integer nanometres. Each class implements the entity's
 // interface, so a field added to a spec without its documentation fails the type check.

@@ -20,7 +20,7 @@ import {
 import { LENGTH_UNITS, type LengthUnit } from '../../engine/units';
 import { SPLINE_PRESSURE_ANGLES, type SplineFit, type SplinePressureAngle } from '../../engine/splines';
 import { FEATURE_KINDS, SPLINE_TOLERANCE_CLASSES, type FeatureKind, type SplineToleranceClass } from '../entities/part-feature.entity';
-import { PART_CATEGORIES, PART_SOURCES, type PartCategory, type PartSource } from '../entities/part.entity';
+import { PART_CATEGORIES, PART_SOURCES, type PartCategory, type PartSource } from '../part-vocabulary';
 import { NumberFromText } from '../../common/decorators/number-from-text.decorator';
 
 /** A length written in the feature's unit, e.g. "0.669" with unit "in". Parsed exactly on the server. */

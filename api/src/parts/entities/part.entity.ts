@@ -1,11 +1,7 @@
 import { Column, Entity, Index, OneToMany, PrimaryColumn } from 'typeorm';
 import { CreatedAtColumn, newId, UpdatedAtColumn } from '../../common/database/columns';
+import { PART_CATEGORIES, PART_SOURCES, type PartCategory, type PartSource } from '../part-vocabulary';
 import { PartFeature } from './part-feature.entity';
-
-export const PART_CATEGORIES = ['coupler', 'shaft', 'joint', 'bearing', 'bore', 'plate', 'boot', 'seal', 'fastener', 'other'] as const;
-export type PartCategory = (typeof PART_CATEGORIES)[number];
-export const PART_SOURCES = ['new', 'remanufactured', 'used', 'original_equipment'] as const;
-export type PartSource = (typeof PART_SOURCES)[number];
 
 @Entity('parts')
 @Index(['workshopId', 'partNumberKey'], { unique: true })
